@@ -1,0 +1,32 @@
+/**
+ * Stable, snake_case error codes carried in every error body:
+ * `{ "error": { "code", "message", "fields"?, "requestId"? } }`.
+ */
+export const ERROR_CODES = {
+  validation_failed: 400,
+  invalid_credentials: 401,
+  unauthenticated: 401,
+  csrf_rejected: 403,
+  forbidden: 403,
+  not_found: 404,
+  conflict: 409,
+  token_invalid: 410,
+  payload_too_large: 413,
+  unsupported_media_type: 415,
+  rate_limited: 429,
+  internal_error: 500,
+  db_unavailable: 503,
+} as const;
+
+export type ErrorCode = keyof typeof ERROR_CODES;
+
+/** The one error body shape the API sends. */
+export interface ErrorBody {
+  error: {
+    code: ErrorCode;
+    message: string;
+    /** Field path (dot-joined, e.g. `event.date`) → message. */
+    fields?: Record<string, string>;
+    requestId?: string;
+  };
+}

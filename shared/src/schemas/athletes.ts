@@ -1,0 +1,148 @@
+import { z } from 'zod';
+import { LIMITS } from '../limits.js';
+import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
+import { clockTime, isoDate, timeZone } from './common.js';
+
+export const SEXES = ['female', 'male'] as const;
+export const GOALS = ['lose', 'maintain', 'gain'] as const;
+export const EVENT_TYPES = ['show', 'shoot', 'weigh_in', 'none'] as const;
+export const ATHLETE_STATUSES = ['intake_pending', 'active', 'ended'] as const;
+
+export const GOAL_LABELS: Record<(typeof GOALS)[number], string> = {
+  lose: 'Lose fat',
+  maintain: 'Hold steady',
+  gain: 'Gain / regain',
+};
+export const EVENT_TYPE_LABELS: Record<(typeof EVENT_TYPES)[number], string> = {
+  show: 'Show',
+  shoot: 'Photo shoot',
+  weigh_in: 'Weigh-in',
+  none: 'No event',
+};
+
+const inRange = (min: number, max: number, what: string, unit: string) =>
+  z
+    .number({ error: `${what} is required` })
+    .finite()
+    .min(min, `${what} must be at least ${min} ${unit}`)
+    .max(max, `${what} must be at most ${max} ${unit}`);
+
+/** Whole years between a birth date and a reference date (both YYYY-MM-DD). */
+export function ageOn(birthDate: string, onDate: string): number {
+  const [by, bm, bd] = birthDate.split('-').map(Number) as [number, number, number];
+  const [oy, om, od] = onDate.split('-').map(Number) as [number, number, number];
+  return oy - by - (om < bm || (om === bm && od < bd) ? 1 : 0);
+}
+
+/** PUT /api/athletes/:athleteId/intake: the athlete's intake form. All quantities in SI. */
+export const intakeRequest = z
+  .object({
+    /** Sex, for energy and body-composition equations. */
+    sex: z.enum(SEXES, { error: 'Choose one' }),
+    /** Birth date, YYYY-MM-DD. */
+    birthDate: isoDate,
+    /** Standing height, cm. */
+    heightCm: inRange(LIMITS.heightCm.min, LIMITS.heightCm.max, 'Height', 'cm'),
+    /** Usual daily fluid intake, mL. */
+    usualWaterMl: inRange(LIMITS.usualWaterMl.min, LIMITS.usualWaterMl.max, 'Usual water', 'mL'),
+    /** Usual daily energy intake, kcal. */
+    usualEnergyKcal: inRange(LIMITS.usualEnergyKcal.min, LIMITS.usualEnergyKcal.max, 'Usual energy', 'kcal'),
+    /** Direction of the body-weight goal. */
+    goal: z.enum(GOALS, { error: 'Choose a goal' }),
+    /** The dated event being prepared for. */
+    eventType: z.enum(EVENT_TYPES, { error: 'Choose an event type' }),
+    /** The event's name (e.g. "Regional classic"); optional. */
+    eventName: z.string().trim().max(100, 'At most 100 characters').optional(),
+    /** Event date in the event's time zone; required unless there is no event. */
+    eventDate: isoDate.optional(),
+    /** Event clock time (or weigh-in time), HH:MM in the event's time zone. */
+    eventTime: clockTime.optional(),
+    /** The event's own time zone. */
+    eventTimeZone: timeZone.optional(),
+    /** Division (shows) or weight class (weigh-ins). */
+    division: z.string().trim().max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`).optional(),
+    /** Weigh-in limit for the class, kg. */
+    weighInLimitKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Weigh-in limit', 'kg').optional(),
+    /** The athlete's own time zone: decides which date a log belongs to. */
+    timeZone,
+    /** Units the athlete reads and types in. */
+    weightUnit: z.enum(WEIGHT_UNITS, { error: 'Choose kg or lb' }),
+    volumeUnit: z.enum(VOLUME_UNITS, { error: 'Choose mL or fl oz' }),
+    /** Agreement to store condition photos. */
+    photoConsent: z.boolean({ error: 'Choose yes or no' }),
+    /** Must be true: not medical advice, medical clearance held. */
+    safetyAcknowledged: z.literal(true, { error: 'Please read and tick this to continue' }),
+  })
+  .superRefine((v, ctx) => {
+    if (v.eventType !== 'none') {
+      if (!v.eventDate) ctx.addIssue({ code: 'custom', path: ['eventDate'], message: 'Event date is required' });
+      if (!v.eventTimeZone)
+        ctx.addIssue({ code: 'custom', path: ['eventTimeZone'], message: 'Event time zone is required' });
+    }
+    if (v.eventType === 'weigh_in' && v.weighInLimitKg === undefined) {
+      ctx.addIssue({ code: 'custom', path: ['weighInLimitKg'], message: 'Weigh-in limit is required for a weigh-in' });
+    }
+    const today = new Date().toISOString().slice(0, 10);
+    if (/^\d{4}-\d{2}-\d{2}$/.test(v.birthDate)) {
+      const age = ageOn(v.birthDate, today);
+      if (age < LIMITS.ageYears.min || age > LIMITS.ageYears.max) {
+        ctx.addIssue({
+          code: 'custom',
+          path: ['birthDate'],
+          message: `Age must be between ${LIMITS.ageYears.min} and ${LIMITS.ageYears.max}`,
+        });
+      }
+    }
+  });
+export type IntakeRequest = z.infer<typeof intakeRequest>;
+
+/** An athlete's profile as the API returns it. */
+export const athleteProfile = z.object({
+  id: z.uuid(),
+  userId: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+  status: z.enum(ATHLETE_STATUSES),
+  coach: z.object({ id: z.uuid(), name: z.string() }),
+  sex: z.enum(SEXES).nullable(),
+  birthDate: z.string().nullable(),
+  heightCm: z.number().nullable(),
+  usualWaterMl: z.number().nullable(),
+  usualEnergyKcal: z.number().nullable(),
+  goal: z.enum(GOALS).nullable(),
+  eventType: z.enum(EVENT_TYPES).nullable(),
+  eventName: z.string().nullable(),
+  eventDate: z.string().nullable(),
+  eventTime: z.string().nullable(),
+  eventTimeZone: z.string().nullable(),
+  division: z.string().nullable(),
+  weighInLimitKg: z.number().nullable(),
+  timeZone: z.string(),
+  photoConsent: z.boolean(),
+  intakeCompletedAt: z.string().nullable(),
+});
+export type AthleteProfile = z.infer<typeof athleteProfile>;
+
+/** GET /api/roster: one row per athlete the signed-in coach may see. */
+export const rosterRow = z.object({
+  athleteId: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+  status: z.enum(ATHLETE_STATUSES),
+  goal: z.enum(GOALS).nullable(),
+  eventType: z.enum(EVENT_TYPES).nullable(),
+  eventName: z.string().nullable(),
+  eventDate: z.string().nullable(),
+  /** Whole days from today (athlete's time zone) to the event date; null without an event. */
+  daysToEvent: z.number().int().nullable(),
+  division: z.string().nullable(),
+  coach: z.object({ id: z.uuid(), name: z.string() }),
+});
+export type RosterRow = z.infer<typeof rosterRow>;
+
+/** POST /api/athletes/:athleteId/shares: share an athlete with an assistant coach. */
+export const shareAthleteRequest = z.object({
+  /** The assistant's user id. */
+  userId: z.uuid({ error: 'Choose an assistant' }),
+});
+export type ShareAthleteRequest = z.infer<typeof shareAthleteRequest>;
