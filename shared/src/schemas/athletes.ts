@@ -60,7 +60,11 @@ export const intakeRequest = z
     /** The event's own time zone. */
     eventTimeZone: timeZone.optional(),
     /** Division (shows) or weight class (weigh-ins). */
-    division: z.string().trim().max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`).optional(),
+    division: z
+      .string()
+      .trim()
+      .max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`)
+      .optional(),
     /** Weigh-in limit for the class, kg. */
     weighInLimitKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Weigh-in limit', 'kg').optional(),
     /** The athlete's own time zone: decides which date a log belongs to. */
@@ -75,12 +79,17 @@ export const intakeRequest = z
   })
   .superRefine((v, ctx) => {
     if (v.eventType !== 'none') {
-      if (!v.eventDate) ctx.addIssue({ code: 'custom', path: ['eventDate'], message: 'Event date is required' });
+      if (!v.eventDate)
+        ctx.addIssue({ code: 'custom', path: ['eventDate'], message: 'Event date is required' });
       if (!v.eventTimeZone)
         ctx.addIssue({ code: 'custom', path: ['eventTimeZone'], message: 'Event time zone is required' });
     }
     if (v.eventType === 'weigh_in' && v.weighInLimitKg === undefined) {
-      ctx.addIssue({ code: 'custom', path: ['weighInLimitKg'], message: 'Weigh-in limit is required for a weigh-in' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['weighInLimitKg'],
+        message: 'Weigh-in limit is required for a weigh-in',
+      });
     }
     const today = new Date().toISOString().slice(0, 10);
     if (/^\d{4}-\d{2}-\d{2}$/.test(v.birthDate)) {

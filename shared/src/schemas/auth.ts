@@ -7,7 +7,10 @@ export const signInRequest = z.object({
   /** Account e-mail. */
   email,
   /** Account password (not checked for length here: old passwords still sign in). */
-  password: z.string({ error: 'Password is required' }).min(1, 'Password is required').max(LIMITS.password.max),
+  password: z
+    .string({ error: 'Password is required' })
+    .min(1, 'Password is required')
+    .max(LIMITS.password.max),
 });
 export type SignInRequest = z.infer<typeof signInRequest>;
 
@@ -31,7 +34,9 @@ export type ResetPasswordRequest = z.infer<typeof resetPasswordRequest>;
 export const changePasswordRequest = z
   .object({
     /** The password in use now. */
-    currentPassword: z.string({ error: 'Current password is required' }).min(1, 'Current password is required'),
+    currentPassword: z
+      .string({ error: 'Current password is required' })
+      .min(1, 'Current password is required'),
     /** The new password. */
     newPassword,
   })

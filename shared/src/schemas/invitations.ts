@@ -41,7 +41,10 @@ export type InvitationPreview = z.infer<typeof invitationPreview>;
 /** POST /api/invitations/accept: sets the password and signs the invitee in. */
 export const acceptInvitationRequest = z.object({
   /** The token from the e-mailed link. */
-  token: z.string({ error: 'Invitation link is incomplete' }).min(20, 'Invitation link is incomplete').max(200),
+  token: z
+    .string({ error: 'Invitation link is incomplete' })
+    .min(20, 'Invitation link is incomplete')
+    .max(200),
   /** Display name. */
   name: personName,
   /** The new account's password. */

@@ -1,0 +1,182 @@
+/** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP fake, the server. */
+import path from 'node:path';
+import { isBuildFresh, recordBuild, type BuildCheck } from './fingerprint.js';
+import { log, seconds } from './log.js';
+import { repoPath, repoRoot } from './paths.js';
+import { pickFreePort } from './ports.js';
+import { npmCommand, packageBin, runChecked, sleep, startService, type Service } from './proc.js';
+
+export const DEMO_PASSWORD = 'driftmark-demo';
+export const DEMO_ACCOUNTS = [
+  { email: 'coach@driftmark.test', role: 'owner, head coach' },
+  { email: 'assistant@driftmark.test', role: 'assistant coach' },
+  { email: 'athlete@driftmark.test', role: 'athlete, final-week countdown' },
+] as const;
+
+const node = process.execPath;
+
+/** Environment for the API (server or CLI): ours plus the given variables; undefined removes one. */
+export function appEnv(vars: Record<string, string | undefined>): NodeJS.ProcessEnv {
+  const env: NodeJS.ProcessEnv = { ...process.env };
+  for (const [key, value] of Object.entries(vars)) {
+    if (value === undefined) delete env[key];
+    else env[key] = value;
+  }
+  return env;
+}
+
+async function timed<T>(label: string, action: () => Promise<T>): Promise<T> {
+  const started = Date.now();
+  const result = await action();
+  log(`${label} (${seconds(Date.now() - started)})`);
+  return result;
+}
+
+/** `tsc -b shared` (incremental: a no-op when shared/dist is current). */
+export function buildShared(): Promise<void> {
+  return timed('Built shared', async () => {
+    await runChecked(node, [packageBin('typescript', 'tsc'), '-b', 'shared']);
+  });
+}
+
+function workspaceBuild(workspace: 'api' | 'web', outputs: string[]): BuildCheck {
+  return {
+    // The whole workspace (minus dist and node_modules) plus everything it is built from.
+    inputs: [
+      repoPath(workspace),
+      repoPath('shared', 'dist'),
+      repoPath('tsconfig.base.json'),
+      repoPath('package-lock.json'),
+    ],
+    outputs: outputs.map((output) => repoPath(workspace, 'dist', output)),
+    stampFile: repoPath(workspace, 'dist', '.driftmark-build'),
+    baseDir: repoRoot,
+  };
+}
+
+/** `npm run build -w <workspace>`, skipped when no input changed since the last successful build. */
+export async function buildWorkspace(
+  workspace: 'api' | 'web',
+  options: { force?: boolean } = {},
+): Promise<void> {
+  const check = workspaceBuild(workspace, workspace === 'api' ? ['server.js', 'cli.js'] : ['index.html']);
+  if (!options.force && isBuildFresh(check)) {
+    log(`${workspace}: build is up to date (inputs unchanged).`);
+    return;
+  }
+  const [cmd, ...prefix] = npmCommand();
+  await timed(`Built ${workspace}`, async () => {
+    await runChecked(cmd, [...prefix, 'run', 'build', '-w', workspace]);
+  });
+  recordBuild(check);
+}
+
+/**
+ * Runs an API CLI command (migrate, seed, check-schema). `source` runs api/src/cli.ts through tsx with
+ * api/tsconfig.json (tsx reads only one tsconfig; without it TypeORM's legacy decorators break);
+ * otherwise the built api/dist/cli.js.
+ */
+export async function apiCli(
+  command: string,
+  env: NodeJS.ProcessEnv,
+  options: { source?: boolean } = {},
+): Promise<void> {
+  const args = options.source
+    ? ['--import', 'tsx', repoPath('api', 'src', 'cli.ts'), command]
+    : [repoPath('api', 'dist', 'cli.js'), command];
+  const childEnv = options.source ? { ...env, TSX_TSCONFIG_PATH: repoPath('api', 'tsconfig.json') } : env;
+  await timed(
+    `api ${command} (${env.APP_MODE ?? 'development'}, ${databaseName(env.DATABASE_URL)})`,
+    async () => {
+      await runChecked(node, args, { env: childEnv });
+    },
+  );
+}
+
+function databaseName(url: string | undefined): string {
+  if (!url) return 'no DATABASE_URL';
+  try {
+    return new URL(url).pathname.slice(1) || url;
+  } catch {
+    return 'bad DATABASE_URL';
+  }
+}
+
+export interface RunningSmtpFake {
+  service: Service;
+  port: number;
+  url: string;
+}
+
+/** Starts scripts/src/smtp-fake.ts on the first free port at or after `preferredPort`. */
+export async function startSmtpFake(options: {
+  preferredPort: number;
+  captureDir: string;
+  logFile?: string;
+  exclude?: number[];
+}): Promise<RunningSmtpFake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const service = startService(
+    'smtp-fake',
+    node,
+    ['--import', 'tsx', repoPath('scripts', 'src', 'smtp-fake.ts')],
+    {
+      env: {
+        ...process.env,
+        SMTP_PORT: String(port),
+        SMTP_HOST: '127.0.0.1',
+        MAIL_CAPTURE_DIR: options.captureDir,
+      },
+      ipc: true,
+      logFile: options.logFile,
+    },
+  );
+  const ready = await new Promise<boolean>((resolve) => {
+    const timer = setTimeout(() => resolve(false), 20_000);
+    service.child.on('message', (message: { type?: string }) => {
+      if (message?.type === 'ready') {
+        clearTimeout(timer);
+        resolve(true);
+      }
+    });
+    void service.exited.then(() => {
+      clearTimeout(timer);
+      resolve(false);
+    });
+  });
+  if (!ready) {
+    await service.stop('SIGKILL');
+    throw new Error(
+      `The SMTP fake did not start on port ${port}${options.logFile ? ` (see ${options.logFile})` : ''}.`,
+    );
+  }
+  service.child.channel?.unref();
+  return { service, port, url: `smtp://127.0.0.1:${port}` };
+}
+
+/** Polls GET <baseUrl>/api/health until it answers 200; fails early when the server process exits. */
+export async function waitForHealth(baseUrl: string, server: Service, timeoutMs = 60_000): Promise<void> {
+  const deadline = Date.now() + timeoutMs;
+  let lastProblem = 'no answer';
+  while (Date.now() < deadline) {
+    if (server.hasExited()) throw new Error(`The API server exited before ${baseUrl}/api/health answered.`);
+    try {
+      const response = await fetch(`${baseUrl}/api/health`, { signal: AbortSignal.timeout(2000) });
+      if (response.ok) return;
+      lastProblem = `HTTP ${response.status}: ${(await response.text()).slice(0, 200)}`;
+    } catch (error) {
+      lastProblem = (error as Error).message;
+    }
+    await sleep(250);
+  }
+  throw new Error(`${baseUrl}/api/health did not answer 200 within ${seconds(timeoutMs)} (${lastProblem}).`);
+}
+
+/** `node api/dist/server.js` in its own process group. */
+export function startBuiltServer(env: NodeJS.ProcessEnv, logFile?: string): Service {
+  return startService('api', node, [repoPath('api', 'dist', 'server.js')], { env, logFile });
+}
+
+export function relative(file: string): string {
+  return path.relative(process.cwd(), file) || '.';
+}

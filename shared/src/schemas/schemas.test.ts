@@ -1,0 +1,102 @@
+import { describe, expect, it } from 'vitest';
+import { intakeRequest, ageOn } from './athletes.js';
+import { signInRequest, changePasswordRequest } from './auth.js';
+import { createInvitationRequest } from './invitations.js';
+import { isoDate } from './common.js';
+
+const validIntake = {
+  sex: 'female',
+  birthDate: '1996-04-12',
+  heightCm: 165,
+  usualWaterMl: 3000,
+  usualEnergyKcal: 2100,
+  goal: 'lose',
+  eventType: 'show',
+  eventName: 'Coastal Open',
+  eventDate: '2027-03-14',
+  eventTime: '09:30',
+  eventTimeZone: 'Europe/Lisbon',
+  division: 'Figure',
+  timeZone: 'Europe/Lisbon',
+  weightUnit: 'kg',
+  volumeUnit: 'ml',
+  photoConsent: true,
+  safetyAcknowledged: true,
+} as const;
+
+function fieldsOf(result: { success: boolean; error?: { issues: { path: PropertyKey[] }[] } }): string[] {
+  return result.error ? result.error.issues.map((i) => i.path.join('.')) : [];
+}
+
+describe('intakeRequest', () => {
+  it('accepts a complete intake', () => {
+    expect(intakeRequest.safeParse(validIntake).success).toBe(true);
+  });
+
+  it('names the field for implausible values', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, heightCm: 20, usualWaterMl: -5 });
+    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'usualWaterMl']));
+  });
+
+  it('requires the acknowledgement to be ticked', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, safetyAcknowledged: false });
+    expect(fieldsOf(r)).toContain('safetyAcknowledged');
+  });
+
+  it('requires an event date and time zone unless there is no event', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, eventDate: undefined, eventTimeZone: undefined });
+    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['eventDate', 'eventTimeZone']));
+    const none = intakeRequest.safeParse({
+      ...validIntake,
+      eventType: 'none',
+      eventDate: undefined,
+      eventTimeZone: undefined,
+    });
+    expect(none.success).toBe(true);
+  });
+
+  it('requires a weigh-in limit for a weigh-in', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, eventType: 'weigh_in' });
+    expect(fieldsOf(r)).toContain('weighInLimitKg');
+  });
+
+  it('refuses an unknown time zone', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, timeZone: 'Mars/Olympus' });
+    expect(fieldsOf(r)).toContain('timeZone');
+  });
+});
+
+describe('ageOn', () => {
+  it('counts whole years, turning over on the birthday', () => {
+    expect(ageOn('2000-06-15', '2026-06-14')).toBe(25);
+    expect(ageOn('2000-06-15', '2026-06-15')).toBe(26);
+  });
+});
+
+describe('isoDate', () => {
+  it('refuses impossible dates', () => {
+    expect(isoDate.safeParse('2026-02-30').success).toBe(false);
+    expect(isoDate.safeParse('2024-02-29').success).toBe(true);
+  });
+});
+
+describe('auth schemas', () => {
+  it('normalises the e-mail', () => {
+    expect(signInRequest.parse({ email: '  Coach@Driftmark.TEST ', password: 'x' }).email).toBe(
+      'coach@driftmark.test',
+    );
+  });
+
+  it('refuses a new password equal to the current one, on the new field', () => {
+    const r = changePasswordRequest.safeParse({
+      currentPassword: 'same-password-1',
+      newPassword: 'same-password-1',
+    });
+    expect(fieldsOf(r)).toEqual(['newPassword']);
+  });
+
+  it('refuses an owner invitation role', () => {
+    const r = createInvitationRequest.safeParse({ email: 'a@b.test', name: 'A', role: 'owner' });
+    expect(fieldsOf(r)).toEqual(['role']);
+  });
+});
