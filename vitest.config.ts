@@ -27,6 +27,8 @@ export default defineConfig({
           include: ['tests/integration/**/*.test.ts'],
           globalSetup: existsSync(integrationSetup) ? [integrationSetup] : [],
           fileParallelism: false,
+          // bcrypt at cost 12 takes ~0.3 s a hash on these 2-core machines; a few tests sign in many accounts.
+          testTimeout: 30_000,
           hookTimeout: 60_000,
         },
       },

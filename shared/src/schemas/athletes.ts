@@ -77,32 +77,37 @@ export const intakeRequest = z
     /** Must be true: not medical advice, medical clearance held. */
     safetyAcknowledged: z.literal(true, { error: 'Please read and tick this to continue' }),
   })
-  .superRefine((v, ctx) => {
-    if (v.eventType !== 'none') {
-      if (!v.eventDate)
-        ctx.addIssue({ code: 'custom', path: ['eventDate'], message: 'Event date is required' });
-      if (!v.eventTimeZone)
-        ctx.addIssue({ code: 'custom', path: ['eventTimeZone'], message: 'Event time zone is required' });
-    }
-    if (v.eventType === 'weigh_in' && v.weighInLimitKg === undefined) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['weighInLimitKg'],
-        message: 'Weigh-in limit is required for a weigh-in',
-      });
-    }
-    const today = new Date().toISOString().slice(0, 10);
-    if (/^\d{4}-\d{2}-\d{2}$/.test(v.birthDate)) {
-      const age = ageOn(v.birthDate, today);
-      if (age < LIMITS.ageYears.min || age > LIMITS.ageYears.max) {
+  .superRefine(
+    (v, ctx) => {
+      if (v.eventType !== 'none') {
+        if (!v.eventDate)
+          ctx.addIssue({ code: 'custom', path: ['eventDate'], message: 'Event date is required' });
+        if (!v.eventTimeZone)
+          ctx.addIssue({ code: 'custom', path: ['eventTimeZone'], message: 'Event time zone is required' });
+      }
+      if (v.eventType === 'weigh_in' && v.weighInLimitKg === undefined) {
         ctx.addIssue({
           code: 'custom',
-          path: ['birthDate'],
-          message: `Age must be between ${LIMITS.ageYears.min} and ${LIMITS.ageYears.max}`,
+          path: ['weighInLimitKg'],
+          message: 'Weigh-in limit is required for a weigh-in',
         });
       }
-    }
-  });
+      const today = new Date().toISOString().slice(0, 10);
+      if (typeof v.birthDate === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(v.birthDate)) {
+        const age = ageOn(v.birthDate, today);
+        if (age < LIMITS.ageYears.min || age > LIMITS.ageYears.max) {
+          ctx.addIssue({
+            code: 'custom',
+            path: ['birthDate'],
+            message: `Age must be between ${LIMITS.ageYears.min} and ${LIMITS.ageYears.max}`,
+          });
+        }
+      }
+    },
+    // Run the cross-field rules even while other fields are still invalid, so a form shows every
+    // problem in one round (zod otherwise skips object refinements after any field error).
+    { when: () => true },
+  );
 export type IntakeRequest = z.infer<typeof intakeRequest>;
 
 /** An athlete's profile as the API returns it. */

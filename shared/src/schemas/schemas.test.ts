@@ -100,3 +100,10 @@ describe('auth schemas', () => {
     expect(fieldsOf(r)).toEqual(['role']);
   });
 });
+
+describe('intakeRequest cross-field rules', () => {
+  it('reports a missing event date together with other field errors in one round', () => {
+    const r = intakeRequest.safeParse({ ...validIntake, heightCm: 5, eventDate: undefined });
+    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'eventDate']));
+  });
+});

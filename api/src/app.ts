@@ -1,0 +1,75 @@
+import cookieParser from 'cookie-parser';
+import express from 'express';
+import type { DataSource } from 'typeorm';
+import type { Config } from './config.js';
+import type { AppContext } from './context.js';
+import { createLogger, type Logger } from './logger.js';
+import { originCheck } from './middleware/csrf.js';
+import { apiNotFound, errorHandler } from './middleware/errors.js';
+import { requestLogging } from './middleware/request-logging.js';
+import { securityHeaders } from './middleware/security.js';
+import { webAppRouter } from './middleware/web-app.js';
+import { athletesRouter } from './routes/athletes.routes.js';
+import { authRouter } from './routes/auth.routes.js';
+import { devMailRouter } from './routes/dev-mail.routes.js';
+import { healthRouter } from './routes/health.routes.js';
+import { invitationsRouter } from './routes/invitations.routes.js';
+import { meRouter } from './routes/me.routes.js';
+import { rosterRouter } from './routes/roster.routes.js';
+import { teamRouter } from './routes/team.routes.js';
+
+/** Largest JSON body accepted (photos go through multipart uploads, not JSON). */
+const JSON_LIMIT = '100kb';
+
+/** Builds the Express app (no listen): the API under /api and, when built, the web app. */
+export function createApp(deps: {
+  config: Config;
+  dataSource: DataSource;
+  logger?: Logger;
+}): express.Express {
+  const { config, dataSource } = deps;
+  const logger = deps.logger ?? createLogger(config.logLevel);
+  const ctx: AppContext = { config, dataSource, logger };
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('etag', false);
+  // Path params and query strings are validated per route with zod; keep the query parser simple.
+  app.set('query parser', 'simple');
+
+  app.use(requestLogging(logger));
+  app.use((req, _res, next) => {
+    req.ctx = ctx;
+    next();
+  });
+  app.use(securityHeaders(config));
+  app.use(express.json({ limit: JSON_LIMIT }));
+  app.use(cookieParser());
+  app.use(originCheck(config));
+
+  const api = express.Router();
+  api.use((_req, res, next) => {
+    // API answers are per user; never let a shared cache keep them.
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use('/health', healthRouter());
+  api.use('/auth', authRouter(config));
+  api.use('/me', meRouter());
+  api.use('/invitations', invitationsRouter());
+  api.use('/roster', rosterRouter());
+  api.use('/team', teamRouter());
+  api.use('/athletes', athletesRouter());
+  if (config.appMode !== 'production' && config.mailCaptureDir) {
+    api.use('/dev/mail', devMailRouter(config));
+  }
+  api.use(apiNotFound());
+  app.use('/api', api);
+
+  const web = webAppRouter(config.webDist);
+  if (web) app.use(web);
+
+  app.use(apiNotFound());
+  app.use(errorHandler());
+  return app;
+}

@@ -1,0 +1,49 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import type { Config } from '../config.js';
+import { Athlete } from '../entities/athlete.entity.js';
+import { AthleteShare } from '../entities/athlete-share.entity.js';
+import { Consent } from '../entities/consent.entity.js';
+import { Invitation } from '../entities/invitation.entity.js';
+import { OutboxMessage } from '../entities/outbox-message.entity.js';
+import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
+import { Session } from '../entities/session.entity.js';
+import { Team } from '../entities/team.entity.js';
+import { User } from '../entities/user.entity.js';
+import { MIGRATIONS } from './migrations/index.js';
+import { DriftmarkNamingStrategy } from './naming-strategy.js';
+
+/** Every entity, listed explicitly: globs break under vitest and in the built output alike. */
+export const ENTITIES = [
+  Team,
+  User,
+  Session,
+  PasswordResetToken,
+  Invitation,
+  Athlete,
+  AthleteShare,
+  Consent,
+  OutboxMessage,
+];
+
+export function createDataSource(
+  config: Pick<Config, 'databaseUrl'>,
+  options: { poolSize?: number } = {},
+): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url: config.databaseUrl,
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsTableName: 'migrations',
+    migrationsTransactionMode: 'each',
+    namingStrategy: new DriftmarkNamingStrategy(),
+    synchronize: false,
+    logging: false,
+    // gen_random_uuid() is built into PostgreSQL 13+, so no extension has to be installed.
+    uuidExtension: 'pgcrypto',
+    installExtensions: false,
+    poolSize: options.poolSize ?? 10,
+    extra: { connectionTimeoutMillis: 5000 },
+  });
+}

@@ -1,0 +1,17 @@
+import { Column, Entity } from 'typeorm';
+import { BaseRecord } from './base.entity.js';
+
+/** Team-wide defaults the owner manages; every key optional so old rows stay valid. */
+export interface TeamSettings {
+  /** Hour (0–23, athlete's time zone) after which a missing weigh-in triggers a reminder. */
+  reminderHour?: number;
+}
+
+@Entity({ name: 'teams' })
+export class Team extends BaseRecord {
+  @Column({ type: 'varchar', length: 100 })
+  name: string;
+
+  @Column({ type: 'jsonb', default: () => "'{}'" })
+  settings: TeamSettings;
+}

@@ -1,0 +1,53 @@
+import type { Request, RequestHandler } from 'express';
+import type { z } from 'zod';
+import { notFound } from '../errors.js';
+
+interface Schemas<
+  B extends z.ZodType | undefined,
+  P extends z.ZodType | undefined,
+  Q extends z.ZodType | undefined,
+> {
+  body?: B;
+  params?: P;
+  query?: Q;
+}
+
+type Out<S extends z.ZodType | undefined, Fallback> = S extends z.ZodType ? z.output<S> : Fallback;
+
+/**
+ * Parses body, params and query with the shared zod schemas and replaces them with the parsed
+ * values. A bad body or query answers 400 `validation_failed` with `fields` by path; a bad path
+ * parameter (an id that cannot name anything) answers 404, like an id that names nothing.
+ */
+export function validate<
+  B extends z.ZodType | undefined = undefined,
+  P extends z.ZodType | undefined = undefined,
+  Q extends z.ZodType | undefined = undefined,
+>(
+  schemas: Schemas<B, P, Q>,
+): RequestHandler<Out<P, Request['params']>, unknown, Out<B, unknown>, Out<Q, Request['query']>> {
+  return (req, _res, next) => {
+    if (schemas.params) {
+      const parsed = schemas.params.safeParse(req.params);
+      if (!parsed.success) return next(notFound());
+      req.params = parsed.data as typeof req.params;
+    }
+    if (schemas.query) {
+      const parsed = schemas.query.safeParse(req.query);
+      if (!parsed.success) return next(parsed.error);
+      // Express 5 exposes `req.query` through a getter; shadow it with the parsed value.
+      Object.defineProperty(req, 'query', {
+        value: parsed.data,
+        writable: true,
+        configurable: true,
+        enumerable: true,
+      });
+    }
+    if (schemas.body) {
+      const parsed = schemas.body.safeParse(req.body ?? {});
+      if (!parsed.success) return next(parsed.error);
+      req.body = parsed.data as typeof req.body;
+    }
+    next();
+  };
+}

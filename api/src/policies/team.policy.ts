@@ -1,0 +1,43 @@
+import type { InvitableRole } from '@driftmark/shared';
+import { forbidden, notFound } from '../errors.js';
+import type { Actor } from './actor.js';
+
+export interface TeamTarget {
+  id: string;
+}
+
+export type TeamAction =
+  | { kind: 'read' }
+  | { kind: 'manageSettings' }
+  | { kind: 'viewRoster' }
+  | { kind: 'viewMembers' }
+  | { kind: 'invite'; role: InvitableRole };
+
+/** Who may invite whom: the owner anyone, a coach only athletes, nobody else. */
+const INVITES: Record<Actor['role'], readonly InvitableRole[]> = {
+  owner: ['athlete', 'coach', 'assistant'],
+  coach: ['athlete'],
+  assistant: [],
+  athlete: [],
+};
+
+export function canOnTeam(actor: Actor, action: TeamAction, team: TeamTarget): boolean {
+  if (actor.teamId !== team.id) return false;
+  const staff = actor.role !== 'athlete';
+  switch (action.kind) {
+    case 'read':
+      return true;
+    case 'manageSettings':
+      return actor.role === 'owner';
+    case 'viewRoster':
+    case 'viewMembers':
+      return staff;
+    case 'invite':
+      return INVITES[actor.role].includes(action.role);
+  }
+}
+
+export function authorizeTeam(actor: Actor, action: TeamAction, team: TeamTarget): void {
+  if (!canOnTeam(actor, { kind: 'read' }, team)) throw notFound();
+  if (!canOnTeam(actor, action, team)) throw forbidden();
+}

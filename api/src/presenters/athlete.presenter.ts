@@ -1,0 +1,59 @@
+import type { AthleteProfile, RosterRow } from '@driftmark/shared';
+import { daysToEvent } from '../lib/dates.js';
+import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
+
+export function presentAthleteProfile(a: AthleteWithPeople): AthleteProfile {
+  return {
+    id: a.id,
+    userId: a.userId,
+    name: a.user.name,
+    email: a.user.email,
+    status: a.status,
+    coach: { id: a.coach.id, name: a.coach.name },
+    sex: a.sex,
+    birthDate: a.birthDate,
+    heightCm: a.heightCm,
+    usualWaterMl: a.usualWaterMl,
+    usualEnergyKcal: a.usualEnergyKcal,
+    goal: a.goal,
+    eventType: a.eventType,
+    eventName: a.eventName,
+    eventDate: a.eventDate,
+    eventTime: a.eventTime,
+    eventTimeZone: a.eventTimeZone,
+    division: a.division,
+    weighInLimitKg: a.weighInLimitKg,
+    timeZone: a.user.timeZone,
+    photoConsent: a.photoConsent,
+    intakeCompletedAt: a.intakeCompletedAt ? a.intakeCompletedAt.toISOString() : null,
+  };
+}
+
+/** `daysToEvent` counts from today in the athlete's own time zone. */
+export function presentRosterRow(a: AthleteWithPeople, now: Date = new Date()): RosterRow {
+  return {
+    athleteId: a.id,
+    name: a.user.name,
+    email: a.user.email,
+    status: a.status,
+    goal: a.goal,
+    eventType: a.eventType,
+    eventName: a.eventName,
+    eventDate: a.eventDate,
+    daysToEvent: daysToEvent(a.eventDate, a.user.timeZone, now),
+    division: a.division,
+    coach: { id: a.coach.id, name: a.coach.name },
+  };
+}
+
+/** Soonest event first, athletes without an event last, then by name. */
+export function compareRosterRows(x: RosterRow, y: RosterRow): number {
+  if (x.daysToEvent !== y.daysToEvent) {
+    if (x.daysToEvent === null) return 1;
+    if (y.daysToEvent === null) return -1;
+    return x.daysToEvent - y.daysToEvent;
+  }
+  return (
+    x.name.localeCompare(y.name, 'en', { sensitivity: 'base' }) || x.athleteId.localeCompare(y.athleteId)
+  );
+}

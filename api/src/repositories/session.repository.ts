@@ -1,0 +1,49 @@
+import { IsNull, LessThan, Not, type EntityManager } from 'typeorm';
+import { Session } from '../entities/session.entity.js';
+import type { User } from '../entities/user.entity.js';
+
+export class SessionRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  create(input: Pick<Session, 'userId' | 'expiresAt' | 'userAgent' | 'ip'>): Promise<Session> {
+    return this.manager.save(
+      this.manager.create(Session, { ...input, lastSeenAt: new Date(), revokedAt: null }),
+    );
+  }
+
+  /** The session with its user, or null. Validity (revoked, expired) is the caller's check. */
+  findWithUser(id: string): Promise<(Session & { user: User }) | null> {
+    return this.manager.findOne(Session, { where: { id }, relations: { user: true } }) as Promise<
+      (Session & { user: User }) | null
+    >;
+  }
+
+  findById(id: string): Promise<Session | null> {
+    return this.manager.findOneBy(Session, { id });
+  }
+
+  async touch(id: string, at: Date): Promise<void> {
+    await this.manager.update(Session, { id }, { lastSeenAt: at });
+  }
+
+  async revoke(id: string, at: Date = new Date()): Promise<void> {
+    await this.manager.update(Session, { id, revokedAt: IsNull() }, { revokedAt: at });
+  }
+
+  /** Revokes every live session of a user, except `exceptId` when given. */
+  async revokeAllForUser(userId: string, options: { exceptId?: string; at?: Date } = {}): Promise<number> {
+    const where = options.exceptId
+      ? { userId, revokedAt: IsNull(), id: Not(options.exceptId) }
+      : { userId, revokedAt: IsNull() };
+    const result = await this.manager.update(Session, where, { revokedAt: options.at ?? new Date() });
+    return result.affected ?? 0;
+  }
+
+  /** Deletes a user's sessions that ended (absolute end passed) or were revoked before `revokedBefore`. */
+  async pruneForUser(userId: string, now: Date, revokedBefore: Date): Promise<void> {
+    await this.manager.delete(Session, [
+      { userId, expiresAt: LessThan(now) },
+      { userId, revokedAt: LessThan(revokedBefore) },
+    ]);
+  }
+}

@@ -1,0 +1,78 @@
+import { intakeRequest, shareAthleteRequest, uuid } from '@driftmark/shared';
+import { Router, type Request } from 'express';
+import { z } from 'zod';
+import { notFound } from '../errors.js';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import { validate } from '../middleware/validate.js';
+import {
+  athleteAbilities,
+  authorizeAthlete,
+  type AthleteAction,
+  type AthleteTarget,
+} from '../policies/athlete.policy.js';
+import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
+import { AthleteRepository } from '../repositories/athlete.repository.js';
+import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
+import { AthleteService } from '../services/athlete.service.js';
+
+const athleteParams = z.object({ athleteId: uuid });
+const shareParams = z.object({ athleteId: uuid, userId: uuid });
+
+/** Loads the athlete and what the policy needs, then authorizes (404 unreadable, 403 not allowed). */
+async function loadAthlete(req: Request<{ athleteId: string }>, action: AthleteAction) {
+  const { actor } = requireAuth(req);
+  const manager = req.ctx.dataSource.manager;
+  const athlete = await new AthleteRepository(manager).findWithPeople(req.params.athleteId);
+  if (!athlete) throw notFound();
+  const target: AthleteTarget = {
+    userId: athlete.userId,
+    teamId: athlete.teamId,
+    coachId: athlete.coachId,
+    sharedWithUserIds: await new AthleteShareRepository(manager).listUserIds(athlete.id),
+  };
+  authorizeAthlete(actor, action, target);
+  return { actor, athlete, target };
+}
+
+export function athletesRouter(): Router {
+  const router = Router();
+
+  router.get('/:athleteId', authenticate(), validate({ params: athleteParams }), async (req, res) => {
+    const { actor, athlete, target } = await loadAthlete(req, 'read');
+    res.json({ data: presentAthleteProfile(athlete), abilities: athleteAbilities(actor, target) });
+  });
+
+  router.put(
+    '/:athleteId/intake',
+    authenticate(),
+    validate({ params: athleteParams, body: intakeRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'completeIntake');
+      res.json({ data: await new AthleteService(req.ctx).completeIntake(athlete, req.body) });
+    },
+  );
+
+  router.post(
+    '/:athleteId/shares',
+    authenticate(),
+    validate({ params: athleteParams, body: shareAthleteRequest }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'share');
+      await new AthleteService(req.ctx).share(actor, athlete, req.body.userId);
+      res.status(204).end();
+    },
+  );
+
+  router.delete(
+    '/:athleteId/shares/:userId',
+    authenticate(),
+    validate({ params: shareParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'share');
+      await new AthleteService(req.ctx).unshare(athlete, req.params.userId);
+      res.status(204).end();
+    },
+  );
+
+  return router;
+}

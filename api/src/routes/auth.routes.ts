@@ -1,0 +1,73 @@
+import {
+  changePasswordRequest,
+  forgotPasswordRequest,
+  resetPasswordRequest,
+  signInRequest,
+} from '@driftmark/shared';
+import { Router } from 'express';
+import type { Config } from '../config.js';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import { resetRateLimit, signInRateLimit } from '../middleware/rate-limit.js';
+import { validate } from '../middleware/validate.js';
+import { clearSessionCookie, setSessionCookie } from '../lib/session-cookie.js';
+import { SESSION_COOKIE } from '../lib/session-token.js';
+import { AuthService } from '../services/auth.service.js';
+import { SessionService } from '../services/session.service.js';
+import { clientInfo } from '../lib/client-info.js';
+
+export function authRouter(config: Config): Router {
+  const router = Router();
+  const forgotLimit = resetRateLimit(config);
+  const resetLimit = resetRateLimit(config);
+
+  router.post('/sign-in', signInRateLimit(config), validate({ body: signInRequest }), async (req, res) => {
+    const { me, token } = await new AuthService(req.ctx).signIn(req.body, clientInfo(req));
+    setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+    res.json({ data: me });
+  });
+
+  // Works with or without a live session, so a stale tab can always sign out.
+  router.post('/sign-out', async (req, res) => {
+    const { config: cfg, dataSource } = req.ctx;
+    const cookie: unknown = req.cookies?.[SESSION_COOKIE];
+    if (typeof cookie === 'string' && cookie !== '') {
+      const resolved = await new SessionService(dataSource.manager, cfg).resolve(cookie);
+      if (resolved) await new AuthService(req.ctx).signOut(resolved.session.id);
+    }
+    clearSessionCookie(res, cfg);
+    res.status(204).end();
+  });
+
+  router.post(
+    '/forgot-password',
+    forgotLimit,
+    validate({ body: forgotPasswordRequest }),
+    async (req, res) => {
+      await new AuthService(req.ctx).requestPasswordReset(req.body.email);
+      res.status(202).json({ data: { ok: true } });
+    },
+  );
+
+  router.post('/reset-password', resetLimit, validate({ body: resetPasswordRequest }), async (req, res) => {
+    await new AuthService(req.ctx).resetPassword(req.body.token, req.body.password);
+    res.json({ data: { ok: true } });
+  });
+
+  router.post(
+    '/change-password',
+    authenticate(),
+    validate({ body: changePasswordRequest }),
+    async (req, res) => {
+      const auth = requireAuth(req);
+      const { me, token } = await new AuthService(req.ctx).changePassword(
+        auth.user.id,
+        auth.sessionId,
+        req.body,
+      );
+      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      res.json({ data: me });
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,13 @@
+import { Router } from 'express';
+import { HealthService } from '../services/health.service.js';
+
+/** `GET /api/health`: a real round trip to the database; 503 when it fails. No envelope. */
+export function healthRouter(): Router {
+  const router = Router();
+  router.get('/', async (req, res) => {
+    const health = await new HealthService(req.ctx).check();
+    res.setHeader('Cache-Control', 'no-store');
+    res.status(health.db === 'up' ? 200 : 503).json(health);
+  });
+  return router;
+}

@@ -1,0 +1,14 @@
+import { Router } from 'express';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import { authorizeTeam } from '../policies/team.policy.js';
+import { RosterService } from '../services/roster.service.js';
+
+export function rosterRouter(): Router {
+  const router = Router();
+  router.get('/', authenticate(), async (req, res) => {
+    const { actor } = requireAuth(req);
+    authorizeTeam(actor, { kind: 'viewRoster' }, { id: actor.teamId });
+    res.json({ data: await new RosterService(req.ctx).list(actor) });
+  });
+  return router;
+}

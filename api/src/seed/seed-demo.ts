@@ -1,0 +1,172 @@
+/**
+ * Writes the demo team (demo-team.ts) into an empty database. Idempotent: when the demo owner
+ * already exists nothing changes. Refused in production.
+ */
+import bcrypt from 'bcryptjs';
+import { CONSENTS } from '@driftmark/shared';
+import type { DataSource, EntityManager } from 'typeorm';
+import type { AppMode } from '../config.js';
+import { Athlete } from '../entities/athlete.entity.js';
+import { AthleteShare } from '../entities/athlete-share.entity.js';
+import { Consent } from '../entities/consent.entity.js';
+import { Team } from '../entities/team.entity.js';
+import { User } from '../entities/user.entity.js';
+import { addDays, localDate } from './calendar.js';
+import {
+  DEMO_ASSISTANT_EMAIL,
+  DEMO_ATHLETES,
+  DEMO_HISTORY_DAYS,
+  DEMO_OWNER_EMAIL,
+  DEMO_PASSWORD,
+  DEMO_SEED,
+  DEMO_STAFF,
+  DEMO_TEAM_NAME,
+  type DemoAthleteDefinition,
+} from './demo-team.js';
+import { createRandom } from './random.js';
+
+/** bcrypt cost for the demo password (the same cost real accounts use). */
+const BCRYPT_COST = 12;
+const SEED_LOCK_KEY = 'driftmark:seed-demo';
+const DAY_MS = 86_400_000;
+
+export interface SeedDemoOptions {
+  /** The seed date; event dates are counted from it in each athlete's time zone. */
+  now?: Date;
+  /** Defaults to APP_MODE from the environment. */
+  appMode?: AppMode | string;
+}
+
+export interface SeedDemoResult {
+  created: boolean;
+}
+
+export class SeedRefusedError extends Error {
+  override readonly name = 'SeedRefusedError';
+}
+
+/** The intake answers and event of a definition, with dates resolved against the seed date. */
+export function resolveDemoAthlete(def: DemoAthleteDefinition, now: Date) {
+  const event =
+    def.event.type === 'none'
+      ? {
+          eventType: 'none' as const,
+          eventName: null,
+          eventDate: null,
+          eventTime: null,
+          eventTimeZone: null,
+          weighInLimitKg: null,
+        }
+      : {
+          eventType: def.event.type,
+          eventName: def.event.name,
+          eventDate: addDays(localDate(now, def.event.timeZone), def.event.daysFromSeed),
+          eventTime: def.event.time,
+          eventTimeZone: def.event.timeZone,
+          weighInLimitKg: def.event.weighInLimitKg,
+        };
+  const division = def.event.type === 'none' ? (def.division ?? null) : def.event.division;
+  return { ...def.intake, ...event, division };
+}
+
+export async function seedDemo(
+  dataSource: DataSource,
+  options: SeedDemoOptions = {},
+): Promise<SeedDemoResult> {
+  const appMode = options.appMode ?? process.env.APP_MODE;
+  if (appMode === 'production') {
+    throw new SeedRefusedError('The demo seed is refused in production (APP_MODE=production).');
+  }
+  const now = options.now ?? new Date();
+
+  if (await ownerExists(dataSource.manager)) return { created: false };
+  // One hash for all demo accounts: bcrypt at cost 12 takes a noticeable fraction of a second.
+  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, BCRYPT_COST);
+
+  return dataSource.transaction(async (manager) => {
+    // Two seeds started together (two terminals) must not both insert: the second waits here,
+    // then sees the owner and stops.
+    await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [SEED_LOCK_KEY]);
+    if (await ownerExists(manager)) return { created: false };
+    await writeDemoTeam(manager, passwordHash, now);
+    return { created: true };
+  });
+}
+
+async function ownerExists(manager: EntityManager): Promise<boolean> {
+  return manager.getRepository(User).exists({ where: { email: DEMO_OWNER_EMAIL } });
+}
+
+async function writeDemoTeam(manager: EntityManager, passwordHash: string, now: Date): Promise<void> {
+  const random = createRandom(DEMO_SEED);
+  const team = await manager
+    .getRepository(Team)
+    .save({ name: DEMO_TEAM_NAME, settings: { reminderHour: 10 } });
+
+  const users = manager.getRepository(User);
+  const staff = new Map<string, User>();
+  for (const def of DEMO_STAFF) {
+    staff.set(
+      def.email,
+      await users.save({
+        teamId: team.id,
+        email: def.email,
+        name: def.name,
+        role: def.role,
+        passwordHash,
+        timeZone: def.timeZone,
+        weightUnit: def.weightUnit,
+        volumeUnit: def.volumeUnit,
+      }),
+    );
+  }
+  const owner = staff.get(DEMO_OWNER_EMAIL);
+  const assistant = staff.get(DEMO_ASSISTANT_EMAIL);
+  if (!owner || !assistant) throw new Error('demo-team.ts must define the owner and the assistant');
+
+  for (const def of DEMO_ATHLETES) {
+    const user = await users.save({
+      teamId: team.id,
+      email: def.email,
+      name: def.name,
+      role: 'athlete' as const,
+      passwordHash,
+      timeZone: def.timeZone,
+      weightUnit: def.weightUnit,
+      volumeUnit: def.volumeUnit,
+    });
+    // Intake was done on the first morning of the generated history, at a varying hour.
+    const intakeAt = new Date(
+      now.getTime() - DEMO_HISTORY_DAYS * DAY_MS + random.int(7 * 60, 11 * 60) * 60_000,
+    );
+    const athlete = await manager.getRepository(Athlete).save({
+      userId: user.id,
+      teamId: team.id,
+      coachId: owner.id,
+      status: 'active' as const,
+      ...resolveDemoAthlete(def, now),
+      intakeCompletedAt: intakeAt,
+    });
+    await manager.getRepository(Consent).save([
+      {
+        userId: user.id,
+        kind: 'safety_acknowledgement' as const,
+        version: CONSENTS.safety_acknowledgement.version,
+        granted: true,
+        acceptedAt: intakeAt,
+      },
+      {
+        userId: user.id,
+        kind: 'photo_consent' as const,
+        version: CONSENTS.photo_consent.version,
+        granted: def.intake.photoConsent,
+        acceptedAt: intakeAt,
+      },
+    ]);
+    if (def.sharedWithAssistant) {
+      await manager
+        .getRepository(AthleteShare)
+        .save({ athleteId: athlete.id, userId: assistant.id, sharedById: owner.id });
+    }
+  }
+}
