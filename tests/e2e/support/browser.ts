@@ -1,0 +1,58 @@
+import { mkdtemp, mkdir, rm } from 'node:fs/promises';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { chromium, type BrowserContext, type Page } from 'playwright-core';
+
+export const baseUrl = process.env.E2E_BASE_URL ?? 'http://127.0.0.1:3100';
+const screenshotDir = process.env.E2E_SCREENSHOT_DIR ?? path.resolve('screenshots');
+const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+
+export const DEMO_PASSWORD = 'driftmark-demo';
+
+export interface Session {
+  context: BrowserContext;
+  page: Page;
+  close(): Promise<void>;
+}
+
+/** A fresh browser profile (own cookies) at the given viewport width. */
+export async function openSession(width = 1280, height = width < 600 ? 812 : 860): Promise<Session> {
+  const dir = await mkdtemp(path.join(tmpdir(), 'driftmark-e2e-'));
+  const context = await chromium.launchPersistentContext(dir, {
+    executablePath: chromiumPath,
+    headless: true,
+    viewport: { width, height },
+    baseURL: baseUrl,
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
+  });
+  context.setDefaultTimeout(15_000);
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    async close() {
+      await context.close();
+      await rm(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  await mkdir(screenshotDir, { recursive: true });
+  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
+}
+
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password', { exact: true }).fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}

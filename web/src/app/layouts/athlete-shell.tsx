@@ -1,0 +1,38 @@
+import { Outlet } from 'react-router';
+import { BottomBar, BottomBarLink, BottomBarShell, BrandMark } from '@/components/ui/app-shell';
+import { SlidersIcon, TodayIcon } from '@/components/ui/icons';
+import { paths } from '@/config/paths';
+import { useCurrentUser } from '../session';
+import { SignOutButton } from './sign-out-button';
+
+/**
+ * Athlete screens: phone first, one-handed. The bottom bar holds only what works today (Today and
+ * Settings); it appears once the intake is done, so the intake has the athlete's full attention.
+ */
+export function AthleteShell() {
+  const me = useCurrentUser();
+  return (
+    <BottomBarShell
+      header={
+        <>
+          <BrandMark to={me.intakeComplete ? paths.athleteHome : paths.intake} />
+          <SignOutButton />
+        </>
+      }
+      nav={
+        me.intakeComplete ? (
+          <BottomBar label="Athlete">
+            <BottomBarLink to={paths.athleteHome} icon={<TodayIcon />} end>
+              Today
+            </BottomBarLink>
+            <BottomBarLink to={paths.settings} icon={<SlidersIcon />}>
+              Settings
+            </BottomBarLink>
+          </BottomBar>
+        ) : null
+      }
+    >
+      <Outlet />
+    </BottomBarShell>
+  );
+}

@@ -1,0 +1,26 @@
+import { QueryClientProvider } from '@tanstack/react-query';
+import { StrictMode } from 'react';
+import { RouterProvider } from 'react-router';
+import { signInWithNext } from '@/config/paths';
+import { authKeys } from '@/features/auth/api/keys';
+import { setUnauthenticatedHandler } from '@/lib/api-client';
+import { queryClient } from '@/lib/query-client';
+import { router } from './router';
+
+// A 401 from any call but /api/me and sign-in means the session ended (expired, revoked on
+// another device): forget the user and go to sign-in, coming back here afterwards.
+setUnauthenticatedHandler((next) => {
+  queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
+  queryClient.setQueryData(authKeys.me, null);
+  if (window.location.pathname !== '/sign-in') void router.navigate(signInWithNext(next), { replace: true });
+});
+
+export function App() {
+  return (
+    <StrictMode>
+      <QueryClientProvider client={queryClient}>
+        <RouterProvider router={router} />
+      </QueryClientProvider>
+    </StrictMode>
+  );
+}

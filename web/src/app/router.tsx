@@ -1,0 +1,119 @@
+import { isStaffRole, type Me } from '@driftmark/shared';
+import { createBrowserRouter, Outlet, ScrollRestoration } from 'react-router';
+import { athleteQueryOptions } from '@/features/athletes/api/get-athlete';
+import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
+import { meQueryOptions } from '@/features/auth/api/get-me';
+import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
+import { queryClient } from '@/lib/query-client';
+import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
+import { AthleteShell } from './layouts/athlete-shell';
+import { ShellForRole } from './layouts/shell-for-role';
+import { StaffShell } from './layouts/staff-shell';
+import { AcceptInvitationRoute } from './routes/accept-invitation';
+import { AthleteHomeRoute } from './routes/athlete-home';
+import { CoachInvitationsRoute } from './routes/coach-invitations';
+import { CoachRosterRoute } from './routes/coach-roster';
+import { DevInboxRoute } from './routes/dev-inbox';
+import { ForgotPasswordRoute } from './routes/forgot-password';
+import { IntakeRoute } from './routes/intake';
+import { NotFoundRoute } from './routes/not-found';
+import { ResetPasswordRoute } from './routes/reset-password';
+import { RootRedirect } from './routes/root-redirect';
+import { RouteError } from './routes/route-error';
+import { SettingsRoute } from './routes/settings';
+import { SignInRoute } from './routes/sign-in';
+
+/**
+ * Loaders only start fetches (the same query options the screens use) so data and the session
+ * arrive together; they never block navigation, and screens keep their own loading states.
+ */
+function prefetchWhen(check: (me: Me) => boolean, prefetch: (me: Me) => void) {
+  return () => {
+    void queryClient
+      .fetchQuery(meQueryOptions())
+      .then((me) => {
+        if (me && check(me)) prefetch(me);
+      })
+      .catch(() => undefined);
+    return null;
+  };
+}
+
+const prefetchOwnProfile = prefetchWhen(
+  (me) => me.role === 'athlete' && me.athleteId !== null,
+  (me) => void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!)),
+);
+
+function RootLayout() {
+  return (
+    <>
+      <ScrollRestoration />
+      <Outlet />
+    </>
+  );
+}
+
+export const router = createBrowserRouter([
+  {
+    element: <RootLayout />,
+    errorElement: <RouteError />,
+    children: [
+      { index: true, element: <RootRedirect /> },
+      { path: 'sign-in', element: <SignInRoute /> },
+      { path: 'forgot-password', element: <ForgotPasswordRoute /> },
+      { path: 'reset-password', element: <ResetPasswordRoute /> },
+      { path: 'invite/:token', element: <AcceptInvitationRoute /> },
+      { path: 'dev/inbox', element: <DevInboxRoute /> },
+      {
+        element: <RequireSignedIn />,
+        children: [
+          {
+            element: <RequireAthlete />,
+            children: [
+              {
+                element: <AthleteShell />,
+                children: [
+                  { path: 'athlete', element: <AthleteHomeRoute />, loader: prefetchOwnProfile },
+                  { path: 'intake', element: <IntakeRoute />, loader: prefetchOwnProfile },
+                ],
+              },
+            ],
+          },
+          {
+            path: 'coach',
+            element: <RequireStaff />,
+            children: [
+              {
+                element: <StaffShell />,
+                children: [
+                  {
+                    index: true,
+                    element: <CoachRosterRoute />,
+                    loader: prefetchWhen(
+                      (me) => isStaffRole(me.role),
+                      () => void queryClient.prefetchQuery(rosterQueryOptions()),
+                    ),
+                  },
+                  {
+                    path: 'invitations',
+                    element: <CoachInvitationsRoute />,
+                    loader: prefetchWhen(
+                      (me) => me.role === 'owner' || me.role === 'coach',
+                      () => void queryClient.prefetchQuery(invitationsQueryOptions()),
+                    ),
+                  },
+                  { path: '*', element: <NotFoundRoute /> },
+                ],
+              },
+            ],
+          },
+          {
+            element: <ShellForRole />,
+            children: [{ path: 'settings', element: <SettingsRoute /> }],
+          },
+        ],
+      },
+      { path: '*', element: <NotFoundRoute /> },
+    ],
+  },
+]);

@@ -1,0 +1,58 @@
+import { isStaffRole, ROLE_LABELS, type Me } from '@driftmark/shared';
+import { useQueryClient } from '@tanstack/react-query';
+import { ButtonLink } from '@/components/ui/button';
+import { Card, CardHeader } from '@/components/ui/card';
+import { PageHeader } from '@/components/ui/page-header';
+import { paths } from '@/config/paths';
+import { authKeys } from '@/features/auth/api/keys';
+import { ChangePasswordForm } from '@/features/settings/components/change-password-form';
+import { SettingsForm } from '@/features/settings/components/settings-form';
+import { SignOutButton } from '../layouts/sign-out-button';
+import { useCurrentUser } from '../session';
+
+export function SettingsRoute() {
+  const me = useCurrentUser();
+  const queryClient = useQueryClient();
+  const setMe = (next: Me) => queryClient.setQueryData(authKeys.me, next);
+  const staff = isStaffRole(me.role);
+
+  return (
+    <div className={staff ? 'max-w-2xl' : undefined}>
+      <title>Settings · Driftmark</title>
+      <PageHeader title="Settings" description="How Driftmark shows your numbers and days." />
+      <div className="space-y-5">
+        <Card aria-labelledby="profile-heading">
+          <CardHeader id="profile-heading" title="Profile and units" />
+          <SettingsForm me={me} onSaved={setMe} />
+        </Card>
+        {!staff ? (
+          <Card padding="compact" aria-labelledby="details-heading">
+            <h2 id="details-heading" className="font-semibold text-ink">
+              Your details and event
+            </h2>
+            <p className="mt-1 text-sm text-ink-muted">Height, usual intake, your event and consents.</p>
+            <ButtonLink to={paths.intake} variant="secondary" className="mt-3">
+              Review or change them
+            </ButtonLink>
+          </Card>
+        ) : null}
+        <Card aria-labelledby="password-heading">
+          <CardHeader id="password-heading" title="Your password" />
+          <ChangePasswordForm onChanged={setMe} />
+        </Card>
+        <Card aria-labelledby="account-heading">
+          <CardHeader id="account-heading" title="Account" />
+          <dl className="grid grid-cols-[auto_1fr] gap-x-6 gap-y-2 text-sm">
+            <dt className="text-ink-faint">E-mail</dt>
+            <dd className="break-all text-ink">{me.email}</dd>
+            <dt className="text-ink-faint">Role</dt>
+            <dd className="text-ink">{ROLE_LABELS[me.role]}</dd>
+            <dt className="text-ink-faint">Team</dt>
+            <dd className="text-ink">{me.team.name}</dd>
+          </dl>
+          <SignOutButton className="mt-4 -ml-4 items-start" />
+        </Card>
+      </div>
+    </div>
+  );
+}
