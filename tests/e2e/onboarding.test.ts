@@ -74,6 +74,9 @@ describe('invitation to athlete home', () => {
     const { page } = coach;
     await page.goto('/coach');
     await page.getByRole('heading', { name: 'Roster' }).waitFor();
-    await expect(page.getByRole('table').getByText(name).count()).resolves.toBe(1);
+    const row = page.getByRole('row').filter({ hasText: name });
+    await row.first().waitFor();
+    await expect(row.count()).resolves.toBe(1);
+    await expect(row.getByText('Harbour Classic').count()).resolves.toBeGreaterThan(0);
   });
 });
