@@ -9,3 +9,6 @@ export * from './schemas/auth.js';
 export * from './schemas/me.js';
 export * from './schemas/invitations.js';
 export * from './schemas/athletes.js';
+export * from './schemas/check-ins.js';
+export * from './schemas/days.js';
+export * from './nutrition.js';

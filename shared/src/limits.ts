@@ -22,4 +22,43 @@ export const LIMITS = {
   invitationTtlDays: 7,
   /** Password-reset links stay valid this long. */
   resetTokenTtlMinutes: 60,
+
+  // Daily check-in (SI units). Each refuses nonsense, not unusual days.
+  /** One fluid entry, mL (30 L in one entry is refused). */
+  fluidEntryMl: { min: 1, max: 5000 },
+  /** Grams per meal entry. */
+  mealProteinG: { min: 0, max: 500 },
+  mealCarbohydrateG: { min: 0, max: 1500 },
+  mealFatG: { min: 0, max: 500 },
+  mealFibreG: { min: 0, max: 200 },
+  mealAlcoholG: { min: 0, max: 300 },
+  /** Quantity of a food from the food list, g. */
+  foodQuantityG: { min: 1, max: 5000 },
+  /** Nutrients per 100 g of a team food. */
+  per100gMacroG: { min: 0, max: 100 },
+  per100gSodiumMg: { min: 0, max: 40000 },
+  mealName: { min: 1, max: 120 },
+  foodName: { min: 2, max: 120 },
+  supplementName: { min: 1, max: 80 },
+  supplementDose: { min: 0, max: 100000 },
+  supplementUnit: { max: 16 },
+  steps: { min: 0, max: 150000 },
+  sleepHours: { min: 0, max: 24 },
+  cardioMinutes: { min: 0, max: 720 },
+  rating: { min: 1, max: 5 },
+  note: { max: 2000 },
+  trainingNote: { max: 120 },
+  /** A clock time this far past "now" still counts as now (phone clocks drift). */
+  futureSlackMinutes: 5,
+  /** Entries per kind per day. */
+  entriesPerDay: 100,
+
+  // Condition photos.
+  photoMaxBytes: 15 * 1024 * 1024,
+  photosPerUpload: 8,
+  /** Decompression-bomb guard: width × height. */
+  photoMaxPixels: 50_000_000,
+  photoTypes: ['image/jpeg', 'image/png', 'image/webp', 'image/avif'],
+  poseName: { min: 1, max: 60 },
+  posesPerTeam: 40,
 } as const;

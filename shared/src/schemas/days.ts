@@ -1,0 +1,145 @@
+import { z } from 'zod';
+import { CYCLE_PHASES, FLUID_KINDS, SYMPTOMS, WEIGH_IN_TAGS } from './check-ins.js';
+import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
+
+/** How a value was typed, kept so it comes back exactly as typed. */
+const entered = <U extends readonly [string, ...string[]]>(units: U) =>
+  z.object({ value: z.number(), unit: z.enum(units) });
+
+export const weighInView = z.object({
+  weightKg: z.number(),
+  entered: entered(WEIGHT_UNITS),
+  time: z.string(),
+  tags: z.array(z.enum(WEIGH_IN_TAGS)),
+  cyclePhase: z.enum(CYCLE_PHASES).nullable(),
+  updatedAt: z.string(),
+});
+
+export const fluidView = z.object({
+  id: z.uuid(),
+  clientId: z.uuid(),
+  time: z.string(),
+  volumeMl: z.number(),
+  entered: entered(VOLUME_UNITS),
+  kind: z.enum(FLUID_KINDS),
+});
+
+export const mealView = z.object({
+  id: z.uuid(),
+  clientId: z.uuid(),
+  time: z.string(),
+  name: z.string(),
+  source: z.enum(['macros', 'food']),
+  /** For a food entry: the food and grams eaten. */
+  food: z.object({ id: z.string(), name: z.string(), quantityG: z.number() }).nullable(),
+  proteinG: z.number(),
+  carbohydrateG: z.number(),
+  fatG: z.number(),
+  fibreG: z.number().nullable(),
+  alcoholG: z.number().nullable(),
+  energyKcal: z.number(),
+});
+
+export const supplementView = z.object({
+  id: z.uuid(),
+  clientId: z.uuid(),
+  time: z.string(),
+  name: z.string(),
+  dose: z.number().nullable(),
+  doseUnit: z.string().nullable(),
+  scheduleItemId: z.uuid().nullable(),
+});
+
+export const eveningView = z.object({
+  steps: z.number().nullable(),
+  sleepHours: z.number().nullable(),
+  cardioMinutes: z.number().nullable(),
+  trainingDone: z.boolean().nullable(),
+  trainingNote: z.string().nullable(),
+  ratings: z.record(z.string(), z.number().nullable()),
+  note: z.string().nullable(),
+});
+
+export const symptomView = z.object({
+  id: z.uuid(),
+  clientId: z.uuid(),
+  time: z.string(),
+  symptoms: z.array(z.enum(SYMPTOMS)),
+  note: z.string().nullable(),
+  /** True when any symptom is one that stops the plan (dizziness, fainting, palpitations, confusion). */
+  urgent: z.boolean(),
+});
+
+export const photoView = z.object({
+  id: z.uuid(),
+  date: z.string(),
+  pose: z.string(),
+  width: z.number(),
+  height: z.number(),
+  /** Authorized URLs (cookie session); never a public path. */
+  urls: z.object({ thumb: z.string(), display: z.string() }),
+  createdAt: z.string(),
+});
+
+/** GET /api/athletes/:athleteId/days/:date — everything logged that day (targets and drift join with plans). */
+export const dayView = z.object({
+  athleteId: z.uuid(),
+  date: z.string(),
+  timeZone: z.string(),
+  /** The athlete's own today. */
+  isToday: z.boolean(),
+  weighIn: weighInView.nullable(),
+  fluids: z.array(fluidView),
+  fluidTotalMl: z.number(),
+  meals: z.array(mealView),
+  totals: z.object({
+    energyKcal: z.number(),
+    proteinG: z.number(),
+    carbohydrateG: z.number(),
+    fatG: z.number(),
+    fibreG: z.number(),
+    alcoholG: z.number(),
+  }),
+  supplements: z.array(supplementView),
+  evening: eveningView.nullable(),
+  symptoms: z.array(symptomView),
+  /** Safety flags raised that day, for the coach. */
+  flags: z.array(z.object({ id: z.uuid(), kind: z.string(), message: z.string(), createdAt: z.string() })),
+  photos: z.array(photoView),
+  /** Targets in force (filled by the plans feature; null until a plan exists). */
+  targets: z.record(z.string(), z.unknown()).nullable(),
+  /** Drift per metric against the targets (empty until a plan exists). */
+  drift: z.array(z.record(z.string(), z.unknown())),
+});
+export type DayView = z.infer<typeof dayView>;
+
+/** GET /api/athletes/:athleteId/days?from&to — one summary row per day with anything logged. */
+export const daySummary = z.object({
+  date: z.string(),
+  weightKg: z.number().nullable(),
+  fluidTotalMl: z.number(),
+  energyKcal: z.number(),
+  proteinG: z.number(),
+  mealCount: z.number(),
+  hasEvening: z.boolean(),
+  symptomCount: z.number(),
+  urgent: z.boolean(),
+  photoCount: z.number(),
+});
+export type DaySummary = z.infer<typeof daySummary>;
+
+/** GET /api/foods?q= — team foods and reference foods, per 100 g. */
+export const foodView = z.object({
+  id: z.string(),
+  name: z.string(),
+  source: z.enum(['team', 'reference']),
+  per100g: z.object({
+    energyKcal: z.number(),
+    proteinG: z.number(),
+    carbohydrateG: z.number(),
+    fatG: z.number(),
+    fibreG: z.number().nullable(),
+    sodiumMg: z.number().nullable(),
+  }),
+});
+export type FoodView = z.infer<typeof foodView>;
