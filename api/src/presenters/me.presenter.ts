@@ -1,4 +1,6 @@
-import type { Me } from '@driftmark/shared';
+import { INVITABLE_ROLES, type Me } from '@driftmark/shared';
+import type { Actor } from '../policies/actor.js';
+import { canOnTeam } from '../policies/team.policy.js';
 import type { Athlete } from '../entities/athlete.entity.js';
 import type { Team } from '../entities/team.entity.js';
 import type { User } from '../entities/user.entity.js';
@@ -8,6 +10,8 @@ export function presentMe(
   team: Pick<Team, 'id' | 'name'>,
   athlete: Pick<Athlete, 'id' | 'intakeCompletedAt'> | null,
 ): Me {
+  const actor: Actor = { userId: user.id, role: user.role, teamId: user.teamId };
+  const teamTarget = { id: team.id };
   return {
     id: user.id,
     email: user.email,
@@ -18,5 +22,9 @@ export function presentMe(
     intakeComplete: user.role === 'athlete' ? Boolean(athlete?.intakeCompletedAt) : true,
     timeZone: user.timeZone,
     units: { weight: user.weightUnit, volume: user.volumeUnit },
+    abilities: {
+      invite: INVITABLE_ROLES.filter((role) => canOnTeam(actor, { kind: 'invite', role }, teamTarget)),
+      manageTeam: canOnTeam(actor, { kind: 'manageSettings' }, teamTarget),
+    },
   };
 }

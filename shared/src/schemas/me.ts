@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '../roles.js';
+import { INVITABLE_ROLES, ROLES } from '../roles.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
 import { personName, timeZone } from './common.js';
 
@@ -23,6 +23,13 @@ export const meResponse = z.object({
   timeZone: z.string(),
   /** Units the user reads and types in. */
   units: z.object({ weight: z.enum(WEIGHT_UNITS), volume: z.enum(VOLUME_UNITS) }),
+  /** What the server lets this user do on their team; the web shows controls from it. */
+  abilities: z.object({
+    /** Roles this user may invite (owner: all three; coach: athlete; others: none). */
+    invite: z.array(z.enum(INVITABLE_ROLES)),
+    /** Change team settings (owner only). */
+    manageTeam: z.boolean(),
+  }),
 });
 export type Me = z.infer<typeof meResponse>;
 

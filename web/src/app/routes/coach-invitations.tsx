@@ -3,12 +3,11 @@ import { Card, CardHeader } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { InviteForm } from '@/features/invitations/components/invite-form';
 import { PendingInvitations } from '@/features/invitations/components/pending-invitations';
-import { invitableRolesFor } from '@/features/invitations/utils/invitable-roles';
 import { useCurrentUser } from '../session';
 
 export function CoachInvitationsRoute() {
   const me = useCurrentUser();
-  const canInvite = invitableRolesFor(me.role).length > 0;
+  const canInvite = me.abilities.invite.length > 0;
 
   return (
     <>
@@ -26,7 +25,7 @@ export function CoachInvitationsRoute() {
         <div className="max-w-3xl space-y-8">
           <Card aria-labelledby="invite-heading">
             <CardHeader id="invite-heading" title="Invite someone" />
-            <InviteForm actor={{ id: me.id, role: me.role }} />
+            <InviteForm actor={{ id: me.id, role: me.role }} roles={me.abilities.invite} />
           </Card>
           <PendingInvitations timeZone={me.timeZone} />
         </div>

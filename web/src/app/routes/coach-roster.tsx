@@ -8,13 +8,12 @@ import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useRoster } from '@/features/athletes/api/get-roster';
 import { RosterSummary, RosterTable } from '@/features/athletes/components/roster-table';
-import { invitableRolesFor } from '@/features/invitations/utils/invitable-roles';
 import { useCurrentUser } from '../session';
 
 export function CoachRosterRoute() {
   const me = useCurrentUser();
   const roster = useRoster();
-  const canInvite = invitableRolesFor(me.role).includes('athlete');
+  const canInvite = me.abilities.invite.includes('athlete');
   const inviteButton = canInvite ? (
     <ButtonLink to={paths.coachInvitations} icon={<PlusIcon className="text-lg" />}>
       Invite an athlete

@@ -3,6 +3,7 @@ import {
   LIMITS,
   ROLE_LABELS,
   type CreateInvitationRequest,
+  type InvitableRole,
   type Role,
 } from '@driftmark/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -14,10 +15,11 @@ import { Select } from '@/components/ui/select';
 import { TextField } from '@/components/ui/text-field';
 import { useCreateInvitation } from '../api/create-invitation';
 import { useTeamMembers } from '../api/get-team-members';
-import { invitableRolesFor } from '../utils/invitable-roles';
 
 interface InviteFormProps {
   actor: { id: string; role: Role };
+  /** Roles the server lets this user invite (from /api/me abilities). */
+  roles: readonly InvitableRole[];
 }
 
 const ROLE_HINTS: Record<string, string> = {
@@ -26,8 +28,7 @@ const ROLE_HINTS: Record<string, string> = {
   assistant: 'Assistant coaches work on the athletes a coach shares with them.',
 };
 
-export function InviteForm({ actor }: InviteFormProps) {
-  const roles = invitableRolesFor(actor.role);
+export function InviteForm({ actor, roles }: InviteFormProps) {
   const [sentTo, setSentTo] = useState<string | null>(null);
   const form = useForm<CreateInvitationRequest>({
     resolver: zodResolver(createInvitationRequest),
