@@ -98,16 +98,22 @@ async function typecheckWorkspaces(): Promise<void> {
 async function e2eStage(e2eUrl: string): Promise<void> {
   await buildWorkspace('api');
   await buildWorkspace('web');
-  const base = { APP_MODE: 'test', DATABASE_URL: e2eUrl, JWT_SECRET: jwtSecret, LOG_LEVEL: 'warn' };
-  await apiCli('migrate', appEnv(base));
-  await apiCli('seed', appEnv(base));
-
   const scratch = mkdtempSync(path.join(os.tmpdir(), 'driftmark-e2e-'));
   const captureDir = path.join(scratch, 'mail');
   const uploadsDir = path.join(scratch, 'uploads');
   const screenshotDir = repoPath('screenshots');
   mkdirSync(captureDir);
   mkdirSync(uploadsDir);
+  // The seed writes the demo photos through the same storage folder the e2e server reads.
+  const base = {
+    APP_MODE: 'test',
+    DATABASE_URL: e2eUrl,
+    JWT_SECRET: jwtSecret,
+    LOG_LEVEL: 'warn',
+    UPLOADS_DIR: uploadsDir,
+  };
+  await apiCli('migrate', appEnv(base));
+  await apiCli('seed', appEnv(base));
   rmSync(screenshotDir, { recursive: true, force: true });
   mkdirSync(screenshotDir);
   const serverLog = path.join(reportsDir, 'e2e-server.log');
