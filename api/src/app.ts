@@ -11,10 +11,14 @@ import { securityHeaders } from './middleware/security.js';
 import { webAppRouter } from './middleware/web-app.js';
 import { athletesRouter } from './routes/athletes.routes.js';
 import { authRouter } from './routes/auth.routes.js';
+import { checkInsRouter } from './routes/check-ins.routes.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
+import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { meRouter } from './routes/me.routes.js';
+import { photosRouter } from './routes/photos.routes.js';
+import { posesRouter } from './routes/poses.routes.js';
 import { rosterRouter } from './routes/roster.routes.js';
 import { teamRouter } from './routes/team.routes.js';
 
@@ -26,10 +30,12 @@ export function createApp(deps: {
   config: Config;
   dataSource: DataSource;
   logger?: Logger;
+  /** Where "now" comes from (default: the system clock); tests pass a fixed one. */
+  clock?: () => Date;
 }): express.Express {
   const { config, dataSource } = deps;
   const logger = deps.logger ?? createLogger(config.logLevel);
-  const ctx: AppContext = { config, dataSource, logger };
+  const ctx: AppContext = { config, dataSource, logger, clock: deps.clock ?? (() => new Date()) };
 
   const app = express();
   app.disable('x-powered-by');
@@ -58,8 +64,14 @@ export function createApp(deps: {
   api.use('/me', meRouter());
   api.use('/invitations', invitationsRouter());
   api.use('/roster', rosterRouter());
+  api.use('/team/poses', posesRouter());
   api.use('/team', teamRouter());
   api.use('/athletes', athletesRouter());
+  // An athlete's days and entries (/athletes/:athleteId/days/…, /athletes/:athleteId/fluids/:entryId …).
+  api.use('/athletes', checkInsRouter());
+  api.use('/foods', foodsRouter());
+  // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
+  api.use(photosRouter());
   if (config.appMode !== 'production' && config.mailCaptureDir) {
     api.use('/dev/mail', devMailRouter(config));
   }

@@ -9,6 +9,8 @@ export interface AppContext {
   config: Config;
   dataSource: DataSource;
   logger: Logger;
+  /** "Now" for everything that depends on the date or time; tests pin it. */
+  clock: () => Date;
 }
 
 /** The signed-in user behind a request, set by `authenticate()`. */

@@ -1,6 +1,18 @@
+import { mkdtempSync, readdirSync, rmSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import bcrypt from 'bcryptjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createStorage } from '../../api/src/adapters/storage.js';
 import { Athlete } from '../../api/src/entities/athlete.entity.js';
+import { AthleteFlag } from '../../api/src/entities/athlete-flag.entity.js';
+import { ConditionPhoto } from '../../api/src/entities/condition-photo.entity.js';
+import { EveningLog } from '../../api/src/entities/evening-log.entity.js';
+import { FluidEntry } from '../../api/src/entities/fluid-entry.entity.js';
+import { MealEntry } from '../../api/src/entities/meal-entry.entity.js';
+import { SupplementEntry } from '../../api/src/entities/supplement-entry.entity.js';
+import { SymptomReport } from '../../api/src/entities/symptom-report.entity.js';
+import { WeighIn } from '../../api/src/entities/weigh-in.entity.js';
 import { AthleteShare } from '../../api/src/entities/athlete-share.entity.js';
 import { Consent } from '../../api/src/entities/consent.entity.js';
 import { Invitation } from '../../api/src/entities/invitation.entity.js';
@@ -10,10 +22,22 @@ import { User } from '../../api/src/entities/user.entity.js';
 import { addDays, localDate } from '../../api/src/seed/calendar.js';
 import { DEMO_ATHLETES, DEMO_PASSWORD, DEMO_STAFF, DEMO_TEAM_NAME } from '../../api/src/seed/demo-team.js';
 import { seedDemo, SeedRefusedError } from '../../api/src/seed/seed-demo.js';
+import { planDemoHistory } from '../../api/src/seed/seed-history.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 let t: TestApp;
 const seededAt = new Date('2026-12-01T11:30:00Z');
+// Photos go to a folder of this file's own; the app reads the same folder.
+const uploadsDir = mkdtempSync(path.join(os.tmpdir(), 'driftmark-seed-'));
+const storage = createStorage({ uploadsDir });
+const seed = (options: { appMode?: string; now?: Date } = {}) =>
+  seedDemo(t.dataSource, { storage, ...options });
+/** What the generators produce for the seed date, to compare the database with. */
+const plans = planDemoHistory(DEMO_ATHLETES, seededAt);
+
+function storedFiles(): number {
+  return readdirSync(uploadsDir, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length;
+}
 
 async function counts() {
   const db = t.dataSource;
@@ -25,36 +49,50 @@ async function counts() {
     shares: await db.getRepository(AthleteShare).count(),
     invitations: await db.getRepository(Invitation).count(),
     outbox: await db.getRepository(OutboxMessage).count(),
+    weighIns: await db.getRepository(WeighIn).count(),
+    fluids: await db.getRepository(FluidEntry).count(),
+    meals: await db.getRepository(MealEntry).count(),
+    supplements: await db.getRepository(SupplementEntry).count(),
+    evenings: await db.getRepository(EveningLog).count(),
+    symptoms: await db.getRepository(SymptomReport).count(),
+    flags: await db.getRepository(AthleteFlag).count(),
+    photos: await db.getRepository(ConditionPhoto).count(),
+    files: storedFiles(),
   };
 }
 
+const sum = (f: (d: (typeof plans)[number]['history']['days'][number]) => number) =>
+  plans.reduce((a, p) => a + p.history.days.reduce((b, d) => b + f(d), 0), 0);
+
 beforeAll(async () => {
-  t = await buildTestApp();
+  t = await buildTestApp({ uploadsDir }, { clock: () => seededAt });
   await t.reset();
 });
 afterAll(async () => {
   await t?.reset();
   await t?.close();
+  rmSync(uploadsDir, { recursive: true, force: true });
 });
 
 describe('seedDemo', () => {
   it('refuses in production and writes nothing', async () => {
-    await expect(seedDemo(t.dataSource, { appMode: 'production' })).rejects.toBeInstanceOf(SeedRefusedError);
+    await expect(seed({ appMode: 'production' })).rejects.toBeInstanceOf(SeedRefusedError);
     const previous = process.env.APP_MODE;
     process.env.APP_MODE = 'production';
     try {
-      await expect(seedDemo(t.dataSource)).rejects.toThrow(/refused in production/);
+      await expect(seed()).rejects.toThrow(/refused in production/);
     } finally {
       if (previous === undefined) delete process.env.APP_MODE;
       else process.env.APP_MODE = previous;
     }
     expect((await counts()).users).toBe(0);
+    expect(storedFiles()).toBe(0);
   });
 
   it('creates the team once, even when run twice (and twice at once)', async () => {
     const [a, b] = await Promise.all([
-      seedDemo(t.dataSource, { appMode: 'test', now: seededAt }),
-      seedDemo(t.dataSource, { appMode: 'test', now: seededAt }),
+      seed({ appMode: 'test', now: seededAt }),
+      seed({ appMode: 'test', now: seededAt }),
     ]);
     expect([a.created, b.created].sort()).toEqual([false, true]);
     const first = await counts();
@@ -66,10 +104,129 @@ describe('seedDemo', () => {
       shares: 2,
       invitations: 0,
       outbox: 0,
+      // Exactly what the generators planned: nothing invented on a missed day, nothing twice.
+      weighIns: sum((d) => (d.weighIn ? 1 : 0)),
+      fluids: sum((d) => d.fluids.length),
+      meals: sum((d) => d.meals.length),
+      supplements: sum((d) => d.supplements.length),
+      evenings: sum((d) => (d.evening ? 1 : 0)),
+      symptoms: sum((d) => d.symptoms.length),
+      flags: 1,
+      photos: plans.reduce((a, p) => a + p.photos.length, 0),
+      // Two stored sizes per photo.
+      files: 2 * plans.reduce((a, p) => a + p.photos.length, 0),
     });
+    expect(first.weighIns).toBeGreaterThan(500);
+    expect(first.photos).toBeGreaterThan(100);
 
-    expect(await seedDemo(t.dataSource, { appMode: 'test' })).toEqual({ created: false });
+    expect(await seed({ appMode: 'test' })).toEqual({ created: false });
     expect(await counts()).toEqual(first);
+  });
+
+  it('gives each athlete about four months of history ending yesterday, the skipper far fewer days', async () => {
+    const rows = await t.dataSource.query<{ email: string; n: number; first: string; last: string }[]>(
+      `SELECT u.email, COUNT(w.id)::int AS n, to_char(MIN(w.local_date), 'YYYY-MM-DD') AS first,
+              to_char(MAX(w.local_date), 'YYYY-MM-DD') AS last
+         FROM athletes a JOIN users u ON u.id = a.user_id LEFT JOIN weigh_ins w ON w.athlete_id = a.id
+        GROUP BY u.email`,
+    );
+    const byEmail = new Map(rows.map((r) => [r.email, r]));
+    const skipper = byEmail.get('leilani.akana@driftmark.test')!;
+    for (const def of DEMO_ATHLETES) {
+      const row = byEmail.get(def.email)!;
+      const today = localDate(seededAt, def.timeZone);
+      // Nothing on or after the athlete's own seed date; the first weigh-ins about four months back.
+      expect(row.last <= addDays(today, -1), def.email).toBe(true);
+      expect(row.first <= addDays(today, -100), def.email).toBe(true);
+      if (def.key !== 'skips_check_ins') {
+        expect(row.n, def.email).toBeGreaterThan(90);
+        expect(skipper.n).toBeLessThan(row.n * 0.6);
+      }
+    }
+    expect(skipper.n).toBeGreaterThan(25);
+    // No entry of any kind on or after the athlete's own seed date.
+    const latest = await t.dataSource.query<{ email: string; last: string }[]>(
+      `SELECT u.email, to_char(MAX(d.local_date), 'YYYY-MM-DD') AS last
+         FROM (SELECT athlete_id, local_date FROM weigh_ins
+               UNION ALL SELECT athlete_id, local_date FROM fluid_entries
+               UNION ALL SELECT athlete_id, local_date FROM meal_entries
+               UNION ALL SELECT athlete_id, local_date FROM supplement_entries
+               UNION ALL SELECT athlete_id, local_date FROM evening_logs
+               UNION ALL SELECT athlete_id, local_date FROM symptom_reports
+               UNION ALL SELECT athlete_id, local_date FROM condition_photos) d
+         JOIN athletes a ON a.id = d.athlete_id JOIN users u ON u.id = a.user_id
+        GROUP BY u.email`,
+    );
+    expect(latest).toHaveLength(DEMO_ATHLETES.length);
+    for (const row of latest) {
+      const def = DEMO_ATHLETES.find((d) => d.email === row.email)!;
+      expect(row.last <= addDays(localDate(seededAt, def.timeZone), -1), row.email).toBe(true);
+    }
+  });
+
+  it('serves a seeded day through the API, with the countdown athlete’s flag and photos', async () => {
+    const coach = await signedIn(t.app, 'coach@driftmark.test', DEMO_PASSWORD);
+    const athlete = await t.dataSource
+      .getRepository(Athlete)
+      .findOneOrFail({ where: { user: { email: 'athlete@driftmark.test' } }, relations: { user: true } });
+    const plan = plans.find((p) => p.def.key === 'final_week')!;
+    // Two days before the seed: the dizziness report.
+    const dizzyDay = plan.history.days.find((d) => d.daysBeforeSeed === 2)!;
+    const res = await coach.get(`/api/athletes/${athlete.id}/days/${dizzyDay.date}`);
+    expect(res.status).toBe(200);
+    const day = res.body.data;
+    expect(day.date).toBe(dizzyDay.date);
+    expect(day.weighIn?.weightKg).toBe(dizzyDay.weighIn?.weightKg);
+    expect(day.fluids).toHaveLength(dizzyDay.fluids.length);
+    expect(day.fluidTotalMl).toBeCloseTo(
+      dizzyDay.fluids.reduce((a, f) => a + f.volumeMl, 0),
+      6,
+    );
+    expect(day.meals).toHaveLength(dizzyDay.meals.length);
+    expect(day.totals.energyKcal).toBeCloseTo(
+      dizzyDay.meals.reduce((a, m) => a + m.energyKcal, 0),
+      6,
+    );
+    expect(day.symptoms).toEqual([expect.objectContaining({ symptoms: ['dizziness'], urgent: true })]);
+    expect(day.flags).toEqual([
+      expect.objectContaining({ kind: 'symptom', message: expect.stringMatching(/Dizziness/) }),
+    ]);
+    expect(day.evening?.note).toMatch(/dizzy/i);
+
+    // A photo day: three relaxed poses, each size served from storage.
+    const photoDay = plan.photos[0]!.date;
+    const photos = await coach.get(`/api/athletes/${athlete.id}/photos?from=${photoDay}&to=${photoDay}`);
+    expect(photos.status).toBe(200);
+    expect(photos.body.data.map((p: { pose: string }) => p.pose).sort()).toEqual([
+      'Back relaxed',
+      'Front relaxed',
+      'Side relaxed',
+    ]);
+    for (const size of ['thumb', 'display'] as const) {
+      const file = await coach.get(photos.body.data[0].urls[size]);
+      expect(file.status).toBe(200);
+      expect(file.headers['content-type']).toMatch(/^image\/jpeg/);
+    }
+    const all = await coach.get(`/api/athletes/${athlete.id}/photos`);
+    expect(all.body.data).toHaveLength(plan.photos.length);
+
+    // The history list has one row per logged day.
+    const today = localDate(seededAt, 'Europe/Madrid');
+    const list = await coach.get(`/api/athletes/${athlete.id}/days?from=${addDays(today, -130)}&to=${today}`);
+    expect(list.status).toBe(200);
+    expect(list.body.data).toHaveLength(plan.history.days.filter((d) => !d.missed).length);
+  });
+
+  it('keeps the typed units: a lb athlete’s weigh-ins come back in lb', async () => {
+    const def = DEMO_ATHLETES.find((d) => d.weightUnit === 'lb' && d.volumeUnit === 'floz')!;
+    const plan = plans.find((p) => p.def.key === def.key)!;
+    const seeded = plan.history.days.find((d) => d.weighIn && d.fluids.length > 0)!;
+    const agent = await signedIn(t.app, def.email, DEMO_PASSWORD);
+    const me = await agent.get('/api/me');
+    const res = await agent.get(`/api/athletes/${me.body.data.athleteId}/days/${seeded.date}`);
+    expect(res.status).toBe(200);
+    expect(res.body.data.weighIn.entered).toEqual({ value: seeded.weighIn!.entered.value, unit: 'lb' });
+    expect(res.body.data.fluids[0].entered.unit).toBe('floz');
   });
 
   it('stores the team, roles, completed intakes and event dates relative to the seed date', async () => {

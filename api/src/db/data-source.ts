@@ -2,14 +2,23 @@ import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import type { Config } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
+import { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
+import { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { Consent } from '../entities/consent.entity.js';
+import { EveningLog } from '../entities/evening-log.entity.js';
+import { FluidEntry } from '../entities/fluid-entry.entity.js';
+import { Food } from '../entities/food.entity.js';
 import { Invitation } from '../entities/invitation.entity.js';
+import { MealEntry } from '../entities/meal-entry.entity.js';
 import { OutboxMessage } from '../entities/outbox-message.entity.js';
 import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
 import { Session } from '../entities/session.entity.js';
+import { SupplementEntry } from '../entities/supplement-entry.entity.js';
+import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { Team } from '../entities/team.entity.js';
 import { User } from '../entities/user.entity.js';
+import { WeighIn } from '../entities/weigh-in.entity.js';
 import { MIGRATIONS } from './migrations/index.js';
 import { DriftmarkNamingStrategy } from './naming-strategy.js';
 
@@ -24,6 +33,17 @@ export const ENTITIES = [
   AthleteShare,
   Consent,
   OutboxMessage,
+  // Daily check-in
+  WeighIn,
+  FluidEntry,
+  MealEntry,
+  SupplementEntry,
+  EveningLog,
+  SymptomReport,
+  AthleteFlag,
+  Food,
+  // Condition photos
+  ConditionPhoto,
 ];
 
 export function createDataSource(

@@ -5,6 +5,8 @@ import { BaseRecord } from './base.entity.js';
 export interface TeamSettings {
   /** Hour (0–23, athlete's time zone) after which a missing weigh-in triggers a reminder. */
   reminderHour?: number;
+  /** Condition-photo poses beyond the three relaxed ones (PUT /api/team/poses). */
+  poses?: string[];
 }
 
 @Entity({ name: 'teams' })

@@ -9,6 +9,8 @@ export interface TeamTarget {
 export type TeamAction =
   | { kind: 'read' }
   | { kind: 'manageSettings' }
+  /** Edit the team's condition-photo pose list. */
+  | { kind: 'managePoses' }
   | { kind: 'viewRoster' }
   | { kind: 'viewMembers' }
   | { kind: 'invite'; role: InvitableRole };
@@ -29,6 +31,8 @@ export function canOnTeam(actor: Actor, action: TeamAction, team: TeamTarget): b
       return true;
     case 'manageSettings':
       return actor.role === 'owner';
+    case 'managePoses':
+      return actor.role === 'owner' || actor.role === 'coach';
     case 'viewRoster':
     case 'viewMembers':
       return staff;

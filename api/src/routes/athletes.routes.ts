@@ -19,10 +19,15 @@ const athleteParams = z.object({ athleteId: uuid });
 const shareParams = z.object({ athleteId: uuid, userId: uuid });
 
 /** Loads the athlete and what the policy needs, then authorizes (404 unreadable, 403 not allowed). */
-async function loadAthlete(req: Request<{ athleteId: string }>, action: AthleteAction) {
+export function loadAthlete(req: Request<{ athleteId: string }>, action: AthleteAction) {
+  return loadAthleteById(req, req.params.athleteId, action);
+}
+
+/** As `loadAthlete`, for routes that reach the athlete through another record (a photo, an entry). */
+export async function loadAthleteById(req: Request, athleteId: string, action: AthleteAction) {
   const { actor } = requireAuth(req);
   const manager = req.ctx.dataSource.manager;
-  const athlete = await new AthleteRepository(manager).findWithPeople(req.params.athleteId);
+  const athlete = await new AthleteRepository(manager).findWithPeople(athleteId);
   if (!athlete) throw notFound();
   const target: AthleteTarget = {
     userId: athlete.userId,

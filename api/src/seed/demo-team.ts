@@ -211,7 +211,7 @@ export const DEMO_ATHLETES: readonly DemoAthleteDefinition[] = [
       division: 'Bikini',
       weighInLimitKg: null,
     },
-    history: { seed: 404, startWeightKg: 70.5, seedDateWeightKg: 68.2, checkInRate: 0.92 },
+    history: { seed: 404, startWeightKg: 75.6, seedDateWeightKg: 68.2, checkInRate: 0.92 },
   },
   {
     key: 'regain',

@@ -1,11 +1,13 @@
 /**
- * Writes the demo team (demo-team.ts) into an empty database. Idempotent: when the demo owner
- * already exists nothing changes. Refused in production.
+ * Writes the demo team (demo-team.ts) into an empty database, with about four months of daily
+ * check-ins per athlete (history.ts) and placeholder condition photos (photos.ts). Idempotent:
+ * when the demo owner already exists nothing changes. Refused in production.
  */
 import bcrypt from 'bcryptjs';
 import { CONSENTS } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
-import type { AppMode } from '../config.js';
+import { createStorage, type StorageAdapter } from '../adapters/storage.js';
+import { configSchema, type AppMode } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { Consent } from '../entities/consent.entity.js';
@@ -24,6 +26,7 @@ import {
   type DemoAthleteDefinition,
 } from './demo-team.js';
 import { createRandom } from './random.js';
+import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 
 /** bcrypt cost for the demo password (the same cost real accounts use). */
 const BCRYPT_COST = 12;
@@ -35,6 +38,11 @@ export interface SeedDemoOptions {
   now?: Date;
   /** Defaults to APP_MODE from the environment. */
   appMode?: AppMode | string;
+  /**
+   * Where the placeholder photos are stored; defaults to the uploads folder (UPLOADS_DIR, as the
+   * server reads it). null seeds no photos.
+   */
+  storage?: StorageAdapter | null;
 }
 
 export interface SeedDemoResult {
@@ -79,25 +87,54 @@ export async function seedDemo(
   }
   const now = options.now ?? new Date();
 
+  const storage =
+    options.storage === undefined
+      ? createStorage({ uploadsDir: configSchema.shape.UPLOADS_DIR.parse(process.env.UPLOADS_DIR) })
+      : options.storage;
+
   if (await ownerExists(dataSource.manager)) return { created: false };
+  const plans = planDemoHistory(DEMO_ATHLETES, now);
   // One hash for all demo accounts: bcrypt at cost 12 takes a noticeable fraction of a second.
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, BCRYPT_COST);
 
-  return dataSource.transaction(async (manager) => {
-    // Two seeds started together (two terminals) must not both insert: the second waits here,
-    // then sees the owner and stops.
-    await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [SEED_LOCK_KEY]);
-    if (await ownerExists(manager)) return { created: false };
-    await writeDemoTeam(manager, passwordHash, now);
-    return { created: true };
-  });
+  const written: string[] = [];
+  let rendering: Promise<unknown> = Promise.resolve();
+  try {
+    return await dataSource.transaction(async (manager) => {
+      // Two seeds started together (two terminals) must not both insert: the second waits here,
+      // then sees the owner and stops.
+      await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [SEED_LOCK_KEY]);
+      if (await ownerExists(manager)) return { created: false };
+      // Drawing and re-encoding the photos runs in sharp's threads while the rows are inserted.
+      const photos = storage ? renderDemoPhotos(plans) : null;
+      rendering = photos ?? rendering;
+      photos?.catch(() => {});
+      const athleteIds = await writeDemoTeam(manager, passwordHash, now);
+      await writeDemoCheckIns(manager, plans, athleteIds);
+      if (storage && photos) {
+        await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
+      }
+      return { created: true };
+    });
+  } catch (error) {
+    // The rows rolled back; the files written before them go too.
+    await rendering.catch(() => null);
+    if (storage) await Promise.allSettled(written.map((key) => storage.delete(key)));
+    throw error;
+  }
 }
 
 async function ownerExists(manager: EntityManager): Promise<boolean> {
   return manager.getRepository(User).exists({ where: { email: DEMO_OWNER_EMAIL } });
 }
 
-async function writeDemoTeam(manager: EntityManager, passwordHash: string, now: Date): Promise<void> {
+/** Writes the team, staff and athletes; returns the athlete ids by definition key. */
+async function writeDemoTeam(
+  manager: EntityManager,
+  passwordHash: string,
+  now: Date,
+): Promise<Map<string, string>> {
+  const athleteIds = new Map<string, string>();
   const random = createRandom(DEMO_SEED);
   const team = await manager
     .getRepository(Team)
@@ -147,6 +184,7 @@ async function writeDemoTeam(manager: EntityManager, passwordHash: string, now: 
       ...resolveDemoAthlete(def, now),
       intakeCompletedAt: intakeAt,
     });
+    athleteIds.set(def.key, athlete.id);
     await manager.getRepository(Consent).save([
       {
         userId: user.id,
@@ -169,4 +207,5 @@ async function writeDemoTeam(manager: EntityManager, passwordHash: string, now: 
         .save({ athleteId: athlete.id, userId: assistant.id, sharedById: owner.id });
     }
   }
+  return athleteIds;
 }

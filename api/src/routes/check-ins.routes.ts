@@ -1,0 +1,147 @@
+import {
+  dayRangeQuery,
+  eveningRequest,
+  isoDate,
+  uuid,
+  weighInRequest,
+  type DayView,
+} from '@driftmark/shared';
+import { Router } from 'express';
+import { z } from 'zod';
+import type { ClientDayEntry } from '../entities/day-record.entity.js';
+import { authenticate } from '../middleware/authenticate.js';
+import { validate } from '../middleware/validate.js';
+import { canOnAthlete } from '../policies/athlete.policy.js';
+import { CheckInService } from '../services/check-in.service.js';
+import {
+  fluidKind,
+  mealKind,
+  supplementKind,
+  symptomKind,
+  type EntryKind,
+} from '../services/day-entry-kinds.js';
+import { DayService } from '../services/day.service.js';
+import { loadAthlete } from './athletes.routes.js';
+
+const athleteParams = z.object({ athleteId: uuid });
+const dayParams = z.object({ athleteId: uuid, date: isoDate });
+const entryParams = z.object({ athleteId: uuid, entryId: uuid });
+
+const dayBody = (day: DayView, meta?: Record<string, string>) => ({ data: day, ...(meta ? { meta } : {}) });
+
+/** POST /days/:date/<kind>, PATCH and DELETE /<kind>/:entryId for one kind of entry. */
+function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; time: string }>(
+  router: Router,
+  kind: EntryKind<E, I>,
+): void {
+  router.post(
+    `/:athleteId/days/:date/${kind.path}`,
+    authenticate(),
+    validate({ params: dayParams, body: kind.schema }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      const result = await new CheckInService(req.ctx).createEntry(kind, athlete, req.params.date, req.body);
+      res.status(result.created ? 201 : 200).json(dayBody(result.day, result.meta));
+    },
+  );
+
+  // The body is checked after loading: it is laid over the stored entry, then validated whole.
+  router.patch(
+    `/:athleteId/${kind.path}/:entryId`,
+    authenticate(),
+    validate({ params: entryParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      const result = await new CheckInService(req.ctx).updateEntry(
+        kind,
+        athlete,
+        req.params.entryId,
+        req.body,
+      );
+      res.json(dayBody(result.day, result.meta));
+    },
+  );
+
+  router.delete(
+    `/:athleteId/${kind.path}/:entryId`,
+    authenticate(),
+    validate({ params: entryParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      res.json(dayBody(await new CheckInService(req.ctx).deleteEntry(kind, athlete, req.params.entryId)));
+    },
+  );
+}
+
+/**
+ * An athlete's days under /api/athletes/:athleteId: reads follow the athlete policy's `read`
+ * (the athlete, the assigned coach, the owner, staff it is shared with), writes its `log` (the
+ * athlete only). Dates are the athlete's own local dates.
+ */
+export function checkInsRouter(): Router {
+  const router = Router();
+
+  router.get(
+    '/:athleteId/days',
+    authenticate(),
+    validate({ params: athleteParams, query: dayRangeQuery }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      const days = await new DayService(req.ctx).listDays(athlete, req.query.from, req.query.to);
+      res.json({ data: days, abilities: { log: canOnAthlete(actor, 'log', target) } });
+    },
+  );
+
+  router.get('/:athleteId/days/:date', authenticate(), validate({ params: dayParams }), async (req, res) => {
+    const { actor, athlete, target } = await loadAthlete(req, 'read');
+    const day = await new DayService(req.ctx).getDay(athlete, req.params.date);
+    res.json({ data: day, abilities: { log: canOnAthlete(actor, 'log', target) } });
+  });
+
+  router.put(
+    '/:athleteId/days/:date/weigh-in',
+    authenticate(),
+    validate({ params: dayParams, body: weighInRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      res.json({ data: await new CheckInService(req.ctx).putWeighIn(athlete, req.params.date, req.body) });
+    },
+  );
+
+  router.delete(
+    '/:athleteId/days/:date/weigh-in',
+    authenticate(),
+    validate({ params: dayParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      res.json({ data: await new CheckInService(req.ctx).deleteWeighIn(athlete, req.params.date) });
+    },
+  );
+
+  router.put(
+    '/:athleteId/days/:date/evening',
+    authenticate(),
+    validate({ params: dayParams, body: eveningRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      res.json({ data: await new CheckInService(req.ctx).putEvening(athlete, req.params.date, req.body) });
+    },
+  );
+
+  router.delete(
+    '/:athleteId/days/:date/evening',
+    authenticate(),
+    validate({ params: dayParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'log');
+      res.json({ data: await new CheckInService(req.ctx).deleteEvening(athlete, req.params.date) });
+    },
+  );
+
+  entryRoutes(router, fluidKind);
+  entryRoutes(router, mealKind);
+  entryRoutes(router, supplementKind);
+  entryRoutes(router, symptomKind);
+
+  return router;
+}

@@ -1,0 +1,95 @@
+import type { DaySummary, DayView } from '@driftmark/shared';
+import type { DataSource, EntityManager } from 'typeorm';
+import { FluidEntry } from '../entities/fluid-entry.entity.js';
+import { MealEntry } from '../entities/meal-entry.entity.js';
+import { SupplementEntry } from '../entities/supplement-entry.entity.js';
+import { SymptomReport } from '../entities/symptom-report.entity.js';
+import { validationFailed } from '../errors.js';
+import { daysBetween } from '../lib/dates.js';
+import { localDateTime } from '../lib/local-time.js';
+import { emptyDaySummary, presentDay } from '../presenters/day.presenter.js';
+import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
+import { AthleteFlagRepository } from '../repositories/athlete-flag.repository.js';
+import { DayEntryRepository } from '../repositories/day-entry.repository.js';
+import { DayHistoryRepository } from '../repositories/day-history.repository.js';
+import { EveningLogRepository } from '../repositories/evening-log.repository.js';
+import { WeighInRepository } from '../repositories/weigh-in.repository.js';
+import { dayPhotoSource } from './day-photos.service.js';
+
+/** The longest range the history list answers at once, in days. */
+export const HISTORY_MAX_DAYS = 400;
+
+/** Everything the athlete logged on `date` (their local date), as the day view. */
+export async function loadDayView(
+  manager: EntityManager,
+  athlete: AthleteWithPeople,
+  date: string,
+  now: Date,
+): Promise<DayView> {
+  const timeZone = athlete.user.timeZone;
+  const [weighIn, fluids, meals, supplements, evening, symptoms, flags, photos] = await Promise.all([
+    new WeighInRepository(manager).findForDay(athlete.id, date),
+    new DayEntryRepository(manager, FluidEntry).listForDay(athlete.id, date),
+    new DayEntryRepository(manager, MealEntry).listForDay(athlete.id, date),
+    new DayEntryRepository(manager, SupplementEntry).listForDay(athlete.id, date),
+    new EveningLogRepository(manager).findForDay(athlete.id, date),
+    new DayEntryRepository(manager, SymptomReport).listForDay(athlete.id, date),
+    new AthleteFlagRepository(manager).listForDay(athlete.id, date),
+    dayPhotoSource(manager).forDay(athlete.id, date),
+  ]);
+  return presentDay({
+    athleteId: athlete.id,
+    date,
+    timeZone,
+    isToday: localDateTime(now, timeZone).date === date,
+    weighIn,
+    fluids,
+    meals,
+    supplements,
+    evening,
+    symptoms,
+    flags,
+    photos,
+  });
+}
+
+type DayDeps = { dataSource: DataSource; clock: () => Date };
+
+export class DayService {
+  constructor(private readonly deps: DayDeps) {}
+
+  getDay(athlete: AthleteWithPeople, date: string): Promise<DayView> {
+    return loadDayView(this.deps.dataSource.manager, athlete, date, this.deps.clock());
+  }
+
+  /** One summary per day with anything logged between `from` and `to` (inclusive), newest first. */
+  async listDays(athlete: AthleteWithPeople, from: string, to: string): Promise<DaySummary[]> {
+    const span = daysBetween(from, to) + 1;
+    if (span < 1) throw validationFailed({ to: 'Must be on or after the start date' });
+    if (span > HISTORY_MAX_DAYS)
+      throw validationFailed({ from: `At most ${HISTORY_MAX_DAYS} days at a time` });
+
+    const manager = this.deps.dataSource.manager;
+    const [agg, photoCounts] = await Promise.all([
+      new DayHistoryRepository(manager).aggregate(athlete.id, from, to),
+      dayPhotoSource(manager).countsByDay(athlete.id, from, to),
+    ]);
+    const days = new Map<string, DaySummary>();
+    const day = (date: string) => {
+      let summary = days.get(date);
+      if (!summary) days.set(date, (summary = emptyDaySummary(date)));
+      return summary;
+    };
+    for (const [date, kg] of agg.weights) day(date).weightKg = kg;
+    for (const [date, ml] of agg.fluids) day(date).fluidTotalMl = ml;
+    for (const [date, m] of agg.meals) {
+      Object.assign(day(date), { energyKcal: m.energyKcal, proteinG: m.proteinG, mealCount: m.count });
+    }
+    for (const date of agg.evenings) day(date).hasEvening = true;
+    for (const [date, s] of agg.symptoms)
+      Object.assign(day(date), { symptomCount: s.count, urgent: s.urgent });
+    for (const date of agg.supplements) day(date);
+    for (const [date, n] of photoCounts) if (n > 0) day(date).photoCount = n;
+    return [...days.values()].sort((a, b) => (a.date < b.date ? 1 : a.date > b.date ? -1 : 0));
+  }
+}

