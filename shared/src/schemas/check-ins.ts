@@ -317,3 +317,5 @@ export const posesRequest = z.object({
 });
 /** Poses every team has. */
 export const RELAXED_POSES = ['Front relaxed', 'Side relaxed', 'Back relaxed'] as const;
+export type PhotoUploadFields = z.infer<typeof photoUploadFields>;
+export type PosesRequest = z.infer<typeof posesRequest>;

@@ -143,3 +143,10 @@ export const foodView = z.object({
   }),
 });
 export type FoodView = z.infer<typeof foodView>;
+export type PhotoView = z.infer<typeof photoView>;
+export type WeighInView = z.infer<typeof weighInView>;
+export type FluidView = z.infer<typeof fluidView>;
+export type MealView = z.infer<typeof mealView>;
+export type SupplementView = z.infer<typeof supplementView>;
+export type EveningView = z.infer<typeof eveningView>;
+export type SymptomView = z.infer<typeof symptomView>;
