@@ -3,14 +3,21 @@ import { createBrowserRouter, Outlet, ScrollRestoration } from 'react-router';
 import { athleteQueryOptions } from '@/features/athletes/api/get-athlete';
 import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { dayQueryOptions } from '@/features/check-ins/api/get-day';
 import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
+import { todayIn } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
 import { AthleteShell } from './layouts/athlete-shell';
 import { ShellForRole } from './layouts/shell-for-role';
 import { StaffShell } from './layouts/staff-shell';
 import { AcceptInvitationRoute } from './routes/accept-invitation';
+import { AthleteDayRoute } from './routes/athlete-day';
+import { AthleteHistoryRoute } from './routes/athlete-history';
 import { AthleteHomeRoute } from './routes/athlete-home';
+import { AthletePhotosRoute } from './routes/athlete-photos';
+import { CoachAthleteRoute } from './routes/coach-athlete';
+import { CoachAthletePhotosRoute } from './routes/coach-athlete-photos';
 import { CoachInvitationsRoute } from './routes/coach-invitations';
 import { CoachRosterRoute } from './routes/coach-roster';
 import { DevInboxRoute } from './routes/dev-inbox';
@@ -44,6 +51,15 @@ const prefetchOwnProfile = prefetchWhen(
   (me) => void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!)),
 );
 
+/** Today's screen: the profile and today's day (the athlete's own date) start loading together. */
+const prefetchToday = prefetchWhen(
+  (me) => me.role === 'athlete' && me.athleteId !== null,
+  (me) => {
+    void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!));
+    void queryClient.prefetchQuery(dayQueryOptions(me.athleteId!, todayIn(me.timeZone)));
+  },
+);
+
 function RootLayout() {
   return (
     <>
@@ -73,7 +89,10 @@ export const router = createBrowserRouter([
               {
                 element: <AthleteShell />,
                 children: [
-                  { path: 'athlete', element: <AthleteHomeRoute />, loader: prefetchOwnProfile },
+                  { path: 'athlete', element: <AthleteHomeRoute />, loader: prefetchToday },
+                  { path: 'athlete/history', element: <AthleteHistoryRoute /> },
+                  { path: 'athlete/days/:date', element: <AthleteDayRoute />, loader: prefetchOwnProfile },
+                  { path: 'athlete/photos', element: <AthletePhotosRoute />, loader: prefetchOwnProfile },
                   { path: 'intake', element: <IntakeRoute />, loader: prefetchOwnProfile },
                 ],
               },
@@ -102,6 +121,16 @@ export const router = createBrowserRouter([
                       () => void queryClient.prefetchQuery(invitationsQueryOptions()),
                     ),
                   },
+                  {
+                    path: 'athletes/:athleteId',
+                    element: <CoachAthleteRoute />,
+                    loader: ({ params }) =>
+                      prefetchWhen(
+                        (me) => isStaffRole(me.role),
+                        () => void queryClient.prefetchQuery(athleteQueryOptions(params.athleteId ?? '')),
+                      )(),
+                  },
+                  { path: 'athletes/:athleteId/photos', element: <CoachAthletePhotosRoute /> },
                   { path: '*', element: <NotFoundRoute /> },
                 ],
               },

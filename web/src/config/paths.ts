@@ -10,6 +10,14 @@ export const paths = {
   athleteHome: '/athlete',
   coachHome: '/coach',
   coachInvitations: '/coach/invitations',
+  athletePhotos: '/athlete/photos',
+  athleteHistory: '/athlete/history',
+  /** One of the athlete's own days (YYYY-MM-DD), editable. */
+  athleteDay: (date: string) => `/athlete/days/${encodeURIComponent(date)}`,
+  /** A coach's page of one athlete; with a date it opens that day. */
+  coachAthlete: (athleteId: string, date?: string) =>
+    `/coach/athletes/${encodeURIComponent(athleteId)}${date ? `?date=${encodeURIComponent(date)}` : ''}`,
+  coachAthletePhotos: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/photos`,
   devInbox: '/dev/inbox',
 } as const;
 

@@ -101,6 +101,18 @@ export function unwrapWithAbilities<T>(body: unknown): WithAbilities<T> {
   return { data, abilities: clean };
 }
 
+/** A success body whose `meta` (beside `data`) matters, e.g. the urgent-symptom message. */
+export interface WithMeta<T> {
+  data: T;
+  meta: Record<string, unknown>;
+}
+
+export function unwrapWithMeta<T>(body: unknown): WithMeta<T> {
+  const data = unwrapData<T>(body);
+  const meta = isRecord(body) && isRecord(body.meta) ? body.meta : {};
+  return { data, meta };
+}
+
 /** Paths whose 401 is an answer, not a lost session: never bounce these to sign-in. */
 const NO_REDIRECT_ON_401 = ['/api/me', '/api/auth/sign-in', '/api/auth/sign-out'];
 
@@ -191,6 +203,9 @@ export const api = {
   getWithAbilities: async <T>(path: string, signal?: AbortSignal) =>
     unwrapWithAbilities<T>(await requestRaw(path, { signal })),
   post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body }),
+  /** POST keeping the `meta` map beside `data`. */
+  postWithMeta: async <T>(path: string, body?: unknown) =>
+    unwrapWithMeta<T>(await requestRaw(path, { method: 'POST', body })),
   put: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'PUT', body }),
   patch: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'PATCH', body }),
   delete: <T = void>(path: string) => apiRequest<T>(path, { method: 'DELETE' }),

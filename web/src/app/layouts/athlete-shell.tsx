@@ -1,13 +1,13 @@
 import { Outlet } from 'react-router';
 import { BottomBar, BottomBarLink, BottomBarShell, BrandMark } from '@/components/ui/app-shell';
-import { SlidersIcon, TodayIcon } from '@/components/ui/icons';
+import { CameraIcon, HistoryIcon, SlidersIcon, TodayIcon } from '@/components/ui/icons';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '../session';
 import { SignOutButton } from './sign-out-button';
 
 /**
- * Athlete screens: phone first, one-handed. The bottom bar holds only what works today (Today and
- * Settings); it appears once the intake is done, so the intake has the athlete's full attention.
+ * Athlete screens: phone first, one-handed. The bottom bar (Today, History, Photos, Settings)
+ * appears once the intake is done, so the intake has the athlete's full attention.
  */
 export function AthleteShell() {
   const me = useCurrentUser();
@@ -24,6 +24,12 @@ export function AthleteShell() {
           <BottomBar label="Athlete">
             <BottomBarLink to={paths.athleteHome} icon={<TodayIcon />} end>
               Today
+            </BottomBarLink>
+            <BottomBarLink to={paths.athleteHistory} icon={<HistoryIcon />} alsoActiveOn="/athlete/days/">
+              History
+            </BottomBarLink>
+            <BottomBarLink to={paths.athletePhotos} icon={<CameraIcon />}>
+              Photos
             </BottomBarLink>
             <BottomBarLink to={paths.settings} icon={<SlidersIcon />}>
               Settings

@@ -5,22 +5,43 @@ import { Button } from '@/components/ui/button';
 import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
-import {
-  CheckInPreviewCard,
-  CoachCard,
-  EventCountdownCard,
-} from '@/features/athletes/components/athlete-today';
-import { firstName, formatDate, greetingFor, hourIn, todayIn } from '@/lib/format';
+import { CoachCard, EventCountdownCard } from '@/features/athletes/components/athlete-today';
+import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
+import { useToday } from '@/features/check-ins/components/use-clock';
+import { firstName, formatDate, greetingFor, hourIn } from '@/lib/format';
 import { useCurrentUser } from '../session';
 
 export function AthleteHomeRoute() {
   const me = useCurrentUser();
-  const athlete = useAthlete(me.athleteId ?? '');
+  const athleteId = me.athleteId ?? '';
+  const athlete = useAthlete(athleteId);
+  const timeZone = athlete.data?.data.timeZone ?? me.timeZone;
+  const today = useToday(timeZone);
 
   if (!me.intakeComplete) return <Navigate to={paths.intake} replace />;
 
-  const timeZone = athlete.data?.data.timeZone ?? me.timeZone;
-  const today = todayIn(timeZone);
+  const countdown = athlete.isPending ? (
+    <Skeleton className="h-36" />
+  ) : athlete.isError ? (
+    <Alert
+      tone="error"
+      title="Your event could not be loaded."
+      action={
+        <Button variant="secondary" onClick={() => void athlete.refetch()}>
+          Try again
+        </Button>
+      }
+    >
+      {athlete.error.message}
+    </Alert>
+  ) : (
+    <EventCountdownCard
+      profile={athlete.data.data}
+      today={today}
+      weightUnit={me.units.weight}
+      editHref={paths.intake}
+    />
+  );
 
   return (
     <>
@@ -31,37 +52,19 @@ export function AthleteHomeRoute() {
           {greetingFor(hourIn(timeZone))}, {firstName(me.name)}
         </h1>
       </header>
-      {athlete.isPending ? (
-        <div aria-busy="true" aria-label="Loading your day" className="space-y-4">
-          <Skeleton className="h-36" />
-          <Skeleton className="h-56" />
-          <Skeleton className="h-20" />
-        </div>
-      ) : athlete.isError ? (
-        <Alert
-          tone="error"
-          title="Your day could not be loaded."
-          action={
-            <Button variant="secondary" onClick={() => void athlete.refetch()}>
-              Try again
-            </Button>
-          }
-        >
-          {athlete.error.message}
-        </Alert>
-      ) : (
-        <div className="space-y-4">
-          <EventCountdownCard
-            profile={athlete.data.data}
-            today={today}
-            weightUnit={me.units.weight}
-            editHref={paths.intake}
-          />
-          <CheckInPreviewCard />
-          <CoachCard coachName={athlete.data.data.coach.name} teamName={me.team.name} />
-          <SafetyNote />
-        </div>
-      )}
+      <div className="space-y-4">
+        <DayCheckIn
+          athleteId={athleteId}
+          date={today}
+          timeZone={timeZone}
+          units={me.units}
+          canEditFallback={athlete.data?.abilities.log ?? true}
+          before={countdown}
+          photosHref={paths.athletePhotos}
+        />
+        {athlete.data ? <CoachCard coachName={athlete.data.data.coach.name} teamName={me.team.name} /> : null}
+        <SafetyNote />
+      </div>
     </>
   );
 }

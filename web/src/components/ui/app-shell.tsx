@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Link, NavLink } from 'react-router';
+import { Link, NavLink, useLocation } from 'react-router';
 import { APP_NAME } from '@/config/app';
 import { cn } from '@/lib/cn';
 
@@ -150,27 +150,39 @@ export function BottomBarLink({
   icon,
   children,
   end,
+  alsoActiveOn,
 }: {
   to: string;
   icon: ReactNode;
   children: ReactNode;
   end?: boolean;
+  /** A path prefix that also belongs to this tab (a day opened from History). */
+  alsoActiveOn?: string;
 }) {
+  const { pathname } = useLocation();
+  const className = cn(
+    'relative flex h-bottom-bar flex-col items-center justify-center gap-0.5 text-xs font-semibold text-ink-muted no-underline',
+    'hover:text-ink aria-[current=page]:text-accent-strong',
+    'before:absolute before:top-0 before:left-1/2 before:h-[3px] before:w-10 before:-translate-x-1/2 before:rounded-pill',
+    'aria-[current=page]:before:bg-accent',
+  );
+  const content = (
+    <>
+      <span className="text-2xl">{icon}</span>
+      {children}
+    </>
+  );
   return (
     <li>
-      <NavLink
-        to={to}
-        end={end}
-        className={cn(
-          'relative flex h-bottom-bar flex-col items-center justify-center gap-0.5 text-xs font-semibold text-ink-muted no-underline',
-          'hover:text-ink aria-[current=page]:text-accent-strong',
-          'before:absolute before:top-0 before:left-1/2 before:h-[3px] before:w-10 before:-translate-x-1/2 before:rounded-pill',
-          'aria-[current=page]:before:bg-accent',
-        )}
-      >
-        <span className="text-2xl">{icon}</span>
-        {children}
-      </NavLink>
+      {alsoActiveOn && pathname.startsWith(alsoActiveOn) ? (
+        <Link to={to} aria-current="page" className={className}>
+          {content}
+        </Link>
+      ) : (
+        <NavLink to={to} end={end} className={className}>
+          {content}
+        </NavLink>
+      )}
     </li>
   );
 }

@@ -186,3 +186,110 @@ export function ChevronDownIcon(props: IconProps) {
     </Icon>
   );
 }
+
+export function ChevronLeftIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="m14.5 6-6 6 6 6" />
+    </Icon>
+  );
+}
+
+export function ChevronRightIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="m9.5 6 6 6-6 6" />
+    </Icon>
+  );
+}
+
+/** A list beside a small clock: days gone by. */
+export function HistoryIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M4 6h8M4 11h6M4 16h5" />
+      <circle cx="16.5" cy="14.5" r="4.5" />
+      <path d="M16.5 12.2v2.4l1.6 1" />
+    </Icon>
+  );
+}
+
+export function CameraIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M4 8.5A1.5 1.5 0 0 1 5.5 7h2.2l1.5-2h5.6l1.5 2h2.2A1.5 1.5 0 0 1 20 8.5v9a1.5 1.5 0 0 1-1.5 1.5h-13A1.5 1.5 0 0 1 4 17.5z" />
+      <circle cx="12" cy="12.8" r="3.3" />
+    </Icon>
+  );
+}
+
+export function PencilIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M15.5 5.5 18.5 8.5 9 18H6v-3z" />
+      <path d="m13.5 7.5 3 3" />
+    </Icon>
+  );
+}
+
+export function TrashIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M5 7h14M10 7V5h4v2M7 7l.8 12h8.4L17 7" />
+    </Icon>
+  );
+}
+
+/** A bathroom scale. */
+export function ScaleIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <rect x="4" y="4" width="16" height="16" rx="3" />
+      <path d="M8.5 9.5a4.5 4.5 0 0 1 7 0" />
+      <path d="m12 10.5 1.2-1.8" />
+    </Icon>
+  );
+}
+
+export function DropIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M12 3.5c3 3.7 5.5 7 5.5 10a5.5 5.5 0 0 1-11 0c0-3 2.5-6.3 5.5-10z" />
+    </Icon>
+  );
+}
+
+export function BowlIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M3.5 11.5h17a8.5 8.5 0 0 1-17 0z" />
+      <path d="M9 8c0-1.2 1-1.5 1-2.8M13.5 8c0-1.2 1-1.5 1-2.8" />
+    </Icon>
+  );
+}
+
+export function CapsuleIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <rect x="3.2" y="8.5" width="17.6" height="7" rx="3.5" transform="rotate(-35 12 12)" />
+      <path d="m9.6 8.7 4.8 6.6" />
+    </Icon>
+  );
+}
+
+export function MoonIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M19 14.5A7.5 7.5 0 0 1 9.5 5a7.5 7.5 0 1 0 9.5 9.5z" />
+    </Icon>
+  );
+}
+
+/** A pulse line: how the body feels. */
+export function PulseIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M3 12h4l2-5 4 10 2-5h6" />
+    </Icon>
+  );
+}

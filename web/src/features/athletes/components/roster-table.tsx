@@ -1,5 +1,7 @@
 import { EVENT_TYPE_LABELS, GOAL_LABELS, type RosterRow } from '@driftmark/shared';
+import { Link } from 'react-router';
 import { Badge, type BadgeTone } from '@/components/ui/badge';
+import { paths } from '@/config/paths';
 import { formatDate, formatNumber } from '@/lib/format';
 
 const STATUS: Record<RosterRow['status'], { label: string; tone: BadgeTone }> = {
@@ -65,7 +67,9 @@ export function RosterTable({ rows, showCoach }: { rows: RosterRow[]; showCoach:
             return (
               <tr key={row.athleteId} className="align-top hover:bg-paper/70">
                 <th scope="row" className="px-3 py-3 font-normal">
-                  <span className="block font-semibold text-ink">{row.name}</span>
+                  <Link to={paths.coachAthlete(row.athleteId)} className="block font-semibold">
+                    {row.name}
+                  </Link>
                   <span className="block text-xs text-ink-faint">{row.email}</span>
                 </th>
                 <td className="px-3 py-3 whitespace-nowrap text-ink">

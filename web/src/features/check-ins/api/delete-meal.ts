@@ -1,0 +1,20 @@
+import type { DayView } from '@driftmark/shared';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { applyDayChange, entryByIdPath } from './day-cache';
+
+/** DELETE /api/athletes/:athleteId/meals/:entryId */
+export function deleteMeal(athleteId: string, entryId: string): Promise<DayView> {
+  return api.delete<DayView>(entryByIdPath(athleteId, 'meals', entryId));
+}
+
+export function useDeleteMeal(athleteId: string, options: { onSuccess?: (day: DayView) => void } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (entryId: string) => deleteMeal(athleteId, entryId),
+    onSuccess: async (day) => {
+      await applyDayChange(queryClient, athleteId, day);
+      options.onSuccess?.(day);
+    },
+  });
+}

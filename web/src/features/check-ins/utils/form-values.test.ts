@@ -1,0 +1,177 @@
+import {
+  eveningRequest,
+  fluidEntryRequest,
+  mealEntryRequest,
+  symptomReportRequest,
+  weighInRequest,
+  type DayView,
+} from '@driftmark/shared';
+import { describe, expect, it } from 'vitest';
+import {
+  eveningFormValues,
+  toEveningRequest,
+  toFluidRequest,
+  toMealRequest,
+  toSymptomRequest,
+  toWeighInRequest,
+  weighInFormValues,
+  withoutClientId,
+  type MealFormValues,
+} from './form-values';
+import { NOT_A_NUMBER } from './numbers';
+import { createRequestResolver } from './resolver';
+
+const opts = { fields: {}, shouldUseNativeValidation: false } as never;
+
+describe('weigh-in', () => {
+  it('sends the weight as typed, in the unit chosen, and drops the cycle phase unless it is tagged', () => {
+    const { request, numberErrors } = toWeighInRequest({
+      weight: '154,3',
+      unit: 'lb',
+      time: '06:40',
+      protocolConfirmed: true,
+      tags: ['travel'],
+      cyclePhase: 'luteal',
+    });
+    expect(numberErrors).toEqual({});
+    expect(request).toEqual({
+      weight: 154.3,
+      unit: 'lb',
+      time: '06:40',
+      protocolConfirmed: true,
+      tags: ['travel'],
+      cyclePhase: null,
+    });
+    expect(weighInRequest.safeParse(request).success).toBe(true);
+  });
+
+  it('edits a saved weigh-in in the unit it was typed in, exactly', () => {
+    const view: DayView['weighIn'] = {
+      weightKg: 154.3 * 0.45359237,
+      entered: { value: 154.3, unit: 'lb' },
+      time: '06:40',
+      tags: ['cycle_phase'],
+      cyclePhase: 'follicular',
+      updatedAt: '2026-12-01T06:41:00Z',
+    };
+    expect(weighInFormValues(view, 'kg', '09:00')).toEqual({
+      weight: '154.3',
+      unit: 'lb',
+      time: '06:40',
+      protocolConfirmed: true,
+      tags: ['cycle_phase'],
+      cyclePhase: 'follicular',
+    });
+    expect(weighInFormValues(null, 'kg', '09:00')).toMatchObject({ weight: '', unit: 'kg', time: '09:00' });
+  });
+
+  it('puts the shared schema messages on the boxes', async () => {
+    const resolver = createRequestResolver(weighInRequest, toWeighInRequest);
+    const result = await resolver(
+      { weight: '900', unit: 'kg', time: '06:40', protocolConfirmed: false, tags: [], cyclePhase: '' },
+      undefined,
+      opts,
+    );
+    expect(result.errors.protocolConfirmed?.message).toBe(
+      'Confirm the weigh-in was after waking and voiding, before food and drink',
+    );
+    const weight = await resolver(
+      { weight: '900', unit: 'kg', time: '06:40', protocolConfirmed: true, tags: [], cyclePhase: '' },
+      undefined,
+      opts,
+    );
+    expect(weight.errors.weight?.message).toBe('Weight must be between 25 kg and 300 kg');
+    const text = await resolver(
+      { weight: 'heavy', unit: 'kg', time: '06:40', protocolConfirmed: true, tags: [], cyclePhase: '' },
+      undefined,
+      opts,
+    );
+    expect(text.errors.weight?.message).toBe(NOT_A_NUMBER);
+  });
+});
+
+describe('fluids', () => {
+  it('refuses 30 L in one entry with a message naming the volume', async () => {
+    const resolver = createRequestResolver(fluidEntryRequest, toFluidRequest);
+    const result = await resolver(
+      { volume: '30000', unit: 'ml', kind: 'water', time: '10:00' },
+      undefined,
+      opts,
+    );
+    expect(result.errors.volume?.message).toBe('One entry can hold at most 5000 mL');
+    const ok = await resolver(
+      { volume: '16', unit: 'floz', kind: 'coffee_tea', time: '10:00' },
+      undefined,
+      opts,
+    );
+    expect(ok.errors).toEqual({});
+    expect(ok.values).toMatchObject({ volume: 16, unit: 'floz', kind: 'coffee_tea' });
+  });
+});
+
+describe('meals', () => {
+  const base: MealFormValues = {
+    name: 'Lunch',
+    time: '12:30',
+    source: 'macros',
+    proteinG: '40',
+    carbohydrateG: '60',
+    fatG: '15',
+    fibreG: '',
+    alcoholG: '',
+    foodId: '',
+    quantityG: '',
+  };
+
+  it('sends grams of macros, optional ones as null when empty', () => {
+    const { request } = toMealRequest(base);
+    expect(request).toMatchObject({ source: 'macros', proteinG: 40, fibreG: null, alcoholG: null });
+    expect(mealEntryRequest.safeParse(request).success).toBe(true);
+  });
+
+  it('sends a food with its quantity, and asks for the food when none is chosen', async () => {
+    const food = toMealRequest({ ...base, source: 'food', foodId: 'ifct:A001', quantityG: '150' }).request;
+    expect(food).toMatchObject({ source: 'food', foodId: 'ifct:A001', quantityG: 150 });
+    expect(food).not.toHaveProperty('proteinG');
+    expect(mealEntryRequest.safeParse(food).success).toBe(true);
+    const resolver = createRequestResolver(mealEntryRequest, toMealRequest);
+    const result = await resolver({ ...base, source: 'food', quantityG: '150' }, undefined, opts);
+    expect(result.errors.foodId?.message).toBe('Choose a food');
+  });
+
+  it('leaves the client id out of an edit', () => {
+    const { request } = toMealRequest(base);
+    expect(withoutClientId(request as { clientId: string })).not.toHaveProperty('clientId');
+  });
+});
+
+describe('evening', () => {
+  it('turns the ratings and the yes/no into numbers and a boolean; empty boxes clear', () => {
+    const values = eveningFormValues(null);
+    values.steps = '12 500';
+    values.trainingDone = 'yes';
+    values.trainingNote = ' legs ';
+    values.ratings.energy = '4';
+    values.ratings.stress = '2';
+    const { request } = toEveningRequest(values);
+    expect(request).toMatchObject({
+      steps: 12500,
+      sleepHours: null,
+      trainingDone: true,
+      trainingNote: 'legs',
+      ratings: { energy: 4, stress: 2, mood: null },
+      note: null,
+    });
+    expect(eveningRequest.safeParse(request).success).toBe(true);
+  });
+});
+
+describe('symptoms', () => {
+  it('needs at least one symptom', async () => {
+    const resolver = createRequestResolver(symptomReportRequest, toSymptomRequest);
+    const empty = await resolver({ symptoms: [], time: '15:00', note: '' }, undefined, opts);
+    expect(empty.errors.symptoms?.message).toBe('Choose at least one symptom');
+    const { request } = toSymptomRequest({ symptoms: ['dizziness', 'headache'], time: '15:00', note: '' });
+    expect(request).toMatchObject({ symptoms: ['dizziness', 'headache'], note: null });
+  });
+});

@@ -1,0 +1,327 @@
+import {
+  RATING_KEYS,
+  WEIGH_IN_TAGS,
+  SYMPTOMS,
+  type CYCLE_PHASES,
+  type DayView,
+  type FLUID_KINDS,
+  type RatingKey,
+  type Symptom,
+  type VolumeUnit,
+  type WeighInTag,
+  type WeightUnit,
+} from '@driftmark/shared';
+import { numberReader, toInputText } from './numbers';
+import { volumeInputText, weightInputText } from './units';
+
+/*
+ * Each check-in form as the athlete types it (numbers as text, in their own units) and its
+ * conversion to the request body the shared schema validates. Field names match the request's,
+ * so schema and server messages land on the box they are about.
+ */
+
+/** Stands in for the submission's client id while the schema checks the rest of a create body. */
+export const CLIENT_ID_PLACEHOLDER = '00000000-0000-4000-8000-000000000000';
+
+export interface Conversion<F extends string> {
+  request: Record<string, unknown>;
+  /** Boxes whose text is not a number. */
+  numberErrors: Partial<Record<F, string>>;
+}
+
+function optionalText(text: string | null | undefined): string | null {
+  const t = (text ?? '').trim();
+  return t === '' ? null : t;
+}
+
+function checkedList<T extends string>(value: unknown, allowed: readonly T[]): T[] {
+  // react-hook-form gives an array for a group of checkboxes; guard against a lone boolean.
+  if (!Array.isArray(value)) return [];
+  return allowed.filter((item) => value.includes(item));
+}
+
+/* ---------- Weigh-in ---------- */
+
+export type CyclePhase = (typeof CYCLE_PHASES)[number];
+
+export interface WeighInFormValues {
+  weight: string;
+  unit: WeightUnit;
+  time: string;
+  protocolConfirmed: boolean;
+  tags: WeighInTag[];
+  cyclePhase: CyclePhase | '';
+}
+
+export function toWeighInRequest(v: WeighInFormValues): Conversion<keyof WeighInFormValues> {
+  const read = numberReader<keyof WeighInFormValues>();
+  const tags = checkedList(v.tags, WEIGH_IN_TAGS);
+  return {
+    request: {
+      weight: read.required('weight', v.weight),
+      unit: v.unit,
+      time: v.time,
+      protocolConfirmed: v.protocolConfirmed === true ? true : undefined,
+      tags,
+      cyclePhase: tags.includes('cycle_phase') && v.cyclePhase ? v.cyclePhase : null,
+    },
+    numberErrors: read.errors,
+  };
+}
+
+export function weighInFormValues(
+  view: DayView['weighIn'],
+  unit: WeightUnit,
+  now: string,
+): WeighInFormValues {
+  if (!view) return { weight: '', unit, time: now, protocolConfirmed: false, tags: [], cyclePhase: '' };
+  // Editing shows the weigh-in in the unit it was typed in, exactly as typed.
+  const shownUnit = view.entered.unit;
+  return {
+    weight: weightInputText(view.weightKg, view.entered, shownUnit),
+    unit: shownUnit,
+    time: view.time,
+    protocolConfirmed: true,
+    tags: [...view.tags],
+    cyclePhase: view.cyclePhase ?? '',
+  };
+}
+
+/* ---------- Fluids ---------- */
+
+export type FluidKind = (typeof FLUID_KINDS)[number];
+
+export interface FluidFormValues {
+  volume: string;
+  unit: VolumeUnit;
+  kind: FluidKind;
+  time: string;
+}
+
+export function toFluidRequest(v: FluidFormValues): Conversion<keyof FluidFormValues> {
+  const read = numberReader<keyof FluidFormValues>();
+  return {
+    request: {
+      clientId: CLIENT_ID_PLACEHOLDER,
+      time: v.time,
+      volume: read.required('volume', v.volume),
+      unit: v.unit,
+      kind: v.kind,
+    },
+    numberErrors: read.errors,
+  };
+}
+
+export function fluidFormValues(
+  entry: DayView['fluids'][number] | null,
+  unit: VolumeUnit,
+  now: string,
+): FluidFormValues {
+  if (!entry) return { volume: '', unit, kind: 'water', time: now };
+  return {
+    volume: volumeInputText(entry.volumeMl, entry.entered, entry.entered.unit),
+    unit: entry.entered.unit,
+    kind: entry.kind,
+    time: entry.time,
+  };
+}
+
+/* ---------- Meals ---------- */
+
+export interface MealFormValues {
+  name: string;
+  time: string;
+  source: 'macros' | 'food';
+  proteinG: string;
+  carbohydrateG: string;
+  fatG: string;
+  fibreG: string;
+  alcoholG: string;
+  foodId: string;
+  quantityG: string;
+}
+
+export function toMealRequest(v: MealFormValues): Conversion<keyof MealFormValues> {
+  const read = numberReader<keyof MealFormValues>();
+  const base = { clientId: CLIENT_ID_PLACEHOLDER, time: v.time, name: v.name };
+  if (v.source === 'food') {
+    return {
+      request: {
+        ...base,
+        source: 'food',
+        foodId: v.foodId || undefined,
+        quantityG: read.required('quantityG', v.quantityG),
+      },
+      numberErrors: read.errors,
+    };
+  }
+  return {
+    request: {
+      ...base,
+      source: 'macros',
+      proteinG: read.required('proteinG', v.proteinG),
+      carbohydrateG: read.required('carbohydrateG', v.carbohydrateG),
+      fatG: read.required('fatG', v.fatG),
+      fibreG: read.optional('fibreG', v.fibreG),
+      alcoholG: read.optional('alcoholG', v.alcoholG),
+    },
+    numberErrors: read.errors,
+  };
+}
+
+export function mealFormValues(entry: DayView['meals'][number] | null, now: string): MealFormValues {
+  const empty: MealFormValues = {
+    name: '',
+    time: now,
+    source: 'macros',
+    proteinG: '',
+    carbohydrateG: '',
+    fatG: '',
+    fibreG: '',
+    alcoholG: '',
+    foodId: '',
+    quantityG: '',
+  };
+  if (!entry) return empty;
+  if (entry.source === 'food' && entry.food) {
+    return {
+      ...empty,
+      name: entry.name,
+      time: entry.time,
+      source: 'food',
+      foodId: entry.food.id,
+      quantityG: toInputText(entry.food.quantityG, 1),
+    };
+  }
+  return {
+    ...empty,
+    name: entry.name,
+    time: entry.time,
+    proteinG: toInputText(entry.proteinG, 1),
+    carbohydrateG: toInputText(entry.carbohydrateG, 1),
+    fatG: toInputText(entry.fatG, 1),
+    fibreG: toInputText(entry.fibreG, 1),
+    alcoholG: toInputText(entry.alcoholG, 1),
+  };
+}
+
+/* ---------- Supplements ---------- */
+
+export interface SupplementFormValues {
+  name: string;
+  dose: string;
+  doseUnit: string;
+  time: string;
+}
+
+export function toSupplementRequest(v: SupplementFormValues): Conversion<keyof SupplementFormValues> {
+  const read = numberReader<keyof SupplementFormValues>();
+  return {
+    request: {
+      clientId: CLIENT_ID_PLACEHOLDER,
+      time: v.time,
+      name: v.name,
+      dose: read.optional('dose', v.dose),
+      doseUnit: optionalText(v.doseUnit),
+    },
+    numberErrors: read.errors,
+  };
+}
+
+export function supplementFormValues(
+  entry: Pick<DayView['supplements'][number], 'name' | 'dose' | 'doseUnit' | 'time'> | null,
+  now: string,
+): SupplementFormValues {
+  if (!entry) return { name: '', dose: '', doseUnit: '', time: now };
+  return {
+    name: entry.name,
+    dose: toInputText(entry.dose, 3),
+    doseUnit: entry.doseUnit ?? '',
+    time: entry.time,
+  };
+}
+
+/* ---------- Evening ---------- */
+
+export interface EveningFormValues {
+  steps: string;
+  sleepHours: string;
+  cardioMinutes: string;
+  trainingDone: '' | 'yes' | 'no';
+  trainingNote: string;
+  ratings: Record<RatingKey, string>;
+  note: string;
+}
+
+export function toEveningRequest(v: EveningFormValues): Conversion<keyof EveningFormValues> {
+  const read = numberReader<keyof EveningFormValues>();
+  const ratings: Partial<Record<RatingKey, number | null>> = {};
+  for (const key of RATING_KEYS) {
+    const text = v.ratings?.[key] ?? '';
+    ratings[key] = text === '' ? null : Number(text);
+  }
+  return {
+    request: {
+      steps: read.optional('steps', v.steps),
+      sleepHours: read.optional('sleepHours', v.sleepHours),
+      cardioMinutes: read.optional('cardioMinutes', v.cardioMinutes),
+      trainingDone: v.trainingDone === '' ? null : v.trainingDone === 'yes',
+      trainingNote: optionalText(v.trainingNote),
+      ratings,
+      note: optionalText(v.note),
+    },
+    numberErrors: read.errors,
+  };
+}
+
+export function eveningFormValues(view: DayView['evening']): EveningFormValues {
+  const ratings = Object.fromEntries(
+    RATING_KEYS.map((k) => {
+      const r = view?.ratings[k];
+      return [k, typeof r === 'number' ? String(r) : ''];
+    }),
+  ) as Record<RatingKey, string>;
+  return {
+    steps: toInputText(view?.steps, 0),
+    sleepHours: toInputText(view?.sleepHours, 2),
+    cardioMinutes: toInputText(view?.cardioMinutes, 0),
+    trainingDone: view?.trainingDone === true ? 'yes' : view?.trainingDone === false ? 'no' : '',
+    trainingNote: view?.trainingNote ?? '',
+    ratings,
+    note: view?.note ?? '',
+  };
+}
+
+/* ---------- Symptoms ---------- */
+
+export interface SymptomFormValues {
+  symptoms: Symptom[];
+  time: string;
+  note: string;
+}
+
+export function toSymptomRequest(v: SymptomFormValues): Conversion<keyof SymptomFormValues> {
+  return {
+    request: {
+      clientId: CLIENT_ID_PLACEHOLDER,
+      time: v.time,
+      symptoms: checkedList(v.symptoms, SYMPTOMS),
+      note: optionalText(v.note),
+    },
+    numberErrors: {},
+  };
+}
+
+export function symptomFormValues(entry: DayView['symptoms'][number] | null, now: string): SymptomFormValues {
+  if (!entry) return { symptoms: [], time: now, note: '' };
+  return { symptoms: [...entry.symptoms], time: entry.time, note: entry.note ?? '' };
+}
+
+/** A type without its client id, member by member for a union (a meal is macros or a food). */
+export type WithoutClientId<T> = T extends unknown ? Omit<T, 'clientId'> : never;
+
+/** The body of a PATCH: the create body without its client id. */
+export function withoutClientId<T extends { clientId?: unknown }>(body: T): WithoutClientId<T> {
+  const { clientId: _clientId, ...rest } = body;
+  return rest as WithoutClientId<T>;
+}
