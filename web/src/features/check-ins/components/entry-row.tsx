@@ -1,6 +1,6 @@
 import { useState, type ReactNode } from 'react';
 import { Button } from '@/components/ui/button';
-import { ChevronRightIcon, TrashIcon } from '@/components/ui/icons';
+import { ChevronRightIcon, PlusIcon, TrashIcon } from '@/components/ui/icons';
 import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
 
@@ -48,6 +48,29 @@ export function EntryRow({ time, children, describe, canEdit, onEdit, lead }: En
 }
 
 /** A list of entries separated by hairlines. */
+/** The "add another" part of a card: a wide button that opens the card's form in place. */
+export function AddEntry({
+  label,
+  open,
+  onOpen,
+  divided,
+  children,
+}: {
+  label: string;
+  open: boolean;
+  onOpen: () => void;
+  /** Draw a rule above the open form (when entries are listed above it). */
+  divided: boolean;
+  children: ReactNode;
+}) {
+  if (open) return <div className={divided ? 'mt-4 border-t border-line pt-4' : undefined}>{children}</div>;
+  return (
+    <Button variant="secondary" size="lg" className="mt-4 w-full" icon={<PlusIcon />} onClick={onOpen}>
+      {label}
+    </Button>
+  );
+}
+
 export function EntryList({ label, children }: { label: string; children: ReactNode }) {
   return (
     <ul aria-label={label} className="divide-y divide-line">

@@ -4,7 +4,7 @@ import { useForm, useWatch } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { FieldErrorText, useFieldError } from '@/components/ui/field';
 import { Form, SubmitButton } from '@/components/ui/form';
-import { BowlIcon, PlusIcon } from '@/components/ui/icons';
+import { BowlIcon } from '@/components/ui/icons';
 import { SegmentedField } from '@/components/ui/segmented-field';
 import { TextField } from '@/components/ui/text-field';
 import { formatEnergy, formatNumber, NBSP } from '@/lib/format';
@@ -17,7 +17,7 @@ import { mealFormValues, toMealRequest, withoutClientId, type MealFormValues } f
 import { createRequestResolver } from '../utils/resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
 import { FoodPicker } from './food-picker';
 import { useFollowClock } from './use-clock';
 
@@ -101,27 +101,20 @@ export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
       ) : null}
 
       {canEdit ? (
-        adding ? (
-          <div className={day.meals.length > 0 ? 'mt-4 border-t border-line pt-4' : undefined}>
-            <MealForm
-              athleteId={athleteId}
-              date={day.date}
-              entry={null}
-              now={now}
-              onDone={() => setAdding(false)}
-            />
-          </div>
-        ) : (
-          <Button
-            variant="secondary"
-            size="lg"
-            className="mt-4 w-full"
-            icon={<PlusIcon />}
-            onClick={() => setAdding(true)}
-          >
-            Add a meal
-          </Button>
-        )
+        <AddEntry
+          label="Add a meal"
+          open={adding}
+          onOpen={() => setAdding(true)}
+          divided={day.meals.length > 0}
+        >
+          <MealForm
+            athleteId={athleteId}
+            date={day.date}
+            entry={null}
+            now={now}
+            onDone={() => setAdding(false)}
+          />
+        </AddEntry>
       ) : null}
     </CheckInCard>
   );

@@ -3,7 +3,7 @@ import { useMemo, useRef, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Button } from '@/components/ui/button';
 import { Form, SubmitButton } from '@/components/ui/form';
-import { CapsuleIcon, CheckIcon, PlusIcon } from '@/components/ui/icons';
+import { CapsuleIcon, CheckIcon } from '@/components/ui/icons';
 import { TextField } from '@/components/ui/text-field';
 import { isApiError } from '@/lib/api-client';
 import { formatNumber } from '@/lib/format';
@@ -20,7 +20,7 @@ import {
 import { createRequestResolver } from '../utils/resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
 import { useFollowClock } from './use-clock';
 
 type Supplement = DayView['supplements'][number];
@@ -119,27 +119,15 @@ export function SupplementsCard({ athleteId, day, canEdit, now, previous }: Supp
       ) : null}
 
       {canEdit ? (
-        adding ? (
-          <div className="mt-4 border-t border-line pt-4">
-            <SupplementForm
-              athleteId={athleteId}
-              date={day.date}
-              entry={null}
-              now={now}
-              onDone={() => setAdding(false)}
-            />
-          </div>
-        ) : (
-          <Button
-            variant="secondary"
-            size="lg"
-            className="mt-4 w-full"
-            icon={<PlusIcon />}
-            onClick={() => setAdding(true)}
-          >
-            Add a supplement
-          </Button>
-        )
+        <AddEntry label="Add a supplement" open={adding} onOpen={() => setAdding(true)} divided={true}>
+          <SupplementForm
+            athleteId={athleteId}
+            date={day.date}
+            entry={null}
+            now={now}
+            onDone={() => setAdding(false)}
+          />
+        </AddEntry>
       ) : null}
     </CheckInCard>
   );

@@ -13,7 +13,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { CheckboxGroup } from '@/components/ui/checkbox-group';
 import { Form, SubmitButton } from '@/components/ui/form';
-import { PlusIcon, PulseIcon } from '@/components/ui/icons';
+import { PulseIcon } from '@/components/ui/icons';
 import { TextArea } from '@/components/ui/text-area';
 import { TextField } from '@/components/ui/text-field';
 import { formatNumber } from '@/lib/format';
@@ -31,7 +31,7 @@ import { createRequestResolver } from '../utils/resolver';
 import { hasUrgentSymptom } from '../utils/symptoms';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
 import { useFollowClock } from './use-clock';
 
 const URGENT = new Set<Symptom>(URGENT_SYMPTOMS);
@@ -101,28 +101,21 @@ export function SymptomsCard({ athleteId, day, canEdit, now, onUrgent }: Symptom
       ) : null}
 
       {canEdit ? (
-        adding ? (
-          <div className={day.symptoms.length > 0 ? 'mt-4 border-t border-line pt-4' : undefined}>
-            <SymptomForm
-              athleteId={athleteId}
-              date={day.date}
-              entry={null}
-              now={now}
-              onUrgent={onUrgent}
-              onDone={() => setAdding(false)}
-            />
-          </div>
-        ) : (
-          <Button
-            variant="secondary"
-            size="lg"
-            className="mt-4 w-full"
-            icon={<PlusIcon />}
-            onClick={() => setAdding(true)}
-          >
-            Report a symptom
-          </Button>
-        )
+        <AddEntry
+          label="Report a symptom"
+          open={adding}
+          onOpen={() => setAdding(true)}
+          divided={day.symptoms.length > 0}
+        >
+          <SymptomForm
+            athleteId={athleteId}
+            date={day.date}
+            entry={null}
+            now={now}
+            onUrgent={onUrgent}
+            onDone={() => setAdding(false)}
+          />
+        </AddEntry>
       ) : null}
     </CheckInCard>
   );
