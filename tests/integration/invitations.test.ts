@@ -141,6 +141,7 @@ describe('invitations end to end', () => {
       eventType: 'show',
       eventTimeZone: 'Pacific/Auckland',
       timeZone: 'Pacific/Auckland',
+      units: { weight: 'kg', volume: 'ml' },
       photoConsent: true,
       coach: { id: owner.id, name: 'Head Coach' },
     });

@@ -24,6 +24,7 @@ export function presentAthleteProfile(a: AthleteWithPeople): AthleteProfile {
     division: a.division,
     weighInLimitKg: a.weighInLimitKg,
     timeZone: a.user.timeZone,
+    units: { weight: a.user.weightUnit, volume: a.user.volumeUnit },
     photoConsent: a.photoConsent,
     intakeCompletedAt: a.intakeCompletedAt ? a.intakeCompletedAt.toISOString() : null,
   };

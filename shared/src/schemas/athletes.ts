@@ -132,6 +132,8 @@ export const athleteProfile = z.object({
   division: z.string().nullable(),
   weighInLimitKg: z.number().nullable(),
   timeZone: z.string(),
+  /** The units the athlete types in (values are always stored in SI). */
+  units: z.object({ weight: z.enum(WEIGHT_UNITS), volume: z.enum(VOLUME_UNITS) }),
   photoConsent: z.boolean(),
   intakeCompletedAt: z.string().nullable(),
 });

@@ -1,12 +1,8 @@
 import {
   EVENT_TYPE_LABELS,
   VOLUME_UNIT_LABELS,
-  VOLUME_UNITS,
   WEIGHT_UNIT_LABELS,
-  WEIGHT_UNITS,
   type AthleteProfile,
-  type VolumeUnit,
-  type WeightUnit,
 } from '@driftmark/shared';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { SafetyNote } from '@/components/safety-note';
@@ -29,21 +25,13 @@ import { useCurrentUser } from '../session';
 /** Days at or under which the final-week countdown applies. */
 const FINAL_WEEK_DAYS = 7;
 
-/** The athlete's own units, when the profile carries them (the reader's units are used for figures). */
-function athleteUnits(profile: AthleteProfile): { weight: WeightUnit; volume: VolumeUnit } | null {
-  const units = (profile as { units?: { weight?: unknown; volume?: unknown } }).units;
-  const weight = WEIGHT_UNITS.find((u) => u === units?.weight);
-  const volume = VOLUME_UNITS.find((u) => u === units?.volume);
-  return weight && volume ? { weight, volume } : null;
-}
-
 function AthleteHeader({ profile, today }: { profile: AthleteProfile; today: string }) {
   const me = useCurrentUser();
   const clock = useClock(profile.timeZone);
   const hasEvent = profile.eventType !== null && profile.eventType !== 'none' && profile.eventDate !== null;
   const days = hasEvent && profile.eventDate ? daysBetween(today, profile.eventDate) : null;
   const finalWeek = days !== null && days >= 0 && days <= FINAL_WEEK_DAYS;
-  const units = athleteUnits(profile);
+  const { units } = profile;
   const facts: Array<{ label: string; value: string }> = [
     { label: 'Division', value: profile.division ?? '—' },
     { label: 'Time zone', value: `${profile.timeZone.replaceAll('_', ' ')} (now ${clock})` },
@@ -52,12 +40,10 @@ function AthleteHeader({ profile, today }: { profile: AthleteProfile; today: str
       value: `${WEIGHT_UNIT_LABELS[me.units.weight]}, ${VOLUME_UNIT_LABELS[me.units.volume]}`,
     },
   ];
-  if (units) {
-    facts.splice(2, 0, {
-      label: 'Logs in',
-      value: `${WEIGHT_UNIT_LABELS[units.weight]}, ${VOLUME_UNIT_LABELS[units.volume]}`,
-    });
-  }
+  facts.splice(2, 0, {
+    label: 'Logs in',
+    value: `${WEIGHT_UNIT_LABELS[units.weight]}, ${VOLUME_UNIT_LABELS[units.volume]}`,
+  });
   if (profile.weighInLimitKg !== null) {
     facts.splice(1, 0, {
       label: 'Weigh-in limit',

@@ -171,6 +171,7 @@ describe('initialIntakeValues', () => {
     division: 'Classic physique',
     weighInLimitKg: null,
     timeZone: 'Europe/Berlin',
+    units: { weight: 'kg', volume: 'ml' },
     photoConsent: true,
     intakeCompletedAt: '2026-11-01T10:00:00Z',
   };
