@@ -99,15 +99,20 @@ export const weighInRequest = z
     /** Only when the athlete tracks their cycle. */
     cyclePhase: z.enum(CYCLE_PHASES).nullable().optional(),
   })
-  .superRefine((v, ctx) => {
-    const kg = weightToKg(v.weight, v.unit);
-    const { min, max } = LIMITS.weightKg;
-    if (!(kg >= min && kg <= max)) {
-      const lo = v.unit === 'kg' ? `${min} kg` : `${(min / 0.45359237).toFixed(1)} lb`;
-      const hi = v.unit === 'kg' ? `${max} kg` : `${(max / 0.45359237).toFixed(1)} lb`;
-      ctx.addIssue({ code: 'custom', path: ['weight'], message: `Weight must be between ${lo} and ${hi}` });
-    }
-  });
+  .superRefine(
+    (v, ctx) => {
+      if (typeof v.weight !== 'number' || !Number.isFinite(v.weight)) return;
+      const kg = weightToKg(v.weight, v.unit === 'lb' ? 'lb' : 'kg');
+      const { min, max } = LIMITS.weightKg;
+      if (!(kg >= min && kg <= max)) {
+        const lo = v.unit === 'kg' ? `${min} kg` : `${(min / 0.45359237).toFixed(1)} lb`;
+        const hi = v.unit === 'kg' ? `${max} kg` : `${(max / 0.45359237).toFixed(1)} lb`;
+        ctx.addIssue({ code: 'custom', path: ['weight'], message: `Weight must be between ${lo} and ${hi}` });
+      }
+    },
+    // Check the range even while another field (say the protocol tick) is still missing.
+    { when: () => true },
+  );
 export type WeighInRequest = z.infer<typeof weighInRequest>;
 
 /** POST /api/athletes/:athleteId/days/:date/fluids ; PATCH …/fluids/:entryId takes the same fields less clientId. */

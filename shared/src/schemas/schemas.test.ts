@@ -107,3 +107,18 @@ describe('intakeRequest cross-field rules', () => {
     expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'eventDate']));
   });
 });
+
+describe('weighInRequest', () => {
+  it('reports an implausible weight together with a missing protocol tick', async () => {
+    const { weighInRequest } = await import('./check-ins.js');
+    const r = weighInRequest.safeParse({ weight: 900, unit: 'kg', time: '07:10' });
+    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['weight', 'protocolConfirmed']));
+  });
+
+  it('accepts 176.4 lb (80.0 kg) and refuses 0 kg', async () => {
+    const { weighInRequest } = await import('./check-ins.js');
+    const ok = { weight: 176.4, unit: 'lb', time: '07:10', protocolConfirmed: true };
+    expect(weighInRequest.safeParse(ok).success).toBe(true);
+    expect(fieldsOf(weighInRequest.safeParse({ ...ok, weight: 0, unit: 'kg' }))).toEqual(['weight']);
+  });
+});
