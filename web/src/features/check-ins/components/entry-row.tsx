@@ -71,6 +71,58 @@ export function AddEntry({
   );
 }
 
+interface EditableEntriesProps<T extends { id: string; time: string }> {
+  /** Accessible name of the list ("Meals logged"). */
+  label: string;
+  entries: readonly T[];
+  canEdit: boolean;
+  /** How the row's edit button names the entry ("250 mL water at 07:30"). */
+  describe: (entry: T) => string;
+  /** The row's content. */
+  children: (entry: T) => ReactNode;
+  /** The edit form that replaces the row; `done` closes it. */
+  form: (entry: T, done: () => void) => ReactNode;
+  /** Something shown before the time (a tick). */
+  lead?: (entry: T) => ReactNode;
+  formClassName?: string;
+}
+
+/** A card's logged entries, one of which at a time opens in place as its edit form. */
+export function EditableEntries<T extends { id: string; time: string }>({
+  label,
+  entries,
+  canEdit,
+  describe,
+  children,
+  form,
+  lead,
+  formClassName = 'my-2 rounded-md bg-paper p-3',
+}: EditableEntriesProps<T>) {
+  const [editingId, setEditingId] = useState<string | null>(null);
+  return (
+    <EntryList label={label}>
+      {entries.map((entry) =>
+        editingId === entry.id ? (
+          <li key={entry.id} className={formClassName}>
+            {form(entry, () => setEditingId(null))}
+          </li>
+        ) : (
+          <EntryRow
+            key={entry.id}
+            time={entry.time}
+            describe={describe(entry)}
+            canEdit={canEdit}
+            onEdit={() => setEditingId(entry.id)}
+            lead={lead?.(entry)}
+          >
+            {children(entry)}
+          </EntryRow>
+        ),
+      )}
+    </EntryList>
+  );
+}
+
 export function EntryList({ label, children }: { label: string; children: ReactNode }) {
   return (
     <ul aria-label={label} className="divide-y divide-line">

@@ -24,14 +24,13 @@ import { createRequestResolver } from '../utils/resolver';
 import { displayVolume, quickVolumeLabel, quickVolumes } from '../utils/units';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { ConfirmDelete, EditableEntries } from './entry-row';
 import { showServerError } from './server-errors';
 import { useFollowClock } from './use-clock';
 
 const KIND_OPTIONS = FLUID_KINDS.map((k) => ({ value: k, label: FLUID_KIND_LABELS[k] }));
 
 export function FluidsCard({ athleteId, day, units, canEdit, now }: DayCardProps) {
-  const [editingId, setEditingId] = useState<string | null>(null);
   const remove = useDeleteFluid(athleteId);
   const total = displayVolume(day.fluidTotalMl, null, units.volume);
 
@@ -58,33 +57,32 @@ export function FluidsCard({ athleteId, day, units, canEdit, now }: DayCardProps
       ) : null}
       {day.fluids.length > 0 ? (
         <div className={canEdit ? 'mt-5 border-t border-line pt-3' : undefined}>
-          <EntryList label="Drinks logged">
-            {day.fluids.map((f) =>
-              editingId === f.id ? (
-                <li key={f.id} className="py-3">
-                  <EditFluidForm
-                    athleteId={athleteId}
-                    entry={f}
-                    onDone={() => setEditingId(null)}
-                    onDelete={() => remove.mutateAsync(f.id)}
-                  />
-                </li>
-              ) : (
-                <EntryRow
-                  key={f.id}
-                  time={f.time}
-                  describe={`${displayVolume(f.volumeMl, f.entered, units.volume)} ${FLUID_KIND_LABELS[f.kind].toLowerCase()} at ${f.time}`}
-                  canEdit={canEdit}
-                  onEdit={() => setEditingId(f.id)}
-                >
-                  <span className="font-semibold tabular-nums">
-                    {displayVolume(f.volumeMl, f.entered, units.volume)}
-                  </span>{' '}
-                  <span className="text-ink-muted">{FLUID_KIND_LABELS[f.kind]}</span>
-                </EntryRow>
-              ),
+          <EditableEntries
+            label="Drinks logged"
+            entries={day.fluids}
+            canEdit={canEdit}
+            describe={(f) =>
+              `${displayVolume(f.volumeMl, f.entered, units.volume)} ${FLUID_KIND_LABELS[f.kind].toLowerCase()} at ${f.time}`
+            }
+            formClassName="py-3"
+            form={(f, done) => (
+              <EditFluidForm
+                athleteId={athleteId}
+                entry={f}
+                onDone={done}
+                onDelete={() => remove.mutateAsync(f.id)}
+              />
             )}
-          </EntryList>
+          >
+            {(f) => (
+              <>
+                <span className="font-semibold tabular-nums">
+                  {displayVolume(f.volumeMl, f.entered, units.volume)}
+                </span>{' '}
+                <span className="text-ink-muted">{FLUID_KIND_LABELS[f.kind]}</span>
+              </>
+            )}
+          </EditableEntries>
         </div>
       ) : canEdit ? null : (
         <NotLogged>No fluids logged this day.</NotLogged>

@@ -17,7 +17,7 @@ import { mealFormValues, toMealRequest, withoutClientId, type MealFormValues } f
 import { createRequestResolver } from '../utils/resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
 import { FoodPicker } from './food-picker';
 import { useFollowClock } from './use-clock';
 
@@ -27,7 +27,6 @@ const MEAL_NAMES = ['Breakfast', 'Lunch', 'Dinner', 'Snack', 'Pre-training', 'Po
 
 export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
   const [adding, setAdding] = useState(false);
-  const [editingId, setEditingId] = useState<string | null>(null);
   const remove = useDeleteMeal(athleteId);
   const t = day.totals;
 
@@ -57,45 +56,41 @@ export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
       </dl>
 
       {day.meals.length > 0 ? (
-        <EntryList label="Meals logged">
-          {day.meals.map((m) =>
-            editingId === m.id ? (
-              <li key={m.id} className="my-2 rounded-md bg-paper p-3">
-                <MealForm
-                  athleteId={athleteId}
-                  date={day.date}
-                  entry={m}
-                  onDelete={() => remove.mutateAsync(m.id)}
-                  now={now}
-                  onDone={() => setEditingId(null)}
-                />
-              </li>
-            ) : (
-              <EntryRow
-                key={m.id}
-                time={m.time}
-                describe={`${m.name} at ${m.time}`}
-                canEdit={canEdit}
-                onEdit={() => setEditingId(m.id)}
-              >
-                <p className="flex flex-wrap items-baseline justify-between gap-x-3">
-                  <span className="font-semibold">{m.name}</span>
-                  <span className="font-semibold tabular-nums">{formatEnergy(m.energyKcal)}</span>
-                </p>
-                {m.food ? (
-                  <p className="text-ink-muted">
-                    {m.food.name}, <span className="tabular-nums">{grams(m.food.quantityG)}</span>
-                  </p>
-                ) : null}
-                <p className="text-xs text-ink-muted tabular-nums">
-                  P {grams(m.proteinG)} · C {grams(m.carbohydrateG)} · F {grams(m.fatG)}
-                  {m.alcoholG ? ` · alcohol ${grams(m.alcoholG)}` : ''}
-                  {m.fibreG ? ` · fibre ${grams(m.fibreG)}` : ''}
-                </p>
-              </EntryRow>
-            ),
+        <EditableEntries
+          label="Meals logged"
+          entries={day.meals}
+          canEdit={canEdit}
+          describe={(m) => `${m.name} at ${m.time}`}
+          form={(m, done) => (
+            <MealForm
+              athleteId={athleteId}
+              date={day.date}
+              entry={m}
+              onDelete={() => remove.mutateAsync(m.id)}
+              now={now}
+              onDone={done}
+            />
           )}
-        </EntryList>
+        >
+          {(m) => (
+            <>
+              <p className="flex flex-wrap items-baseline justify-between gap-x-3">
+                <span className="font-semibold">{m.name}</span>
+                <span className="font-semibold tabular-nums">{formatEnergy(m.energyKcal)}</span>
+              </p>
+              {m.food ? (
+                <p className="text-ink-muted">
+                  {m.food.name}, <span className="tabular-nums">{grams(m.food.quantityG)}</span>
+                </p>
+              ) : null}
+              <p className="text-xs text-ink-muted tabular-nums">
+                P {grams(m.proteinG)} · C {grams(m.carbohydrateG)} · F {grams(m.fatG)}
+                {m.alcoholG ? ` · alcohol ${grams(m.alcoholG)}` : ''}
+                {m.fibreG ? ` · fibre ${grams(m.fibreG)}` : ''}
+              </p>
+            </>
+          )}
+        </EditableEntries>
       ) : !canEdit ? (
         <NotLogged>No meals logged this day.</NotLogged>
       ) : null}

@@ -20,7 +20,7 @@ import {
 import { createRequestResolver } from '../utils/resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
 import { useFollowClock } from './use-clock';
 
 type Supplement = DayView['supplements'][number];
@@ -56,7 +56,6 @@ interface SupplementsCardProps extends DayCardProps {
 
 export function SupplementsCard({ athleteId, day, canEdit, now, previous }: SupplementsCardProps) {
   const [adding, setAdding] = useState(false);
-  const [editingId, setEditingId] = useState<string | null>(null);
   const remove = useDeleteSupplement(athleteId);
   const suggestions = canEdit ? supplementSuggestions(previous, day.supplements) : [];
 
@@ -77,43 +76,39 @@ export function SupplementsCard({ athleteId, day, canEdit, now, previous }: Supp
       ) : null}
 
       {day.supplements.length > 0 ? (
-        <EntryList label="Supplements taken">
-          {day.supplements.map((s) =>
-            editingId === s.id ? (
-              <li key={s.id} className="my-2 rounded-md bg-paper p-3">
-                <SupplementForm
-                  athleteId={athleteId}
-                  date={day.date}
-                  entry={s}
-                  onDelete={() => remove.mutateAsync(s.id)}
-                  now={now}
-                  onDone={() => setEditingId(null)}
-                />
-              </li>
-            ) : (
-              <EntryRow
-                key={s.id}
-                time={s.time}
-                describe={`${supplementLabel(s)} at ${s.time}`}
-                canEdit={canEdit}
-                onEdit={() => setEditingId(s.id)}
-                lead={
-                  <span className="mt-0.5 flex size-5 shrink-0 items-center justify-center rounded-sm bg-on-plan text-sm text-on-accent">
-                    <CheckIcon />
-                  </span>
-                }
-              >
-                <span className="font-semibold">{s.name}</span>
-                {s.dose !== null ? (
-                  <span className="text-ink-muted tabular-nums">
-                    {' '}
-                    {formatNumber(s.dose, 3)} {s.doseUnit ?? ''}
-                  </span>
-                ) : null}
-              </EntryRow>
-            ),
+        <EditableEntries
+          label="Supplements taken"
+          entries={day.supplements}
+          canEdit={canEdit}
+          describe={(s) => `${supplementLabel(s)} at ${s.time}`}
+          form={(s, done) => (
+            <SupplementForm
+              athleteId={athleteId}
+              date={day.date}
+              entry={s}
+              onDelete={() => remove.mutateAsync(s.id)}
+              now={now}
+              onDone={done}
+            />
           )}
-        </EntryList>
+          lead={() => (
+            <span className="mt-0.5 flex size-5 shrink-0 items-center justify-center rounded-sm bg-on-plan text-sm text-on-accent">
+              <CheckIcon />
+            </span>
+          )}
+        >
+          {(s) => (
+            <>
+              <span className="font-semibold">{s.name}</span>
+              {s.dose !== null ? (
+                <span className="text-ink-muted tabular-nums">
+                  {' '}
+                  {formatNumber(s.dose, 3)} {s.doseUnit ?? ''}
+                </span>
+              ) : null}
+            </>
+          )}
+        </EditableEntries>
       ) : !canEdit ? (
         <NotLogged>No supplements logged this day.</NotLogged>
       ) : null}

@@ -31,7 +31,7 @@ import { createRequestResolver } from '../utils/resolver';
 import { hasUrgentSymptom } from '../utils/symptoms';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
-import { AddEntry, ConfirmDelete, EntryList, EntryRow } from './entry-row';
+import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
 import { useFollowClock } from './use-clock';
 
 const URGENT = new Set<Symptom>(URGENT_SYMPTOMS);
@@ -43,7 +43,6 @@ interface SymptomsCardProps extends DayCardProps {
 
 export function SymptomsCard({ athleteId, day, canEdit, now, onUrgent }: SymptomsCardProps) {
   const [adding, setAdding] = useState(false);
-  const [editingId, setEditingId] = useState<string | null>(null);
   const remove = useDeleteSymptomReport(athleteId);
 
   return (
@@ -62,40 +61,36 @@ export function SymptomsCard({ athleteId, day, canEdit, now, onUrgent }: Symptom
       }
     >
       {day.symptoms.length > 0 ? (
-        <EntryList label="Symptoms reported">
-          {day.symptoms.map((r) =>
-            editingId === r.id ? (
-              <li key={r.id} className="my-2 rounded-md bg-paper p-3">
-                <SymptomForm
-                  athleteId={athleteId}
-                  date={day.date}
-                  entry={r}
-                  onDelete={() => remove.mutateAsync(r.id)}
-                  now={now}
-                  onUrgent={onUrgent}
-                  onDone={() => setEditingId(null)}
-                />
-              </li>
-            ) : (
-              <EntryRow
-                key={r.id}
-                time={r.time}
-                describe={`symptom report at ${r.time}`}
-                canEdit={canEdit}
-                onEdit={() => setEditingId(r.id)}
-              >
-                <ul className="flex flex-wrap gap-1.5" aria-label={`Symptoms at ${r.time}`}>
-                  {r.symptoms.map((s) => (
-                    <li key={s}>
-                      <Badge tone={URGENT.has(s) ? 'off-plan' : 'caution'}>{SYMPTOM_LABELS[s]}</Badge>
-                    </li>
-                  ))}
-                </ul>
-                {r.note ? <p className="mt-1 text-ink-muted">{r.note}</p> : null}
-              </EntryRow>
-            ),
+        <EditableEntries
+          label="Symptoms reported"
+          entries={day.symptoms}
+          canEdit={canEdit}
+          describe={(r) => `symptom report at ${r.time}`}
+          form={(r, done) => (
+            <SymptomForm
+              athleteId={athleteId}
+              date={day.date}
+              entry={r}
+              onDelete={() => remove.mutateAsync(r.id)}
+              now={now}
+              onUrgent={onUrgent}
+              onDone={done}
+            />
           )}
-        </EntryList>
+        >
+          {(r) => (
+            <>
+              <ul className="flex flex-wrap gap-1.5" aria-label={`Symptoms at ${r.time}`}>
+                {r.symptoms.map((s) => (
+                  <li key={s}>
+                    <Badge tone={URGENT.has(s) ? 'off-plan' : 'caution'}>{SYMPTOM_LABELS[s]}</Badge>
+                  </li>
+                ))}
+              </ul>
+              {r.note ? <p className="mt-1 text-ink-muted">{r.note}</p> : null}
+            </>
+          )}
+        </EditableEntries>
       ) : !canEdit ? (
         <NotLogged>No symptoms reported this day.</NotLogged>
       ) : null}
