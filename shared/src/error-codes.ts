@@ -10,6 +10,8 @@ export const ERROR_CODES = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  /** A save met guardrail warnings the coach has not acknowledged; `fields` lists them by key. */
+  guardrails_unacknowledged: 409,
   token_invalid: 410,
   payload_too_large: 413,
   unsupported_media_type: 415,

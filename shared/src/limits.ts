@@ -32,6 +32,8 @@ export const LIMITS = {
   mealFatG: { min: 0, max: 500 },
   mealFibreG: { min: 0, max: 200 },
   mealAlcoholG: { min: 0, max: 300 },
+  /** Sodium in one meal entry, mg. */
+  mealSodiumMg: { min: 0, max: 20000 },
   /** Quantity of a food from the food list, g. */
   foodQuantityG: { min: 1, max: 5000 },
   /** Nutrients per 100 g of a team food. */

@@ -154,6 +154,8 @@ const macroFields = {
   fibreG: range(LIMITS.mealFibreG.min, LIMITS.mealFibreG.max, 'Fibre', ' g').nullable().optional(),
   /** Grams of alcohol (optional; 7 kcal/g). */
   alcoholG: range(LIMITS.mealAlcoholG.min, LIMITS.mealAlcoholG.max, 'Alcohol', ' g').nullable().optional(),
+  /** Sodium, mg (optional; from the label). */
+  sodiumMg: range(LIMITS.mealSodiumMg.min, LIMITS.mealSodiumMg.max, 'Sodium', ' mg').nullable().optional(),
 };
 
 /** A food from the food list: a team food (uuid) or a reference food (`ifct:<code>`). */

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { CYCLE_PHASES, FLUID_KINDS, SYMPTOMS, WEIGH_IN_TAGS } from './check-ins.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
+import { countdownDay, dayCaution, dayTargetsInForce } from './plans.js';
 
 /** How a value was typed, kept so it comes back exactly as typed. */
 const entered = <U extends readonly [string, ...string[]]>(units: U) =>
@@ -37,6 +38,8 @@ export const mealView = z.object({
   fatG: z.number(),
   fibreG: z.number().nullable(),
   alcoholG: z.number().nullable(),
+  /** Sodium, mg (from the food list, or typed with macros); null when unknown. */
+  sodiumMg: z.number().nullable(),
   energyKcal: z.number(),
 });
 
@@ -99,6 +102,8 @@ export const dayView = z.object({
     fatG: z.number(),
     fibreG: z.number(),
     alcoholG: z.number(),
+    /** Sodium from meals that carry it, mg. */
+    sodiumMg: z.number(),
   }),
   supplements: z.array(supplementView),
   evening: eveningView.nullable(),
@@ -106,8 +111,12 @@ export const dayView = z.object({
   /** Safety flags raised that day, for the coach. */
   flags: z.array(z.object({ id: z.uuid(), kind: z.string(), message: z.string(), createdAt: z.string() })),
   photos: z.array(photoView),
-  /** Targets in force (filled by the plans feature; null until a plan exists). */
-  targets: z.record(z.string(), z.unknown()).nullable(),
+  /** Targets in force that day (the plan version whose effectiveFrom is the latest ≤ date); null without a plan. */
+  targets: dayTargetsInForce.nullable(),
+  /** The countdown day this is (E-3…), or null. */
+  countdown: countdownDay.nullable(),
+  /** Cautions for the athlete: every countdown day and every day a guardrail warning was acknowledged. */
+  cautions: z.array(dayCaution),
   /** Drift per metric against the targets (empty until a plan exists). */
   drift: z.array(z.record(z.string(), z.unknown())),
 });
