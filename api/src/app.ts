@@ -12,12 +12,14 @@ import { webAppRouter } from './middleware/web-app.js';
 import { athletesRouter } from './routes/athletes.routes.js';
 import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
+import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
 import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { meRouter } from './routes/me.routes.js';
 import { photosRouter } from './routes/photos.routes.js';
+import { plansRouter } from './routes/plans.routes.js';
 import { posesRouter } from './routes/poses.routes.js';
 import { rosterRouter } from './routes/roster.routes.js';
 import { teamRouter } from './routes/team.routes.js';
@@ -69,6 +71,9 @@ export function createApp(deps: {
   api.use('/athletes', athletesRouter());
   // An athlete's days and entries (/athletes/:athleteId/days/…, /athletes/:athleteId/fluids/:entryId …).
   api.use('/athletes', checkInsRouter());
+  // The plan, its versions and countdowns (/athletes/:athleteId/plan…).
+  api.use('/athletes', plansRouter());
+  api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
   api.use(photosRouter());

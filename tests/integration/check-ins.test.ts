@@ -68,13 +68,15 @@ describe('the day view', () => {
       fluids: [],
       fluidTotalMl: 0,
       meals: [],
-      totals: { energyKcal: 0, proteinG: 0, carbohydrateG: 0, fatG: 0, fibreG: 0, alcoholG: 0 },
+      totals: { energyKcal: 0, proteinG: 0, carbohydrateG: 0, fatG: 0, fibreG: 0, alcoholG: 0, sodiumMg: 0 },
       supplements: [],
       evening: null,
       symptoms: [],
       flags: [],
       photos: [],
       targets: null,
+      countdown: null,
+      cautions: [],
       drift: [],
     });
     expect((await day(YESTERDAY)).isToday).toBe(false);
@@ -340,9 +342,16 @@ describe('fluids', () => {
 
 describe('meals', () => {
   it('computes a macro meal with the Atwater factors (REFERENCES.md §1 check 2: 2300 kcal)', async () => {
-    const res = await agent
-      .post(`${base}/days/${TODAY}/meals`)
-      .send(macroMealBody({ proteinG: 150, carbohydrateG: 250, fatG: 70, alcoholG: 10, fibreG: 12 }));
+    const res = await agent.post(`${base}/days/${TODAY}/meals`).send(
+      macroMealBody({
+        proteinG: 150,
+        carbohydrateG: 250,
+        fatG: 70,
+        alcoholG: 10,
+        fibreG: 12,
+        sodiumMg: 850,
+      }),
+    );
     expect(res.status).toBe(201);
     expect(res.body.data.meals[0]).toMatchObject({
       source: 'macros',
@@ -352,6 +361,7 @@ describe('meals', () => {
       fatG: 70,
       fibreG: 12,
       alcoholG: 10,
+      sodiumMg: 850,
       energyKcal: 2300,
     });
     expect(res.body.data.totals).toEqual({
@@ -361,6 +371,7 @@ describe('meals', () => {
       fatG: 70,
       fibreG: 12,
       alcoholG: 10,
+      sodiumMg: 850,
     });
   });
 
@@ -376,6 +387,8 @@ describe('meals', () => {
     expect(meal.carbohydrateG).toBeCloseTo(89.97, 9);
     expect(meal.fatG).toBeCloseTo(8.61, 9);
     expect(meal.fibreG).toBeCloseTo(10.53, 9);
+    // Sodium: the package lists 0.0027 g per 100 g (2.7 mg) → 4.05 mg in 150 g.
+    expect(meal.sodiumMg).toBeCloseTo(4.05, 9);
   });
 
   it('computes a team food meal and adds up the day', async () => {
@@ -397,8 +410,18 @@ describe('meals', () => {
     expect(res.status).toBe(201);
     const meal = res.body.data.meals.find((m: { source: string }) => m.source === 'food');
     // Per 100 g: 4·10 + 4·50 + 9·5 = 285 kcal; 200 g → 570 kcal.
-    expect(meal).toMatchObject({ proteinG: 20, carbohydrateG: 100, fatG: 10, fibreG: 12, energyKcal: 570 });
+    // Sodium 40 mg per 100 g → 80 mg; the macros meal typed none, so the day counts 80 mg.
+    expect(meal).toMatchObject({
+      proteinG: 20,
+      carbohydrateG: 100,
+      fatG: 10,
+      fibreG: 12,
+      sodiumMg: 80,
+      energyKcal: 570,
+    });
     expect(meal.food).toEqual({ id: food.id, name: 'Overnight oats', quantityG: 200 });
+    const typed = res.body.data.meals.find((m: { source: string }) => m.source === 'macros');
+    expect(typed.sodiumMg).toBeNull();
     expect(res.body.data.totals).toEqual({
       energyKcal: 4 * 40 + 4 * 60 + 9 * 15 + 570,
       proteinG: 60,
@@ -406,6 +429,7 @@ describe('meals', () => {
       fatG: 25,
       fibreG: 12,
       alcoholG: 0,
+      sodiumMg: 80,
     });
   });
 

@@ -14,12 +14,17 @@ import { SupplementEntry } from '../../api/src/entities/supplement-entry.entity.
 import { SymptomReport } from '../../api/src/entities/symptom-report.entity.js';
 import { WeighIn } from '../../api/src/entities/weigh-in.entity.js';
 import { AthleteShare } from '../../api/src/entities/athlete-share.entity.js';
+import { CountdownTemplate } from '../../api/src/entities/countdown-template.entity.js';
+import { GuardrailAcknowledgement } from '../../api/src/entities/guardrail-acknowledgement.entity.js';
+import { PlanVersion } from '../../api/src/entities/plan-version.entity.js';
 import { Consent } from '../../api/src/entities/consent.entity.js';
 import { Invitation } from '../../api/src/entities/invitation.entity.js';
 import { OutboxMessage } from '../../api/src/entities/outbox-message.entity.js';
 import { Team } from '../../api/src/entities/team.entity.js';
 import { User } from '../../api/src/entities/user.entity.js';
+import { GUARDRAIL_DEFAULTS } from '@driftmark/shared';
 import { addDays, localDate } from '../../api/src/seed/calendar.js';
+import { DEMO_TEMPLATES, planDemoVersions } from '../../api/src/seed/demo-plans.js';
 import { DEMO_ATHLETES, DEMO_PASSWORD, DEMO_STAFF, DEMO_TEAM_NAME } from '../../api/src/seed/demo-team.js';
 import { seedDemo, SeedRefusedError } from '../../api/src/seed/seed-demo.js';
 import { planDemoHistory } from '../../api/src/seed/seed-history.js';
@@ -34,6 +39,18 @@ const seed = (options: { appMode?: string; now?: Date } = {}) =>
   seedDemo(t.dataSource, { storage, ...options });
 /** What the generators produce for the seed date, to compare the database with. */
 const plans = planDemoHistory(DEMO_ATHLETES, seededAt);
+/** The plan versions the seed writes (template ids do not change what is counted). */
+const planVersions = plans.flatMap(({ def, history }) =>
+  planDemoVersions({
+    def,
+    history,
+    now: seededAt,
+    floors: GUARDRAIL_DEFAULTS,
+    templates: new Map(
+      DEMO_TEMPLATES.map((t) => [t.key, { id: '00000000-0000-4000-8000-000000000001', ...t }]),
+    ),
+  }),
+);
 
 function storedFiles(): number {
   return readdirSync(uploadsDir, { recursive: true, withFileTypes: true }).filter((e) => e.isFile()).length;
@@ -58,6 +75,9 @@ async function counts() {
     flags: await db.getRepository(AthleteFlag).count(),
     photos: await db.getRepository(ConditionPhoto).count(),
     files: storedFiles(),
+    templates: await db.getRepository(CountdownTemplate).count(),
+    planVersions: await db.getRepository(PlanVersion).count(),
+    acknowledgements: await db.getRepository(GuardrailAcknowledgement).count(),
   };
 }
 
@@ -115,7 +135,11 @@ describe('seedDemo', () => {
       photos: plans.reduce((a, p) => a + p.photos.length, 0),
       // Two stored sizes per photo.
       files: 2 * plans.reduce((a, p) => a + p.photos.length, 0),
+      templates: 3,
+      planVersions: planVersions.length,
+      acknowledgements: planVersions.reduce((a, v) => a + v.acknowledgements.length, 0),
     });
+    expect(first.acknowledgements).toBeGreaterThan(0);
     expect(first.weighIns).toBeGreaterThan(500);
     expect(first.photos).toBeGreaterThan(100);
 
@@ -215,6 +239,46 @@ describe('seedDemo', () => {
     const list = await coach.get(`/api/athletes/${athlete.id}/days?from=${addDays(today, -130)}&to=${today}`);
     expect(list.status).toBe(200);
     expect(list.body.data).toHaveLength(plan.history.days.filter((d) => !d.missed).length);
+  });
+
+  it('gives every athlete a plan with history, and the countdown athlete today’s countdown day', async () => {
+    const coach = await signedIn(t.app, 'coach@driftmark.test', DEMO_PASSWORD);
+    const athletes = await t.dataSource.getRepository(Athlete).find({ relations: { user: true } });
+    for (const athlete of athletes) {
+      const res = await coach.get(`/api/athletes/${athlete.id}/plan`);
+      expect(res.status, athlete.user!.email).toBe(200);
+      expect(res.body.data.versions.length, athlete.user!.email).toBeGreaterThanOrEqual(2);
+      expect(res.body.data.current, athlete.user!.email).not.toBeNull();
+    }
+    const templates = await coach.get('/api/countdown-templates');
+    expect(templates.status).toBe(200);
+    expect(templates.body.data.map((x: { eventType: string }) => x.eventType).sort()).toEqual([
+      'shoot',
+      'show',
+      'weigh_in',
+    ]);
+
+    const agent = await signedIn(t.app, 'athlete@driftmark.test', DEMO_PASSWORD);
+    const me = await agent.get('/api/me');
+    const today = localDate(seededAt, 'Europe/Madrid');
+    const res = await agent.get(`/api/athletes/${me.body.data.athleteId}/days/${today}`);
+    expect(res.status).toBe(200);
+    const day = res.body.data;
+    expect(day.countdown).toMatchObject({
+      eventDate: '2026-12-05',
+      offset: -4,
+      dayLabel: 'E-4',
+      label: 'Steady',
+    });
+    expect(day.targets.source).toEqual({ kind: 'date', label: 'Steady' });
+    // 0.85 × the usual 2,600 kcal.
+    expect(day.targets.targets.energyKcal).toBeCloseTo(2210, 6);
+    expect(day.cautions[0]).toMatchObject({ code: 'countdown', severity: 'strong' });
+    expect(day.cautions[0].message).toMatch(/^E-4 of your countdown/);
+    // E-3 adds the carbohydrate-load warning the coach acknowledged.
+    const e3 = await agent.get(`/api/athletes/${me.body.data.athleteId}/days/2026-12-02`);
+    expect(e3.body.data.cautions.map((c: { code: string }) => c.code)).toEqual(['countdown', 'carb_load']);
+    expect(e3.body.data.cautions[1].acknowledgedAt).not.toBeNull();
   });
 
   it('keeps the typed units: a lb athlete’s weigh-ins come back in lb', async () => {

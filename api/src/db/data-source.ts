@@ -6,13 +6,16 @@ import { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { Consent } from '../entities/consent.entity.js';
+import { CountdownTemplate } from '../entities/countdown-template.entity.js';
 import { EveningLog } from '../entities/evening-log.entity.js';
 import { FluidEntry } from '../entities/fluid-entry.entity.js';
 import { Food } from '../entities/food.entity.js';
+import { GuardrailAcknowledgement } from '../entities/guardrail-acknowledgement.entity.js';
 import { Invitation } from '../entities/invitation.entity.js';
 import { MealEntry } from '../entities/meal-entry.entity.js';
 import { OutboxMessage } from '../entities/outbox-message.entity.js';
 import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
+import { PlanVersion } from '../entities/plan-version.entity.js';
 import { Session } from '../entities/session.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
@@ -44,6 +47,10 @@ export const ENTITIES = [
   Food,
   // Condition photos
   ConditionPhoto,
+  // Plans, countdown templates and guardrails
+  PlanVersion,
+  GuardrailAcknowledgement,
+  CountdownTemplate,
 ];
 
 export function createDataSource(

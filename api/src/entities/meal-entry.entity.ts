@@ -58,4 +58,8 @@ export class MealEntry extends ClientDayEntry {
 
   @Column({ name: 'energy_kcal', type: 'double precision' })
   energyKcal: number;
+
+  /** Sodium as eaten, mg: typed with macros, or the food's per-100 g value × quantity / 100; null when unknown. */
+  @Column({ name: 'sodium_mg', type: 'double precision', nullable: true })
+  sodiumMg: number | null;
 }

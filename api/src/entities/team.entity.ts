@@ -1,3 +1,4 @@
+import type { GuardrailFloors } from '@driftmark/shared';
 import { Column, Entity } from 'typeorm';
 import { BaseRecord } from './base.entity.js';
 
@@ -7,6 +8,8 @@ export interface TeamSettings {
   reminderHour?: number;
   /** Condition-photo poses beyond the three relaxed ones (PUT /api/team/poses). */
   poses?: string[];
+  /** Guardrail floors for energy and water per sex (PUT /api/team/guardrails); GUARDRAIL_DEFAULTS without. */
+  guardrails?: GuardrailFloors;
 }
 
 @Entity({ name: 'teams' })

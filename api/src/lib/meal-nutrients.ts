@@ -8,6 +8,8 @@ export interface MealNutrients {
   fibreG: number | null;
   alcoholG: number | null;
   energyKcal: number;
+  /** mg; null when unknown (not typed, or the food lists none). */
+  sodiumMg: number | null;
 }
 
 /** A food's nutrients per 100 g (energy already decided by the food's source). */
@@ -18,6 +20,8 @@ export interface Per100g {
   fatG: number;
   fibreG: number | null;
   alcoholG?: number | null;
+  /** mg per 100 g; null or absent when the food lists none. */
+  sodiumMg?: number | null;
 }
 
 /** A meal typed as grams: energy from the Atwater general factors (fibre carries none). */
@@ -27,6 +31,7 @@ export function macroMealNutrients(m: {
   fatG: number;
   fibreG?: number | null;
   alcoholG?: number | null;
+  sodiumMg?: number | null;
 }): MealNutrients {
   return {
     proteinG: m.proteinG,
@@ -35,6 +40,7 @@ export function macroMealNutrients(m: {
     fibreG: m.fibreG ?? null,
     alcoholG: m.alcoholG ?? null,
     energyKcal: atwaterKcal(m),
+    sodiumMg: m.sodiumMg ?? null,
   };
 }
 
@@ -49,12 +55,21 @@ export function foodMealNutrients(per100g: Per100g, quantityG: number): MealNutr
     fibreG: scale(per100g.fibreG),
     alcoholG: scale(per100g.alcoholG),
     energyKcal: per100g.energyKcal * f,
+    sodiumMg: scale(per100g.sodiumMg),
   };
 }
 
-/** Sums of a day's meals (null fibre or alcohol counts as none). */
+/** Sums of a day's meals (null fibre, alcohol or sodium counts as none). */
 export function sumNutrients(meals: readonly MealNutrients[]) {
-  const total = { energyKcal: 0, proteinG: 0, carbohydrateG: 0, fatG: 0, fibreG: 0, alcoholG: 0 };
+  const total = {
+    energyKcal: 0,
+    proteinG: 0,
+    carbohydrateG: 0,
+    fatG: 0,
+    fibreG: 0,
+    alcoholG: 0,
+    sodiumMg: 0,
+  };
   for (const m of meals) {
     total.energyKcal += m.energyKcal;
     total.proteinG += m.proteinG;
@@ -62,6 +77,7 @@ export function sumNutrients(meals: readonly MealNutrients[]) {
     total.fatG += m.fatG;
     total.fibreG += m.fibreG ?? 0;
     total.alcoholG += m.alcoholG ?? 0;
+    total.sodiumMg += m.sodiumMg ?? 0;
   }
   return total;
 }

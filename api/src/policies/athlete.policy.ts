@@ -23,6 +23,8 @@ export const ATHLETE_ACTIONS = [
   'endCoaching',
   /** Fill in the intake form: only the athlete. */
   'completeIntake',
+  /** Write the athlete's plan (new versions, countdowns); reading it is `read`. */
+  'plan',
 ] as const;
 export type AthleteAction = (typeof ATHLETE_ACTIONS)[number];
 
@@ -48,11 +50,11 @@ export function athleteRelationship(actor: Actor, target: AthleteTarget): Athlet
 const RULES: Record<AthleteRelationship, readonly AthleteAction[]> = {
   self: ['read', 'update', 'log', 'completeIntake'],
   otherAthlete: [],
-  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching'],
-  assignedCoach: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching'],
-  // A coach or assistant the athlete is shared with works on them but never deletes, re-shares
-  // or ends the coaching.
-  sharedStaff: ['read', 'update', 'annotate'],
+  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan'],
+  assignedCoach: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan'],
+  // A coach or assistant the athlete is shared with works on them (the plan included) but never
+  // deletes, re-shares or ends the coaching.
+  sharedStaff: ['read', 'update', 'annotate', 'plan'],
   unrelatedStaff: [],
   otherTeam: [],
 };

@@ -20,6 +20,7 @@ const ACTIONS = {
   managePoses: { kind: 'managePoses' },
   viewRoster: { kind: 'viewRoster' },
   viewMembers: { kind: 'viewMembers' },
+  viewGuardrails: { kind: 'viewGuardrails' },
   ...(Object.fromEntries(
     INVITABLE_ROLES.map((role) => [`invite:${role}`, { kind: 'invite', role }]),
   ) as Record<`invite:${InvitableRole}`, TeamAction>),
@@ -31,11 +32,11 @@ const N = false;
 
 // prettier-ignore
 const EXPECTED: Record<ActorName, Record<ActionName, boolean>> = {
-  owner:                   { read: Y, manageSettings: Y, managePoses: Y, viewRoster: Y, viewMembers: Y, 'invite:athlete': Y, 'invite:coach': Y, 'invite:assistant': Y },
-  coach:                   { read: Y, manageSettings: N, managePoses: Y, viewRoster: Y, viewMembers: Y, 'invite:athlete': Y, 'invite:coach': N, 'invite:assistant': N },
-  assistant:               { read: Y, manageSettings: N, managePoses: N, viewRoster: Y, viewMembers: Y, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
-  athlete:                 { read: Y, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
-  'owner of another team': { read: N, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  owner:                   { read: Y, manageSettings: Y, managePoses: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': Y, 'invite:assistant': Y },
+  coach:                   { read: Y, manageSettings: N, managePoses: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': N, 'invite:assistant': N },
+  assistant:               { read: Y, manageSettings: N, managePoses: N, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  athlete:                 { read: Y, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  'owner of another team': { read: N, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
 };
 
 describe('team policy', () => {

@@ -13,6 +13,8 @@ export type TeamAction =
   | { kind: 'managePoses' }
   | { kind: 'viewRoster' }
   | { kind: 'viewMembers' }
+  /** Read the team's guardrail floors (changing them is manageSettings). */
+  | { kind: 'viewGuardrails' }
   | { kind: 'invite'; role: InvitableRole };
 
 /** Who may invite whom: the owner anyone, a coach only athletes, nobody else. */
@@ -35,6 +37,7 @@ export function canOnTeam(actor: Actor, action: TeamAction, team: TeamTarget): b
       return actor.role === 'owner' || actor.role === 'coach';
     case 'viewRoster':
     case 'viewMembers':
+    case 'viewGuardrails':
       return staff;
     case 'invite':
       return INVITES[actor.role].includes(action.role);

@@ -48,6 +48,7 @@ export function presentMeal(m: MealEntry): Of<'meals'>[number] {
     fatG: m.fatG,
     fibreG: m.fibreG,
     alcoholG: m.alcoholG,
+    sodiumMg: m.sodiumMg,
     energyKcal: m.energyKcal,
   };
 }
@@ -105,6 +106,8 @@ export interface DayParts {
   symptoms: SymptomReport[];
   flags: AthleteFlag[];
   photos: DayView['photos'];
+  /** The plan's part, worked out by the day service. */
+  plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -124,7 +127,9 @@ export function presentDay(p: DayParts): DayView {
     symptoms: p.symptoms.map(presentSymptom),
     flags: p.flags.map(presentFlag),
     photos: p.photos,
-    targets: null,
+    targets: p.plan.targets,
+    countdown: p.plan.countdown,
+    cautions: p.plan.cautions,
     drift: [],
   };
 }

@@ -1,3 +1,4 @@
+import { GUARDRAIL_DEFAULTS, guardrailFloors, type GuardrailFloors } from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
 import { Team } from '../entities/team.entity.js';
 
@@ -10,5 +11,23 @@ export class TeamRepository {
 
   create(input: Pick<Team, 'name'> & Partial<Pick<Team, 'settings'>>): Promise<Team> {
     return this.manager.save(this.manager.create(Team, { settings: {}, ...input }));
+  }
+
+  /** The team's guardrail floors (`settings.guardrails`), or the defaults when unset or malformed. */
+  async guardrailFloors(teamId: string): Promise<GuardrailFloors> {
+    const team = await this.manager.findOne(Team, {
+      where: { id: teamId },
+      select: { id: true, settings: true },
+    });
+    const parsed = guardrailFloors.safeParse(team?.settings?.guardrails);
+    return parsed.success ? parsed.data : GUARDRAIL_DEFAULTS;
+  }
+
+  /** Replaces the floors in one statement, leaving the other settings as they are. */
+  async replaceGuardrailFloors(teamId: string, floors: GuardrailFloors): Promise<void> {
+    await this.manager.query(
+      `UPDATE "teams" SET "settings" = "settings" || jsonb_build_object('guardrails', $2::jsonb), "updated_at" = now() WHERE "id" = $1`,
+      [teamId, JSON.stringify(floors)],
+    );
   }
 }

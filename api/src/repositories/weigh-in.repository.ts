@@ -22,6 +22,16 @@ export class WeighInRepository {
     return this.manager.findOneBy(WeighIn, { athleteId, localDate: date });
   }
 
+  /** The weigh-ins between two local dates (inclusive), oldest first, as date and kg. */
+  async listBetween(athleteId: string, from: string, to: string): Promise<{ date: string; kg: number }[]> {
+    // local_date::text keeps dates as YYYY-MM-DD strings.
+    return this.manager.query<{ date: string; kg: number }[]>(
+      `SELECT local_date::text AS date, weight_kg AS kg FROM weigh_ins
+        WHERE athlete_id = $1 AND local_date BETWEEN $2 AND $3 ORDER BY local_date`,
+      [athleteId, from, to],
+    );
+  }
+
   /** Inserts the day's weigh-in or replaces it (one statement, so two at once cannot both insert). */
   async upsert(values: WeighInValues): Promise<void> {
     await this.manager

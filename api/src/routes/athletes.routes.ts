@@ -1,4 +1,4 @@
-import { intakeRequest, shareAthleteRequest, uuid } from '@driftmark/shared';
+import { intakeRequest, shareAthleteRequest, updateEventRequest, uuid } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
@@ -14,6 +14,7 @@ import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
 import { AthleteService } from '../services/athlete.service.js';
+import { PlanService } from '../services/plan.service.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const shareParams = z.object({ athleteId: uuid, userId: uuid });
@@ -54,6 +55,17 @@ export function athletesRouter(): Router {
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'completeIntake');
       res.json({ data: await new AthleteService(req.ctx).completeIntake(athlete, req.body) });
+    },
+  );
+
+  // The coach moves the event; the answer offers to move the plan's countdown with it.
+  router.patch(
+    '/:athleteId/event',
+    authenticate(),
+    validate({ params: athleteParams, body: updateEventRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'update');
+      res.json({ data: await new PlanService(req.ctx).updateEvent(athlete, req.body) });
     },
   );
 

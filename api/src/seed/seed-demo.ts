@@ -1,6 +1,7 @@
 /**
  * Writes the demo team (demo-team.ts) into an empty database, with about four months of daily
- * check-ins per athlete (history.ts) and placeholder condition photos (photos.ts). Idempotent:
+ * check-ins per athlete (history.ts), placeholder condition photos (photos.ts), the team's countdown
+ * templates and each athlete's plan versions (demo-plans.ts). Idempotent:
  * when the demo owner already exists nothing changes. Refused in production.
  */
 import bcrypt from 'bcryptjs';
@@ -27,6 +28,7 @@ import {
 } from './demo-team.js';
 import { createRandom } from './random.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
+import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 
 /** bcrypt cost for the demo password (the same cost real accounts use). */
 const BCRYPT_COST = 12;
@@ -109,8 +111,10 @@ export async function seedDemo(
       const photos = storage ? renderDemoPhotos(plans) : null;
       rendering = photos ?? rendering;
       photos?.catch(() => {});
-      const athleteIds = await writeDemoTeam(manager, passwordHash, now);
+      const ids = await writeDemoTeam(manager, passwordHash, now);
+      const { athleteIds } = ids;
       await writeDemoCheckIns(manager, plans, athleteIds);
+      await writeDemoPlans(manager, plans, ids, now);
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }
@@ -128,12 +132,12 @@ async function ownerExists(manager: EntityManager): Promise<boolean> {
   return manager.getRepository(User).exists({ where: { email: DEMO_OWNER_EMAIL } });
 }
 
-/** Writes the team, staff and athletes; returns the athlete ids by definition key. */
+/** Writes the team, staff and athletes; returns the team, owner and assistant ids and the athlete ids by definition key. */
 async function writeDemoTeam(
   manager: EntityManager,
   passwordHash: string,
   now: Date,
-): Promise<Map<string, string>> {
+): Promise<DemoPlanIds & { athleteIds: Map<string, string> }> {
   const athleteIds = new Map<string, string>();
   const random = createRandom(DEMO_SEED);
   const team = await manager
@@ -207,5 +211,5 @@ async function writeDemoTeam(
         .save({ athleteId: athlete.id, userId: assistant.id, sharedById: owner.id });
     }
   }
-  return athleteIds;
+  return { teamId: team.id, ownerId: owner.id, assistantId: assistant.id, athleteIds };
 }

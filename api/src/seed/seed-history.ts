@@ -24,7 +24,7 @@ import type { DemoAthleteDefinition } from './demo-team.js';
 import { generateHistory, type AthleteHistory } from './history.js';
 import { planPhotos, renderPlaceholderPhoto, type PlannedPhoto } from './photos.js';
 
-/** Rows per INSERT: the widest table (meals, 17 columns) stays far below PostgreSQL's 65,535 parameters. */
+/** Rows per INSERT: the widest table (meals, 18 columns) stays far below PostgreSQL's 65,535 parameters. */
 const CHUNK_ROWS = 1000;
 
 export interface DemoHistoryPlan {
@@ -160,6 +160,8 @@ export async function writeDemoCheckIns(
           fibreG: m.fibreG,
           alcoholG: m.alcoholG,
           energyKcal: m.energyKcal,
+          // Generated meals are typed macros without a label: sodium unknown.
+          sodiumMg: null,
         });
       }
       for (const s of day.supplements) {

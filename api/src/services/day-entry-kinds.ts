@@ -91,6 +91,7 @@ async function mealFood(
         fatG: prev.fatG * f,
         fibreG: prev.fibreG === null ? null : prev.fibreG * f,
         alcoholG: prev.alcoholG === null ? null : prev.alcoholG * f,
+        sodiumMg: prev.sodiumMg === null ? null : prev.sodiumMg * f,
       },
     };
   }
@@ -137,6 +138,7 @@ export const mealKind: EntryKind<MealEntry, MealEntryRequest> = {
           fatG: e.fatG,
           fibreG: e.fibreG,
           alcoholG: e.alcoholG,
+          sodiumMg: e.sodiumMg,
         },
 };
 

@@ -1,7 +1,16 @@
-import type { DaySummary, DayView } from '@driftmark/shared';
+import {
+  cautionsForDay,
+  countdownDayLabel,
+  dayEntryFor,
+  resolveTargets,
+  versionInForce,
+  type DaySummary,
+  type DayView,
+} from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { FluidEntry } from '../entities/fluid-entry.entity.js';
 import { MealEntry } from '../entities/meal-entry.entity.js';
+import type { PlanVersion } from '../entities/plan-version.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
@@ -13,11 +22,74 @@ import { AthleteFlagRepository } from '../repositories/athlete-flag.repository.j
 import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { DayHistoryRepository } from '../repositories/day-history.repository.js';
 import { EveningLogRepository } from '../repositories/evening-log.repository.js';
+import { PlanRepository, type AcknowledgementWithAuthor } from '../repositories/plan.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import { dayPhotoSource } from './day-photos.service.js';
 
 /** The longest range the history list answers at once, in days. */
 export const HISTORY_MAX_DAYS = 400;
+
+type DayPlan = Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
+
+/**
+ * What the plan says about `date`: the targets of the version in force that day, resolved with
+ * that version's own baseline snapshot (so a later version or a new weigh-in never changes a past
+ * day), the countdown day it is, and the cautions the athlete sees.
+ */
+export function planForDay(
+  version: PlanVersion | null,
+  acknowledgements: readonly AcknowledgementWithAuthor[],
+  date: string,
+): DayPlan {
+  if (!version) return { targets: null, countdown: null, cautions: [] };
+  const { content } = version;
+  const entry = dayEntryFor(content, date);
+  const targets = entry.kind === 'date' ? entry.override.targets : entry.dayType.targets;
+  const offset = entry.kind === 'date' ? entry.override.countdownOffset : null;
+  return {
+    targets: {
+      versionId: version.id,
+      versionNumber: version.number,
+      effectiveFrom: version.effectiveFrom,
+      source:
+        entry.kind === 'date'
+          ? { kind: 'date', label: entry.override.label }
+          : { kind: 'pattern', dayTypeKey: entry.dayType.key, dayTypeName: entry.dayType.name },
+      targets: resolveTargets(targets, version.baseline),
+      tolerances: content.tolerances,
+    },
+    countdown:
+      offset !== null && entry.kind === 'date' && content.countdown
+        ? {
+            eventDate: content.countdown.eventDate,
+            eventType: content.countdown.eventType,
+            offset,
+            dayLabel: countdownDayLabel(offset),
+            label: entry.override.label,
+          }
+        : null,
+    cautions: cautionsForDay({
+      content,
+      date,
+      acknowledgements: acknowledgements.map((a) => ({
+        code: a.code,
+        severity: a.severity,
+        scope: a.scope,
+        message: a.message,
+        source: a.source,
+        at: a.acknowledgedAt.toISOString(),
+      })),
+    }),
+  };
+}
+
+/** The version in force on `date` with its acknowledgements (two queries). */
+async function loadDayPlan(manager: EntityManager, athleteId: string, date: string): Promise<DayPlan> {
+  const plans = new PlanRepository(manager);
+  const version = versionInForce(await plans.listVersions(athleteId), date);
+  const acks = version ? ((await plans.acknowledgementsByVersion([version.id])).get(version.id) ?? []) : [];
+  return planForDay(version, acks, date);
+}
 
 /** Everything the athlete logged on `date` (their local date), as the day view. */
 export async function loadDayView(
@@ -27,7 +99,7 @@ export async function loadDayView(
   now: Date,
 ): Promise<DayView> {
   const timeZone = athlete.user.timeZone;
-  const [weighIn, fluids, meals, supplements, evening, symptoms, flags, photos] = await Promise.all([
+  const [weighIn, fluids, meals, supplements, evening, symptoms, flags, photos, plan] = await Promise.all([
     new WeighInRepository(manager).findForDay(athlete.id, date),
     new DayEntryRepository(manager, FluidEntry).listForDay(athlete.id, date),
     new DayEntryRepository(manager, MealEntry).listForDay(athlete.id, date),
@@ -36,6 +108,7 @@ export async function loadDayView(
     new DayEntryRepository(manager, SymptomReport).listForDay(athlete.id, date),
     new AthleteFlagRepository(manager).listForDay(athlete.id, date),
     dayPhotoSource(manager).forDay(athlete.id, date),
+    loadDayPlan(manager, athlete.id, date),
   ]);
   return presentDay({
     athleteId: athlete.id,
@@ -50,6 +123,7 @@ export async function loadDayView(
     symptoms,
     flags,
     photos,
+    plan,
   });
 }
 

@@ -43,6 +43,7 @@ export async function resolveFood(
       fatG: food.fatG,
       fibreG: food.fibreG,
       alcoholG: food.alcoholG,
+      sodiumMg: food.sodiumMg,
     },
   };
 }

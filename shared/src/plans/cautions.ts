@@ -1,4 +1,11 @@
 import type { AcknowledgementView, DayCaution, PlanContent } from '../schemas/plans.js';
+import { STOP_SIGNS_TEXT } from './guardrails.js';
+import { countdownDayLabel, dayEntryFor } from './resolve.js';
+
+/** Peak-week practices rest on little evidence; water and electrolyte manipulation may do harm. */
+const COUNTDOWN_SOURCE =
+  'Escalante et al. 2021, BMC Sports Sci Med Rehabil 13:68; Homer, Cross & Helms 2024, Sports Med Open, ' +
+  'doi:10.1186/s40798-024-00674-z';
 
 /**
  * The cautions the athlete sees on `date` under a version: the standing countdown caution on a
@@ -13,6 +20,46 @@ export function cautionsForDay(input: {
     'code' | 'severity' | 'scope' | 'message' | 'source' | 'at'
   >[];
 }): DayCaution[] {
-  void input;
-  throw new Error('not implemented');
+  const { content, date } = input;
+  const entry = dayEntryFor(content, date);
+  const cautions: DayCaution[] = [];
+
+  if (entry.kind === 'date' && entry.override.countdownOffset != null) {
+    cautions.push({
+      code: 'countdown',
+      severity: 'strong',
+      message:
+        `${countdownDayLabel(entry.override.countdownOffset)} of your countdown: water, sodium and energy ` +
+        `change day by day. ${STOP_SIGNS_TEXT}`,
+      source: COUNTDOWN_SOURCE,
+      acknowledgedAt: null,
+    });
+  }
+
+  for (const a of input.acknowledgements) {
+    const covers =
+      a.scope.kind === 'plan' ||
+      (a.scope.kind === 'date' && a.scope.date === date) ||
+      (a.scope.kind === 'day_type' && entry.kind === 'pattern' && entry.dayType.key === a.scope.key);
+    if (covers) {
+      cautions.push({
+        code: a.code,
+        severity: a.severity,
+        message: a.message,
+        source: a.source,
+        acknowledgedAt: a.at,
+      });
+    }
+  }
+
+  // Strong ones first, the countdown caution leading.
+  return cautions
+    .map((c, i) => ({ c, i }))
+    .sort((x, y) => rank(x.c) - rank(y.c) || x.i - y.i)
+    .map(({ c }) => c);
+}
+
+function rank(c: DayCaution): number {
+  if (c.code === 'countdown') return 0;
+  return c.severity === 'strong' ? 1 : 2;
 }

@@ -7,17 +7,11 @@ export type MacroName = 'protein' | 'carbohydrate' | 'fat';
  * FAO 2003 FNP 77; Merrill & Watt 1955/1973.
  */
 export function gramsFromShare(energyKcal: number, pct: number, macro: MacroName): number {
-  void energyKcal;
-  void pct;
-  void macro;
-  void ATWATER_KCAL_PER_G;
-  throw new Error('not implemented');
+  return (energyKcal * pct) / 100 / ATWATER_KCAL_PER_G[macro];
 }
 
 /** Share of `energyKcal` (%) that `grams` of a macro supply: 100·g·f/E. */
 export function shareFromGrams(grams: number, macro: MacroName, energyKcal: number): number {
-  void grams;
-  void macro;
-  void energyKcal;
-  throw new Error('not implemented');
+  if (energyKcal <= 0) return 0;
+  return (100 * grams * ATWATER_KCAL_PER_G[macro]) / energyKcal;
 }

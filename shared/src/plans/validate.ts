@@ -1,4 +1,14 @@
-import type { PlanBaseline, PlanContent, TemplateRequest } from '../schemas/plans.js';
+import type { DayTargets, PlanBaseline, PlanContent, TemplateRequest } from '../schemas/plans.js';
+import { WEEKDAYS, WEEKDAY_LABELS } from '../schemas/plans.js';
+import { atwaterKcal } from '../nutrition.js';
+import { fmt } from './format.js';
+import type { MacroName } from './macros.js';
+import { countdownDayLabel, resolveTargets } from './resolve.js';
+
+const MACROS: readonly MacroName[] = ['protein', 'carbohydrate', 'fat'];
+const NO_BASELINE: PlanBaseline = { usualWaterMl: null, usualEnergyKcal: null, weightKg: null, sex: null };
+/** Shares must add up to 100 % within this many points (issue 4; common practice, no source). */
+const SHARE_TOLERANCE_PCT = 1;
 
 /**
  * Refusals beyond the zod shape, as path → message (empty when fine): weekdays naming a missing day
@@ -10,13 +20,114 @@ export function validatePlanContent(
   content: PlanContent,
   baseline: PlanBaseline | null,
 ): Record<string, string> {
-  void content;
-  void baseline;
-  throw new Error('not implemented');
+  const errors: Record<string, string> = {};
+  const add = (path: string, message: string) => {
+    errors[path] ??= message;
+  };
+
+  const keys = new Set<string>();
+  content.dayTypes.forEach((t, i) => {
+    if (keys.has(t.key)) add(`dayTypes.${i}.key`, `Another day type already uses the key "${t.key}"`);
+    keys.add(t.key);
+    dayTargetErrors(t.targets, `dayTypes.${i}.targets`, baseline, add);
+  });
+
+  for (const day of WEEKDAYS) {
+    const key = content.weekdays[day];
+    if (!keys.has(key)) {
+      add(`weekdays.${day}`, `${WEEKDAY_LABELS[day]} follows day type "${key}", which is not in this plan`);
+    }
+  }
+
+  const dates = new Set<string>();
+  content.dates.forEach((d, i) => {
+    if (dates.has(d.date)) add(`dates.${i}.date`, `${d.date} is listed twice`);
+    dates.add(d.date);
+    dayTargetErrors(d.targets, `dates.${i}.targets`, baseline, add);
+  });
+
+  return errors;
 }
 
 /** The same rules for a template (no baseline), plus duplicate offsets. */
 export function validateTemplate(template: TemplateRequest): Record<string, string> {
-  void template;
-  throw new Error('not implemented');
+  const errors: Record<string, string> = {};
+  const add = (path: string, message: string) => {
+    errors[path] ??= message;
+  };
+  const offsets = new Set<number>();
+  template.days.forEach((d, i) => {
+    if (offsets.has(d.offset)) add(`days.${i}.offset`, `${countdownDayLabel(d.offset)} is listed twice`);
+    offsets.add(d.offset);
+    dayTargetErrors(d.targets, `days.${i}.targets`, null, add);
+  });
+  return errors;
+}
+
+/** The per-day rules, on the paths of one DayTargets. Without a baseline, relative figures are not judged. */
+function dayTargetErrors(
+  targets: DayTargets,
+  prefix: string,
+  baseline: PlanBaseline | null,
+  add: (path: string, message: string) => void,
+): void {
+  if (baseline) {
+    if (targets.energy?.kind === 'usual_times' && baseline.usualEnergyKcal == null) {
+      add(`${prefix}.energy`, "The athlete's usual energy intake is not known yet; enter kcal instead");
+    }
+    if (
+      (targets.water?.kind === 'usual_plus' || targets.water?.kind === 'usual_times') &&
+      baseline.usualWaterMl == null
+    ) {
+      add(`${prefix}.water`, "The athlete's usual water intake is not known yet; enter mL instead");
+    }
+    for (const macro of MACROS) {
+      if (targets[macro]?.kind === 'g_per_kg' && baseline.weightKg == null) {
+        add(
+          `${prefix}.${macro}`,
+          'No recent body weight (no weigh-in in the last 60 days); enter grams instead',
+        );
+      }
+    }
+  }
+
+  for (const macro of MACROS) {
+    if (targets[macro]?.kind === 'pct' && !targets.energy) {
+      add(
+        `${prefix}.${macro}`,
+        'A share (%) needs an energy target for the day; set the energy or use grams',
+      );
+    }
+  }
+
+  const [p, c, f] = [targets.protein, targets.carbohydrate, targets.fat];
+  if (!targets.energy || !p || !c || !f) return;
+
+  let message: string | null = null;
+  if (p.kind === 'pct' && c.kind === 'pct' && f.kind === 'pct') {
+    // Known without resolving the energy: the shares themselves.
+    const sum = p.pct + c.pct + f.pct;
+    if (Math.abs(sum - 100) > SHARE_TOLERANCE_PCT + 1e-9) {
+      message = `Protein, carbohydrate and fat shares add up to ${fmt(sum, 1)} %; they must add up to 100 % (±1)`;
+    }
+  } else {
+    // Grams (or g/kg) against the energy target, with the Atwater factors (FAO 2003 FNP 77).
+    const r = resolveTargets(targets, baseline ?? NO_BASELINE);
+    if (
+      r.energyKcal != null &&
+      r.energyKcal > 0 &&
+      r.proteinG != null &&
+      r.carbohydrateG != null &&
+      r.fatG != null
+    ) {
+      const kcal = atwaterKcal({ proteinG: r.proteinG, carbohydrateG: r.carbohydrateG, fatG: r.fatG });
+      const sum = (100 * kcal) / r.energyKcal;
+      if (Math.abs(sum - 100) > SHARE_TOLERANCE_PCT + 1e-9) {
+        message =
+          `Protein, carbohydrate and fat shares add up to ${fmt(sum, 1)} % ` +
+          `(${fmt(kcal)} of ${fmt(r.energyKcal)} kcal); they must add up to 100 % (±1)`;
+      }
+    }
+  }
+  if (message) for (const macro of MACROS) add(`${prefix}.${macro}`, message);
 }

@@ -1,0 +1,88 @@
+import {
+  applyCountdownRequest,
+  checkPlanRequest,
+  createPlanVersionRequest,
+  moveCountdownRequest,
+  uuid,
+} from '@driftmark/shared';
+import { Router, type Response } from 'express';
+import { z } from 'zod';
+import { authenticate } from '../middleware/authenticate.js';
+import { validate } from '../middleware/validate.js';
+import { canOnAthlete } from '../policies/athlete.policy.js';
+import { PlanService, type CountdownResult } from '../services/plan.service.js';
+import { loadAthlete } from './athletes.routes.js';
+
+const athleteParams = z.object({ athleteId: uuid });
+const versionParams = z.object({ athleteId: uuid, versionId: uuid });
+
+/** A preview answers 200; a saved version 201. */
+function sendCountdown(res: Response, result: CountdownResult): void {
+  if (result.kind === 'preview') res.json({ data: result.preview });
+  else res.status(201).json({ data: result.version });
+}
+
+/** An athlete's plan and its versions, mounted at /api/athletes (/:athleteId/plan…). */
+export function plansRouter(): Router {
+  const router = Router();
+
+  router.get('/:athleteId/plan', authenticate(), validate({ params: athleteParams }), async (req, res) => {
+    const { actor, athlete, target } = await loadAthlete(req, 'read');
+    res.json({
+      data: await new PlanService(req.ctx).getPlan(athlete),
+      abilities: { edit: canOnAthlete(actor, 'plan', target) },
+    });
+  });
+
+  router.get(
+    '/:athleteId/plan/versions/:versionId',
+    authenticate(),
+    validate({ params: versionParams }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'read');
+      res.json({ data: await new PlanService(req.ctx).getVersion(athlete, req.params.versionId) });
+    },
+  );
+
+  router.post(
+    '/:athleteId/plan/check',
+    authenticate(),
+    validate({ params: athleteParams, body: checkPlanRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'plan');
+      res.json({ data: await new PlanService(req.ctx).check(athlete, req.body) });
+    },
+  );
+
+  router.post(
+    '/:athleteId/plan/versions',
+    authenticate(),
+    validate({ params: athleteParams, body: createPlanVersionRequest }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'plan');
+      res.status(201).json({ data: await new PlanService(req.ctx).createVersion(actor, athlete, req.body) });
+    },
+  );
+
+  router.post(
+    '/:athleteId/plan/countdown',
+    authenticate(),
+    validate({ params: athleteParams, body: applyCountdownRequest }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'plan');
+      sendCountdown(res, await new PlanService(req.ctx).applyCountdown(actor, athlete, req.body));
+    },
+  );
+
+  router.post(
+    '/:athleteId/plan/countdown/move',
+    authenticate(),
+    validate({ params: athleteParams, body: moveCountdownRequest }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'plan');
+      sendCountdown(res, await new PlanService(req.ctx).moveCountdown(actor, athlete, req.body));
+    },
+  );
+
+  return router;
+}

@@ -1,0 +1,67 @@
+import type { Weekday } from '../schemas/plans.js';
+
+/** Plain-words number formatting for messages: thousands separated by commas ("3,000"). */
+export function fmt(n: number, maxFractionDigits = 0): string {
+  return new Intl.NumberFormat('en-US', {
+    maximumFractionDigits: maxFractionDigits,
+    minimumFractionDigits: 0,
+  }).format(n);
+}
+
+/** The same with a fixed number of decimals ("1.10"). */
+export function fmtFixed(n: number, digits: number): string {
+  return new Intl.NumberFormat('en-US', {
+    maximumFractionDigits: digits,
+    minimumFractionDigits: digits,
+  }).format(n);
+}
+
+const WEEKDAY_INDEX: Weekday[] = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'];
+const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
+const DAY_NAMES: Record<Weekday, string> = {
+  mon: 'Mon',
+  tue: 'Tue',
+  wed: 'Wed',
+  thu: 'Thu',
+  fri: 'Fri',
+  sat: 'Sat',
+  sun: 'Sun',
+};
+
+/** A calendar date as a UTC midnight instant (calendar arithmetic only, no time zone involved). */
+export function utcDate(date: string): Date {
+  return new Date(`${date}T00:00:00Z`);
+}
+
+export function weekdayIndex(date: string): Weekday {
+  return WEEKDAY_INDEX[utcDate(date).getUTCDay()] as Weekday;
+}
+
+/** YYYY-MM-DD plus `days` calendar days. */
+export function addDays(date: string, days: number): string {
+  const d = utcDate(date);
+  d.setUTCDate(d.getUTCDate() + days);
+  return d.toISOString().slice(0, 10);
+}
+
+/** Whole calendar days from `from` to `to` (negative when `to` is earlier). */
+export function daysBetween(from: string, to: string): number {
+  return Math.round((utcDate(to).getTime() - utcDate(from).getTime()) / 86_400_000);
+}
+
+/** "Fri 4 Dec". */
+export function fmtDate(date: string): string {
+  const d = utcDate(date);
+  return `${DAY_NAMES[weekdayIndex(date)]} ${d.getUTCDate()} ${MONTHS[d.getUTCMonth()]}`;
+}
+
+/** "A, B and C". */
+export function listWords(items: readonly string[]): string {
+  if (items.length <= 1) return items.join('');
+  return `${items.slice(0, -1).join(', ')} and ${items[items.length - 1]}`;
+}
+
+/** A deep copy of plain JSON data (plan contents are JSON). */
+export function cloneJson<T>(value: T): T {
+  return JSON.parse(JSON.stringify(value)) as T;
+}

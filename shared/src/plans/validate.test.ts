@@ -1,0 +1,233 @@
+import { describe, expect, it } from 'vitest';
+import type { DayTargets, PlanBaseline, PlanContent, TemplateRequest } from '../schemas/plans.js';
+import { emptyDayTargets, starterPlanContent } from './resolve.js';
+import { validatePlanContent, validateTemplate } from './validate.js';
+
+const day = (t: Partial<DayTargets>): DayTargets => ({ ...emptyDayTargets(), ...t });
+const baseline: PlanBaseline = { usualWaterMl: 3000, usualEnergyKcal: 2400, weightKg: 80, sex: 'female' };
+const noBaseline: PlanBaseline = { usualWaterMl: null, usualEnergyKcal: null, weightKg: null, sex: null };
+
+function withTraining(targets: DayTargets): PlanContent {
+  const c = starterPlanContent();
+  c.dayTypes[0]!.targets = targets;
+  return c;
+}
+
+const SHARES_95 = 'Protein, carbohydrate and fat shares add up to 95 %; they must add up to 100 % (±1)';
+
+describe('validatePlanContent: structure', () => {
+  it('the starter content is fine', () => {
+    expect(validatePlanContent(starterPlanContent(), baseline)).toEqual({});
+  });
+
+  it('a weekday pointing to a missing day type', () => {
+    const c = starterPlanContent();
+    c.weekdays.wed = 'refeed';
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'weekdays.wed': 'Wed follows day type "refeed", which is not in this plan',
+    });
+  });
+
+  it('duplicate day-type keys and duplicate dates', () => {
+    const c = starterPlanContent();
+    c.dayTypes.push({ key: 'rest', name: 'Second rest', targets: emptyDayTargets() });
+    c.dates = [
+      { date: '2026-12-04', label: null, countdownOffset: null, targets: emptyDayTargets() },
+      { date: '2026-12-04', label: null, countdownOffset: null, targets: emptyDayTargets() },
+    ];
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.2.key': 'Another day type already uses the key "rest"',
+      'dates.1.date': '2026-12-04 is listed twice',
+    });
+  });
+});
+
+describe('validatePlanContent: shares (Atwater factors, FAO 2003 FNP 77; Merrill & Watt 1955)', () => {
+  it('a share without an energy target', () => {
+    const errors = validatePlanContent(withTraining(day({ protein: { kind: 'pct', pct: 30 } })), baseline);
+    expect(errors).toEqual({
+      'dayTypes.0.targets.protein':
+        'A share (%) needs an energy target for the day; set the energy or use grams',
+    });
+  });
+
+  it('30/45/25 of 2400 kcal is fine; 30/40/25 = 95 % is refused on each macro with the fields named', () => {
+    const ok = day({
+      energy: { kind: 'kcal', kcal: 2400 },
+      protein: { kind: 'pct', pct: 30 },
+      carbohydrate: { kind: 'pct', pct: 45 },
+      fat: { kind: 'pct', pct: 25 },
+    });
+    expect(validatePlanContent(withTraining(ok), baseline)).toEqual({});
+    const bad = { ...ok, carbohydrate: { kind: 'pct' as const, pct: 40 } };
+    expect(validatePlanContent(withTraining(bad), baseline)).toEqual({
+      'dayTypes.0.targets.protein': SHARES_95,
+      'dayTypes.0.targets.carbohydrate': SHARES_95,
+      'dayTypes.0.targets.fat': SHARES_95,
+    });
+  });
+
+  it('within 1 point passes (99.5 %, 101 %); 101.5 % does not', () => {
+    const shares = (p: number, c: number, f: number) =>
+      withTraining(
+        day({
+          energy: { kind: 'usual_times', factor: 1 },
+          protein: { kind: 'pct', pct: p },
+          carbohydrate: { kind: 'pct', pct: c },
+          fat: { kind: 'pct', pct: f },
+        }),
+      );
+    expect(validatePlanContent(shares(30, 44.5, 25), baseline)).toEqual({});
+    expect(validatePlanContent(shares(30, 46, 25), baseline)).toEqual({});
+    expect(Object.keys(validatePlanContent(shares(30, 46.5, 25), baseline))).toHaveLength(3);
+  });
+
+  it('grams against the energy target count the same way: 180/270/66.6667 g of 2400 kcal pass (Check 1)', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 2400 },
+        protein: { kind: 'g', g: 180 },
+        carbohydrate: { kind: 'g', g: 270 },
+        fat: { kind: 'g', g: 66.6667 },
+      }),
+    );
+    expect(validatePlanContent(c, baseline)).toEqual({});
+  });
+
+  it('150/250/70 g = 2230 kcal against 2400 kcal (92.9 %) is refused (Check 2 without the alcohol)', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 2400 },
+        protein: { kind: 'g', g: 150 },
+        carbohydrate: { kind: 'g', g: 250 },
+        fat: { kind: 'g', g: 70 },
+      }),
+    );
+    const message =
+      'Protein, carbohydrate and fat shares add up to 92.9 % (2,230 of 2,400 kcal); they must add up to 100 % (±1)';
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.protein': message,
+      'dayTypes.0.targets.carbohydrate': message,
+      'dayTypes.0.targets.fat': message,
+    });
+  });
+
+  it('g per kg resolves with the baseline weight: 2 g/kg × 80 kg = 160 g with 40 % C and 30 % F of 2400 kcal (~100 %)', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 2400 },
+        protein: { kind: 'g_per_kg', perKg: 2 },
+        carbohydrate: { kind: 'pct', pct: 43 },
+        fat: { kind: 'pct', pct: 30 },
+      }),
+    );
+    // 160 g·4 = 640 kcal = 26.7 % → 99.7 %
+    expect(validatePlanContent(c, baseline)).toEqual({});
+    const bad = {
+      ...c,
+      dayTypes: c.dayTypes.map((t, i) =>
+        i === 0 ? { ...t, targets: { ...t.targets, fat: { kind: 'pct' as const, pct: 25 } } } : t,
+      ),
+    };
+    expect(validatePlanContent(bad, baseline)['dayTypes.0.targets.fat']).toMatch(/add up to 94\.7 %/);
+  });
+
+  it('dated days are checked on their own paths', () => {
+    const c = starterPlanContent();
+    c.dates = [
+      {
+        date: '2026-12-04',
+        label: null,
+        countdownOffset: -1,
+        targets: day({
+          energy: { kind: 'kcal', kcal: 2000 },
+          protein: { kind: 'pct', pct: 30 },
+          carbohydrate: { kind: 'pct', pct: 40 },
+          fat: { kind: 'pct', pct: 25 },
+        }),
+      },
+    ];
+    expect(Object.keys(validatePlanContent(c, baseline))).toEqual([
+      'dates.0.targets.protein',
+      'dates.0.targets.carbohydrate',
+      'dates.0.targets.fat',
+    ]);
+  });
+});
+
+describe('validatePlanContent: baseline figures', () => {
+  it('relative targets the athlete has no figure for are refused on their field', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'usual_times', factor: 0.9 },
+        protein: { kind: 'g_per_kg', perKg: 2 },
+        water: { kind: 'usual_plus', ml: 500 },
+      }),
+    );
+    expect(validatePlanContent(c, noBaseline)).toEqual({
+      'dayTypes.0.targets.energy': "The athlete's usual energy intake is not known yet; enter kcal instead",
+      'dayTypes.0.targets.water': "The athlete's usual water intake is not known yet; enter mL instead",
+      'dayTypes.0.targets.protein':
+        'No recent body weight (no weigh-in in the last 60 days); enter grams instead',
+    });
+    expect(validatePlanContent(c, baseline)).toEqual({});
+    // Without a baseline at all (a draft not tied to an athlete) relative figures are not judged.
+    expect(validatePlanContent(c, null)).toEqual({});
+  });
+});
+
+describe('validateTemplate', () => {
+  const template = (days: TemplateRequest['days']): TemplateRequest => ({
+    name: 'Show week',
+    eventType: 'show',
+    description: null,
+    days,
+  });
+
+  it('duplicate offsets', () => {
+    const t = template([
+      { offset: -3, label: null, targets: emptyDayTargets() },
+      { offset: -3, label: null, targets: emptyDayTargets() },
+    ]);
+    expect(validateTemplate(t)).toEqual({ 'days.1.offset': 'E-3 is listed twice' });
+  });
+
+  it('shares that do not add up (known without a baseline), and a share without energy', () => {
+    const t = template([
+      {
+        offset: -2,
+        label: 'Load',
+        targets: day({
+          energy: { kind: 'usual_times', factor: 1.2 },
+          protein: { kind: 'pct', pct: 20 },
+          carbohydrate: { kind: 'pct', pct: 60 },
+          fat: { kind: 'pct', pct: 15 },
+        }),
+      },
+      { offset: -1, label: null, targets: day({ fat: { kind: 'pct', pct: 20 } }) },
+    ]);
+    expect(validateTemplate(t)).toEqual({
+      'days.0.targets.protein': SHARES_95,
+      'days.0.targets.carbohydrate': SHARES_95,
+      'days.0.targets.fat': SHARES_95,
+      'days.1.targets.fat': 'A share (%) needs an energy target for the day; set the energy or use grams',
+    });
+  });
+
+  it('relative figures (usual × factor, g per kg) are fine in a template: they resolve per athlete', () => {
+    const t = template([
+      {
+        offset: -1,
+        label: null,
+        targets: day({
+          energy: { kind: 'usual_times', factor: 1.1 },
+          protein: { kind: 'g_per_kg', perKg: 2.2 },
+          carbohydrate: { kind: 'g_per_kg', perKg: 6 },
+          fat: { kind: 'g', g: 50 },
+          water: { kind: 'usual_plus', ml: 1000 },
+        }),
+      },
+    ]);
+    expect(validateTemplate(t)).toEqual({});
+  });
+});
