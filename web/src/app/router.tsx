@@ -5,6 +5,9 @@ import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { dayQueryOptions } from '@/features/check-ins/api/get-day';
 import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
+import { planQueryOptions } from '@/features/plans/api/get-plan';
+import { templateQueryOptions } from '@/features/plans/api/get-template';
+import { templatesQueryOptions } from '@/features/plans/api/get-templates';
 import { todayIn } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
@@ -18,8 +21,16 @@ import { AthleteHomeRoute } from './routes/athlete-home';
 import { AthletePhotosRoute } from './routes/athlete-photos';
 import { CoachAthleteRoute } from './routes/coach-athlete';
 import { CoachAthletePhotosRoute } from './routes/coach-athlete-photos';
+import {
+  CoachAthletePlanCountdownRoute,
+  CoachAthletePlanEditorRoute,
+  CoachAthletePlanHistoryRoute,
+  CoachAthletePlanLayout,
+} from './routes/coach-athlete-plan';
 import { CoachInvitationsRoute } from './routes/coach-invitations';
 import { CoachRosterRoute } from './routes/coach-roster';
+import { CoachTemplateNewRoute, CoachTemplateRoute } from './routes/coach-template';
+import { CoachTemplatesRoute } from './routes/coach-templates';
 import { DevInboxRoute } from './routes/dev-inbox';
 import { ForgotPasswordRoute } from './routes/forgot-password';
 import { IntakeRoute } from './routes/intake';
@@ -131,6 +142,42 @@ export const router = createBrowserRouter([
                       )(),
                   },
                   { path: 'athletes/:athleteId/photos', element: <CoachAthletePhotosRoute /> },
+                  {
+                    path: 'athletes/:athleteId/plan',
+                    element: <CoachAthletePlanLayout />,
+                    loader: ({ params }) =>
+                      prefetchWhen(
+                        (me) => isStaffRole(me.role),
+                        () => {
+                          void queryClient.prefetchQuery(athleteQueryOptions(params.athleteId ?? ''));
+                          void queryClient.prefetchQuery(planQueryOptions(params.athleteId ?? ''));
+                        },
+                      )(),
+                    children: [
+                      { index: true, element: <CoachAthletePlanEditorRoute /> },
+                      { path: 'countdown', element: <CoachAthletePlanCountdownRoute /> },
+                      { path: 'history', element: <CoachAthletePlanHistoryRoute /> },
+                      { path: 'history/:versionId', element: <CoachAthletePlanHistoryRoute /> },
+                    ],
+                  },
+                  {
+                    path: 'templates',
+                    element: <CoachTemplatesRoute />,
+                    loader: prefetchWhen(
+                      (me) => isStaffRole(me.role),
+                      () => void queryClient.prefetchQuery(templatesQueryOptions()),
+                    ),
+                  },
+                  { path: 'templates/new', element: <CoachTemplateNewRoute /> },
+                  {
+                    path: 'templates/:templateId',
+                    element: <CoachTemplateRoute />,
+                    loader: ({ params }) =>
+                      prefetchWhen(
+                        (me) => isStaffRole(me.role),
+                        () => void queryClient.prefetchQuery(templateQueryOptions(params.templateId ?? '')),
+                      )(),
+                  },
                   { path: '*', element: <NotFoundRoute /> },
                 ],
               },

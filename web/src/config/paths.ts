@@ -18,6 +18,16 @@ export const paths = {
   coachAthlete: (athleteId: string, date?: string) =>
     `/coach/athletes/${encodeURIComponent(athleteId)}${date ? `?date=${encodeURIComponent(date)}` : ''}`,
   coachAthletePhotos: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/photos`,
+  /** An athlete's plan: week view and editor; the countdown flow; the version history and one version. */
+  coachAthletePlan: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/plan`,
+  coachAthletePlanCountdown: (athleteId: string) =>
+    `/coach/athletes/${encodeURIComponent(athleteId)}/plan/countdown`,
+  coachAthletePlanHistory: (athleteId: string, versionId?: string) =>
+    `/coach/athletes/${encodeURIComponent(athleteId)}/plan/history${versionId ? `/${encodeURIComponent(versionId)}` : ''}`,
+  /** The team's countdown templates, a new one, and one template. */
+  coachTemplates: '/coach/templates',
+  coachTemplateNew: '/coach/templates/new',
+  coachTemplate: (templateId: string) => `/coach/templates/${encodeURIComponent(templateId)}`,
   devInbox: '/dev/inbox',
 } as const;
 

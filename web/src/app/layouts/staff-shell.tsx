@@ -1,7 +1,7 @@
 import { ROLE_LABELS } from '@driftmark/shared';
 import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
-import { EnvelopeIcon, InboxIcon, RosterIcon, SlidersIcon } from '@/components/ui/icons';
+import { CountdownIcon, EnvelopeIcon, InboxIcon, RosterIcon, SlidersIcon } from '@/components/ui/icons';
 import { paths } from '@/config/paths';
 import { useDevInboxAvailable } from '@/features/dev-inbox/api/get-mail-list';
 import { useCurrentUser } from '../session';
@@ -21,6 +21,9 @@ export function StaffShell() {
           </SidebarNavLink>
           <SidebarNavLink to={paths.coachInvitations} icon={<EnvelopeIcon />}>
             Invitations
+          </SidebarNavLink>
+          <SidebarNavLink to={paths.coachTemplates} icon={<CountdownIcon />}>
+            Countdown templates
           </SidebarNavLink>
           <SidebarNavLink to={paths.settings} icon={<SlidersIcon />}>
             Settings

@@ -33,6 +33,7 @@ export function CoachAthletePhotosRoute() {
           Days
         </TabNavLink>
         <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
+        <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
       </TabNav>
       {athlete.isPending ? (
         <div aria-busy="true" aria-label="Loading the photos" className="space-y-4">

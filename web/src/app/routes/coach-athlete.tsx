@@ -156,6 +156,7 @@ export function CoachAthleteRoute() {
               Days
             </TabNavLink>
             <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
+            <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
           </TabNav>
           <section aria-labelledby="day-heading" className="mb-8">
             <div className="mb-4 flex flex-wrap items-center justify-between gap-3">

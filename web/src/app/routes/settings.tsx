@@ -5,7 +5,9 @@ import { Card, CardHeader } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { authKeys } from '@/features/auth/api/keys';
+import { planKeys } from '@/features/plans/api/keys';
 import { ChangePasswordForm } from '@/features/settings/components/change-password-form';
+import { GuardrailFloorsForm } from '@/features/settings/components/guardrail-floors-form';
 import { SettingsForm } from '@/features/settings/components/settings-form';
 import { SignOutButton } from '../layouts/sign-out-button';
 import { useCurrentUser } from '../session';
@@ -25,6 +27,19 @@ export function SettingsRoute() {
           <CardHeader id="profile-heading" title="Profile and units" />
           <SettingsForm me={me} onSaved={setMe} />
         </Card>
+        {staff ? (
+          <Card aria-labelledby="guardrails-heading">
+            <CardHeader id="guardrails-heading" eyebrow="Team" title="Guardrail floors" />
+            <p className="mb-4 text-sm text-ink-muted">
+              Every plan save and every countdown is checked against these floors for the athlete&apos;s sex.
+            </p>
+            <GuardrailFloorsForm
+              canEdit={me.abilities.manageTeam}
+              // Plan pages carry the floors for their live checks.
+              onSaved={() => void queryClient.invalidateQueries({ queryKey: planKeys.all })}
+            />
+          </Card>
+        ) : null}
         {!staff ? (
           <Card padding="compact" aria-labelledby="details-heading">
             <h2 id="details-heading" className="font-semibold text-ink">

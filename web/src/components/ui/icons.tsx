@@ -293,3 +293,35 @@ export function PulseIcon(props: IconProps) {
     </Icon>
   );
 }
+
+/** Concentric rings: the day's targets. */
+export function TargetIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <circle cx="12" cy="12" r="8.5" />
+      <circle cx="12" cy="12" r="4.5" />
+      <circle cx="12" cy="12" r="0.9" fill="currentColor" />
+    </Icon>
+  );
+}
+
+/** Two overlapping sheets: duplicate. */
+export function CopyIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <rect x="8.5" y="8.5" width="11" height="11" rx="2" />
+      <path d="M15.5 8.5V6.5a2 2 0 0 0-2-2h-7a2 2 0 0 0-2 2v7a2 2 0 0 0 2 2h2" />
+    </Icon>
+  );
+}
+
+/** A list with a stopwatch: countdown templates. */
+export function CountdownIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M4 6h7M4 11h5M4 16h4" />
+      <circle cx="16" cy="14" r="5" />
+      <path d="M16 11.5V14l1.6 1.2M14.5 6.5h3" />
+    </Icon>
+  );
+}

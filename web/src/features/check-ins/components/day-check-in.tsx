@@ -10,6 +10,8 @@ import { formatDateTime } from '@/lib/format';
 import { useDay } from '../api/get-day';
 import { addDays } from '../utils/dates';
 import { dayHasUrgentSymptom } from '../utils/symptoms';
+import { DayCautionCard } from './countdown-caution';
+import { DayTargetsCard } from './day-targets';
 import { EveningCard } from './evening-card';
 import { FluidsCard } from './fluids-card';
 import { MealsCard } from './meals-card';
@@ -44,7 +46,10 @@ export function canLogOn(abilities: Record<string, boolean>, fallback: boolean):
   return fallback;
 }
 
-/** A whole day in the order it is lived: weigh-in, fluids, meals, supplements, evening, symptoms. */
+/**
+ * A whole day in the order it is lived: the day's caution (countdown days, acknowledged warnings)
+ * and targets first, then weigh-in, fluids, meals, supplements, evening, symptoms.
+ */
 export function DayCheckIn({
   athleteId,
   date,
@@ -116,7 +121,9 @@ export function DayCheckIn({
         </Alert>
       ) : null}
       {!canEdit ? <StaffFlags day={day} /> : null}
+      <DayCautionCard day={day} />
       {before}
+      <DayTargetsCard {...props} />
       <div className={cn(layout === 'grid' ? 'grid items-start gap-4 lg:grid-cols-2' : 'space-y-4')}>
         <WeighInCard {...props} />
         <FluidsCard {...props} />

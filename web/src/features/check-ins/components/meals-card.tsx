@@ -22,6 +22,7 @@ import { FoodPicker } from './food-picker';
 import { useFollowClock } from './use-clock';
 
 const grams = (g: number) => `${formatNumber(g, 1)}${NBSP}g`;
+const milligrams = (mg: number) => `${formatNumber(mg, 0)}${NBSP}mg`;
 
 const MEAL_NAMES = ['Breakfast', 'Lunch', 'Dinner', 'Snack', 'Pre-training', 'Post-training'];
 
@@ -87,6 +88,7 @@ export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
                 P {grams(m.proteinG)} · C {grams(m.carbohydrateG)} · F {grams(m.fatG)}
                 {m.alcoholG ? ` · alcohol ${grams(m.alcoholG)}` : ''}
                 {m.fibreG ? ` · fibre ${grams(m.fibreG)}` : ''}
+                {m.sodiumMg !== null ? ` · sodium ${milligrams(m.sodiumMg)}` : ''}
               </p>
             </>
           )}
@@ -129,7 +131,7 @@ function foodFromEntry(entry: DayView['meals'][number]): FoodView | null {
       carbohydrateG: entry.carbohydrateG * f,
       fatG: entry.fatG * f,
       fibreG: entry.fibreG === null ? null : entry.fibreG * f,
-      sodiumMg: null,
+      sodiumMg: entry.sodiumMg === null ? null : entry.sodiumMg * f,
     },
   };
 }
@@ -254,7 +256,7 @@ function MealForm({
               inputClassName="tabular-nums"
             />
           </div>
-          <div className="grid grid-cols-2 gap-2">
+          <div className="grid grid-cols-3 gap-2">
             <TextField
               name="fibreG"
               label="Fibre (g)"
@@ -273,6 +275,15 @@ function MealForm({
               autoComplete="off"
               inputClassName="tabular-nums"
             />
+            <TextField
+              name="sodiumMg"
+              label="Sodium (mg)"
+              hint="Optional"
+              suffix="mg"
+              inputMode="numeric"
+              autoComplete="off"
+              inputClassName="tabular-nums"
+            />
           </div>
         </>
       )}
@@ -288,6 +299,7 @@ function MealForm({
       {portion ? (
         <p className="-mt-2 text-xs text-ink-muted tabular-nums">
           P {grams(portion.proteinG)} · C {grams(portion.carbohydrateG)} · F {grams(portion.fatG)}
+          {portion.sodiumMg !== null ? ` · sodium ${milligrams(portion.sodiumMg)}` : ''}
         </p>
       ) : source === 'macros' ? (
         <p className="-mt-2 text-xs text-ink-faint">Protein and carbohydrate 4 kcal/g, fat 9, alcohol 7.</p>

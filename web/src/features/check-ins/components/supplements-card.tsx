@@ -57,7 +57,13 @@ interface SupplementsCardProps extends DayCardProps {
 export function SupplementsCard({ athleteId, day, canEdit, now, previous }: SupplementsCardProps) {
   const [adding, setAdding] = useState(false);
   const remove = useDeleteSupplement(athleteId);
-  const suggestions = canEdit ? supplementSuggestions(previous, day.supplements) : [];
+  // What the plan schedules today is ticked under the day's targets, not offered again here.
+  const scheduled = new Set((day.targets?.targets.supplements ?? []).map((s) => s.item.trim().toLowerCase()));
+  const suggestions = canEdit
+    ? supplementSuggestions(previous, day.supplements).filter(
+        (s) => !scheduled.has(s.name.trim().toLowerCase()),
+      )
+    : [];
 
   return (
     <CheckInCard

@@ -27,6 +27,11 @@ describe('foodPortionPreview', () => {
     expect(p?.proteinG).toBeCloseTo(11.85, 10);
     expect(p?.carbohydrateG).toBeCloseTo(117.3, 10);
     expect(p?.fatG).toBeCloseTo(0.75, 10);
+    expect(p?.sodiumMg).toBeNull();
+    expect(foodPortionPreview({ per100g: { ...rice.per100g, sodiumMg: 400 } }, '150')?.sodiumMg).toBeCloseTo(
+      600,
+      10,
+    );
   });
 
   it('waits for a usable quantity', () => {

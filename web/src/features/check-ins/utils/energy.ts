@@ -32,6 +32,8 @@ export interface FoodPortion {
   proteinG: number;
   carbohydrateG: number;
   fatG: number;
+  /** Null when the food list has no sodium figure for the food. */
+  sodiumMg: number | null;
 }
 
 /**
@@ -50,5 +52,6 @@ export function foodPortionPreview(
     proteinG: food.per100g.proteinG * f,
     carbohydrateG: food.per100g.carbohydrateG * f,
     fatG: food.per100g.fatG * f,
+    sodiumMg: food.per100g.sodiumMg === null ? null : food.per100g.sodiumMg * f,
   };
 }

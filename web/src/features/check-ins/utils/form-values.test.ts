@@ -119,14 +119,26 @@ describe('meals', () => {
     fatG: '15',
     fibreG: '',
     alcoholG: '',
+    sodiumMg: '',
     foodId: '',
     quantityG: '',
   };
 
   it('sends grams of macros, optional ones as null when empty', () => {
     const { request } = toMealRequest(base);
-    expect(request).toMatchObject({ source: 'macros', proteinG: 40, fibreG: null, alcoholG: null });
+    expect(request).toMatchObject({
+      source: 'macros',
+      proteinG: 40,
+      fibreG: null,
+      alcoholG: null,
+      sodiumMg: null,
+    });
     expect(mealEntryRequest.safeParse(request).success).toBe(true);
+  });
+
+  it('sends sodium in mg when typed, and says so when it is not a number', () => {
+    expect(toMealRequest({ ...base, sodiumMg: '820' }).request).toMatchObject({ sodiumMg: 820 });
+    expect(toMealRequest({ ...base, sodiumMg: 'lots' }).numberErrors).toEqual({ sodiumMg: NOT_A_NUMBER });
   });
 
   it('sends a food with its quantity, and asks for the food when none is chosen', async () => {

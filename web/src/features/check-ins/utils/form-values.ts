@@ -137,6 +137,8 @@ export interface MealFormValues {
   fatG: string;
   fibreG: string;
   alcoholG: string;
+  /** mg; macros only (a food from the list brings its own). */
+  sodiumMg: string;
   foodId: string;
   quantityG: string;
 }
@@ -164,6 +166,7 @@ export function toMealRequest(v: MealFormValues): Conversion<keyof MealFormValue
       fatG: read.required('fatG', v.fatG),
       fibreG: read.optional('fibreG', v.fibreG),
       alcoholG: read.optional('alcoholG', v.alcoholG),
+      sodiumMg: read.optional('sodiumMg', v.sodiumMg),
     },
     numberErrors: read.errors,
   };
@@ -179,6 +182,7 @@ export function mealFormValues(entry: DayView['meals'][number] | null, now: stri
     fatG: '',
     fibreG: '',
     alcoholG: '',
+    sodiumMg: '',
     foodId: '',
     quantityG: '',
   };
@@ -202,6 +206,7 @@ export function mealFormValues(entry: DayView['meals'][number] | null, now: stri
     fatG: toInputText(entry.fatG, 1),
     fibreG: toInputText(entry.fibreG, 1),
     alcoholG: toInputText(entry.alcoholG, 1),
+    sodiumMg: toInputText(entry.sodiumMg, 0),
   };
 }
 

@@ -1,0 +1,553 @@
+import {
+  VOLUME_UNIT_LABELS,
+  volumeFromMl,
+  type DayTargetsInForce,
+  type DayView,
+  type SupplementEntryRequest,
+  type VolumeUnit,
+} from '@driftmark/shared';
+import { useRef, useState, type ReactNode } from 'react';
+import { Badge, type BadgeTone } from '@/components/ui/badge';
+import { Button } from '@/components/ui/button';
+import { TargetIcon } from '@/components/ui/icons';
+import { isApiError } from '@/lib/api-client';
+import { cn } from '@/lib/cn';
+import { formatNumber, formatVolume, NBSP } from '@/lib/format';
+import { useCreateSupplement } from '../api/create-supplement';
+import { createClientIdKeeper } from '../utils/client-id';
+import {
+  amountProgress,
+  clockMinutes,
+  cutoffProgress,
+  minimumProgress,
+  percentOf,
+  sodiumLogged,
+  supplementSlots,
+  type AmountProgress,
+  type ProgressState,
+  type SupplementSlot,
+} from '../utils/targets';
+import { CheckInCard } from './check-in-card';
+import type { DayCardProps } from './day-card-props';
+
+/** How a metric's figures read: the number (in the reader's unit) and the unit after it. */
+interface Measure {
+  figure: (n: number) => string;
+  unit: string;
+}
+
+const whole = (unit: string): Measure => ({ figure: (n) => formatNumber(n, 0), unit });
+const KCAL = whole('kcal');
+const GRAMS = whole('g');
+const MG = whole('mg');
+const STEPS = whole('steps');
+const MINUTES = whole('min');
+
+function volumeMeasure(unit: VolumeUnit): Measure {
+  return {
+    figure: (ml) => formatNumber(volumeFromMl(ml, unit), unit === 'ml' ? 0 : 1),
+    unit: VOLUME_UNIT_LABELS[unit],
+  };
+}
+
+const amount = (m: Measure, n: number) => `${m.figure(n)}${NBSP}${m.unit}`;
+
+const TONES: Record<ProgressState, BadgeTone> = {
+  'on-plan': 'on-plan',
+  'to-go': 'accent',
+  drifting: 'drifting',
+  'off-plan': 'off-plan',
+  'not-logged': 'not-logged',
+};
+
+const FILLS: Record<ProgressState, string> = {
+  'on-plan': 'bg-on-plan',
+  'to-go': 'bg-accent',
+  drifting: 'bg-drifting',
+  'off-plan': 'bg-off-plan',
+  'not-logged': 'bg-transparent',
+};
+
+/** Where the day's targets come from, in words ("Training day · plan version 3"). */
+function sourceLine(plan: DayTargetsInForce): string {
+  const from =
+    plan.source.kind === 'pattern' ? plan.source.dayTypeName : (plan.source.label ?? 'Planned day');
+  return `${from} · plan version ${plan.versionNumber}`;
+}
+
+/**
+ * The day's targets from the plan version in force, with progress against each: energy, macros,
+ * water with its cut-off, sodium, steps and cardio, the supplements due by clock time and the
+ * coach's note. The athlete ticks a scheduled supplement here.
+ */
+export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardProps) {
+  const title = day.isToday ? "Today's targets" : 'Targets that day';
+  const plan = day.targets;
+
+  if (!plan) {
+    return (
+      <section
+        aria-label={title}
+        className="flex items-center gap-3 rounded-lg border border-dashed border-line-strong/60 bg-surface/60 px-4 py-3 text-sm text-ink-muted"
+      >
+        <TargetIcon className="shrink-0 text-xl text-not-logged" />
+        <p>
+          {canEdit
+            ? day.isToday
+              ? "Your coach hasn't set targets yet."
+              : 'No targets were set for this day.'
+            : 'No plan was in force on this day.'}
+        </p>
+      </section>
+    );
+  }
+
+  const t = plan.targets;
+  const tol = plan.tolerances;
+  const live = day.isToday;
+  const clock = live ? now : null;
+  const anyMeal = day.meals.length > 0;
+  const sodium = sodiumLogged(day);
+  const basis = t.basis;
+
+  const macros = [
+    {
+      key: 'protein',
+      label: 'Protein',
+      target: t.proteinG,
+      actual: day.totals.proteinG,
+      tolerance: tol.proteinG,
+    },
+    {
+      key: 'carbohydrate',
+      label: 'Carbohydrate',
+      target: t.carbohydrateG,
+      actual: day.totals.carbohydrateG,
+      tolerance: tol.carbohydrateG,
+    },
+    { key: 'fat', label: 'Fat', target: t.fatG, actual: day.totals.fatG, tolerance: tol.fatG },
+  ] as const;
+
+  const hasAmounts =
+    t.energyKcal !== null ||
+    macros.some((m) => m.target !== null) ||
+    t.waterMl !== null ||
+    t.fluidCutoff !== null ||
+    t.sodiumMg !== null ||
+    t.steps !== null ||
+    t.cardioMinutes !== null;
+
+  return (
+    <CheckInCard id="targets" title={title} icon={<TargetIcon />} subtitle={sourceLine(plan)}>
+      {hasAmounts ? (
+        <ul aria-label="Targets and progress" className="divide-y divide-line">
+          {t.energyKcal !== null ? (
+            <ProgressRow
+              label="Energy"
+              measure={KCAL}
+              progress={amountProgress({
+                target: t.energyKcal,
+                actual: anyMeal ? day.totals.energyKcal : null,
+                tolerance: percentOf(t.energyKcal, tol.energyPct),
+                inProgress: live,
+              })}
+              live={live}
+              hint={basis.energy}
+            />
+          ) : null}
+          {macros.map((m) =>
+            m.target !== null ? (
+              <ProgressRow
+                key={m.key}
+                label={m.label}
+                measure={GRAMS}
+                progress={amountProgress({
+                  target: m.target,
+                  actual: anyMeal ? m.actual : null,
+                  tolerance: m.tolerance,
+                  inProgress: live,
+                })}
+                live={live}
+                hint={basis[m.key]}
+              />
+            ) : null,
+          )}
+          {t.waterMl !== null || t.fluidCutoff !== null ? (
+            <WaterRows day={day} unit={units.volume} clock={clock} live={live} basis={basis.water} />
+          ) : null}
+          {t.sodiumMg !== null ? (
+            <ProgressRow
+              label="Sodium"
+              measure={MG}
+              progress={amountProgress({
+                target: t.sodiumMg,
+                actual: sodium.mg,
+                tolerance: percentOf(t.sodiumMg, tol.sodiumPct),
+                inProgress: live,
+              })}
+              live={live}
+              hint={
+                sodium.meals === 0
+                  ? undefined
+                  : sodium.known === 0
+                    ? 'No meal carries a sodium figure yet: add it from the label when you log a meal.'
+                    : sodium.known < sodium.meals
+                      ? `From ${formatNumber(sodium.known)} of ${formatNumber(sodium.meals)} meals; the others carry no sodium figure.`
+                      : undefined
+              }
+            />
+          ) : null}
+          {t.steps !== null ? (
+            <ProgressRow
+              label="Steps"
+              measure={STEPS}
+              minimum
+              progress={minimumProgress({
+                target: t.steps,
+                actual: day.evening?.steps ?? null,
+                inProgress: live,
+              })}
+              live={live}
+              hint={day.evening?.steps == null ? 'From the evening check-in.' : undefined}
+            />
+          ) : null}
+          {t.cardioMinutes !== null ? (
+            <ProgressRow
+              label="Cardio"
+              measure={MINUTES}
+              minimum
+              progress={minimumProgress({
+                target: t.cardioMinutes,
+                actual: day.evening?.cardioMinutes ?? null,
+                inProgress: live,
+              })}
+              live={live}
+              hint={day.evening?.cardioMinutes == null ? 'From the evening check-in.' : undefined}
+            />
+          ) : null}
+        </ul>
+      ) : null}
+
+      {t.supplements.length > 0 ? (
+        <SupplementsDue athleteId={athleteId} day={day} clock={clock} now={now} canEdit={canEdit} />
+      ) : null}
+
+      {t.note ? (
+        <figure
+          className={cn(
+            'rounded-md bg-accent-soft px-4 py-3',
+            hasAmounts || t.supplements.length ? 'mt-4' : '',
+          )}
+        >
+          <figcaption className="text-xs font-semibold tracking-wide text-accent-strong uppercase">
+            {canEdit ? 'From your coach' : 'Note for the athlete'}
+          </figcaption>
+          <blockquote className="mt-1 text-sm whitespace-pre-line text-ink">{t.note}</blockquote>
+        </figure>
+      ) : null}
+
+      {!hasAmounts && t.supplements.length === 0 && !t.note ? (
+        <p className="text-sm text-ink-muted">The plan sets no figures for this day.</p>
+      ) : null}
+    </CheckInCard>
+  );
+}
+
+/** What a state says in words, so it never rests on colour. */
+function statusText(p: AmountProgress, measure: Measure, minimum: boolean, live: boolean): string {
+  const gap = amount(measure, Math.abs(p.difference));
+  switch (p.state) {
+    case 'not-logged':
+      return live ? 'Nothing logged yet' : 'Not logged';
+    case 'on-plan':
+      return minimum ? 'Reached' : 'On plan';
+    case 'to-go':
+      return `${gap} to go`;
+    case 'drifting':
+      return minimum
+        ? `Drifting: ${gap} short`
+        : `Drifting: ${p.difference > 0 ? 'over' : 'under'} by ${gap}`;
+    case 'off-plan':
+      return minimum
+        ? `Off plan: ${gap} short`
+        : `Off plan: ${p.difference > 0 ? 'over' : 'under'} by ${gap}`;
+  }
+}
+
+function ProgressRow({
+  label,
+  progress,
+  measure,
+  minimum = false,
+  live,
+  hint,
+  children,
+}: {
+  label: string;
+  progress: AmountProgress;
+  measure: Measure;
+  /** A target to reach (steps, cardio) rather than one to land on. */
+  minimum?: boolean;
+  live: boolean;
+  /** A quiet line: how a relative target was reached, or what is missing. */
+  hint?: string;
+  children?: ReactNode;
+}) {
+  const p = progress;
+  return (
+    <li className="py-3 first:pt-0 last:pb-0">
+      <p className="flex items-baseline justify-between gap-3">
+        <span className="font-semibold text-ink">{label}</span>
+        <span className="text-sm tabular-nums">
+          <span className="text-base font-bold text-ink">
+            {p.actual === null ? '—' : amount(measure, p.actual)}
+          </span>
+          <span className="text-ink-muted"> of {amount(measure, p.target)}</span>
+        </span>
+      </p>
+      <ProgressBar progress={p} minimum={minimum} />
+      <div className="mt-1.5 flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
+        <Badge tone={TONES[p.state]}>
+          <span className="tabular-nums">{statusText(p, measure, minimum, live)}</span>
+        </Badge>
+        {!minimum && p.high > p.low ? (
+          <span className="text-xs text-ink-faint tabular-nums">
+            On plan {measure.figure(p.low)}–{amount(measure, p.high)}
+          </span>
+        ) : null}
+      </div>
+      {hint ? <p className="mt-1 text-xs text-ink-faint tabular-nums">{hint}</p> : null}
+      {children}
+    </li>
+  );
+}
+
+/**
+ * Logged amount as a filled bar over the tolerance band (the tinted stretch with its edges) and a
+ * tick at the target. Decorative: the row says the same in words and figures.
+ */
+function ProgressBar({ progress: p, minimum }: { progress: AmountProgress; minimum: boolean }) {
+  const scale = Math.max(p.high, p.actual ?? 0, 1) * 1.1;
+  const at = (v: number) => `${Math.min(100, Math.max(0, (v / scale) * 100))}%`;
+  return (
+    <div aria-hidden="true" className="relative mt-2 h-3 rounded-pill bg-sunken">
+      {!minimum && p.high > p.low ? (
+        <span
+          className="absolute inset-y-0 border-x-2 border-on-plan/80 bg-on-plan/25"
+          style={{ left: at(p.low), width: `calc(${at(p.high)} - ${at(p.low)})` }}
+        />
+      ) : null}
+      {p.actual !== null && p.actual > 0 ? (
+        <span
+          className={cn('absolute inset-y-0.5 left-0 rounded-pill', FILLS[p.state])}
+          style={{ width: at(p.actual) }}
+        />
+      ) : null}
+      <span className="absolute -inset-y-1 w-0.5 -translate-x-1/2 bg-ink" style={{ left: at(p.target) }} />
+    </div>
+  );
+}
+
+function WaterRows({
+  day,
+  unit,
+  clock,
+  live,
+  basis,
+}: {
+  day: DayView;
+  unit: VolumeUnit;
+  clock: string | null;
+  live: boolean;
+  basis?: string;
+}) {
+  const t = day.targets!.targets;
+  const tol = day.targets!.tolerances;
+  const volume = (ml: number) => formatVolume(ml, unit);
+  const cutoff = t.fluidCutoff ? cutoffProgress(day.fluids, t.fluidCutoff, clock) : null;
+  const cutoffBlock = cutoff ? (
+    <div className="mt-3 rounded-md bg-paper px-3 py-2.5">
+      <p className="text-sm font-semibold text-ink tabular-nums">
+        No fluids after {cutoff.cutoff.time}
+        {cutoff.cutoff.allowanceMl > 0 ? ` beyond ${volume(cutoff.cutoff.allowanceMl)}` : ''}
+      </p>
+      <p className="mt-1 flex flex-wrap items-center justify-between gap-x-3 gap-y-1 text-sm text-ink-muted tabular-nums">
+        <span>
+          Logged after {cutoff.cutoff.time}:{' '}
+          <span className="font-semibold text-ink">{volume(cutoff.afterMl)}</span>
+        </span>
+        {cutoff.state === 'over' ? (
+          <Badge tone="off-plan">Over by {volume(cutoff.afterMl - cutoff.cutoff.allowanceMl)}</Badge>
+        ) : cutoff.state === 'within' ? (
+          <Badge tone="on-plan">
+            {cutoff.cutoff.allowanceMl > 0 ? 'Within the allowance' : 'Nothing after it'}
+          </Badge>
+        ) : clock ? (
+          <Badge tone="neutral">In {untilText(clockMinutes(cutoff.cutoff.time) - clockMinutes(clock))}</Badge>
+        ) : null}
+      </p>
+    </div>
+  ) : null;
+
+  if (t.waterMl === null) {
+    return (
+      <li className="py-3 first:pt-0 last:pb-0">
+        <p className="font-semibold text-ink">Water</p>
+        {cutoffBlock}
+      </li>
+    );
+  }
+  return (
+    <ProgressRow
+      label="Water"
+      measure={volumeMeasure(unit)}
+      progress={amountProgress({
+        target: t.waterMl,
+        actual: day.fluids.length > 0 ? day.fluidTotalMl : null,
+        tolerance: percentOf(t.waterMl, tol.waterPct),
+        inProgress: live,
+      })}
+      live={live}
+      // The basis is written in mL; it only helps a reader who reads mL.
+      hint={unit === 'ml' ? basis : undefined}
+    >
+      {cutoffBlock}
+    </ProgressRow>
+  );
+}
+
+/** "2 h 10 min", "25 min". */
+function untilText(mins: number): string {
+  const m = Math.max(0, mins);
+  const h = Math.floor(m / 60);
+  const rest = m % 60;
+  if (h === 0) return `${rest}${NBSP}min`;
+  return rest === 0 ? `${h}${NBSP}h` : `${h}${NBSP}h ${rest}${NBSP}min`;
+}
+
+const SLOT_BADGE: Record<Exclude<SupplementSlot['state'], 'taken'>, { tone: BadgeTone; label: string }> = {
+  due: { tone: 'accent', label: 'Due now' },
+  late: { tone: 'drifting', label: 'Late' },
+  upcoming: { tone: 'neutral', label: 'Later' },
+  missed: { tone: 'not-logged', label: 'Not ticked' },
+};
+
+function doseText(slot: SupplementSlot): string {
+  const { dose, unit } = slot.item;
+  if (dose === null) return '';
+  return `${formatNumber(dose, 3)}${unit ? `${NBSP}${unit}` : ''}`;
+}
+
+function SupplementsDue({
+  athleteId,
+  day,
+  clock,
+  now,
+  canEdit,
+}: {
+  athleteId: string;
+  day: DayView;
+  clock: string | null;
+  now: string;
+  canEdit: boolean;
+}) {
+  const slots = supplementSlots(day.targets!.targets.supplements, day.supplements, clock);
+  const create = useCreateSupplement(athleteId, day.date);
+  const keeper = useRef(createClientIdKeeper()).current;
+  const [pending, setPending] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  // An entry names its item, not its time: the first open time of an item is the one a tick fills.
+  const firstOpen = new Set<string>();
+  const seen = new Set<string>();
+  for (const s of slots) {
+    if (s.taken || seen.has(s.item.id)) continue;
+    seen.add(s.item.id);
+    firstOpen.add(s.key);
+  }
+  const takenCount = slots.filter((s) => s.taken).length;
+
+  async function tick(slot: SupplementSlot) {
+    const body: SupplementEntryRequest = {
+      clientId: keeper.take(slot.key),
+      // Today the tick is the moment it is taken; on an earlier day the planned time stands in.
+      time: day.isToday ? now : slot.time,
+      name: slot.item.item,
+      dose: slot.item.dose,
+      doseUnit: slot.item.unit,
+      scheduleItemId: slot.item.id,
+    };
+    setPending(slot.key);
+    setError(null);
+    try {
+      await create.mutateAsync(body);
+      keeper.settle(body.clientId);
+    } catch (e) {
+      setError(isApiError(e) ? e.message : 'That could not be saved. Tap Taken again to retry.');
+    } finally {
+      setPending(null);
+    }
+  }
+
+  return (
+    <section aria-labelledby="supplements-due-heading" className="mt-4 border-t border-line pt-4">
+      <h3
+        id="supplements-due-heading"
+        className="flex items-baseline justify-between gap-3 font-semibold text-ink"
+      >
+        Supplements
+        <span className="text-sm font-normal text-ink-muted tabular-nums">
+          {formatNumber(takenCount)} of {formatNumber(slots.length)} taken
+        </span>
+      </h3>
+      <ul className="mt-2 divide-y divide-line">
+        {slots.map((slot) => {
+          const what = `${slot.item.item}${doseText(slot) ? ` ${doseText(slot)}` : ''}`;
+          return (
+            <li key={slot.key} className="flex min-h-touch items-center gap-3 py-2">
+              <span className="w-12 shrink-0 text-sm font-semibold text-ink-muted tabular-nums">
+                {slot.time}
+              </span>
+              <span className="min-w-0 flex-1 text-sm">
+                <span className="font-semibold text-ink">{slot.item.item}</span>
+                {doseText(slot) ? (
+                  <span className="text-ink-muted tabular-nums"> {doseText(slot)}</span>
+                ) : null}
+              </span>
+              {slot.taken ? (
+                <Badge tone="on-plan">
+                  <span className="tabular-nums">Taken {slot.taken.time}</span>
+                </Badge>
+              ) : canEdit && firstOpen.has(slot.key) ? (
+                <>
+                  {slot.state !== 'upcoming' ? <SlotBadge slot={slot} /> : null}
+                  <Button
+                    variant={slot.state === 'due' || slot.state === 'late' ? 'primary' : 'secondary'}
+                    loading={pending === slot.key}
+                    disabled={pending !== null && pending !== slot.key}
+                    aria-label={`Taken: ${what}, planned at ${slot.time}`}
+                    onClick={() => void tick(slot)}
+                  >
+                    Taken
+                  </Button>
+                </>
+              ) : (
+                <SlotBadge slot={slot} />
+              )}
+            </li>
+          );
+        })}
+      </ul>
+      {error ? (
+        <p role="alert" className="mt-1.5 text-sm font-medium text-off-plan">
+          {error}
+        </p>
+      ) : null}
+    </section>
+  );
+}
+
+function SlotBadge({ slot }: { slot: SupplementSlot }) {
+  if (slot.state === 'taken') return null;
+  const b = SLOT_BADGE[slot.state];
+  return <Badge tone={b.tone}>{b.label}</Badge>;
+}

@@ -1,0 +1,5 @@
+export function templatePath(templateId?: string): string {
+  return templateId
+    ? `/api/countdown-templates/${encodeURIComponent(templateId)}`
+    : '/api/countdown-templates';
+}

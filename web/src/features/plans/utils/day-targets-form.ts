@@ -1,0 +1,294 @@
+import type {
+  DayTargets,
+  GuardrailWarning,
+  EnergyTarget,
+  MacroTarget,
+  PlanBaseline,
+  ScheduleItem,
+  WaterTarget,
+} from '@driftmark/shared';
+
+/*
+ * A DayTargets as the coach types it: each metric's kind chosen from a list and its figure as text,
+ * so a half-typed number never becomes NaN inside the form. `toDayTargets` turns it into the
+ * shape the shared schema checks; `liveDayTargets` reads whatever is usable for live figures.
+ * Used by the plan editor and the template editor alike.
+ */
+
+export type EnergyKind = 'none' | EnergyTarget['kind'];
+export type MacroKind = 'none' | MacroTarget['kind'];
+export type WaterKind = 'none' | WaterTarget['kind'];
+export const MACROS = ['protein', 'carbohydrate', 'fat'] as const;
+export type Macro = (typeof MACROS)[number];
+
+/** A guardrail warning placed on one day; `field` is relative to the day's targets ("sodiumMg"). */
+export type DayWarning = Pick<GuardrailWarning, 'key' | 'severity' | 'message' | 'source'> & {
+  field: string | null;
+};
+
+export interface SupplementFormValues {
+  /** The schedule item's id (kept across edits; ticks on the athlete's side point at it). */
+  itemId: string;
+  item: string;
+  dose: string;
+  unit: string;
+  /** Clock times "HH:MM", separated by commas or spaces. */
+  times: string;
+}
+
+export interface DayTargetsFormValues {
+  energy: { kind: EnergyKind; value: string };
+  protein: { kind: MacroKind; value: string };
+  carbohydrate: { kind: MacroKind; value: string };
+  fat: { kind: MacroKind; value: string };
+  water: { kind: WaterKind; value: string };
+  sodiumMg: string;
+  fluidCutoff: { on: boolean; time: string; allowanceMl: string };
+  steps: string;
+  cardioMinutes: string;
+  supplements: SupplementFormValues[];
+  note: string;
+}
+
+export const NOT_A_NUMBER = 'Enter a number, e.g. 2400';
+
+/**
+ * "" → undefined, "72,5" → 72.5, "2,300" → 2300 (figures are shown with thousands commas, so a
+ * comma before exactly three digits groups thousands), anything else not a plain number → NaN.
+ */
+export function parseDecimal(text: string | null | undefined): number | undefined {
+  let t = (text ?? '').trim().replace(/\s+/g, '');
+  t = /^[+-]?[1-9]\d{0,2}(,\d{3})+(\.\d+)?$/.test(t) ? t.replaceAll(',', '') : t.replace(',', '.');
+  if (t === '') return undefined;
+  if (!/^[+-]?(\d+\.?\d*|\.\d+)$/.test(t)) return Number.NaN;
+  return Number(t);
+}
+
+/** A number put back into a box, rounded to `digits` without trailing zeros. */
+export function toInputText(value: number | null | undefined, digits = 1): string {
+  if (value === null || value === undefined || !Number.isFinite(value)) return '';
+  const f = 10 ** digits;
+  const rounded = Math.round(value * f) / f;
+  return String(Object.is(rounded, -0) ? 0 : rounded);
+}
+
+export function newSupplementRow(): SupplementFormValues {
+  return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '' };
+}
+
+export function emptyDayTargetsFormValues(): DayTargetsFormValues {
+  return {
+    energy: { kind: 'none', value: '' },
+    protein: { kind: 'none', value: '' },
+    carbohydrate: { kind: 'none', value: '' },
+    fat: { kind: 'none', value: '' },
+    water: { kind: 'none', value: '' },
+    sodiumMg: '',
+    fluidCutoff: { on: false, time: '', allowanceMl: '' },
+    steps: '',
+    cardioMinutes: '',
+    supplements: [],
+    note: '',
+  };
+}
+
+function energyValue(t: EnergyTarget | null): DayTargetsFormValues['energy'] {
+  if (!t) return { kind: 'none', value: '' };
+  return t.kind === 'kcal'
+    ? { kind: 'kcal', value: toInputText(t.kcal, 0) }
+    : { kind: 'usual_times', value: toInputText(t.factor, 3) };
+}
+
+function macroValue(t: MacroTarget | null): DayTargetsFormValues['protein'] {
+  if (!t) return { kind: 'none', value: '' };
+  if (t.kind === 'g') return { kind: 'g', value: toInputText(t.g, 1) };
+  if (t.kind === 'pct') return { kind: 'pct', value: toInputText(t.pct, 1) };
+  return { kind: 'g_per_kg', value: toInputText(t.perKg, 2) };
+}
+
+function waterValue(t: WaterTarget | null): DayTargetsFormValues['water'] {
+  if (!t) return { kind: 'none', value: '' };
+  if (t.kind === 'ml') return { kind: 'ml', value: toInputText(t.ml, 0) };
+  if (t.kind === 'usual_plus') return { kind: 'usual_plus', value: toInputText(t.ml, 0) };
+  return { kind: 'usual_times', value: toInputText(t.factor, 3) };
+}
+
+/** A saved DayTargets put into the form. */
+export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
+  return {
+    energy: energyValue(t.energy),
+    protein: macroValue(t.protein),
+    carbohydrate: macroValue(t.carbohydrate),
+    fat: macroValue(t.fat),
+    water: waterValue(t.water),
+    sodiumMg: toInputText(t.sodiumMg, 0),
+    fluidCutoff: t.fluidCutoff
+      ? { on: true, time: t.fluidCutoff.time, allowanceMl: toInputText(t.fluidCutoff.allowanceMl, 0) }
+      : { on: false, time: '', allowanceMl: '' },
+    steps: toInputText(t.steps, 0),
+    cardioMinutes: toInputText(t.cardioMinutes, 0),
+    supplements: t.supplements.map((s) => ({
+      itemId: s.id,
+      item: s.item,
+      dose: toInputText(s.dose, 3),
+      unit: s.unit ?? '',
+      times: s.times.join(', '),
+    })),
+    note: t.note ?? '',
+  };
+}
+
+export function splitTimes(text: string): string[] {
+  return text
+    .split(/[\s,;]+/)
+    .map((t) => t.trim())
+    .filter(Boolean)
+    .map((t) => (/^\d:\d{2}$/.test(t) ? `0${t}` : t));
+}
+
+export interface TargetsConversion {
+  /** The request part for the schema (a number box that is not a number carries NaN). */
+  targets: DayTargets;
+  /** Form paths relative to the DayTargets ("energy.value") → "not a number". */
+  numberErrors: Record<string, string>;
+}
+
+/** The form's values → the DayTargets the schema checks, with the boxes that hold no number. */
+export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
+  const numberErrors: Record<string, string> = {};
+  const read = (path: string, text: string): number | undefined => {
+    const n = parseDecimal(text);
+    if (n !== undefined && Number.isNaN(n)) numberErrors[path] = NOT_A_NUMBER;
+    return n;
+  };
+  const optional = (path: string, text: string): number | null => read(path, text) ?? null;
+  // Missing figures stay undefined so the schema says "… must be a number" beside the box.
+  const n = (path: string, text: string) => read(path, text) as number;
+
+  const energy: EnergyTarget | null =
+    v.energy.kind === 'kcal'
+      ? { kind: 'kcal', kcal: n('energy.value', v.energy.value) }
+      : v.energy.kind === 'usual_times'
+        ? { kind: 'usual_times', factor: n('energy.value', v.energy.value) }
+        : null;
+  const macro = (m: Macro): MacroTarget | null => {
+    const { kind, value } = v[m];
+    const path = `${m}.value`;
+    if (kind === 'g') return { kind: 'g', g: n(path, value) };
+    if (kind === 'pct') return { kind: 'pct', pct: n(path, value) };
+    if (kind === 'g_per_kg') return { kind: 'g_per_kg', perKg: n(path, value) };
+    return null;
+  };
+  const water: WaterTarget | null =
+    v.water.kind === 'ml'
+      ? { kind: 'ml', ml: n('water.value', v.water.value) }
+      : v.water.kind === 'usual_plus'
+        ? { kind: 'usual_plus', ml: n('water.value', v.water.value) }
+        : v.water.kind === 'usual_times'
+          ? { kind: 'usual_times', factor: n('water.value', v.water.value) }
+          : null;
+  const supplements: ScheduleItem[] = (v.supplements ?? []).map((s, i) => ({
+    id: s.itemId,
+    item: s.item,
+    dose: optional(`supplements.${i}.dose`, s.dose),
+    unit: s.unit.trim() === '' ? null : s.unit.trim(),
+    times: splitTimes(s.times),
+  }));
+  const note = v.note.trim();
+
+  return {
+    targets: {
+      energy,
+      protein: macro('protein'),
+      carbohydrate: macro('carbohydrate'),
+      fat: macro('fat'),
+      water,
+      sodiumMg: optional('sodiumMg', v.sodiumMg),
+      fluidCutoff: v.fluidCutoff.on
+        ? {
+            time: v.fluidCutoff.time,
+            allowanceMl: optional('fluidCutoff.allowanceMl', v.fluidCutoff.allowanceMl) ?? 0,
+          }
+        : null,
+      steps: optional('steps', v.steps),
+      cardioMinutes: optional('cardioMinutes', v.cardioMinutes),
+      supplements,
+      note: note === '' ? null : note,
+    },
+    numberErrors,
+  };
+}
+
+const usable = (x: number | undefined | null): x is number => typeof x === 'number' && Number.isFinite(x);
+
+/**
+ * What the typed values say so far, for live figures and guardrails: a metric whose box is empty
+ * or not a number counts as "no target", a cut-off without a valid time is left out.
+ */
+export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
+  const { targets } = toDayTargets(v);
+  const e = targets.energy;
+  const m = (t: MacroTarget | null): MacroTarget | null => {
+    if (!t) return null;
+    const x = t.kind === 'g' ? t.g : t.kind === 'pct' ? t.pct : t.perKg;
+    return usable(x) ? t : null;
+  };
+  const w = targets.water;
+  const cutoff = targets.fluidCutoff;
+  return {
+    ...targets,
+    energy: e && usable(e.kind === 'kcal' ? e.kcal : e.factor) ? e : null,
+    protein: m(targets.protein),
+    carbohydrate: m(targets.carbohydrate),
+    fat: m(targets.fat),
+    water: w && usable(w.kind === 'usual_times' ? w.factor : w.ml) ? w : null,
+    sodiumMg: usable(targets.sodiumMg) ? targets.sodiumMg : null,
+    fluidCutoff:
+      cutoff && /^([01]\d|2[0-3]):[0-5]\d$/.test(cutoff.time)
+        ? { time: cutoff.time, allowanceMl: usable(cutoff.allowanceMl) ? cutoff.allowanceMl : 0 }
+        : null,
+    steps: usable(targets.steps) ? targets.steps : null,
+    cardioMinutes: usable(targets.cardioMinutes) ? targets.cardioMinutes : null,
+    supplements: targets.supplements
+      .filter((s) => s.item.trim() !== '')
+      .map((s) => ({
+        ...s,
+        dose: usable(s.dose) ? s.dose : null,
+        times: s.times.filter((t) => /^([01]\d|2[0-3]):[0-5]\d$/.test(t)),
+      })),
+  };
+}
+
+/**
+ * A schema or server path inside a DayTargets ("protein.pct", "supplements.0.times.1") → the form
+ * path of the box that shows it ("protein.value", "supplements.0.times").
+ */
+export function targetsFormPath(path: string): string {
+  const parts = path.split('.');
+  const [head, second, third] = parts;
+  if (
+    head === 'energy' ||
+    head === 'water' ||
+    head === 'protein' ||
+    head === 'carbohydrate' ||
+    head === 'fat'
+  ) {
+    return `${head}.value`;
+  }
+  if (head === 'fluidCutoff')
+    return second === 'allowanceMl' ? 'fluidCutoff.allowanceMl' : 'fluidCutoff.time';
+  if (head === 'supplements') {
+    if (second === undefined) return 'supplements';
+    const field = third === 'id' || third === undefined ? 'item' : third;
+    return `supplements.${second}.${field}`;
+  }
+  return head ?? path;
+}
+
+/** No baseline figures at all (the template editor, or an athlete with no intake yet). */
+export const NO_BASELINE: PlanBaseline = {
+  usualWaterMl: null,
+  usualEnergyKcal: null,
+  weightKg: null,
+  sex: null,
+};
