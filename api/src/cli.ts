@@ -7,7 +7,7 @@ const USAGE = `Usage: driftmark-cli <command>
 
 Commands:
   migrate       run pending database migrations
-  seed          create the demo team (idempotent; refused when APP_MODE=production)
+  seed          create the demo team, or move its dates to today (refused when APP_MODE=production)
   check-schema  exit 1 and print the SQL when the entities and the migrated schema disagree`;
 
 /** The CLI needs only these two variables, so it runs before the rest of the environment exists. */
@@ -45,8 +45,14 @@ async function seed(): Promise<number> {
   }
   const dataSource = await createDataSource(env).initialize();
   try {
-    const { created } = await seedDemo(dataSource, { appMode: env.appMode });
-    console.log(created ? 'Demo team created.' : 'Demo team already present; nothing to do.');
+    const { created, movedDays } = await seedDemo(dataSource, { appMode: env.appMode });
+    console.log(
+      created
+        ? 'Demo team created.'
+        : movedDays > 0
+          ? `Demo team already present; its dates moved forward ${movedDays} day(s) to stay around today.`
+          : 'Demo team already present; nothing to do.',
+    );
     return 0;
   } finally {
     await dataSource.destroy();

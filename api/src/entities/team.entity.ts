@@ -10,6 +10,8 @@ export interface TeamSettings {
   poses?: string[];
   /** Guardrail floors for energy and water per sex (PUT /api/team/guardrails); GUARDRAIL_DEFAULTS without. */
   guardrails?: GuardrailFloors;
+  /** Demo team only: the instant (ISO 8601) its dates were seeded or last moved for (seed/refresh-demo-dates.ts). */
+  demoAnchorAt?: string;
 }
 
 @Entity({ name: 'teams' })

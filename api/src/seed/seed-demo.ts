@@ -1,8 +1,9 @@
 /**
  * Writes the demo team (demo-team.ts) into an empty database, with about four months of daily
  * check-ins per athlete (history.ts), placeholder condition photos (photos.ts), the team's countdown
- * templates and each athlete's plan versions (demo-plans.ts). Idempotent:
- * when the demo owner already exists nothing changes. Refused in production.
+ * templates and each athlete's plan versions (demo-plans.ts). Idempotent: when the demo owner
+ * already exists only the dates move, to keep the team around today (refresh-demo-dates.ts).
+ * Refused in production.
  */
 import bcrypt from 'bcryptjs';
 import { CONSENTS } from '@driftmark/shared';
@@ -27,6 +28,7 @@ import {
   type DemoAthleteDefinition,
 } from './demo-team.js';
 import { createRandom } from './random.js';
+import { refreshDemoDates } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 
@@ -36,7 +38,10 @@ const SEED_LOCK_KEY = 'driftmark:seed-demo';
 const DAY_MS = 86_400_000;
 
 export interface SeedDemoOptions {
-  /** The seed date; event dates are counted from it in each athlete's time zone. */
+  /**
+   * The seed date; event dates are counted from it in each athlete's time zone. On an already
+   * seeded database, the date the demo team's dates are moved to.
+   */
   now?: Date;
   /** Defaults to APP_MODE from the environment. */
   appMode?: AppMode | string;
@@ -49,6 +54,8 @@ export interface SeedDemoOptions {
 
 export interface SeedDemoResult {
   created: boolean;
+  /** Days an existing team's dates moved forward to today (the most of any athlete); 0 when none. */
+  movedDays: number;
 }
 
 export class SeedRefusedError extends Error {
@@ -94,7 +101,14 @@ export async function seedDemo(
       ? createStorage({ uploadsDir: configSchema.shape.UPLOADS_DIR.parse(process.env.UPLOADS_DIR) })
       : options.storage;
 
-  if (await ownerExists(dataSource.manager)) return { created: false };
+  if (await ownerExists(dataSource.manager)) {
+    const movedDays = await dataSource.transaction(async (manager) => {
+      // Two refreshes at once must not both move the dates: the second waits, then finds none to move.
+      await lockSeed(manager);
+      return refreshDemoDates(manager, now);
+    });
+    return { created: false, movedDays };
+  }
   const plans = planDemoHistory(DEMO_ATHLETES, now);
   // One hash for all demo accounts: bcrypt at cost 12 takes a noticeable fraction of a second.
   const passwordHash = await bcrypt.hash(DEMO_PASSWORD, BCRYPT_COST);
@@ -105,8 +119,8 @@ export async function seedDemo(
     return await dataSource.transaction(async (manager) => {
       // Two seeds started together (two terminals) must not both insert: the second waits here,
       // then sees the owner and stops.
-      await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [SEED_LOCK_KEY]);
-      if (await ownerExists(manager)) return { created: false };
+      await lockSeed(manager);
+      if (await ownerExists(manager)) return { created: false, movedDays: 0 };
       // Drawing and re-encoding the photos runs in sharp's threads while the rows are inserted.
       const photos = storage ? renderDemoPhotos(plans) : null;
       rendering = photos ?? rendering;
@@ -118,7 +132,7 @@ export async function seedDemo(
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }
-      return { created: true };
+      return { created: true, movedDays: 0 };
     });
   } catch (error) {
     // The rows rolled back; the files written before them go too.
@@ -126,6 +140,10 @@ export async function seedDemo(
     if (storage) await Promise.allSettled(written.map((key) => storage.delete(key)));
     throw error;
   }
+}
+
+async function lockSeed(manager: EntityManager): Promise<void> {
+  await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [SEED_LOCK_KEY]);
 }
 
 async function ownerExists(manager: EntityManager): Promise<boolean> {
@@ -142,7 +160,8 @@ async function writeDemoTeam(
   const random = createRandom(DEMO_SEED);
   const team = await manager
     .getRepository(Team)
-    .save({ name: DEMO_TEAM_NAME, settings: { reminderHour: 10 } });
+    // The anchor: a later seed run moves the dates forward from it (refresh-demo-dates.ts).
+    .save({ name: DEMO_TEAM_NAME, settings: { reminderHour: 10, demoAnchorAt: now.toISOString() } });
 
   const users = manager.getRepository(User);
   const staff = new Map<string, User>();

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { AcknowledgementView, DayTargets, GuardrailContext, PlanContent } from '../schemas/plans.js';
 import { cautionsForDay } from './cautions.js';
-import { checkGuardrails, GUARDRAIL_DEFAULTS, STOP_SIGNS_TEXT } from './guardrails.js';
+import { checkGuardrails, GUARDRAIL_DEFAULTS } from './guardrails.js';
 import { emptyDayTargets, starterPlanContent } from './resolve.js';
 
 const day = (t: Partial<DayTargets>): DayTargets => ({ ...emptyDayTargets(), ...t });
@@ -57,7 +57,7 @@ describe('cautionsForDay', () => {
     expect(cautions[0]).toEqual({
       code: 'countdown',
       severity: 'strong',
-      message: `E-2 of your countdown: water, sodium and energy change day by day. ${STOP_SIGNS_TEXT}`,
+      message: `E-2 of your countdown: water, sodium and energy change day by day.`,
       source: expect.stringContaining('Escalante'),
       acknowledgedAt: null,
     });
@@ -68,7 +68,7 @@ describe('cautionsForDay', () => {
     const c = content();
     const cautions = cautionsForDay({ content: c, date: '2026-12-05', acknowledgements: [] });
     expect(cautions.map((x) => x.message)).toEqual([
-      `E-0 of your countdown: water, sodium and energy change day by day. ${STOP_SIGNS_TEXT}`,
+      `E-0 of your countdown: water, sodium and energy change day by day.`,
     ]);
   });
 

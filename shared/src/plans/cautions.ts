@@ -1,5 +1,4 @@
 import type { AcknowledgementView, DayCaution, PlanContent } from '../schemas/plans.js';
-import { STOP_SIGNS_TEXT } from './guardrails.js';
 import { countdownDayLabel, dayEntryFor } from './resolve.js';
 
 /** Peak-week practices rest on little evidence; water and electrolyte manipulation may do harm. */
@@ -30,7 +29,7 @@ export function cautionsForDay(input: {
       severity: 'strong',
       message:
         `${countdownDayLabel(entry.override.countdownOffset)} of your countdown: water, sodium and energy ` +
-        `change day by day. ${STOP_SIGNS_TEXT}`,
+        'change day by day.',
       source: COUNTDOWN_SOURCE,
       acknowledgedAt: null,
     });

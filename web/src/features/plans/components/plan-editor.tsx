@@ -740,7 +740,7 @@ function ChecksSummary({ checks, content }: { checks: PlanChecks; content: PlanC
                 {w.severity === 'strong' ? (
                   <span className="font-semibold text-off-plan">Strong: </span>
                 ) : null}
-                {w.message.startsWith(scopeLabel(w, plainContent)) ? null : (
+                {w.scope.kind !== 'plan' ? null : (
                   <span className="font-medium text-ink">{scopeLabel(w, plainContent)}: </span>
                 )}
                 <span className="text-ink">{w.message}</span>{' '}

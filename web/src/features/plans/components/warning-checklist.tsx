@@ -24,7 +24,8 @@ export function toAckWarnings(
     message: w.message,
     source: w.source,
     severity: w.severity,
-    where: where(w),
+    // A day's or day type's message already opens with its name; only plan-wide ones need a label.
+    where: w.scope.kind === 'plan' ? where(w) : null,
   }));
 }
 

@@ -103,7 +103,7 @@ export function WeekView({ plan }: { plan: PlanView }) {
 
       <div>
         <h3 className="mb-2 text-sm font-semibold text-ink">Next 14 days</h3>
-        <ol className="flex gap-1.5 overflow-x-auto pb-2" aria-label="The next 14 days">
+        <ol className="grid grid-cols-2 gap-1.5 sm:grid-cols-4 lg:grid-cols-7" aria-label="The next 14 days">
           {Array.from({ length: 14 }, (_, i) => addDays(today, i)).map((date) => {
             const v = versionInForce(versions, date);
             let name = 'No plan';
@@ -130,7 +130,7 @@ export function WeekView({ plan }: { plan: PlanView }) {
               <li
                 key={date}
                 className={cn(
-                  'w-28 shrink-0 rounded-md border p-2',
+                  'min-w-0 rounded-md border p-2',
                   offset !== null ? 'border-caution/50 bg-caution-soft/60' : 'border-line bg-surface',
                   date === today && 'ring-1 ring-accent',
                 )}
