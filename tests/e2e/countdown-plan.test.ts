@@ -102,4 +102,51 @@ describe('a countdown from a template, with guardrails', () => {
     expect(tomorrow.countdown?.dayLabel).toBe('E-3');
     expect(tomorrow.cautions.map((c) => c.code)).toEqual(expect.arrayContaining(['countdown', 'carb_load']));
   });
+
+  it('warns live in the plan editor and saves a new version only once the warning is acknowledged', async () => {
+    const { page } = desktop;
+    await page.goto('/coach');
+    await page.getByRole('link', { name: 'Leilani Akana' }).first().click();
+    await page.getByRole('link', { name: 'Plan', exact: true }).click();
+    const editor = page.getByRole('form', { name: 'New plan version' });
+    await editor.waitFor();
+    const history = page.getByRole('link', { name: /^History \((\d+)\)$/ });
+    const before = Number((await history.innerText()).match(/\d+/)?.[0]);
+
+    // 1,200 mg of sodium is under the NASEM 2019 adequate intake: the editor says so before saving.
+    await editor.getByLabel('Sodium, mg').first().fill('1200');
+    await editor
+      .getByText(/1,200 mg/)
+      .first()
+      .waitFor();
+    await editor.getByLabel('Reason').fill('Lower sodium on training days');
+    await editor.getByRole('button', { name: 'Review and save' }).click();
+
+    const dialog = page.getByRole('dialog');
+    await dialog.getByRole('heading', { name: /Acknowledge/ }).waitFor();
+    await expect(dialog.getByText(/sodium/i).count()).resolves.toBeGreaterThan(0);
+    const save = dialog.getByRole('button', { name: 'Acknowledge and save' });
+    await expect(save.isDisabled()).resolves.toBe(true);
+    const boxes = dialog.getByRole('checkbox');
+    for (let i = 0; i < (await boxes.count()); i += 1) await boxes.nth(i).check();
+    await save.click();
+
+    await page.getByText(/Version \d+ saved, in force from/).waitFor();
+    await expect(history.innerText()).resolves.toBe(`History (${before + 1})`);
+    const athleteId = new URL(page.url()).pathname.split('/')[3];
+    const latest = await page.evaluate(async (id) => {
+      const plan = (await (await fetch(`/api/athletes/${id}/plan`)).json()) as {
+        data: { latest: { acknowledgements: { code: string; by: { name: string } }[] } };
+      };
+      return plan.data.latest.acknowledgements;
+    }, athleteId);
+    expect(latest).toEqual(
+      expect.arrayContaining([
+        expect.objectContaining({
+          code: 'sodium_low',
+          by: expect.objectContaining({ name: 'Mara Lindqvist' }),
+        }),
+      ]),
+    );
+  });
 });

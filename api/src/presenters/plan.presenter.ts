@@ -35,7 +35,7 @@ export function presentVersionSummary(
     reason: v.reason,
     createdBy: { id: v.createdBy.id, name: v.createdBy.name },
     createdAt: v.createdAt.toISOString(),
-    changes: describeChanges(previous?.content ?? null, v.content),
+    changes: describeChanges(previous?.content ?? null, v.content, { effectiveFrom: v.effectiveFrom }),
     countdown: v.content.countdown,
     acknowledgementCount,
   };

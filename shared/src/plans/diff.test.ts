@@ -97,6 +97,16 @@ describe('describeChanges', () => {
     ]);
   });
 
+  it('dated days that were past when the version was saved are not reported as removed', () => {
+    const prev = base();
+    prev.dates = [
+      { date: '2026-11-29', label: 'Low', countdownOffset: null, targets: emptyDayTargets() },
+      { date: '2026-12-03', label: 'Up', countdownOffset: null, targets: emptyDayTargets() },
+    ];
+    const next = base();
+    expect(describeChanges(prev, next, { effectiveFrom: '2026-12-02' })).toEqual(['Thu 3 Dec (Up) removed']);
+  });
+
   it('countdown applied, then moved: its days summarised', () => {
     const template = {
       id: '8c1b9f2e-6d2a-4b7e-9a55-0c0f3b1d2e11',

@@ -15,8 +15,16 @@ import { countdownDayLabel } from './resolve.js';
 /** A figure as written: its value and unit ("2,200", "kcal"); the unit is empty for relative forms. */
 type Figure = [value: string, unit: string];
 
-/** What changed between two versions, in plain words ("Rest day: energy 2200 → 2000 kcal"). */
-export function describeChanges(previous: PlanContent | null, next: PlanContent): string[] {
+/**
+ * What changed between two versions, in plain words ("Rest day: energy 2200 → 2000 kcal"). With
+ * `effectiveFrom`, dated days before it that the new version no longer carries are not reported as
+ * removed: they were past when it was saved and keep the plan they had.
+ */
+export function describeChanges(
+  previous: PlanContent | null,
+  next: PlanContent,
+  options: { effectiveFrom?: string } = {},
+): string[] {
   if (!previous) return ['First version'];
   const out: string[] = [];
 
@@ -80,6 +88,7 @@ export function describeChanges(previous: PlanContent | null, next: PlanContent)
   }
   for (const d of previous.dates) {
     if (nextDates.has(d.date)) continue;
+    if (options.effectiveFrom && d.date < options.effectiveFrom) continue;
     if (countdownChanged && d.countdownOffset != null) removedCountdown.push(d);
     else out.push(`${dayName(d)} removed`);
   }
