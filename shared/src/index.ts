@@ -20,3 +20,6 @@ export * from './plans/guardrails.js';
 export * from './plans/countdown.js';
 export * from './plans/diff.js';
 export * from './plans/cautions.js';
+export * from './schemas/trends.js';
+export * from './schemas/marks.js';
+export * from './schemas/review.js';

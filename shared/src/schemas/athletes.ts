@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { LIMITS } from '../limits.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
 import { clockTime, isoDate, timeZone } from './common.js';
+import { rosterFigures } from './trends.js';
 
 export const SEXES = ['female', 'male'] as const;
 export const GOALS = ['lose', 'maintain', 'gain'] as const;
@@ -153,6 +154,8 @@ export const rosterRow = z.object({
   daysToEvent: z.number().int().nullable(),
   division: z.string().nullable(),
   coach: z.object({ id: z.uuid(), name: z.string() }),
+  /** Computed figures (trend, rate, adherence, flags): see rosterFigures in trends.ts. */
+  figures: rosterFigures,
 });
 export type RosterRow = z.infer<typeof rosterRow>;
 

@@ -1,0 +1,244 @@
+import { z } from 'zod';
+import { isoDate, uuid } from './common.js';
+
+/**
+ * Trend, rate, projection, drift from plan and adherence, as the server computes them
+ * (api/src/lib/analysis.ts). All weights in kg, fluids in mL, energy in kcal, sodium in mg.
+ */
+
+export const DRIFT_STATES = ['on_plan', 'drifting', 'off_plan', 'not_logged'] as const;
+export type DriftState = (typeof DRIFT_STATES)[number];
+export const DRIFT_STATE_LABELS: Record<DriftState, string> = {
+  on_plan: 'On plan',
+  drifting: 'Drifting',
+  off_plan: 'Off plan',
+  not_logged: 'Not logged',
+};
+
+/** Metrics a day can drift on (each only when the day has a target for it). */
+export const DRIFT_METRICS = [
+  'energy',
+  'protein',
+  'carbohydrate',
+  'fat',
+  'water',
+  'sodium',
+  'steps',
+  'cardio',
+] as const;
+export type DriftMetric = (typeof DRIFT_METRICS)[number];
+export const DRIFT_METRIC_LABELS: Record<DriftMetric, string> = {
+  energy: 'Energy',
+  protein: 'Protein',
+  carbohydrate: 'Carbohydrate',
+  fat: 'Fat',
+  water: 'Water',
+  sodium: 'Sodium',
+  steps: 'Steps',
+  cardio: 'Cardio',
+};
+export const DRIFT_METRIC_UNITS: Record<DriftMetric, string> = {
+  energy: 'kcal',
+  protein: 'g',
+  carbohydrate: 'g',
+  fat: 'g',
+  water: 'mL',
+  sodium: 'mg',
+  steps: 'steps',
+  cardio: 'min',
+};
+
+/** One metric's drift on one day. */
+export const driftEntry = z.object({
+  metric: z.enum(DRIFT_METRICS),
+  target: z.number(),
+  /** Null when nothing was logged for it (state not_logged). */
+  actual: z.number().nullable(),
+  /** actual − target. */
+  diff: z.number().nullable(),
+  /** (actual − target) / target; null when the target is 0 or nothing was logged. */
+  relative: z.number().nullable(),
+  /** The tolerance in the metric's own unit (energy ±5 % of 2,400 kcal → 120). */
+  tolerance: z.number(),
+  state: z.enum(DRIFT_STATES),
+});
+export type DriftEntry = z.infer<typeof driftEntry>;
+
+/** Fluids after the day's cut-off beyond its allowance. */
+export const cutoffBreach = z.object({
+  cutoff: z.string(),
+  allowanceMl: z.number(),
+  afterCutoffMl: z.number(),
+  /** afterCutoffMl − allowanceMl (> 0 means a breach). */
+  excessMl: z.number(),
+});
+export type CutoffBreach = z.infer<typeof cutoffBreach>;
+
+export const FLAG_KINDS = [
+  'acute_drop',
+  'rate_beyond',
+  'rate_far_beyond',
+  'symptom',
+  'missed_weigh_ins',
+] as const;
+export type FlagKind = (typeof FLAG_KINDS)[number];
+
+export const trendFlag = z.object({
+  kind: z.enum(FLAG_KINDS),
+  /** The day it concerns (the later weigh-in, the last missed day, the symptom's day…). */
+  date: z.string(),
+  severity: z.enum(['warning', 'strong']),
+  message: z.string(),
+  source: z.string(),
+});
+export type TrendFlag = z.infer<typeof trendFlag>;
+
+/** One row per calendar day in the range (days with nothing logged included). */
+export const trendDay = z.object({
+  date: z.string(),
+  /** Morning weigh-in, null when not weighed. */
+  weightKg: z.number().nullable(),
+  /** Smoothed trend (10 % smoothing), carried over unweighed days (not recomputed from invented points). */
+  trendKg: z.number().nullable(),
+  /** Trailing 7-day mean of the weigh-ins present; null with fewer than 4 in the window. */
+  mean7Kg: z.number().nullable(),
+  /** What was logged that day (totals). */
+  actuals: z.object({
+    energyKcal: z.number().nullable(),
+    proteinG: z.number().nullable(),
+    carbohydrateG: z.number().nullable(),
+    fatG: z.number().nullable(),
+    fluidMl: z.number().nullable(),
+    sodiumMg: z.number().nullable(),
+    steps: z.number().nullable(),
+    cardioMinutes: z.number().nullable(),
+  }),
+  /** Resolved targets in force that day (null without a plan). */
+  targets: z
+    .object({
+      energyKcal: z.number().nullable(),
+      proteinG: z.number().nullable(),
+      carbohydrateG: z.number().nullable(),
+      fatG: z.number().nullable(),
+      waterMl: z.number().nullable(),
+      sodiumMg: z.number().nullable(),
+      steps: z.number().nullable(),
+      cardioMinutes: z.number().nullable(),
+      fluidCutoff: z.object({ time: z.string(), allowanceMl: z.number() }).nullable(),
+      versionNumber: z.number().int(),
+    })
+    .nullable(),
+  drift: z.array(driftEntry),
+  breach: cutoffBreach.nullable(),
+  /** Countdown day label ("E-3") or null. */
+  countdown: z.object({ offset: z.number().int(), dayLabel: z.string() }).nullable(),
+});
+export type TrendDay = z.infer<typeof trendDay>;
+
+export const rateView = z.object({
+  /** Least-squares slope × 7, kg per week. */
+  kgPerWeek: z.number(),
+  /** kgPerWeek / mean weight of the window × 100. */
+  percentPerWeek: z.number(),
+  r2: z.number(),
+  /** Weigh-ins used (≥ 7) and the 14-day window. */
+  points: z.number().int(),
+  from: z.string(),
+  to: z.string(),
+  /** Guidance for the athlete's phase, %/week (negative = loss), e.g. −1 … −0.5 while dieting (Helms 2014). */
+  band: z
+    .object({ minPct: z.number(), maxPct: z.number(), label: z.string(), source: z.string() })
+    .nullable(),
+});
+export type RateView = z.infer<typeof rateView>;
+
+export const projectionView = z.object({
+  date: z.string(),
+  kg: z.number(),
+  /** 80 % prediction interval. */
+  lowKg: z.number(),
+  highKg: z.number(),
+  level: z.literal(0.8),
+});
+export type ProjectionView = z.infer<typeof projectionView>;
+
+/** Weekly adherence for one metric: share of logged days on plan. */
+export const adherenceWeek = z.object({
+  /** Monday of the week. */
+  weekStart: z.string(),
+  metric: z.enum(DRIFT_METRICS),
+  /** Days that week with a target for the metric. */
+  targetDays: z.number().int(),
+  loggedDays: z.number().int(),
+  onPlanDays: z.number().int(),
+  /** onPlanDays / loggedDays; null with nothing logged. */
+  adherence: z.number().nullable(),
+  /** loggedDays / targetDays. */
+  loggedShare: z.number().nullable(),
+});
+export type AdherenceWeek = z.infer<typeof adherenceWeek>;
+
+export const maintenanceView = z.object({
+  kcalPerDay: z.number(),
+  /** Logged days used (countdown days excluded). */
+  days: z.number().int(),
+  from: z.string(),
+  to: z.string(),
+  /** Always says it is a rule-of-thumb estimate. */
+  note: z.string(),
+});
+export type MaintenanceView = z.infer<typeof maintenanceView>;
+
+/** GET /api/athletes/:athleteId/trend?from&to */
+export const trendQuery = z.object({ from: isoDate, to: isoDate });
+export type TrendQuery = z.infer<typeof trendQuery>;
+
+export const trendView = z.object({
+  athleteId: uuid,
+  from: z.string(),
+  to: z.string(),
+  /** The athlete's today. */
+  today: z.string(),
+  eventDate: z.string().nullable(),
+  days: z.array(trendDay),
+  /** Rate over the 14 days ending at `to` (or today when earlier); null with fewer than 7 weigh-ins. */
+  rate: rateView.nullable(),
+  /** To the event date; null without an event ahead or too few points. */
+  projection: projectionView.nullable(),
+  adherence: z.array(adherenceWeek),
+  maintenance: maintenanceView.nullable(),
+  flags: z.array(trendFlag),
+});
+export type TrendView = z.infer<typeof trendView>;
+
+// Roster and review queue ----------------------------------------------------------------------
+
+export const PHASES = ['countdown', 'dieting', 'maintaining', 'regaining', 'no_plan'] as const;
+export type Phase = (typeof PHASES)[number];
+export const PHASE_LABELS: Record<Phase, string> = {
+  countdown: 'Countdown',
+  dieting: 'Dieting',
+  maintaining: 'Maintaining',
+  regaining: 'Regaining',
+  no_plan: 'No plan',
+};
+
+/** Extra roster columns (merged into RosterRow). */
+export const rosterFigures = z.object({
+  phase: z.enum(PHASES),
+  /** "E-3" when today is a countdown day. */
+  countdownLabel: z.string().nullable(),
+  latestWeightKg: z.number().nullable(),
+  latestWeighInDate: z.string().nullable(),
+  trendKg: z.number().nullable(),
+  /** 14-day rate, %/week; null with too few weigh-ins. */
+  ratePercentPerWeek: z.number().nullable(),
+  rateBand: z.object({ minPct: z.number(), maxPct: z.number() }).nullable(),
+  /** Share of logged metric-days on plan over the last 7 days; null with nothing to judge. */
+  adherence7: z.number().nullable(),
+  /** The athlete's last day with anything logged. */
+  lastCheckInDate: z.string().nullable(),
+  /** Open safety flags (kinds) over the last 7 days. */
+  flags: z.array(z.enum(FLAG_KINDS)),
+});
+export type RosterFigures = z.infer<typeof rosterFigures>;
