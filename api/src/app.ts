@@ -17,12 +17,15 @@ import { devMailRouter } from './routes/dev-mail.routes.js';
 import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
+import { marksRouter } from './routes/marks.routes.js';
 import { meRouter } from './routes/me.routes.js';
 import { photosRouter } from './routes/photos.routes.js';
 import { plansRouter } from './routes/plans.routes.js';
 import { posesRouter } from './routes/poses.routes.js';
+import { reviewQueueRouter } from './routes/review-queue.routes.js';
 import { rosterRouter } from './routes/roster.routes.js';
 import { teamRouter } from './routes/team.routes.js';
+import { trendsRouter } from './routes/trends.routes.js';
 
 /** Largest JSON body accepted (photos go through multipart uploads, not JSON). */
 const JSON_LIMIT = '100kb';
@@ -66,6 +69,7 @@ export function createApp(deps: {
   api.use('/me', meRouter());
   api.use('/invitations', invitationsRouter());
   api.use('/roster', rosterRouter());
+  api.use('/review-queue', reviewQueueRouter());
   api.use('/team/poses', posesRouter());
   api.use('/team', teamRouter());
   api.use('/athletes', athletesRouter());
@@ -73,10 +77,14 @@ export function createApp(deps: {
   api.use('/athletes', checkInsRouter());
   // The plan, its versions and countdowns (/athletes/:athleteId/plan…).
   api.use('/athletes', plansRouter());
+  // The trend, drift and flags over a range (/athletes/:athleteId/trend).
+  api.use('/athletes', trendsRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
   api.use(photosRouter());
+  // Marks on an athlete's charts (/athletes/:athleteId/marks) and single marks (/marks/:markId…).
+  api.use(marksRouter());
   if (config.appMode !== 'production' && config.mailCaptureDir) {
     api.use('/dev/mail', devMailRouter(config));
   }

@@ -23,7 +23,8 @@ describe('a countdown from a template, with guardrails', () => {
     const { page } = desktop;
     await signIn(page, 'coach@driftmark.test');
     await page.waitForURL('**/coach**');
-    await page.getByRole('link', { name: 'Mateo Castellanos' }).first().click();
+    await page.goto('/coach/roster');
+    await page.getByRole('table').getByRole('link', { name: 'Mateo Castellanos' }).click();
     await page.getByRole('link', { name: 'Plan', exact: true }).click();
     await page.getByRole('heading', { name: 'This week' }).waitFor();
     await screenshot(page, 'plan-editor-1280');
@@ -105,8 +106,8 @@ describe('a countdown from a template, with guardrails', () => {
 
   it('warns live in the plan editor and saves a new version only once the warning is acknowledged', async () => {
     const { page } = desktop;
-    await page.goto('/coach');
-    await page.getByRole('link', { name: 'Leilani Akana' }).first().click();
+    await page.goto('/coach/roster');
+    await page.getByRole('table').getByRole('link', { name: 'Leilani Akana' }).click();
     await page.getByRole('link', { name: 'Plan', exact: true }).click();
     const editor = page.getByRole('form', { name: 'New plan version' });
     await editor.waitFor();

@@ -126,7 +126,8 @@ describe('the daily check-in on a phone', () => {
     const { page } = desktop;
     await signIn(page, 'coach@driftmark.test');
     await page.waitForURL('**/coach**');
-    await page.getByRole('link', { name: 'Mateo Castellanos' }).click();
+    await page.goto('/coach/roster');
+    await page.getByRole('table').getByRole('link', { name: 'Mateo Castellanos' }).click();
     await page.waitForURL('**/coach/athletes/**');
     await page
       .getByRole('region', { name: 'Safety flags' })

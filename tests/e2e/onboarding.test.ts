@@ -24,7 +24,8 @@ describe('invitation to athlete home', () => {
     const { page } = coach;
     await signIn(page, 'coach@driftmark.test');
     await page.waitForURL('**/coach**');
-    await page.getByRole('heading', { name: 'Roster' }).waitFor();
+    // The coach's default screen is the review queue; the roster sits beside it in the side bar.
+    await page.getByRole('heading', { name: 'Review queue', level: 1 }).waitFor();
     await screenshot(page, 'coach-home-1280');
 
     await page.getByRole('link', { name: 'Invitations' }).click();
@@ -73,7 +74,9 @@ describe('invitation to athlete home', () => {
   it('the coach sees the new athlete on the roster', async () => {
     const { page } = coach;
     await page.goto('/coach');
-    await page.getByRole('heading', { name: 'Roster' }).waitFor();
+    await page.getByRole('navigation', { name: 'Coach' }).getByRole('link', { name: 'Roster' }).click();
+    await page.waitForURL('**/coach/roster');
+    await page.getByRole('heading', { name: 'Roster', level: 1 }).waitFor();
     const row = page.getByRole('row').filter({ hasText: name });
     await row.first().waitFor();
     await expect(row.count()).resolves.toBe(1);

@@ -59,6 +59,23 @@ async function movedDates(): Promise<Map<string, string | null>> {
 }
 
 /** Rows whose instants no longer fall on their local date (or, when timed, at their local time). */
+/** The instants of the mark threads, by `table.column:id`, in ms (no DST change in December's demo weeks). */
+async function markInstants(): Promise<Map<string, number>> {
+  const out = new Map<string, number>();
+  const columns: Record<string, string[]> = {
+    marks: ['created_at', 'updated_at'],
+    mark_replies: ['created_at', 'updated_at'],
+    mark_reads: ['read_at', 'created_at', 'updated_at'],
+  };
+  for (const [table, cols] of Object.entries(columns)) {
+    const rows = await t.dataSource.query<Record<string, Date>[]>(
+      `SELECT id, ${cols.join(', ')} FROM "${table}"`,
+    );
+    for (const r of rows) for (const c of cols) out.set(`${table}.${c}:${String(r.id)}`, r[c]!.getTime());
+  }
+  return out;
+}
+
 async function incoherentRows(): Promise<number> {
   let n = 0;
   for (const table of SHIFTED_DATE_COLUMNS.filter((c) => c.endsWith('.local_date')).map(
@@ -130,6 +147,7 @@ describe('demo date refresh', () => {
     const before = {
       counts: await counts(),
       dates: await movedDates(),
+      marks: await markInstants(),
       athlete: await countdownAthlete(),
       today: await day(today),
     };
@@ -169,6 +187,11 @@ describe('demo date refresh', () => {
     expect(await counts()).toEqual(before.counts);
     expect(await incoherentRows()).toBe(0);
     expect(await anchor()).toBe(later.toISOString());
+    // The marks' threads moved with their athletes: every instant nine days on.
+    const marks = await markInstants();
+    expect(before.marks.size).toBeGreaterThan(10);
+    expect(marks.size).toBe(before.marks.size);
+    for (const [key, ms] of before.marks) expect(marks.get(key), key).toBe(ms + 9 * DAY_MS);
 
     const plans = await t.dataSource.query<{ reason: string; content: { countdown: unknown } }[]>(
       `SELECT reason, content FROM plan_versions v JOIN athletes a ON a.id = v.athlete_id

@@ -16,6 +16,10 @@ import { WeighIn } from '../../api/src/entities/weigh-in.entity.js';
 import { AthleteShare } from '../../api/src/entities/athlete-share.entity.js';
 import { CountdownTemplate } from '../../api/src/entities/countdown-template.entity.js';
 import { GuardrailAcknowledgement } from '../../api/src/entities/guardrail-acknowledgement.entity.js';
+import { Mark } from '../../api/src/entities/mark.entity.js';
+import { MarkRead } from '../../api/src/entities/mark-read.entity.js';
+import { MarkReply } from '../../api/src/entities/mark-reply.entity.js';
+import { MarkRepository } from '../../api/src/repositories/mark.repository.js';
 import { PlanVersion } from '../../api/src/entities/plan-version.entity.js';
 import { Consent } from '../../api/src/entities/consent.entity.js';
 import { Invitation } from '../../api/src/entities/invitation.entity.js';
@@ -28,6 +32,7 @@ import { DEMO_TEMPLATES, planDemoVersions } from '../../api/src/seed/demo-plans.
 import { DEMO_ATHLETES, DEMO_PASSWORD, DEMO_STAFF, DEMO_TEAM_NAME } from '../../api/src/seed/demo-team.js';
 import { seedDemo, SeedRefusedError } from '../../api/src/seed/seed-demo.js';
 import { planDemoHistory } from '../../api/src/seed/seed-history.js';
+import { planDemoMarks } from '../../api/src/seed/seed-marks.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 let t: TestApp;
@@ -78,8 +83,13 @@ async function counts() {
     templates: await db.getRepository(CountdownTemplate).count(),
     planVersions: await db.getRepository(PlanVersion).count(),
     acknowledgements: await db.getRepository(GuardrailAcknowledgement).count(),
+    marks: await db.getRepository(Mark).count(),
+    markReplies: await db.getRepository(MarkReply).count(),
+    markReads: await db.getRepository(MarkRead).count(),
   };
 }
+
+const demoMarks = planDemoMarks(plans);
 
 const sum = (f: (d: (typeof plans)[number]['history']['days'][number]) => number) =>
   plans.reduce((a, p) => a + p.history.days.reduce((b, d) => b + f(d), 0), 0);
@@ -138,7 +148,12 @@ describe('seedDemo', () => {
       templates: 3,
       planVersions: planVersions.length,
       acknowledgements: planVersions.reduce((a, v) => a + v.acknowledgements.length, 0),
+      marks: demoMarks.length,
+      markReplies: demoMarks.filter((m) => m.reply).length,
+      // The author's read, and the athlete's when they replied or read.
+      markReads: demoMarks.reduce((a, m) => a + 1 + (m.reply || m.athleteReadAt ? 1 : 0), 0),
     });
+    expect(first.marks).toBeGreaterThanOrEqual(5);
     expect(first.acknowledgements).toBeGreaterThan(0);
     expect(first.weighIns).toBeGreaterThan(500);
     expect(first.photos).toBeGreaterThan(100);
@@ -280,6 +295,53 @@ describe('seedDemo', () => {
     const e3 = await agent.get(`/api/athletes/${me.body.data.athleteId}/days/2026-12-02`);
     expect(e3.body.data.cautions.map((c: { code: string }) => c.code)).toEqual(['countdown', 'carb_load']);
     expect(e3.body.data.cautions[1].acknowledgedAt).not.toBeNull();
+  });
+
+  it('pins marks on the demo charts: one athlete reply waits for the coach, the countdown athlete has unread marks', async () => {
+    const athletes = await t.dataSource.getRepository(Athlete).find({ relations: { user: true } });
+    const byEmail = new Map(athletes.map((a) => [a.user!.email, a]));
+    const owner = await t.dataSource.getRepository(User).findOneByOrFail({ email: 'coach@driftmark.test' });
+    const unread = await new MarkRepository(t.dataSource.manager).unreadRepliesByAthlete(
+      owner.id,
+      athletes.map((a) => a.id),
+    );
+    const skipper = byEmail.get('leilani.akana@driftmark.test')!;
+    expect([...unread.keys()]).toEqual([skipper.id]);
+    expect(unread.get(skipper.id)!.count).toBe(1);
+    expect(unread.get(skipper.id)!.latestAt.getTime()).toBeLessThan(seededAt.getTime());
+
+    const coach = await signedIn(t.app, 'coach@driftmark.test', DEMO_PASSWORD);
+    const skipperMarks = await coach.get(`/api/athletes/${skipper.id}/marks`);
+    expect(skipperMarks.status).toBe(200);
+    const [missed] = skipperMarks.body.data;
+    expect(missed).toMatchObject({
+      metric: 'weight',
+      unread: true,
+      note: expect.stringMatching(/missed weigh-ins/),
+    });
+    expect(missed.replies).toHaveLength(1);
+    // The marked days really have no weigh-in.
+    const plan = plans.find((p) => p.def.email === 'leilani.akana@driftmark.test')!;
+    const marked = plan.history.days.filter((d) => d.date >= missed.fromDate && d.date <= missed.toDate);
+    expect(marked.length).toBeGreaterThanOrEqual(2);
+    expect(marked.every((d) => !d.weighIn)).toBe(true);
+
+    const mateo = await signedIn(t.app, 'athlete@driftmark.test', DEMO_PASSWORD);
+    const own = await mateo.get(`/api/athletes/${byEmail.get('athlete@driftmark.test')!.id}/marks`);
+    expect(own.status).toBe(200);
+    expect(own.body.data.length).toBeGreaterThanOrEqual(2);
+    expect(own.body.data[0]).toMatchObject({ author: { role: 'owner' }, metric: 'weight', unread: true });
+    const today = localDate(seededAt, 'Europe/Madrid');
+    for (const m of own.body.data) expect(m.toDate < today, m.note).toBe(true);
+
+    // The assistant's mark on a shared athlete, read by her.
+    const assistant = await signedIn(t.app, 'assistant@driftmark.test', DEMO_PASSWORD);
+    const hannah = byEmail.get('hannah.kowalski@driftmark.test')!;
+    const shared = await assistant.get(`/api/athletes/${hannah.id}/marks`);
+    expect(shared.body.data).toEqual([
+      expect.objectContaining({ author: expect.objectContaining({ role: 'assistant' }), unread: false }),
+    ]);
+    expect(shared.body.data[0].readByOtherAt).not.toBeNull();
   });
 
   it('keeps the typed units: a lb athlete’s weigh-ins come back in lb', async () => {

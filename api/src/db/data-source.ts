@@ -3,6 +3,7 @@ import { DataSource } from 'typeorm';
 import type { Config } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
 import { AthleteFlag } from '../entities/athlete-flag.entity.js';
+import { AthleteReview } from '../entities/athlete-review.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { Consent } from '../entities/consent.entity.js';
@@ -12,6 +13,9 @@ import { FluidEntry } from '../entities/fluid-entry.entity.js';
 import { Food } from '../entities/food.entity.js';
 import { GuardrailAcknowledgement } from '../entities/guardrail-acknowledgement.entity.js';
 import { Invitation } from '../entities/invitation.entity.js';
+import { Mark } from '../entities/mark.entity.js';
+import { MarkRead } from '../entities/mark-read.entity.js';
+import { MarkReply } from '../entities/mark-reply.entity.js';
 import { MealEntry } from '../entities/meal-entry.entity.js';
 import { OutboxMessage } from '../entities/outbox-message.entity.js';
 import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
@@ -51,6 +55,11 @@ export const ENTITIES = [
   PlanVersion,
   GuardrailAcknowledgement,
   CountdownTemplate,
+  // Marks and the review queue
+  Mark,
+  MarkReply,
+  MarkRead,
+  AthleteReview,
 ];
 
 export function createDataSource(

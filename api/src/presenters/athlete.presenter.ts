@@ -1,4 +1,4 @@
-import type { AthleteProfile, RosterRow } from '@driftmark/shared';
+import type { AthleteProfile, RosterFigures, RosterRow } from '@driftmark/shared';
 import { daysToEvent } from '../lib/dates.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 
@@ -31,7 +31,7 @@ export function presentAthleteProfile(a: AthleteWithPeople): AthleteProfile {
 }
 
 /** `daysToEvent` counts from today in the athlete's own time zone. */
-export function presentRosterRow(a: AthleteWithPeople, now: Date = new Date()): RosterRow {
+export function presentRosterRow(a: AthleteWithPeople, figures: RosterFigures, now: Date): RosterRow {
   return {
     athleteId: a.id,
     name: a.user.name,
@@ -44,6 +44,7 @@ export function presentRosterRow(a: AthleteWithPeople, now: Date = new Date()): 
     daysToEvent: daysToEvent(a.eventDate, a.user.timeZone, now),
     division: a.division,
     coach: { id: a.coach.id, name: a.coach.name },
+    figures,
   };
 }
 

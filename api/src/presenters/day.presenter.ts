@@ -108,6 +108,8 @@ export interface DayParts {
   photos: DayView['photos'];
   /** The plan's part, worked out by the day service. */
   plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
+  /** Drift against the targets and the cut-off breach, worked out by the day service. */
+  judged: Pick<DayView, 'drift' | 'breach'>;
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -130,7 +132,8 @@ export function presentDay(p: DayParts): DayView {
     targets: p.plan.targets,
     countdown: p.plan.countdown,
     cautions: p.plan.cautions,
-    drift: [],
+    drift: p.judged.drift,
+    breach: p.judged.breach,
   };
 }
 

@@ -11,7 +11,8 @@
  *
  * Everything of the team's athletes moves, including rows the demo users added themselves after the
  * seed (an entry logged on the anchor day becomes today's; one logged later lands in the future).
- * That is acceptable for demo data. Not moved: birth dates, countdown templates (offsets only),
+ * That is acceptable for demo data. Marks, their replies and read state, and review times move
+ * with the athlete they belong to. Not moved: birth dates, countdown templates (offsets only),
  * accounts, sessions, invitations and mail (not part of anyone's history).
  */
 import { planContent, type GuardrailScope, type PlanContent } from '@driftmark/shared';
@@ -40,6 +41,8 @@ export const SHIFTED_DATE_COLUMNS: readonly string[] = [
   ...DAY_TABLES.map((t) => `${t.table}.local_date`),
   'athletes.event_date',
   'plan_versions.effective_from',
+  'marks.from_date',
+  'marks.to_date',
 ];
 
 /** Past any real date: unique (athlete, date) rows move there first, so no row meets one not yet moved. */
@@ -125,6 +128,29 @@ export async function refreshDemoDates(manager: EntityManager, now: Date): Promi
   ]);
   await update('guardrail_acknowledgements', [
     `acknowledged_at = ${at('acknowledged_at')}`,
+    `created_at = ${at('created_at')}`,
+    `updated_at = ${at('updated_at')}`,
+  ]);
+  // Marks and their threads: replies and reads reach the athlete through their mark.
+  await update('marks', [
+    'from_date = t.from_date + s.n',
+    'to_date = t.to_date + s.n',
+    `created_at = ${at('created_at')}`,
+    `updated_at = ${at('updated_at')}`,
+  ]);
+  const ofMark = 'EXISTS (SELECT 1 FROM marks m WHERE m.id = t.mark_id AND m.athlete_id = s.athlete_id)';
+  await update(
+    'mark_replies',
+    [`created_at = ${at('created_at')}`, `updated_at = ${at('updated_at')}`],
+    ofMark,
+  );
+  await update(
+    'mark_reads',
+    [`read_at = ${at('read_at')}`, `created_at = ${at('created_at')}`, `updated_at = ${at('updated_at')}`],
+    ofMark,
+  );
+  await update('athlete_reviews', [
+    `reviewed_at = ${at('reviewed_at')}`,
     `created_at = ${at('created_at')}`,
     `updated_at = ${at('updated_at')}`,
   ]);

@@ -1,7 +1,8 @@
 /**
  * Writes the demo team (demo-team.ts) into an empty database, with about four months of daily
  * check-ins per athlete (history.ts), placeholder condition photos (photos.ts), the team's countdown
- * templates and each athlete's plan versions (demo-plans.ts). Idempotent: when the demo owner
+ * templates and each athlete's plan versions (demo-plans.ts), and a few marks with replies on
+ * their charts (seed-marks.ts). Idempotent: when the demo owner
  * already exists only the dates move, to keep the team around today (refresh-demo-dates.ts).
  * Refused in production.
  */
@@ -30,6 +31,7 @@ import {
 import { createRandom } from './random.js';
 import { refreshDemoDates } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
+import { writeDemoMarks } from './seed-marks.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 
 /** bcrypt cost for the demo password (the same cost real accounts use). */
@@ -129,6 +131,7 @@ export async function seedDemo(
       const { athleteIds } = ids;
       await writeDemoCheckIns(manager, plans, athleteIds);
       await writeDemoPlans(manager, plans, ids, now);
+      await writeDemoMarks(manager, plans, ids, now);
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }

@@ -14,6 +14,8 @@ import type { PlanVersion } from '../entities/plan-version.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
+import { dayActuals, mealTotals } from '../lib/day-actuals.js';
+import { dayDrift } from '../lib/day-drift.js';
 import { daysBetween } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
 import { emptyDaySummary, presentDay } from '../presenters/day.presenter.js';
@@ -99,6 +101,7 @@ export async function loadDayView(
   now: Date,
 ): Promise<DayView> {
   const timeZone = athlete.user.timeZone;
+  const today = localDateTime(now, timeZone).date;
   const [weighIn, fluids, meals, supplements, evening, symptoms, flags, photos, plan] = await Promise.all([
     new WeighInRepository(manager).findForDay(athlete.id, date),
     new DayEntryRepository(manager, FluidEntry).listForDay(athlete.id, date),
@@ -110,11 +113,19 @@ export async function loadDayView(
     dayPhotoSource(manager).forDay(athlete.id, date),
     loadDayPlan(manager, athlete.id, date),
   ]);
+  const fluidMl = fluids.length > 0 ? fluids.reduce((sum, f) => sum + f.volumeMl, 0) : null;
+  const judged = dayDrift({
+    plan: plan.targets,
+    actuals: dayActuals(mealTotals(meals), fluidMl, evening),
+    fluids: fluids.map((f) => ({ time: f.localTime, volumeMl: f.volumeMl })),
+    date,
+    today,
+  });
   return presentDay({
     athleteId: athlete.id,
     date,
     timeZone,
-    isToday: localDateTime(now, timeZone).date === date,
+    isToday: today === date,
     weighIn,
     fluids,
     meals,
@@ -124,6 +135,7 @@ export async function loadDayView(
     flags,
     photos,
     plan,
+    judged,
   });
 }
 

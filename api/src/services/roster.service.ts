@@ -1,12 +1,17 @@
-import type { RosterRow } from '@driftmark/shared';
-import type { DataSource } from 'typeorm';
+import type { RosterFigures, RosterRow } from '@driftmark/shared';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { Actor } from '../policies/actor.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { compareRosterRows, presentRosterRow } from '../presenters/athlete.presenter.js';
-import { AthleteRepository, type RosterScope } from '../repositories/athlete.repository.js';
+import {
+  AthleteRepository,
+  type AthleteWithPeople,
+  type RosterScope,
+} from '../repositories/athlete.repository.js';
 import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
+import { loadSnapshots } from './athlete-figures.service.js';
 
-type RosterDeps = { dataSource: DataSource };
+type RosterDeps = { dataSource: DataSource; clock: () => Date };
 
 function scopeFor(actor: Actor): RosterScope | null {
   switch (actor.role) {
@@ -21,29 +26,55 @@ function scopeFor(actor: Actor): RosterScope | null {
   }
 }
 
+/**
+ * The athletes the actor may read (two statements). The query narrows by role; the athlete
+ * policy then confirms every row, so the two can never disagree silently. The review queue sees
+ * exactly these athletes too.
+ */
+export async function visibleAthletes(manager: EntityManager, actor: Actor): Promise<AthleteWithPeople[]> {
+  const scope = scopeFor(actor);
+  if (!scope) return [];
+  const athletes = await new AthleteRepository(manager).listForRoster(actor.teamId, scope);
+  const shares = await new AthleteShareRepository(manager).listUserIdsByAthlete(athletes.map((a) => a.id));
+  return athletes.filter((a) =>
+    canOnAthlete(actor, 'read', {
+      userId: a.userId,
+      teamId: a.teamId,
+      coachId: a.coachId,
+      sharedWithUserIds: shares.get(a.id) ?? [],
+    }),
+  );
+}
+
+/** Figures for an athlete nothing could be loaded for (kept so a row never lacks its columns). */
+const EMPTY_FIGURES: RosterFigures = {
+  phase: 'no_plan',
+  countdownLabel: null,
+  latestWeightKg: null,
+  latestWeighInDate: null,
+  trendKg: null,
+  ratePercentPerWeek: null,
+  rateBand: null,
+  adherence7: null,
+  lastCheckInDate: null,
+  flags: [],
+};
+
 export class RosterService {
   constructor(private readonly deps: RosterDeps) {}
 
   /**
-   * The athletes the actor may read, soonest event first. The query narrows by role; the
-   * athlete policy then confirms every row, so the two can never disagree silently.
+   * The athletes the actor may read, soonest event first, with their figures (trend, rate,
+   * adherence, flags) — a constant number of statements (two for the athletes, eight for the
+   * figures) however many athletes and however long their history.
    */
-  async list(actor: Actor, now: Date = new Date()): Promise<RosterRow[]> {
-    const scope = scopeFor(actor);
-    if (!scope) return [];
+  async list(actor: Actor): Promise<RosterRow[]> {
     const manager = this.deps.dataSource.manager;
-    const athletes = await new AthleteRepository(manager).listForRoster(actor.teamId, scope);
-    const shares = await new AthleteShareRepository(manager).listUserIdsByAthlete(athletes.map((a) => a.id));
+    const now = this.deps.clock();
+    const athletes = await visibleAthletes(manager, actor);
+    const snapshots = await loadSnapshots(manager, athletes, now);
     return athletes
-      .filter((a) =>
-        canOnAthlete(actor, 'read', {
-          userId: a.userId,
-          teamId: a.teamId,
-          coachId: a.coachId,
-          sharedWithUserIds: shares.get(a.id) ?? [],
-        }),
-      )
-      .map((a) => presentRosterRow(a, now))
+      .map((a) => presentRosterRow(a, snapshots.get(a.id)?.figures ?? EMPTY_FIGURES, now))
       .sort(compareRosterRows);
   }
 }

@@ -3,6 +3,7 @@ import { InitialSchema1796162777444 } from './1796162777444-InitialSchema.js';
 import { AddDailyCheckIns1796164991456 } from './1796164991456-AddDailyCheckIns.js';
 import { AddConditionPhotos1796165060504 } from './1796165060504-AddConditionPhotos.js';
 import { AddPlans1796173077550 } from './1796173077550-AddPlans.js';
+import { AddMarksAndReviews1796175671267 } from './1796175671267-AddMarksAndReviews.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -10,4 +11,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddDailyCheckIns1796164991456,
   AddConditionPhotos1796165060504,
   AddPlans1796173077550,
+  AddMarksAndReviews1796175671267,
 ];

@@ -1,0 +1,377 @@
+import type { PlanBaseline, PlanContent, Symptom } from '@driftmark/shared';
+import type { EntityManager } from 'typeorm';
+import type { FlagKind } from '../entities/athlete-flag.entity.js';
+import type { EveningFigures, MealTotals } from '../lib/day-actuals.js';
+import type { PlanVersionLike } from '../lib/day-plan.js';
+import { TREND_ALPHA } from '../lib/trend.js';
+
+/** One athlete's window of local dates (inclusive) to load. */
+export interface HistoryWindow {
+  athleteId: string;
+  from: string;
+  to: string;
+}
+
+export interface WeighInRow {
+  date: string;
+  kg: number;
+  /** When the row was last written (a re-entered weight is news to the review queue). */
+  updatedAt: Date;
+}
+
+export interface FluidRow {
+  date: string;
+  time: string;
+  volumeMl: number;
+}
+
+export interface SymptomRow {
+  id: string;
+  date: string;
+  time: string;
+  symptoms: Symptom[];
+  urgent: boolean;
+  createdAt: Date;
+}
+
+export interface FlagRow {
+  id: string;
+  date: string;
+  kind: FlagKind;
+  message: string;
+  symptomReportId: string | null;
+  createdAt: Date;
+}
+
+/** Everything the trend, the roster figures and the review queue compute from, for one athlete. */
+export interface AthleteHistory {
+  /**
+   * The EWMA state after the last weigh-in before the window (Walker, The Hacker's Diet: the trend
+   * is all the smoothing carries forward), with that weigh-in itself; null without one.
+   */
+  before: { date: string; trendKg: number; weighIn: WeighInRow } | null;
+  /** Weigh-ins in the window, oldest first. */
+  weighIns: WeighInRow[];
+  meals: Map<string, MealTotals>;
+  /** Every fluid entry in the window with its clock time (cut-off breaches need them). */
+  fluids: FluidRow[];
+  evenings: Map<string, EveningFigures>;
+  symptoms: SymptomRow[];
+  /**
+   * The plan versions that can be in force on a day from the window's start on: the one in force
+   * on its first day and every later one (future ones included), by number.
+   */
+  versions: PlanVersionLike[];
+}
+
+/** The windows as three parallel arrays for `unnest` (one statement whatever the count). */
+const WINDOWS = `unnest($1::uuid[], $2::date[], $3::date[]) AS p(athlete_id, from_date, to_date)`;
+const params = (windows: readonly HistoryWindow[]) => [
+  windows.map((w) => w.athleteId),
+  windows.map((w) => w.from),
+  windows.map((w) => w.to),
+];
+
+/** Appends to the list under `key`, creating it. */
+function push<K, V>(map: Map<K, V[]>, key: K, value: V): void {
+  const list = map.get(key);
+  if (list) list.push(value);
+  else map.set(key, [value]);
+}
+
+/**
+ * Batch reads over athletes' days for the trend, the roster and the review queue: each method is
+ * ONE statement for any number of athletes (no query per athlete or per day), so a roster of 150
+ * athletes with years of history costs what a roster of one does.
+ */
+export class TrendRepository {
+  constructor(private readonly manager: EntityManager) {}
+
+  /** Everything in `AthleteHistory` for each window: six statements. Athletes absent from the result have nothing. */
+  async load(windows: readonly HistoryWindow[]): Promise<Map<string, AthleteHistory>> {
+    const out = new Map<string, AthleteHistory>();
+    if (windows.length === 0) return out;
+    for (const w of windows) {
+      out.set(w.athleteId, {
+        before: null,
+        weighIns: [],
+        meals: new Map(),
+        fluids: [],
+        evenings: new Map(),
+        symptoms: [],
+        versions: [],
+      });
+    }
+    const [weighIns, meals, fluids, evenings, symptoms, versions] = await Promise.all([
+      this.weighIns(windows),
+      this.meals(windows),
+      this.fluids(windows),
+      this.evenings(windows),
+      this.symptoms(windows),
+      this.versions(windows),
+    ]);
+    for (const [id, h] of out) {
+      const w = weighIns.get(id);
+      if (w) Object.assign(h, w);
+      h.meals = meals.get(id) ?? h.meals;
+      h.fluids = fluids.get(id) ?? h.fluids;
+      h.evenings = evenings.get(id) ?? h.evenings;
+      h.symptoms = symptoms.get(id) ?? h.symptoms;
+      h.versions = versions.get(id) ?? h.versions;
+    }
+    return out;
+  }
+
+  /**
+   * Weigh-ins in each window, and the trend before it computed in SQL from every earlier weigh-in
+   * in closed form: with T₁ = W₁ and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet),
+   * Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ. So a year of history is summed in the database instead
+   * of shipped row by row, and the smoothing goes on in memory from Tₙ exactly as if it had started
+   * at the first weigh-in. The exponent is capped at 5000 (0.9⁵⁰⁰⁰ ≈ 1e-229) so power() never
+   * underflows; terms that small change nothing.
+   */
+  private async weighIns(
+    windows: readonly HistoryWindow[],
+  ): Promise<Map<string, Pick<AthleteHistory, 'before' | 'weighIns'>>> {
+    type Row = {
+      athlete_id: string;
+      kind: 'before' | 'point';
+      date: string;
+      trend_kg: number | null;
+      kg: number;
+      updated_at: Date;
+    };
+    const rows = await this.manager.query<Row[]>(
+      `WITH p AS (SELECT * FROM ${WINDOWS}),
+       earlier AS (
+         SELECT w.athlete_id, w.local_date, w.weight_kg, w.updated_at,
+                row_number() OVER (PARTITION BY w.athlete_id ORDER BY w.local_date) AS i,
+                count(*) OVER (PARTITION BY w.athlete_id) AS n
+           FROM weigh_ins w JOIN p ON p.athlete_id = w.athlete_id
+          WHERE w.local_date < p.from_date
+       )
+       SELECT athlete_id, 'before' AS kind, max(local_date)::text AS date,
+              sum(weight_kg * CASE WHEN i = 1 THEN power(1 - $4::float8, LEAST(n - 1, 5000))
+                                   ELSE $4::float8 * power(1 - $4::float8, LEAST(n - i, 5000)) END) AS trend_kg,
+              (array_agg(weight_kg ORDER BY local_date DESC))[1] AS kg,
+              (array_agg(updated_at ORDER BY local_date DESC))[1] AS updated_at
+         FROM earlier GROUP BY athlete_id
+       UNION ALL
+       SELECT w.athlete_id, 'point', w.local_date::text, NULL, w.weight_kg, w.updated_at
+         FROM weigh_ins w JOIN p ON p.athlete_id = w.athlete_id
+        WHERE w.local_date BETWEEN p.from_date AND p.to_date
+       ORDER BY 1, 3`,
+      [...params(windows), TREND_ALPHA],
+    );
+    const out = new Map<string, Pick<AthleteHistory, 'before' | 'weighIns'>>();
+    for (const r of rows) {
+      let entry = out.get(r.athlete_id);
+      if (!entry) out.set(r.athlete_id, (entry = { before: null, weighIns: [] }));
+      const weighIn = { date: r.date, kg: r.kg, updatedAt: r.updated_at };
+      if (r.kind === 'before') entry.before = { date: r.date, trendKg: r.trend_kg ?? r.kg, weighIn };
+      else entry.weighIns.push(weighIn);
+    }
+    return out;
+  }
+
+  /** Meal sums per day; sodium stays null when no meal of the day carries it (sum() of nulls). */
+  private async meals(windows: readonly HistoryWindow[]): Promise<Map<string, Map<string, MealTotals>>> {
+    const rows = await this.manager.query<
+      {
+        athlete_id: string;
+        date: string;
+        energy_kcal: number;
+        protein_g: number;
+        carbohydrate_g: number;
+        fat_g: number;
+        sodium_mg: number | null;
+      }[]
+    >(
+      `SELECT m.athlete_id, m.local_date::text AS date, sum(m.energy_kcal) AS energy_kcal,
+              sum(m.protein_g) AS protein_g, sum(m.carbohydrate_g) AS carbohydrate_g, sum(m.fat_g) AS fat_g,
+              sum(m.sodium_mg) AS sodium_mg
+         FROM meal_entries m JOIN ${WINDOWS} ON p.athlete_id = m.athlete_id
+        WHERE m.local_date BETWEEN p.from_date AND p.to_date
+        GROUP BY m.athlete_id, m.local_date`,
+      params(windows),
+    );
+    const out = new Map<string, Map<string, MealTotals>>();
+    for (const r of rows) {
+      let byDay = out.get(r.athlete_id);
+      if (!byDay) out.set(r.athlete_id, (byDay = new Map()));
+      byDay.set(r.date, {
+        energyKcal: r.energy_kcal,
+        proteinG: r.protein_g,
+        carbohydrateG: r.carbohydrate_g,
+        fatG: r.fat_g,
+        sodiumMg: r.sodium_mg,
+      });
+    }
+    return out;
+  }
+
+  private async fluids(windows: readonly HistoryWindow[]): Promise<Map<string, FluidRow[]>> {
+    const rows = await this.manager.query<
+      { athlete_id: string; date: string; time: string; volume_ml: number }[]
+    >(
+      `SELECT f.athlete_id, f.local_date::text AS date, f.local_time AS time, f.volume_ml
+         FROM fluid_entries f JOIN ${WINDOWS} ON p.athlete_id = f.athlete_id
+        WHERE f.local_date BETWEEN p.from_date AND p.to_date
+        ORDER BY f.athlete_id, f.local_date, f.local_time`,
+      params(windows),
+    );
+    const out = new Map<string, FluidRow[]>();
+    for (const r of rows) push(out, r.athlete_id, { date: r.date, time: r.time, volumeMl: r.volume_ml });
+    return out;
+  }
+
+  private async evenings(
+    windows: readonly HistoryWindow[],
+  ): Promise<Map<string, Map<string, EveningFigures>>> {
+    const rows = await this.manager.query<
+      { athlete_id: string; date: string; steps: number | null; cardio_minutes: number | null }[]
+    >(
+      `SELECT e.athlete_id, e.local_date::text AS date, e.steps, e.cardio_minutes
+         FROM evening_logs e JOIN ${WINDOWS} ON p.athlete_id = e.athlete_id
+        WHERE e.local_date BETWEEN p.from_date AND p.to_date`,
+      params(windows),
+    );
+    const out = new Map<string, Map<string, EveningFigures>>();
+    for (const r of rows) {
+      let byDay = out.get(r.athlete_id);
+      if (!byDay) out.set(r.athlete_id, (byDay = new Map()));
+      byDay.set(r.date, { steps: r.steps, cardioMinutes: r.cardio_minutes });
+    }
+    return out;
+  }
+
+  private async symptoms(windows: readonly HistoryWindow[]): Promise<Map<string, SymptomRow[]>> {
+    const rows = await this.manager.query<
+      {
+        athlete_id: string;
+        id: string;
+        date: string;
+        time: string;
+        symptoms: Symptom[];
+        urgent: boolean;
+        created_at: Date;
+      }[]
+    >(
+      `SELECT s.athlete_id, s.id, s.local_date::text AS date, s.local_time AS time, s.symptoms, s.urgent,
+              s.created_at
+         FROM symptom_reports s JOIN ${WINDOWS} ON p.athlete_id = s.athlete_id
+        WHERE s.local_date BETWEEN p.from_date AND p.to_date
+        ORDER BY s.athlete_id, s.local_date, s.local_time`,
+      params(windows),
+    );
+    const out = new Map<string, SymptomRow[]>();
+    for (const r of rows) {
+      push(out, r.athlete_id, {
+        id: r.id,
+        date: r.date,
+        time: r.time,
+        symptoms: r.symptoms,
+        urgent: r.urgent,
+        createdAt: r.created_at,
+      });
+    }
+    return out;
+  }
+
+  private async versions(windows: readonly HistoryWindow[]): Promise<Map<string, PlanVersionLike[]>> {
+    const rows = await this.manager.query<
+      {
+        athlete_id: string;
+        id: string;
+        number: number;
+        effective_from: string;
+        content: PlanContent;
+        baseline: PlanBaseline;
+      }[]
+    >(
+      // The version in force on the window's first day (latest effective_from ≤ it, highest
+      // number on a tie), and every version starting after it.
+      `SELECT v.athlete_id, v.id, v.number, v.effective_from::text AS effective_from, v.content, v.baseline
+         FROM plan_versions v JOIN ${WINDOWS} ON p.athlete_id = v.athlete_id
+        WHERE v.effective_from > p.from_date
+           OR v.id = (SELECT v2.id FROM plan_versions v2
+                       WHERE v2.athlete_id = p.athlete_id AND v2.effective_from <= p.from_date
+                       ORDER BY v2.effective_from DESC, v2.number DESC LIMIT 1)
+        ORDER BY v.athlete_id, v.number`,
+      params(windows),
+    );
+    const out = new Map<string, PlanVersionLike[]>();
+    for (const r of rows) {
+      push(out, r.athlete_id, {
+        id: r.id,
+        number: r.number,
+        effectiveFrom: r.effective_from,
+        content: r.content,
+        baseline: r.baseline,
+      });
+    }
+    return out;
+  }
+
+  /** Safety flags (athlete_flags rows) per athlete in each window, oldest first. One statement. */
+  async flags(windows: readonly HistoryWindow[]): Promise<Map<string, FlagRow[]>> {
+    const out = new Map<string, FlagRow[]>();
+    if (windows.length === 0) return out;
+    const rows = await this.manager.query<
+      {
+        athlete_id: string;
+        id: string;
+        date: string;
+        kind: FlagKind;
+        message: string;
+        symptom_report_id: string | null;
+        created_at: Date;
+      }[]
+    >(
+      `SELECT f.athlete_id, f.id, f.local_date::text AS date, f.kind, f.message, f.symptom_report_id, f.created_at
+         FROM athlete_flags f JOIN ${WINDOWS} ON p.athlete_id = f.athlete_id
+        WHERE f.local_date BETWEEN p.from_date AND p.to_date
+        ORDER BY f.athlete_id, f.created_at`,
+      params(windows),
+    );
+    for (const r of rows) {
+      push(out, r.athlete_id, {
+        id: r.id,
+        date: r.date,
+        kind: r.kind,
+        message: r.message,
+        symptomReportId: r.symptom_report_id,
+        createdAt: r.created_at,
+      });
+    }
+    return out;
+  }
+
+  /**
+   * Each athlete's last local date with any check-in entry (weigh-in, fluid, meal, supplement,
+   * evening card, symptoms) on or before the window's end. One statement; each max() is an index
+   * lookup on (athlete_id, local_date).
+   */
+  async lastCheckIns(windows: readonly HistoryWindow[]): Promise<Map<string, string>> {
+    const out = new Map<string, string>();
+    if (windows.length === 0) return out;
+    const last = (table: string) =>
+      `(SELECT max(t.local_date) FROM ${table} t WHERE t.athlete_id = p.athlete_id AND t.local_date <= p.to_date)`;
+    const rows = await this.manager.query<{ athlete_id: string; date: string | null }[]>(
+      `SELECT p.athlete_id, GREATEST(${[
+        'weigh_ins',
+        'fluid_entries',
+        'meal_entries',
+        'supplement_entries',
+        'evening_logs',
+        'symptom_reports',
+      ]
+        .map(last)
+        .join(', ')})::text AS date
+         FROM ${WINDOWS}`,
+      params(windows),
+    );
+    for (const r of rows) if (r.date) out.set(r.athlete_id, r.date);
+    return out;
+  }
+}

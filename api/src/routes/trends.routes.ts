@@ -1,0 +1,28 @@
+import { trendQuery, uuid } from '@driftmark/shared';
+import { Router } from 'express';
+import { z } from 'zod';
+import { authenticate } from '../middleware/authenticate.js';
+import { validate } from '../middleware/validate.js';
+import { canOnAthlete } from '../policies/athlete.policy.js';
+import { TrendService } from '../services/trend.service.js';
+import { loadAthlete } from './athletes.routes.js';
+
+const athleteParams = z.object({ athleteId: uuid });
+
+/** An athlete's trend under /api/athletes/:athleteId (read: the athlete policy's `read`). */
+export function trendsRouter(): Router {
+  const router = Router();
+
+  router.get(
+    '/:athleteId/trend',
+    authenticate(),
+    validate({ params: athleteParams, query: trendQuery }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      const view = await new TrendService(req.ctx).getTrend(athlete, req.query.from, req.query.to);
+      res.json({ data: view, abilities: { annotate: canOnAthlete(actor, 'annotate', target) } });
+    },
+  );
+
+  return router;
+}
