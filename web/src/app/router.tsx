@@ -5,9 +5,11 @@ import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { dayQueryOptions } from '@/features/check-ins/api/get-day';
 import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
+import { marksQueryOptions } from '@/features/marks/api/list-marks';
 import { planQueryOptions } from '@/features/plans/api/get-plan';
 import { templateQueryOptions } from '@/features/plans/api/get-template';
 import { templatesQueryOptions } from '@/features/plans/api/get-templates';
+import { reviewQueueQueryOptions } from '@/features/review/api/get-review-queue';
 import { todayIn } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
@@ -19,8 +21,10 @@ import { AthleteDayRoute } from './routes/athlete-day';
 import { AthleteHistoryRoute } from './routes/athlete-history';
 import { AthleteHomeRoute } from './routes/athlete-home';
 import { AthletePhotosRoute } from './routes/athlete-photos';
+import { AthleteTrendsRoute } from './routes/athlete-trends';
 import { CoachAthleteRoute } from './routes/coach-athlete';
 import { CoachAthletePhotosRoute } from './routes/coach-athlete-photos';
+import { CoachAthleteTrendsRoute } from './routes/coach-athlete-trends';
 import {
   CoachAthletePlanCountdownRoute,
   CoachAthletePlanEditorRoute,
@@ -28,6 +32,7 @@ import {
   CoachAthletePlanLayout,
 } from './routes/coach-athlete-plan';
 import { CoachInvitationsRoute } from './routes/coach-invitations';
+import { CoachReviewQueueRoute } from './routes/coach-review-queue';
 import { CoachRosterRoute } from './routes/coach-roster';
 import { CoachTemplateNewRoute, CoachTemplateRoute } from './routes/coach-template';
 import { CoachTemplatesRoute } from './routes/coach-templates';
@@ -71,6 +76,15 @@ const prefetchToday = prefetchWhen(
   },
 );
 
+/** Trends: the profile (for the athlete's today) and the coach's marks start loading together. */
+const prefetchOwnTrends = prefetchWhen(
+  (me) => me.role === 'athlete' && me.athleteId !== null,
+  (me) => {
+    void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!));
+    void queryClient.prefetchQuery(marksQueryOptions(me.athleteId!));
+  },
+);
+
 function RootLayout() {
   return (
     <>
@@ -104,6 +118,7 @@ export const router = createBrowserRouter([
                   { path: 'athlete/history', element: <AthleteHistoryRoute /> },
                   { path: 'athlete/days/:date', element: <AthleteDayRoute />, loader: prefetchOwnProfile },
                   { path: 'athlete/photos', element: <AthletePhotosRoute />, loader: prefetchOwnProfile },
+                  { path: 'athlete/trends', element: <AthleteTrendsRoute />, loader: prefetchOwnTrends },
                   { path: 'intake', element: <IntakeRoute />, loader: prefetchOwnProfile },
                 ],
               },
@@ -118,6 +133,14 @@ export const router = createBrowserRouter([
                 children: [
                   {
                     index: true,
+                    element: <CoachReviewQueueRoute />,
+                    loader: prefetchWhen(
+                      (me) => isStaffRole(me.role),
+                      () => void queryClient.prefetchQuery(reviewQueueQueryOptions()),
+                    ),
+                  },
+                  {
+                    path: 'roster',
                     element: <CoachRosterRoute />,
                     loader: prefetchWhen(
                       (me) => isStaffRole(me.role),
@@ -142,6 +165,18 @@ export const router = createBrowserRouter([
                       )(),
                   },
                   { path: 'athletes/:athleteId/photos', element: <CoachAthletePhotosRoute /> },
+                  {
+                    path: 'athletes/:athleteId/trends',
+                    element: <CoachAthleteTrendsRoute />,
+                    loader: ({ params }) =>
+                      prefetchWhen(
+                        (me) => isStaffRole(me.role),
+                        () => {
+                          void queryClient.prefetchQuery(athleteQueryOptions(params.athleteId ?? ''));
+                          void queryClient.prefetchQuery(marksQueryOptions(params.athleteId ?? ''));
+                        },
+                      )(),
+                  },
                   {
                     path: 'athletes/:athleteId/plan',
                     element: <CoachAthletePlanLayout />,

@@ -8,9 +8,13 @@ export const paths = {
   intake: '/intake',
   settings: '/settings',
   athleteHome: '/athlete',
+  /** The coach's default screen: the review queue. */
   coachHome: '/coach',
+  coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
   athletePhotos: '/athlete/photos',
+  /** The athlete's own weight chart, rate, adherence and their coach's marks. */
+  athleteTrends: '/athlete/trends',
   athleteHistory: '/athlete/history',
   /** One of the athlete's own days (YYYY-MM-DD), editable. */
   athleteDay: (date: string) => `/athlete/days/${encodeURIComponent(date)}`,
@@ -18,6 +22,9 @@ export const paths = {
   coachAthlete: (athleteId: string, date?: string) =>
     `/coach/athletes/${encodeURIComponent(athleteId)}${date ? `?date=${encodeURIComponent(date)}` : ''}`,
   coachAthletePhotos: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/photos`,
+  /** An athlete's charts over a range (2 weeks, 6 weeks, season), with the day table and the marks. */
+  coachAthleteTrends: (athleteId: string, range?: string) =>
+    `/coach/athletes/${encodeURIComponent(athleteId)}/trends${range ? `?range=${encodeURIComponent(range)}` : ''}`,
   /** An athlete's plan: week view and editor; the countdown flow; the version history and one version. */
   coachAthletePlan: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/plan`,
   coachAthletePlanCountdown: (athleteId: string) =>

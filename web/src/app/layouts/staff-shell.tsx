@@ -1,7 +1,14 @@
 import { ROLE_LABELS } from '@driftmark/shared';
 import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
-import { CountdownIcon, EnvelopeIcon, InboxIcon, RosterIcon, SlidersIcon } from '@/components/ui/icons';
+import {
+  CountdownIcon,
+  EnvelopeIcon,
+  FlagIcon,
+  InboxIcon,
+  RosterIcon,
+  SlidersIcon,
+} from '@/components/ui/icons';
 import { paths } from '@/config/paths';
 import { useDevInboxAvailable } from '@/features/dev-inbox/api/get-mail-list';
 import { useCurrentUser } from '../session';
@@ -16,7 +23,10 @@ export function StaffShell() {
       teamName={me.team.name}
       nav={
         <SidebarNav label="Coach">
-          <SidebarNavLink to={paths.coachHome} end icon={<RosterIcon />}>
+          <SidebarNavLink to={paths.coachHome} end icon={<FlagIcon />}>
+            Review queue
+          </SidebarNavLink>
+          <SidebarNavLink to={paths.coachRoster} icon={<RosterIcon />}>
             Roster
           </SidebarNavLink>
           <SidebarNavLink to={paths.coachInvitations} icon={<EnvelopeIcon />}>

@@ -22,7 +22,7 @@ export function CoachAthletePhotosRoute() {
     <>
       <title>{name ? `${name} · Photos · Driftmark` : 'Photos · Driftmark'}</title>
       <Link
-        to={paths.coachHome}
+        to={paths.coachRoster}
         className="mb-3 inline-flex min-h-touch items-center gap-1.5 text-sm font-semibold no-underline"
       >
         <ArrowLeftIcon /> Roster
@@ -32,6 +32,7 @@ export function CoachAthletePhotosRoute() {
         <TabNavLink to={paths.coachAthlete(athleteId)} end>
           Days
         </TabNavLink>
+        <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
         <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
         <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
       </TabNav>

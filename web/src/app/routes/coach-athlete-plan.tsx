@@ -43,6 +43,7 @@ function AthleteTabs({ athleteId }: { athleteId: string }) {
       <TabNavLink to={paths.coachAthlete(athleteId)} end>
         Days
       </TabNavLink>
+      <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
       <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
       <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
     </TabNav>

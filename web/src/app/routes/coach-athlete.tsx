@@ -25,7 +25,8 @@ import { useCurrentUser } from '../session';
 /** Days at or under which the final-week countdown applies. */
 const FINAL_WEEK_DAYS = 7;
 
-function AthleteHeader({ profile, today }: { profile: AthleteProfile; today: string }) {
+/** Who the athlete is and how far off their event: the head of every tab of the athlete page. */
+export function AthleteHeader({ profile, today }: { profile: AthleteProfile; today: string }) {
   const me = useCurrentUser();
   const clock = useClock(profile.timeZone);
   const hasEvent = profile.eventType !== null && profile.eventType !== 'none' && profile.eventDate !== null;
@@ -116,7 +117,7 @@ export function CoachAthleteRoute() {
     <>
       <title>{name ? `${name} · Driftmark` : 'Athlete · Driftmark'}</title>
       <Link
-        to={paths.coachHome}
+        to={paths.coachRoster}
         className="mb-3 inline-flex min-h-touch items-center gap-1.5 text-sm font-semibold no-underline"
       >
         <ArrowLeftIcon /> Roster
@@ -155,6 +156,7 @@ export function CoachAthleteRoute() {
             <TabNavLink to={paths.coachAthlete(athleteId)} end>
               Days
             </TabNavLink>
+            <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
             <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
             <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
           </TabNav>

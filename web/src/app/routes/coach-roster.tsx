@@ -8,11 +8,13 @@ import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useRoster } from '@/features/athletes/api/get-roster';
 import { RosterSummary, RosterTable } from '@/features/athletes/components/roster-table';
+import { useToday } from '@/features/check-ins/components/use-clock';
 import { useCurrentUser } from '../session';
 
 export function CoachRosterRoute() {
   const me = useCurrentUser();
   const roster = useRoster();
+  const today = useToday(me.timeZone);
   const canInvite = me.abilities.invite.includes('athlete');
   const inviteButton = canInvite ? (
     <ButtonLink to={paths.coachInvitations} icon={<PlusIcon className="text-lg" />}>
@@ -28,10 +30,10 @@ export function CoachRosterRoute() {
         title="Roster"
         description={
           me.role === 'assistant'
-            ? 'Athletes shared with you, nearest event first.'
+            ? 'Athletes shared with you, nearest event first. Sort by any column, search and filter.'
             : me.role === 'owner'
-              ? 'Every athlete on the team, nearest event first.'
-              : 'Your athletes and those shared with you, nearest event first.'
+              ? 'Every athlete on the team, nearest event first. Sort by any column, search and filter.'
+              : 'Your athletes and those shared with you, nearest event first. Sort by any column, search and filter.'
         }
         actions={roster.data && roster.data.length > 0 ? inviteButton : null}
       />
@@ -64,7 +66,12 @@ export function CoachRosterRoute() {
       ) : (
         <>
           <RosterSummary rows={roster.data} />
-          <RosterTable rows={roster.data} showCoach={me.role === 'owner'} />
+          <RosterTable
+            rows={roster.data}
+            showCoach={me.role === 'owner'}
+            weightUnit={me.units.weight}
+            today={today}
+          />
         </>
       )}
       <SafetyNote className="mt-8 max-w-3xl" />

@@ -325,3 +325,16 @@ export function CountdownIcon(props: IconProps) {
     </Icon>
   );
 }
+
+/** Axes with a line drifting down through points: trends. */
+export function TrendIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M4 4v16h16" />
+      <path d="m7.5 9 3.5 3 3-2 5 5" />
+      <circle cx="8" cy="13.5" r="0.9" fill="currentColor" />
+      <circle cx="13" cy="14.5" r="0.9" fill="currentColor" />
+      <circle cx="17" cy="11" r="0.9" fill="currentColor" />
+    </Icon>
+  );
+}

@@ -1,0 +1,59 @@
+import type { AdherenceWeek } from '@driftmark/shared';
+import { describe, expect, it } from 'vitest';
+import { adherenceGrid, bandPace, bandRelation, latestWeek, signed } from './figures';
+
+const band = (minPct: number, maxPct: number) => ({ minPct, maxPct, label: '', source: 'Helms 2014' });
+
+describe('signed', () => {
+  it('uses a true minus and never prints −0.0', () => {
+    expect(signed(-0.84)).toBe('\u22120.8');
+    expect(signed(0.25, 2)).toBe('+0.25');
+    expect(signed(-0.01)).toBe('0.0');
+  });
+});
+
+describe('rate against the band', () => {
+  it('reads a loss band (Helms 2014: 0.5–1 %/week while dieting)', () => {
+    expect(bandRelation({ percentPerWeek: -0.8, band: band(-1, -0.5) })).toBe('inside');
+    expect(bandPace({ percentPerWeek: -1.3, band: band(-1, -0.5) })).toBe('faster');
+    expect(bandPace({ percentPerWeek: -0.2, band: band(-1, -0.5) })).toBe('slower');
+  });
+  it('reads gain and steady bands', () => {
+    expect(bandPace({ percentPerWeek: 0.6, band: band(0.25, 0.5) })).toBe('faster');
+    expect(bandPace({ percentPerWeek: 0.4, band: band(-0.25, 0.25) })).toBe('outside');
+    expect(bandPace({ percentPerWeek: 0.4, band: null })).toBeNull();
+  });
+});
+
+describe('adherence', () => {
+  const week = (weekStart: string, metric: AdherenceWeek['metric'], onPlanDays: number): AdherenceWeek => ({
+    weekStart,
+    metric,
+    targetDays: 7,
+    loggedDays: 6,
+    onPlanDays,
+    adherence: onPlanDays / 6,
+    loggedShare: 6 / 7,
+  });
+  const rows = [
+    week('2026-05-04', 'energy', 5),
+    week('2026-05-11', 'energy', 3),
+    week('2026-05-11', 'water', 6),
+  ];
+
+  it('picks the newest week', () => {
+    expect(latestWeek(rows).map((w) => [w.metric, w.onPlanDays])).toEqual([
+      ['energy', 3],
+      ['water', 6],
+    ]);
+    expect(latestWeek([])).toEqual([]);
+  });
+
+  it('lays weeks out newest first with the metrics that had targets', () => {
+    const grid = adherenceGrid(rows, ['energy', 'protein', 'water']);
+    expect(grid.weeks).toEqual(['2026-05-11', '2026-05-04']);
+    expect(grid.metrics).toEqual(['energy', 'water']);
+    expect(grid.at('2026-05-04', 'water')).toBeNull();
+    expect(grid.at('2026-05-04', 'energy')?.onPlanDays).toBe(5);
+  });
+});
