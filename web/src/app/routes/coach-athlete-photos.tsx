@@ -4,7 +4,7 @@ import { Button } from '@/components/ui/button';
 import { ArrowLeftIcon } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/spinner';
-import { TabNav, TabNavLink } from '@/components/ui/tab-nav';
+import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { PhotosWorkspace } from '@/features/photos/components/photos-workspace';
@@ -28,14 +28,7 @@ export function CoachAthletePhotosRoute() {
         <ArrowLeftIcon /> Roster
       </Link>
       <PageHeader eyebrow="Condition photos" title={name ?? 'Athlete'} className="mb-4" />
-      <TabNav label="Athlete" className="mb-5">
-        <TabNavLink to={paths.coachAthlete(athleteId)} end>
-          Days
-        </TabNavLink>
-        <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
-        <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
-        <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
-      </TabNav>
+      <CoachAthleteTabs athleteId={athleteId} className="mb-5" />
       {athlete.isPending ? (
         <div aria-busy="true" aria-label="Loading the photos" className="space-y-4">
           <Skeleton className="h-11 max-w-md" />

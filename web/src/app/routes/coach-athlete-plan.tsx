@@ -9,6 +9,7 @@ import { ArrowLeftIcon } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/spinner';
 import { TabNav, TabNavLink } from '@/components/ui/tab-nav';
+import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { paths } from '@/config/paths';
 import { useAthlete, type AthleteAbilities } from '@/features/athletes/api/get-athlete';
 import { athleteKeys, rosterKeys } from '@/features/athletes/api/keys';
@@ -38,16 +39,7 @@ function usePlanContext() {
 
 /** The athlete tabs, shared by the athlete's days, photos and plan pages. */
 function AthleteTabs({ athleteId }: { athleteId: string }) {
-  return (
-    <TabNav label="Athlete" className="mb-5">
-      <TabNavLink to={paths.coachAthlete(athleteId)} end>
-        Days
-      </TabNavLink>
-      <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
-      <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
-      <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
-    </TabNav>
-  );
+  return <CoachAthleteTabs athleteId={athleteId} className="mb-5" />;
 }
 
 /**

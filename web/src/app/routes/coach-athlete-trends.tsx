@@ -5,7 +5,7 @@ import { Alert } from '@/components/ui/alert';
 import { Button, ButtonLink } from '@/components/ui/button';
 import { ArrowLeftIcon, CameraIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
-import { TabNav, TabNavLink } from '@/components/ui/tab-nav';
+import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { useToday } from '@/features/check-ins/components/use-clock';
@@ -119,14 +119,7 @@ export function CoachAthleteTrendsRoute() {
       ) : (
         <>
           <AthleteHeader profile={athlete.data.data} today={today} />
-          <TabNav label="Athlete" className="mb-5">
-            <TabNavLink to={paths.coachAthlete(athleteId)} end>
-              Days
-            </TabNavLink>
-            <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
-            <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
-            <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
-          </TabNav>
+          <CoachAthleteTabs athleteId={athleteId} className="mb-5" />
 
           <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
             <div>

@@ -11,7 +11,7 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { ArrowLeftIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
-import { TabNav, TabNavLink } from '@/components/ui/tab-nav';
+import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
@@ -152,14 +152,7 @@ export function CoachAthleteRoute() {
       ) : (
         <>
           <AthleteHeader profile={athlete.data.data} today={today} />
-          <TabNav label="Athlete" className="mb-5">
-            <TabNavLink to={paths.coachAthlete(athleteId)} end>
-              Days
-            </TabNavLink>
-            <TabNavLink to={paths.coachAthleteTrends(athleteId)}>Trends</TabNavLink>
-            <TabNavLink to={paths.coachAthletePhotos(athleteId)}>Photos</TabNavLink>
-            <TabNavLink to={paths.coachAthletePlan(athleteId)}>Plan</TabNavLink>
-          </TabNav>
+          <CoachAthleteTabs athleteId={athleteId} className="mb-5" />
           <section aria-labelledby="day-heading" className="mb-8">
             <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
               <h2 id="day-heading" className="text-xl font-bold text-ink tabular-nums">
