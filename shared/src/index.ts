@@ -23,3 +23,5 @@ export * from './plans/cautions.js';
 export * from './schemas/trends.js';
 export * from './schemas/marks.js';
 export * from './schemas/review.js';
+export * from './schemas/weekly.js';
+export * from './schemas/notifications.js';

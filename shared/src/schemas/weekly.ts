@@ -1,0 +1,119 @@
+import { z } from 'zod';
+import { uuid } from './common.js';
+import { WEEKDAYS } from './plans.js';
+import { DRIFT_METRICS } from './trends.js';
+
+/**
+ * The weekly check-in. Each athlete has a check-in weekday; on that day (their date) the check-in for
+ * the week just ended is due: the week is the 7 days before the due date (dueDate − 7 … dueDate − 1).
+ */
+
+export const QUESTION_KINDS = ['text', 'scale', 'yes_no'] as const;
+export type QuestionKind = (typeof QUESTION_KINDS)[number];
+export const QUESTION_KIND_LABELS: Record<QuestionKind, string> = {
+  text: 'Short text',
+  scale: 'Scale 1–5',
+  yes_no: 'Yes / no',
+};
+
+/** One of the coach's questions (team-wide list). */
+export const checkInQuestion = z.object({
+  id: uuid,
+  kind: z.enum(QUESTION_KINDS, { error: 'Choose a kind' }),
+  prompt: z
+    .string({ error: 'Question is required' })
+    .trim()
+    .min(3, 'At least 3 characters')
+    .max(200, 'At most 200 characters'),
+});
+export type CheckInQuestion = z.infer<typeof checkInQuestion>;
+
+/** PUT /api/team/check-in-questions (owner or coach). */
+export const checkInQuestionsRequest = z.object({
+  questions: z.array(checkInQuestion).max(12, 'At most 12 questions'),
+});
+export type CheckInQuestionsRequest = z.infer<typeof checkInQuestionsRequest>;
+
+/** PATCH /api/athletes/:athleteId/check-in-day (staff who may update the athlete). */
+export const checkInDayRequest = z.object({ weekday: z.enum(WEEKDAYS, { error: 'Choose a weekday' }) });
+export type CheckInDayRequest = z.infer<typeof checkInDayRequest>;
+
+/** The week's figures, filled in by the server. */
+export const weeklyFigures = z.object({
+  weekStart: z.string(),
+  weekEnd: z.string(),
+  /** Mean of the week's weigh-ins, and of the week before; null without weigh-ins. */
+  meanWeightKg: z.number().nullable(),
+  previousMeanWeightKg: z.number().nullable(),
+  changeKg: z.number().nullable(),
+  weighIns: z.number().int(),
+  adherence: z.array(
+    z.object({
+      metric: z.enum(DRIFT_METRICS),
+      adherence: z.number().nullable(),
+      loggedShare: z.number().nullable(),
+    }),
+  ),
+  /** Mean of each evening rating (1–5) over the week. */
+  ratings: z.record(z.string(), z.number().nullable()),
+  stepsMean: z.number().nullable(),
+  sleepHoursMean: z.number().nullable(),
+  /** Condition photos of the week (ids; served through the photo routes). */
+  photoIds: z.array(uuid),
+});
+export type WeeklyFigures = z.infer<typeof weeklyFigures>;
+
+export const answerValue = z.union([
+  z.string().trim().max(1000, 'At most 1000 characters'),
+  z.number().int().min(1).max(5),
+  z.boolean(),
+  z.null(),
+]);
+
+/** POST /api/athletes/:athleteId/weekly-check-ins: the athlete submits the check-in due now. */
+export const submitWeeklyCheckInRequest = z.object({
+  /** The due date this answers (from GET …/weekly-check-ins/current). */
+  dueDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD'),
+  answers: z.array(z.object({ questionId: uuid, value: answerValue })).max(12),
+  /** The athlete's own questions for the coach. */
+  questionsForCoach: z.string().trim().max(2000, 'At most 2000 characters').nullable(),
+});
+export type SubmitWeeklyCheckInRequest = z.infer<typeof submitWeeklyCheckInRequest>;
+
+/** POST /api/weekly-check-ins/:checkInId/reply (staff who may annotate the athlete). */
+export const replyWeeklyCheckInRequest = z.object({
+  body: z
+    .string({ error: 'Reply is required' })
+    .trim()
+    .min(1, 'Reply is required')
+    .max(4000, 'At most 4000 characters'),
+  /** A plan version saved from the same screen, linked to the reply. */
+  planVersionId: uuid.nullable().optional(),
+});
+export type ReplyWeeklyCheckInRequest = z.infer<typeof replyWeeklyCheckInRequest>;
+
+export const WEEKLY_STATUSES = ['due', 'submitted', 'answered', 'missed'] as const;
+export type WeeklyStatus = (typeof WEEKLY_STATUSES)[number];
+
+export const weeklyCheckInView = z.object({
+  /** Null while only due (nothing stored yet). */
+  id: uuid.nullable(),
+  athleteId: uuid,
+  dueDate: z.string(),
+  status: z.enum(WEEKLY_STATUSES),
+  figures: weeklyFigures,
+  /** The questions as asked (snapshot at submission; the team's current list while due). */
+  questions: z.array(checkInQuestion),
+  answers: z.array(z.object({ questionId: uuid, value: answerValue })),
+  questionsForCoach: z.string().nullable(),
+  submittedAt: z.string().nullable(),
+  reply: z
+    .object({
+      body: z.string(),
+      by: z.object({ id: uuid, name: z.string() }),
+      at: z.string(),
+      planVersionId: uuid.nullable(),
+    })
+    .nullable(),
+});
+export type WeeklyCheckInView = z.infer<typeof weeklyCheckInView>;
