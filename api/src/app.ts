@@ -3,6 +3,7 @@ import express from 'express';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config.js';
 import type { AppContext } from './context.js';
+import { configureNotifications } from './services/notify.service.js';
 import { createLogger, type Logger } from './logger.js';
 import { originCheck } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/errors.js';
@@ -13,11 +14,14 @@ import { athletesRouter } from './routes/athletes.routes.js';
 import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
+import { dataRouter } from './routes/data.routes.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
 import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
+import { notificationsRouter } from './routes/notifications.routes.js';
+import { meDataRouter } from './routes/me-data.routes.js';
 import { meRouter } from './routes/me.routes.js';
 import { photosRouter } from './routes/photos.routes.js';
 import { plansRouter } from './routes/plans.routes.js';
@@ -26,6 +30,7 @@ import { reviewQueueRouter } from './routes/review-queue.routes.js';
 import { rosterRouter } from './routes/roster.routes.js';
 import { teamRouter } from './routes/team.routes.js';
 import { trendsRouter } from './routes/trends.routes.js';
+import { weeklyCheckInsRouter } from './routes/weekly-check-ins.routes.js';
 
 /** Largest JSON body accepted (photos go through multipart uploads, not JSON). */
 const JSON_LIMIT = '100kb';
@@ -40,6 +45,7 @@ export function createApp(deps: {
 }): express.Express {
   const { config, dataSource } = deps;
   const logger = deps.logger ?? createLogger(config.logLevel);
+  configureNotifications(config);
   const ctx: AppContext = { config, dataSource, logger, clock: deps.clock ?? (() => new Date()) };
 
   const app = express();
@@ -67,6 +73,8 @@ export function createApp(deps: {
   api.use('/health', healthRouter());
   api.use('/auth', authRouter(config));
   api.use('/me', meRouter());
+  // The athlete's data archive (/me/export) and account deletion.
+  api.use('/me', meDataRouter());
   api.use('/invitations', invitationsRouter());
   api.use('/roster', rosterRouter());
   api.use('/review-queue', reviewQueueRouter());
@@ -79,12 +87,19 @@ export function createApp(deps: {
   api.use('/athletes', plansRouter());
   // The trend, drift and flags over a range (/athletes/:athleteId/trend).
   api.use('/athletes', trendsRouter());
+  // The days as CSV and the end of the coaching (/athletes/:athleteId/days.csv, …/end-coaching).
+  api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
   api.use(photosRouter());
   // Marks on an athlete's charts (/athletes/:athleteId/marks) and single marks (/marks/:markId…).
   api.use(marksRouter());
+  // Weekly check-ins (/athletes/:athleteId/weekly-check-ins…, /weekly-check-ins/:checkInId…), the
+  // check-in weekday (/athletes/:athleteId/check-in-day) and the team's questions (/team/check-in-questions).
+  api.use(weeklyCheckInsRouter());
+  // E-mail preferences (/me/notifications) and unsubscribe links (/unsubscribe).
+  api.use(notificationsRouter());
   if (config.appMode !== 'production' && config.mailCaptureDir) {
     api.use('/dev/mail', devMailRouter(config));
   }

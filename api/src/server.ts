@@ -4,6 +4,7 @@ import { createApp } from './app.js';
 import { loadConfig, type Config } from './config.js';
 import { createDataSource } from './db/data-source.js';
 import { startMailWorker } from './jobs/mail.worker.js';
+import { startNotifyScheduler } from './jobs/notify.scheduler.js';
 import { createLogger } from './logger.js';
 
 /** How long a shutdown may take before the process exits anyway. */
@@ -22,6 +23,7 @@ async function main(): Promise<void> {
   const dataSource = createDataSource(config);
   await dataSource.initialize();
   const worker = await startMailWorker({ config, dataSource, logger });
+  const scheduler = await startNotifyScheduler({ config, dataSource, logger });
   const app = createApp({ config, dataSource, logger });
 
   const server = app.listen(config.port, config.host);
@@ -52,6 +54,12 @@ async function main(): Promise<void> {
       void (async () => {
         let code = closeErr ? 1 : 0;
         if (closeErr) logger.error({ err: closeErr }, 'HTTP server close failed');
+        try {
+          await scheduler.stop();
+        } catch (err) {
+          code = 1;
+          logger.error({ err }, 'notification scheduler stop failed');
+        }
         try {
           await worker.stop();
         } catch (err) {

@@ -25,3 +25,4 @@ export * from './schemas/marks.js';
 export * from './schemas/review.js';
 export * from './schemas/weekly.js';
 export * from './schemas/notifications.js';
+export * from './schemas/data.js';

@@ -101,7 +101,13 @@ describe('within the team', () => {
     expect(roster.body.data.map((r: { athleteId: string }) => r.athleteId)).toEqual([w.athlete.athlete.id]);
     const res = await agent.get(`/api/athletes/${w.athlete.athlete.id}`);
     expect(res.status).toBe(200);
-    expect(res.body.abilities).toEqual({ update: true, delete: false, share: false, log: false });
+    expect(res.body.abilities).toEqual({
+      update: true,
+      delete: false,
+      share: false,
+      log: false,
+      endCoaching: false,
+    });
 
     const before = await snapshot(w.athlete.athlete.id);
     const share = await agent
@@ -133,7 +139,13 @@ describe('within the team', () => {
     expect(roster.body.data.map((r: { name: string }) => r.name)).toEqual(['Zoe Assigned', 'Ada Owners']);
     expect(roster.body.data[1].daysToEvent).toBeNull();
     const res = await agent.get(`/api/athletes/${w.athlete.athlete.id}`);
-    expect(res.body.abilities).toEqual({ update: true, delete: true, share: true, log: false });
+    expect(res.body.abilities).toEqual({
+      update: true,
+      delete: true,
+      share: true,
+      log: false,
+      endCoaching: true,
+    });
   });
 
   it('another athlete of the team gets 404', async () => {
@@ -151,7 +163,13 @@ describe('within the team', () => {
       email: w.athlete.user.email,
       coach: { id: w.coach.id },
     });
-    expect(res.body.abilities).toEqual({ update: true, delete: false, share: false, log: true });
+    expect(res.body.abilities).toEqual({
+      update: true,
+      delete: false,
+      share: false,
+      log: true,
+      endCoaching: false,
+    });
     const done = await agent.put(`/api/athletes/${w.athlete.athlete.id}/intake`).send(intake);
     expect(done.status).toBe(200);
     expect(done.body.data).toMatchObject({

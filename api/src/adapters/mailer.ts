@@ -13,6 +13,8 @@ export interface OutgoingMail {
   html: string;
   /** The Message-ID header, stable across retries so a receiver can spot a duplicate. */
   messageId: string;
+  /** Extra headers, e.g. List-Unsubscribe. */
+  headers?: Record<string, string>;
 }
 
 export interface SendResult {
@@ -59,6 +61,7 @@ export function createMailer(config: Pick<Config, 'smtpUrl'>): Mailer {
         text: mail.text,
         html: mail.html,
         messageId: mail.messageId,
+        ...(mail.headers ? { headers: mail.headers } : {}),
       });
       if (info.rejected.length > 0) {
         throw new MailSendError(

@@ -26,6 +26,8 @@ import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { Team } from '../entities/team.entity.js';
 import { User } from '../entities/user.entity.js';
 import { WeighIn } from '../entities/weigh-in.entity.js';
+import { NotificationSend } from '../entities/notification-send.entity.js';
+import { WeeklyCheckIn } from '../entities/weekly-check-in.entity.js';
 import { MIGRATIONS } from './migrations/index.js';
 import { DriftmarkNamingStrategy } from './naming-strategy.js';
 
@@ -60,6 +62,9 @@ export const ENTITIES = [
   MarkReply,
   MarkRead,
   AthleteReview,
+  // Weekly check-ins and e-mail notifications
+  WeeklyCheckIn,
+  NotificationSend,
 ];
 
 export function createDataSource(

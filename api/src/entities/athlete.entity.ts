@@ -1,5 +1,5 @@
 import { Check, Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
-import type { ATHLETE_STATUSES, EVENT_TYPES, GOALS, SEXES } from '@driftmark/shared';
+import type { ATHLETE_STATUSES, EVENT_TYPES, GOALS, SEXES, Weekday } from '@driftmark/shared';
 import { BaseRecord } from './base.entity.js';
 import { Team } from './team.entity.js';
 import { User } from './user.entity.js';
@@ -14,6 +14,10 @@ export type EventType = (typeof EVENT_TYPES)[number];
 @Check('CHK_athletes_status', `"status" IN ('intake_pending', 'active', 'ended')`)
 @Check('CHK_athletes_sex', `"sex" IS NULL OR "sex" IN ('female', 'male')`)
 @Check('CHK_athletes_goal', `"goal" IS NULL OR "goal" IN ('lose', 'maintain', 'gain')`)
+@Check(
+  'CHK_athletes_check_in_weekday',
+  `"check_in_weekday" IN ('mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun')`,
+)
 @Check(
   'CHK_athletes_event_type',
   `"event_type" IS NULL OR "event_type" IN ('show', 'shoot', 'weigh_in', 'none')`,
@@ -97,4 +101,8 @@ export class Athlete extends BaseRecord {
 
   @Column({ name: 'intake_completed_at', type: 'timestamptz', nullable: true })
   intakeCompletedAt: Date | null;
+
+  /** The weekday (athlete's time zone) the weekly check-in is due on. */
+  @Column({ name: 'check_in_weekday', type: 'varchar', length: 3, default: 'mon' })
+  checkInWeekday: Weekday;
 }

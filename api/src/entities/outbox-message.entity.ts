@@ -40,6 +40,10 @@ export class OutboxMessage extends BaseRecord {
   @Column({ name: 'sent_at', type: 'timestamptz', nullable: true })
   sentAt: Date | null;
 
+  /** Extra headers sent with the mail (List-Unsubscribe on reminders), or null. */
+  @Column({ type: 'jsonb', nullable: true })
+  headers: Record<string, string> | null;
+
   /** The Message-ID header used for this mail; unique so a retry can never send it twice. */
   @Index('UQ_outbox_messages_message_id', { unique: true })
   @Column({ name: 'message_id', type: 'varchar', length: 255, nullable: true })

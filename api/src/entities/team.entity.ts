@@ -1,4 +1,4 @@
-import type { GuardrailFloors } from '@driftmark/shared';
+import type { CheckInQuestion, GuardrailFloors } from '@driftmark/shared';
 import { Column, Entity } from 'typeorm';
 import { BaseRecord } from './base.entity.js';
 
@@ -10,6 +10,8 @@ export interface TeamSettings {
   poses?: string[];
   /** Guardrail floors for energy and water per sex (PUT /api/team/guardrails); GUARDRAIL_DEFAULTS without. */
   guardrails?: GuardrailFloors;
+  /** The questions every weekly check-in asks, in order (PUT /api/team/check-in-questions). */
+  checkInQuestions?: CheckInQuestion[];
   /** Demo team only: the instant (ISO 8601) its dates were seeded or last moved for (seed/refresh-demo-dates.ts). */
   demoAnchorAt?: string;
 }

@@ -1,7 +1,12 @@
 import { Check, Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
-import type { Role, VolumeUnit, WeightUnit } from '@driftmark/shared';
+import type { NotificationKind, Role, VolumeUnit, WeightUnit } from '@driftmark/shared';
 import { BaseRecord } from './base.entity.js';
 import { Team } from './team.entity.js';
+
+export interface UserNotificationPrefs {
+  enabled?: Partial<Record<NotificationKind, boolean>>;
+  reminderHour?: number | null;
+}
 
 @Entity({ name: 'users' })
 @Check('CHK_users_role', `"role" IN ('owner', 'coach', 'assistant', 'athlete')`)
@@ -41,4 +46,8 @@ export class User extends BaseRecord {
 
   @Column({ name: 'password_changed_at', type: 'timestamptz', default: () => 'now()' })
   passwordChangedAt: Date;
+
+  /** E-mail preferences: kinds missing from `enabled` count as wanted (see notifications schema). */
+  @Column({ name: 'notification_prefs', type: 'jsonb', default: () => "'{}'" })
+  notificationPrefs: UserNotificationPrefs;
 }

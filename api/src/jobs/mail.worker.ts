@@ -122,6 +122,7 @@ export async function startMailWorker(opts: MailWorkerOptions): Promise<MailWork
           text: message.textBody,
           html: message.htmlBody ?? '',
           messageId: message.messageId ?? `<${message.id}@driftmark.local>`,
+          ...(message.headers ? { headers: message.headers } : {}),
         });
       } catch (err) {
         const error = err instanceof Error ? err : new Error(String(err));

@@ -9,6 +9,7 @@ export interface NewOutboxMessage {
   textBody: string;
   htmlBody: string;
   messageId: string;
+  headers?: Record<string, string> | null;
 }
 
 export async function insertPendingMessage(

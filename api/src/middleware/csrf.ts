@@ -3,6 +3,11 @@ import type { Config } from '../config.js';
 import { AppError } from '../errors.js';
 
 const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
+/**
+ * Requests authorized only by a signed token they carry, never by the session cookie, so a
+ * cross-site sender gains nothing: RFC 8058 one-click unsubscribe is POSTed by mail clients.
+ */
+const TOKEN_ONLY_PATHS = new Set(['/api/unsubscribe']);
 
 function originOf(value: string | undefined): string | null {
   if (!value || value === 'null') return null;
@@ -22,6 +27,7 @@ export function originCheck(config: Pick<Config, 'appOrigin' | 'extraOrigins'>):
   const allowed = new Set([config.appOrigin, ...config.extraOrigins]);
   return (req, _res, next) => {
     if (SAFE_METHODS.has(req.method)) return next();
+    if (req.method === 'POST' && TOKEN_ONLY_PATHS.has(req.path)) return next();
     const origin = req.get('origin');
     const source = origin !== undefined ? originOf(origin) : originOf(req.get('referer'));
     if (source && allowed.has(source)) return next();

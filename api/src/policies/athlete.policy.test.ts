@@ -85,12 +85,14 @@ describe('athlete policy', () => {
       delete: false,
       share: false,
       log: false,
+      endCoaching: false,
     });
     expect(athleteAbilities(actors.self, athlete)).toEqual({
       update: true,
       delete: false,
       share: false,
       log: true,
+      endCoaching: false,
     });
   });
 });

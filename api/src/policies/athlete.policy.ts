@@ -76,5 +76,6 @@ export function athleteAbilities(actor: Actor, target: AthleteTarget) {
     delete: canOnAthlete(actor, 'delete', target),
     share: canOnAthlete(actor, 'share', target),
     log: canOnAthlete(actor, 'log', target),
+    endCoaching: canOnAthlete(actor, 'endCoaching', target),
   };
 }

@@ -18,6 +18,7 @@ const ACTIONS = {
   read: { kind: 'read' },
   manageSettings: { kind: 'manageSettings' },
   managePoses: { kind: 'managePoses' },
+  manageCheckInQuestions: { kind: 'manageCheckInQuestions' },
   viewRoster: { kind: 'viewRoster' },
   viewMembers: { kind: 'viewMembers' },
   viewGuardrails: { kind: 'viewGuardrails' },
@@ -32,11 +33,11 @@ const N = false;
 
 // prettier-ignore
 const EXPECTED: Record<ActorName, Record<ActionName, boolean>> = {
-  owner:                   { read: Y, manageSettings: Y, managePoses: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': Y, 'invite:assistant': Y },
-  coach:                   { read: Y, manageSettings: N, managePoses: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': N, 'invite:assistant': N },
-  assistant:               { read: Y, manageSettings: N, managePoses: N, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
-  athlete:                 { read: Y, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
-  'owner of another team': { read: N, manageSettings: N, managePoses: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  owner:                   { read: Y, manageSettings: Y, managePoses: Y, manageCheckInQuestions: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': Y, 'invite:assistant': Y },
+  coach:                   { read: Y, manageSettings: N, managePoses: Y, manageCheckInQuestions: Y, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': Y, 'invite:coach': N, 'invite:assistant': N },
+  assistant:               { read: Y, manageSettings: N, managePoses: N, manageCheckInQuestions: N, viewRoster: Y, viewMembers: Y, viewGuardrails: Y, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  athlete:                 { read: Y, manageSettings: N, managePoses: N, manageCheckInQuestions: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
+  'owner of another team': { read: N, manageSettings: N, managePoses: N, manageCheckInQuestions: N, viewRoster: N, viewMembers: N, viewGuardrails: N, 'invite:athlete': N, 'invite:coach': N, 'invite:assistant': N },
 };
 
 describe('team policy', () => {

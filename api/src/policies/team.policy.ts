@@ -11,6 +11,8 @@ export type TeamAction =
   | { kind: 'manageSettings' }
   /** Edit the team's condition-photo pose list. */
   | { kind: 'managePoses' }
+  /** Edit the questions every weekly check-in asks. */
+  | { kind: 'manageCheckInQuestions' }
   | { kind: 'viewRoster' }
   | { kind: 'viewMembers' }
   /** Read the team's guardrail floors (changing them is manageSettings). */
@@ -34,6 +36,7 @@ export function canOnTeam(actor: Actor, action: TeamAction, team: TeamTarget): b
     case 'manageSettings':
       return actor.role === 'owner';
     case 'managePoses':
+    case 'manageCheckInQuestions':
       return actor.role === 'owner' || actor.role === 'coach';
     case 'viewRoster':
     case 'viewMembers':

@@ -1,7 +1,7 @@
 import { intakeRequest, shareAthleteRequest, updateEventRequest, uuid } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { notFound } from '../errors.js';
+import { forbidden, notFound } from '../errors.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
 import {
@@ -37,6 +37,11 @@ export async function loadAthleteById(req: Request, athleteId: string, action: A
     sharedWithUserIds: await new AthleteShareRepository(manager).listUserIds(athlete.id),
   };
   authorizeAthlete(actor, action, target);
+  if (action === 'log' && athlete.status === 'ended') {
+    throw forbidden(
+      'Your coaching has ended: you can still read and export your history, but not log new days.',
+    );
+  }
   return { actor, athlete, target };
 }
 
@@ -45,7 +50,10 @@ export function athletesRouter(): Router {
 
   router.get('/:athleteId', authenticate(), validate({ params: athleteParams }), async (req, res) => {
     const { actor, athlete, target } = await loadAthlete(req, 'read');
-    res.json({ data: presentAthleteProfile(athlete), abilities: athleteAbilities(actor, target) });
+    const abilities = athleteAbilities(actor, target);
+    // After the coaching ended nobody logs new days and there is nothing left to end.
+    if (athlete.status === 'ended') Object.assign(abilities, { log: false, endCoaching: false });
+    res.json({ data: presentAthleteProfile(athlete), abilities });
   });
 
   router.put(

@@ -88,14 +88,20 @@ export function checkInsRouter(): Router {
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const days = await new DayService(req.ctx).listDays(athlete, req.query.from, req.query.to);
-      res.json({ data: days, abilities: { log: canOnAthlete(actor, 'log', target) } });
+      res.json({
+        data: days,
+        abilities: { log: athlete.status !== 'ended' && canOnAthlete(actor, 'log', target) },
+      });
     },
   );
 
   router.get('/:athleteId/days/:date', authenticate(), validate({ params: dayParams }), async (req, res) => {
     const { actor, athlete, target } = await loadAthlete(req, 'read');
     const day = await new DayService(req.ctx).getDay(athlete, req.params.date);
-    res.json({ data: day, abilities: { log: canOnAthlete(actor, 'log', target) } });
+    res.json({
+      data: day,
+      abilities: { log: athlete.status !== 'ended' && canOnAthlete(actor, 'log', target) },
+    });
   });
 
   router.put(

@@ -12,8 +12,9 @@
  * Everything of the team's athletes moves, including rows the demo users added themselves after the
  * seed (an entry logged on the anchor day becomes today's; one logged later lands in the future).
  * That is acceptable for demo data. Marks, their replies and read state, and review times move
- * with the athlete they belong to. Not moved: birth dates, countdown templates (offsets only),
- * accounts, sessions, invitations and mail (not part of anyone's history).
+ * with the athlete they belong to. Weekly check-ins move with their due date, the dates in their
+ * figures and the athlete's check-in weekday (so a due date stays on it). Not moved: birth dates, countdown templates (offsets only),
+ * accounts, sessions, invitations, mail and notification sends (not part of anyone's history).
  */
 import { planContent, type GuardrailScope, type PlanContent } from '@driftmark/shared';
 import { In, type EntityManager } from 'typeorm';
@@ -43,7 +44,11 @@ export const SHIFTED_DATE_COLUMNS: readonly string[] = [
   'plan_versions.effective_from',
   'marks.from_date',
   'marks.to_date',
+  'weekly_check_ins.due_date',
 ];
+
+/** The weekdays in order, for moving a check-in weekday along with the dates. */
+const WEEKDAY_ARRAY = `ARRAY['mon', 'tue', 'wed', 'thu', 'fri', 'sat', 'sun']`;
 
 /** Past any real date: unique (athlete, date) rows move there first, so no row meets one not yet moved. */
 const FAR_DAYS = 1_000_000;
@@ -154,6 +159,21 @@ export async function refreshDemoDates(manager: EntityManager, now: Date): Promi
     `created_at = ${at('created_at')}`,
     `updated_at = ${at('updated_at')}`,
   ]);
+  // Weekly check-ins: unique (athlete, due date), so through FAR_DAYS like the day tables.
+  const week = (key: string) => `'${key}', to_char((t.figures->>'${key}')::date + s.n, 'YYYY-MM-DD')`;
+  await update('weekly_check_ins', [
+    `due_date = t.due_date + s.n + ${FAR_DAYS}`,
+    `figures = t.figures || jsonb_build_object(${week('weekStart')}, ${week('weekEnd')})`,
+    ...['submitted_at', 'replied_at', 'created_at', 'updated_at'].map((c) => `"${c}" = ${at(c)}`),
+  ]);
+  await update('weekly_check_ins', [`due_date = t.due_date - ${FAR_DAYS}`]);
+  await update(
+    'athletes',
+    [
+      `check_in_weekday = (${WEEKDAY_ARRAY})[(array_position(${WEEKDAY_ARRAY}, t.check_in_weekday) - 1 + s.n) % 7 + 1]`,
+    ],
+    't.id = s.athlete_id',
+  );
   await manager.query(
     `UPDATE teams SET settings = settings || jsonb_build_object('demoAnchorAt', $2::text) WHERE id = $1`,
     [team.id, now.toISOString()],

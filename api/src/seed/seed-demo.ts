@@ -33,6 +33,7 @@ import { refreshDemoDates } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoMarks } from './seed-marks.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
+import { writeDemoWeekly } from './seed-weekly.js';
 
 /** bcrypt cost for the demo password (the same cost real accounts use). */
 const BCRYPT_COST = 12;
@@ -117,8 +118,10 @@ export async function seedDemo(
 
   const written: string[] = [];
   let rendering: Promise<unknown> = Promise.resolve();
+  let weeklyIds: DemoPlanIds | null = null;
+  let result: SeedDemoResult;
   try {
-    return await dataSource.transaction(async (manager) => {
+    result = await dataSource.transaction(async (manager) => {
       // Two seeds started together (two terminals) must not both insert: the second waits here,
       // then sees the owner and stops.
       await lockSeed(manager);
@@ -135,6 +138,7 @@ export async function seedDemo(
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }
+      weeklyIds = ids;
       return { created: true, movedDays: 0 };
     });
   } catch (error) {
@@ -143,6 +147,10 @@ export async function seedDemo(
     if (storage) await Promise.allSettled(written.map((key) => storage.delete(key)));
     throw error;
   }
+  // After the commit: the stored weekly check-ins sum up the logs and photos written above, read
+  // through the pool (the history loads in parallel, which a transaction's one connection can't).
+  if (weeklyIds) await writeDemoWeekly(dataSource, weeklyIds, now);
+  return result;
 }
 
 async function lockSeed(manager: EntityManager): Promise<void> {

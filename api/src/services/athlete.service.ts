@@ -1,6 +1,6 @@
 import { CONSENTS, type AthleteProfile, type IntakeRequest } from '@driftmark/shared';
 import type { DataSource } from 'typeorm';
-import { notFound, validationFailed } from '../errors.js';
+import { conflict, notFound, validationFailed } from '../errors.js';
 import type { Actor } from '../policies/actor.js';
 import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
@@ -83,6 +83,19 @@ export class AthleteService {
       userId,
       sharedById: actor.userId,
     });
+  }
+
+  /**
+   * Ends the coaching: status 'ended'. The athlete keeps their sign-in and read access to their own
+   * history (and its export); logging is refused from now on (see `loadAthleteById`).
+   */
+  async endCoaching(athlete: AthleteWithPeople): Promise<AthleteWithPeople> {
+    if (athlete.status === 'ended') throw conflict('The coaching has already ended.');
+    const repo = new AthleteRepository(this.deps.dataSource.manager);
+    await repo.update(athlete.id, { status: 'ended' });
+    const updated = await repo.findWithPeople(athlete.id);
+    if (!updated) throw notFound();
+    return updated;
   }
 
   async unshare(athlete: AthleteWithPeople, userId: string): Promise<void> {

@@ -25,6 +25,7 @@ import { foodMealNutrients, macroMealNutrients, type Per100g } from '../lib/meal
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteFlagRepository } from '../repositories/athlete-flag.repository.js';
 import { resolveFood } from './food.service.js';
+import { notifySafetyFlag } from './notify.service.js';
 
 export interface EntryContext {
   manager: EntityManager;
@@ -180,7 +181,7 @@ export const symptomKind: EntryKind<SymptomReport, SymptomReportRequest> = {
     const flags = new AthleteFlagRepository(ctx.manager);
     if (await flags.existsForSymptomReport(entry.id)) return;
     const urgent = entry.symptoms.filter(isUrgent);
-    await flags.create({
+    const flag = await flags.create({
       athleteId: entry.athleteId,
       localDate: entry.localDate,
       kind: 'symptom',
@@ -188,6 +189,8 @@ export const symptomKind: EntryKind<SymptomReport, SymptomReportRequest> = {
       detail: { symptoms: entry.symptoms, time: entry.localTime },
       symptomReportId: entry.id,
     });
+    // Same transaction as the flag: the e-mail to the coach commits (or rolls back) with it.
+    await notifySafetyFlag(ctx.manager, ctx.athlete, flag);
   },
   meta: (entry) => (entry.urgent ? { urgentMessage: URGENT_SYMPTOM_MESSAGE } : undefined),
 };

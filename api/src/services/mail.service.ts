@@ -11,6 +11,8 @@ export interface QueuedMail {
   subject: string;
   text: string;
   html: string;
+  /** Extra headers (e.g. List-Unsubscribe); names and values must stay on one line. */
+  headers?: Record<string, string>;
 }
 
 /** Domain of our Message-ID headers; it only has to be ours and stable. */
@@ -37,6 +39,14 @@ export async function queueMail(manager: EntityManager, mail: QueuedMail): Promi
     textBody: mail.text,
     htmlBody: mail.html,
     messageId: `<${randomUUID()}@${MESSAGE_ID_DOMAIN}>`,
+    headers: mail.headers
+      ? Object.fromEntries(
+          Object.entries(mail.headers).map(([k, v]) => [
+            k.replace(/[^A-Za-z0-9-]/g, ''),
+            v.replace(/[\r\n]+/g, ' '),
+          ]),
+        )
+      : null,
   });
 
   const queue = getRunningQueue();

@@ -7,12 +7,14 @@ import {
   type UpdateMarkRequest,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
+import { User } from '../entities/user.entity.js';
 import { notFound, validationFailed } from '../errors.js';
 import { daysBetween } from '../lib/dates.js';
 import type { Actor } from '../policies/actor.js';
 import { presentMark } from '../presenters/mark.presenter.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { MarkRepository, type MarkWithAuthor } from '../repositories/mark.repository.js';
+import { notifyMarkCreated, notifyMarkReply } from './notify.service.js';
 
 type MarkDeps = { dataSource: DataSource; clock: () => Date };
 
@@ -55,6 +57,8 @@ export class MarkService {
         createdAt: now,
       });
       await marks.upsertRead(mark.id, actor.userId, now);
+      const author = await manager.findOneByOrFail(User, { id: actor.userId });
+      await notifyMarkCreated(manager, athlete, { ...mark, note: input.note }, author);
       return mark.id;
     });
     return this.view(actor, athlete, id);
@@ -91,6 +95,8 @@ export class MarkService {
       const marks = new MarkRepository(manager);
       await marks.addReply({ markId: mark.id, authorId: actor.userId, body: input.body, createdAt: now });
       await marks.upsertRead(mark.id, actor.userId, now);
+      const replier = await manager.findOneByOrFail(User, { id: actor.userId });
+      await notifyMarkReply(manager, athlete, mark, { authorId: actor.userId, body: input.body }, replier);
     });
     return this.view(actor, athlete, mark.id);
   }

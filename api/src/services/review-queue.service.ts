@@ -13,6 +13,11 @@ import type { Actor } from '../policies/actor.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteReviewRepository } from '../repositories/athlete-review.repository.js';
 import { MarkRepository } from '../repositories/mark.repository.js';
+import { Team } from '../entities/team.entity.js';
+import { teamQuestions } from './weekly-check-in.service.js';
+import { WeeklyCheckInRepository } from '../repositories/weekly-check-in.repository.js';
+import { currentDueDate } from '../lib/weekly-dates.js';
+import { localDateTime } from '../lib/local-time.js';
 import { rawPoints } from './trend.service.js';
 import { loadSnapshots, type AthleteSnapshot } from './athlete-figures.service.js';
 import { visibleAthletes } from './roster.service.js';
@@ -45,6 +50,28 @@ const PRIORITY: Record<ReviewReasonKind, Reason['priority']> = {
   reply: 4,
 };
 
+/** The weekly check-in as the queue sees it for one athlete. */
+export interface WeeklyQueueState {
+  /** The current due date (athlete's time zone). */
+  dueDate: string;
+  /** Whether the check-in for `dueDate` has been submitted. */
+  submitted: boolean;
+  /** Whether the team runs weekly check-ins (it has a question list): only then is one missing. */
+  expected: boolean;
+  /** Submitted check-ins nobody has replied to yet. */
+  unanswered: readonly { dueDate: string; submittedAt: Date }[];
+  now: Date;
+}
+
+/** "35 min", "5 h", "3 days": how long ago `at` was. */
+export function timeSince(at: Date, now: Date): string {
+  const minutes = Math.max(0, Math.floor((now.getTime() - at.getTime()) / 60_000));
+  if (minutes < 60) return `${minutes} min`;
+  const hours = Math.floor(minutes / 60);
+  if (hours < 48) return `${hours} h`;
+  return `${Math.floor(hours / 24)} days`;
+}
+
 const pct = (value: number): string => `${Math.abs(value).toFixed(1)} %`;
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
@@ -58,11 +85,15 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
  * - drift: a metric off plan on 2 of the last 3 days, 7-day adherence below 0.6, cut-off breaches
  *   in the last 3 days (arising when the day closed), a 14-day loss beyond 1 %/week (Helms 2014);
  * - the countdown day (standing);
- * - unread replies to marks.
+ * - unread replies to marks;
+ * - weekly check-ins received and not answered yet (standing until a reply, with the time since
+ *   received), and — once the team has a question list — the current one missing after its due
+ *   date has passed (arising the day after; only when the intake was completed before the due date).
  */
 export function reasonsFor(
   s: AthleteSnapshot,
   unread: { count: number; latestAt: Date } | undefined,
+  weekly?: WeeklyQueueState,
 ): Reason[] {
   const tz = s.athlete.user.timeZone;
   const startOf = (date: string) => localInstant(date, '00:00', tz);
@@ -200,6 +231,36 @@ export function reasonsFor(
       at: unread.latestAt,
     });
   }
+
+  // Weekly check-ins -------------------------------------------------------------------------
+  if (weekly) {
+    for (const w of [...weekly.unanswered].sort((a, b) => a.dueDate.localeCompare(b.dueDate))) {
+      add({
+        kind: 'reply',
+        text: `Weekly check-in received ${timeSince(w.submittedAt, weekly.now)} ago, not answered yet`,
+        date: w.dueDate,
+        at: w.submittedAt,
+        standing: true,
+      });
+    }
+    const intake = s.athlete.intakeCompletedAt;
+    const intakeDate = intake ? localDateTime(intake, tz).date : null;
+    if (
+      weekly.expected &&
+      !weekly.submitted &&
+      weekly.dueDate < s.today &&
+      intakeDate !== null &&
+      intakeDate < weekly.dueDate
+    ) {
+      const late = daysBetween(weekly.dueDate, s.today);
+      add({
+        kind: 'missed',
+        text: `Weekly check-in not submitted (due ${plural(late, 'day', 'days')} ago)`,
+        date: weekly.dueDate,
+        at: startOf(shiftDate(weekly.dueDate, 1)),
+      });
+    }
+  }
   return reasons;
 }
 
@@ -250,7 +311,8 @@ export class ReviewQueueService {
   /**
    * The active athletes the actor may see (as on the roster) that need attention, most urgent
    * first. A constant number of statements: two for the athletes, eight for their figures, one for
-   * unread replies and one for the actor's last reviews.
+   * unread replies, one for the actor's last reviews, one for the weekly check-ins and one for the
+   * team's question list.
    */
   async list(actor: Actor): Promise<ReviewQueueItem[]> {
     const manager = this.deps.dataSource.manager;
@@ -258,16 +320,36 @@ export class ReviewQueueService {
     // Athletes still doing their intake, or whose coaching ended, have nothing to review.
     const athletes = (await visibleAthletes(manager, actor)).filter((a) => a.status === 'active');
     const ids = athletes.map((a) => a.id);
-    const [snapshots, unread, reviewed] = await Promise.all([
+    const dueDates = new Map(
+      athletes.map((a) => [a.id, currentDueDate(now, a.user.timeZone, a.checkInWeekday)]),
+    );
+    const [snapshots, unread, reviewed, checkIns, team] = await Promise.all([
       loadSnapshots(manager, athletes, now),
       new MarkRepository(manager).unreadRepliesByAthlete(actor.userId, ids),
       new AthleteReviewRepository(manager).lastReviewedByAthlete(actor.userId, ids),
+      new WeeklyCheckInRepository(manager).forQueue(dueDates),
+      ids.length > 0
+        ? manager.findOne(Team, { where: { id: actor.teamId }, select: { id: true, settings: true } })
+        : null,
     ]);
+    const expected = teamQuestions(team).length > 0;
+    const checkInsOf = new Map<string, typeof checkIns>();
+    for (const c of checkIns) checkInsOf.set(c.athleteId, [...(checkInsOf.get(c.athleteId) ?? []), c]);
     return athletes
       .flatMap((a) => {
         const s = snapshots.get(a.id);
         if (!s) return [];
-        const item = queueItemFor(s, reasonsFor(s, unread.get(a.id)), reviewed.get(a.id) ?? null, now);
+        const dueDate = dueDates.get(a.id)!;
+        const own = checkInsOf.get(a.id) ?? [];
+        const weekly: WeeklyQueueState = {
+          dueDate,
+          expected,
+          submitted: own.some((c) => c.dueDate === dueDate),
+          unanswered: own.filter((c) => c.repliedAt === null),
+          now,
+        };
+        const reasons = reasonsFor(s, unread.get(a.id), weekly);
+        const item = queueItemFor(s, reasons, reviewed.get(a.id) ?? null, now);
         return item ? [item] : [];
       })
       .sort(compareItems);

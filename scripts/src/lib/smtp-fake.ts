@@ -21,6 +21,9 @@ export interface CapturedMail {
   text: string;
   html: string | null;
   messageId: string | null;
+  /** Raw List-Unsubscribe and List-Unsubscribe-Post header values, when present. */
+  listUnsubscribe?: string | null;
+  listUnsubscribePost?: string | null;
 }
 
 export interface SmtpFakeOptions {
@@ -56,6 +59,16 @@ function formatSender(field: AddressObject | undefined): string | null {
   const first = field?.value[0];
   if (!first?.address) return field?.text ?? null;
   return first.name ? `${first.name} <${first.address}>` : first.address;
+}
+
+/** The unfolded value of a header from mailparser's raw lines, or null. */
+function rawHeader(lines: readonly { key: string; line: string }[], key: string): string | null {
+  const found = lines.find((l) => l.key === key);
+  if (!found) return null;
+  return found.line
+    .slice(found.line.indexOf(':') + 1)
+    .replace(/\r?\n[ \t]+/g, ' ')
+    .trim();
 }
 
 export async function startSmtpFake(options: SmtpFakeOptions): Promise<SmtpFake> {
@@ -112,6 +125,8 @@ export async function startSmtpFake(options: SmtpFakeOptions): Promise<SmtpFake>
               text: parsed.text ?? '',
               html: parsed.html === false ? null : parsed.html,
               messageId: parsed.messageId ?? null,
+              listUnsubscribe: rawHeader(parsed.headerLines, 'list-unsubscribe'),
+              listUnsubscribePost: rawHeader(parsed.headerLines, 'list-unsubscribe-post'),
             };
             const finalPath = path.join(captureDir, `${id}.json`);
             const tmpPath = `${finalPath}.tmp`;

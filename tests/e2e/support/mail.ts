@@ -6,20 +6,45 @@ interface MailSummary {
   to: string[];
   subject: string;
 }
-interface MailMessage extends MailSummary {
+export interface MailMessage extends MailSummary {
   from: string;
   text: string;
   html: string | null;
 }
 
-/** Waits for a captured message to `to` (read through the demo inbox API) and returns it. */
-export async function waitForMailTo(to: string, timeoutMs = 20_000): Promise<MailMessage> {
+export interface MailQuery {
+  /** Part of a recipient address (case-insensitive). */
+  to: string;
+  /** Part of the subject (case-insensitive), or a pattern it must match. */
+  subject?: string | RegExp;
+  /** Only messages received after this instant (e.g. `new Date()` taken before the action that sends). */
+  since?: Date;
+  timeoutMs?: number;
+}
+
+function matches(m: MailSummary, query: MailQuery): boolean {
+  const to = query.to.toLowerCase();
+  if (!m.to.some((addr) => addr.toLowerCase().includes(to))) return false;
+  if (query.subject instanceof RegExp && !query.subject.test(m.subject)) return false;
+  if (typeof query.subject === 'string' && !m.subject.toLowerCase().includes(query.subject.toLowerCase())) {
+    return false;
+  }
+  if (query.since && !(Date.parse(m.receivedAt) > query.since.getTime())) return false;
+  return true;
+}
+
+/**
+ * Waits for the newest captured message matching `query` (read through the demo inbox API, newest
+ * first) and returns it with its text and HTML parts.
+ */
+export async function waitForMail(query: MailQuery): Promise<MailMessage> {
+  const timeoutMs = query.timeoutMs ?? 20_000;
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
     const res = await fetch(`${baseUrl}/api/dev/mail`);
     if (res.ok) {
       const { data } = (await res.json()) as { data: MailSummary[] };
-      const hit = data.find((m) => m.to.some((addr) => addr.toLowerCase().includes(to.toLowerCase())));
+      const hit = data.find((m) => matches(m, query));
       if (hit) {
         const full = await fetch(`${baseUrl}/api/dev/mail/${hit.id}`);
         return ((await full.json()) as { data: MailMessage }).data;
@@ -27,7 +52,31 @@ export async function waitForMailTo(to: string, timeoutMs = 20_000): Promise<Mai
     }
     await new Promise((r) => setTimeout(r, 250));
   }
-  throw new Error(`No e-mail to ${to} within ${timeoutMs} ms`);
+  const what = [query.to, query.subject ? `subject ${String(query.subject)}` : null].filter(Boolean);
+  throw new Error(`No e-mail to ${what.join(', ')} within ${timeoutMs} ms`);
+}
+
+/** Waits for a captured message to `to` (read through the demo inbox API) and returns it. */
+export async function waitForMailTo(to: string, timeoutMs = 20_000): Promise<MailMessage> {
+  return waitForMail({ to, timeoutMs });
+}
+
+function decodeEntities(href: string): string {
+  return href
+    .replace(/&amp;/g, '&')
+    .replace(/&#x2F;/gi, '/')
+    .replace(/&#47;/g, '/')
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'");
+}
+
+/** Every http(s) link in a message: the text part's URLs, then the HTML part's hrefs; no duplicates. */
+export function linksIn(message: MailMessage): string[] {
+  const fromText = (message.text.match(/https?:\/\/[^\s<>"]+/g) ?? []).map((l) => l.replace(/[).,;:]+$/, ''));
+  const fromHtml = [...(message.html ?? '').matchAll(/href\s*=\s*["']([^"']+)["']/gi)]
+    .map((m) => decodeEntities(m[1] ?? ''))
+    .filter((l) => /^https?:\/\//.test(l));
+  return [...new Set([...fromText, ...fromHtml])];
 }
 
 /** The first link in a message's text part that points at the app and contains `pathPart`. */
@@ -36,4 +85,21 @@ export function linkIn(message: MailMessage, pathPart: string): string {
   const link = links.find((l) => l.includes(pathPart));
   if (!link) throw new Error(`No link containing ${pathPart} in: ${message.text}`);
   return link.replace(/[).,]+$/, '');
+}
+
+/** The first link (text or HTML part) containing `pathPart`, e.g. '/unsubscribe?token='. */
+export function anyLinkIn(message: MailMessage, pathPart: string): string {
+  const link = linksIn(message).find((l) => l.includes(pathPart));
+  if (!link)
+    throw new Error(`No link containing ${pathPart} in: ${linksIn(message).join(', ') || message.text}`);
+  return link;
+}
+
+/**
+ * A link's path, query and hash ("/unsubscribe?token=…"), for `page.goto` against the test server
+ * whatever origin the e-mail was written with.
+ */
+export function appPath(link: string): string {
+  const url = new URL(link);
+  return `${url.pathname}${url.search}${url.hash}`;
 }

@@ -22,9 +22,11 @@ import { AthleteHistoryRoute } from './routes/athlete-history';
 import { AthleteHomeRoute } from './routes/athlete-home';
 import { AthletePhotosRoute } from './routes/athlete-photos';
 import { AthleteTrendsRoute } from './routes/athlete-trends';
+import { AthleteWeeklyRoute } from './routes/athlete-weekly';
 import { CoachAthleteRoute } from './routes/coach-athlete';
 import { CoachAthletePhotosRoute } from './routes/coach-athlete-photos';
 import { CoachAthleteTrendsRoute } from './routes/coach-athlete-trends';
+import { CoachAthleteWeeklyRoute } from './routes/coach-athlete-weekly';
 import {
   CoachAthletePlanCountdownRoute,
   CoachAthletePlanEditorRoute,
@@ -45,6 +47,9 @@ import { RootRedirect } from './routes/root-redirect';
 import { RouteError } from './routes/route-error';
 import { SettingsRoute } from './routes/settings';
 import { SignInRoute } from './routes/sign-in';
+import { UnsubscribeRoute } from './routes/unsubscribe';
+import { ReportWeekRoute } from './routes/report-week';
+import { AccountDeleteRoute } from './routes/account-delete';
 
 /**
  * Loaders only start fetches (the same query options the screens use) so data and the session
@@ -105,9 +110,13 @@ export const router = createBrowserRouter([
       { path: 'reset-password', element: <ResetPasswordRoute /> },
       { path: 'invite/:token', element: <AcceptInvitationRoute /> },
       { path: 'dev/inbox', element: <DevInboxRoute /> },
+      { path: 'unsubscribe', element: <UnsubscribeRoute /> },
+      { path: 'account/delete', element: <AccountDeleteRoute /> },
       {
         element: <RequireSignedIn />,
         children: [
+          // Printable, outside the shells: the week before a check-in's due date.
+          { path: 'report/athletes/:athleteId/weeks/:dueDate', element: <ReportWeekRoute /> },
           {
             element: <RequireAthlete />,
             children: [
@@ -119,6 +128,7 @@ export const router = createBrowserRouter([
                   { path: 'athlete/days/:date', element: <AthleteDayRoute />, loader: prefetchOwnProfile },
                   { path: 'athlete/photos', element: <AthletePhotosRoute />, loader: prefetchOwnProfile },
                   { path: 'athlete/trends', element: <AthleteTrendsRoute />, loader: prefetchOwnTrends },
+                  { path: 'athlete/weekly', element: <AthleteWeeklyRoute /> },
                   { path: 'intake', element: <IntakeRoute />, loader: prefetchOwnProfile },
                 ],
               },
@@ -165,6 +175,8 @@ export const router = createBrowserRouter([
                       )(),
                   },
                   { path: 'athletes/:athleteId/photos', element: <CoachAthletePhotosRoute /> },
+                  { path: 'athletes/:athleteId/weekly', element: <CoachAthleteWeeklyRoute /> },
+                  { path: 'athletes/:athleteId/weekly/:checkInId', element: <CoachAthleteWeeklyRoute /> },
                   {
                     path: 'athletes/:athleteId/trends',
                     element: <CoachAthleteTrendsRoute />,

@@ -7,6 +7,15 @@ export const paths = {
   invite: (token: string) => `/invite/${encodeURIComponent(token)}`,
   intake: '/intake',
   settings: '/settings',
+  /** Settings opened at the E-mail card. */
+  settingsEmail: '/settings#e-mail',
+  /** The landing page of an e-mail's unsubscribe link (public). */
+  unsubscribe: (token: string) => `/unsubscribe?token=${encodeURIComponent(token)}`,
+  /** The landing page of the account deletion e-mail's link (public). */
+  accountDelete: (token: string) => `/account/delete?token=${encodeURIComponent(token)}`,
+  /** The printable weekly report: the 7 days before a check-in's due date. */
+  reportWeek: (athleteId: string, dueDate: string) =>
+    `/report/athletes/${encodeURIComponent(athleteId)}/weeks/${dueDate}`,
   athleteHome: '/athlete',
   /** The coach's default screen: the review queue. */
   coachHome: '/coach',
@@ -16,6 +25,8 @@ export const paths = {
   /** The athlete's own weight chart, rate, adherence and their coach's marks. */
   athleteTrends: '/athlete/trends',
   athleteHistory: '/athlete/history',
+  /** The athlete's weekly check-in: the week's figures, the coach's questions, the reply. */
+  athleteWeekly: '/athlete/weekly',
   /** One of the athlete's own days (YYYY-MM-DD), editable. */
   athleteDay: (date: string) => `/athlete/days/${encodeURIComponent(date)}`,
   /** A coach's page of one athlete; with a date it opens that day. */
@@ -25,6 +36,9 @@ export const paths = {
   /** An athlete's charts over a range (2 weeks, 6 weeks, season), with the day table and the marks. */
   coachAthleteTrends: (athleteId: string, range?: string) =>
     `/coach/athletes/${encodeURIComponent(athleteId)}/trends${range ? `?range=${encodeURIComponent(range)}` : ''}`,
+  /** An athlete's weekly check-ins; with an id it opens that one. */
+  coachAthleteWeekly: (athleteId: string, checkInId?: string) =>
+    `/coach/athletes/${encodeURIComponent(athleteId)}/weekly${checkInId ? `/${encodeURIComponent(checkInId)}` : ''}`,
   /** An athlete's plan: week view and editor; the countdown flow; the version history and one version. */
   coachAthletePlan: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/plan`,
   coachAthletePlanCountdown: (athleteId: string) =>

@@ -4,6 +4,7 @@ import { AddDailyCheckIns1796164991456 } from './1796164991456-AddDailyCheckIns.
 import { AddConditionPhotos1796165060504 } from './1796165060504-AddConditionPhotos.js';
 import { AddPlans1796173077550 } from './1796173077550-AddPlans.js';
 import { AddMarksAndReviews1796175671267 } from './1796175671267-AddMarksAndReviews.js';
+import { AddWeeklyCheckInsAndNotifications1796178387090 } from './1796178387090-AddWeeklyCheckInsAndNotifications.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -12,4 +13,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddConditionPhotos1796165060504,
   AddPlans1796173077550,
   AddMarksAndReviews1796175671267,
+  AddWeeklyCheckInsAndNotifications1796178387090,
 ];

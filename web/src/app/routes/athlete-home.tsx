@@ -8,6 +8,7 @@ import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { CoachCard, EventCountdownCard } from '@/features/athletes/components/athlete-today';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
 import { useToday } from '@/features/check-ins/components/use-clock';
+import { WeeklyDueBanner } from '@/features/weekly/components/weekly-due-banner';
 import { firstName, formatDate, greetingFor, hourIn } from '@/lib/format';
 import { useCurrentUser } from '../session';
 
@@ -53,6 +54,7 @@ export function AthleteHomeRoute() {
         </h1>
       </header>
       <div className="space-y-4">
+        <WeeklyDueBanner athleteId={athleteId} href={paths.athleteWeekly} />
         <DayCheckIn
           athleteId={athleteId}
           date={today}

@@ -10,6 +10,7 @@ import { useMarks } from '@/features/marks/api/list-marks';
 import { MarkList } from '@/features/marks/components/mark-list';
 import { usePlan } from '@/features/plans/api/get-plan';
 import { useTrend } from '@/features/trends/api/get-trend';
+import { DaysCsvLink } from '@/features/trends/components/days-csv-link';
 import { RangePicker } from '@/features/trends/components/range-picker';
 import { TrendInWords } from '@/features/trends/components/trend-in-words';
 import { WeightChart } from '@/features/trends/components/weight-chart';
@@ -70,6 +71,15 @@ export function AthleteTrendsRoute() {
         className="mb-4"
       />
       <RangePicker value={range} onChange={setRange} className="mb-4 flex w-full [&>button]:flex-1" />
+      {athleteId ? (
+        <DaysCsvLink
+          athleteId={athleteId}
+          from={from}
+          to={to}
+          size="md"
+          className="mb-4 w-full print:hidden"
+        />
+      ) : null}
 
       {athlete.isError || trend.isError ? (
         <Alert

@@ -20,6 +20,7 @@ import { DayTable } from '@/features/trends/components/day-table';
 import { EnergyChart } from '@/features/trends/components/energy-chart';
 import { FluidsChart } from '@/features/trends/components/fluids-chart';
 import { MacrosChart } from '@/features/trends/components/macros-chart';
+import { DaysCsvLink } from '@/features/trends/components/days-csv-link';
 import { RangePicker } from '@/features/trends/components/range-picker';
 import { TrendFigures } from '@/features/trends/components/trend-figures';
 import { WeightChart } from '@/features/trends/components/weight-chart';
@@ -131,6 +132,10 @@ export function CoachAthleteTrendsRoute() {
             </div>
             <div className="flex flex-wrap items-center gap-2 print:hidden">
               <RangePicker value={range} onChange={setRange} />
+              <DaysCsvLink athleteId={athleteId} from={from} to={to} />
+              <ButtonLink to={paths.reportWeek(athleteId, today)} variant="secondary" size="sm">
+                Weekly report
+              </ButtonLink>
               <ButtonLink
                 to={paths.coachAthletePhotos(athleteId)}
                 variant="secondary"

@@ -13,6 +13,7 @@ import { ArrowLeftIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
 import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { paths } from '@/config/paths';
+import { EndCoachingPanel } from '@/features/athletes/components/end-coaching-panel';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
 import { DayHistory } from '@/features/check-ins/components/day-history';
@@ -189,6 +190,10 @@ export function CoachAthleteRoute() {
               level={3}
             />
           </section>
+          <EndCoachingPanel
+            profile={athlete.data.data}
+            canEnd={athlete.data.abilities.endCoaching === true}
+          />
         </>
       )}
       <SafetyNote className="mt-8 max-w-3xl" />

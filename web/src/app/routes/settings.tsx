@@ -6,9 +6,12 @@ import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { authKeys } from '@/features/auth/api/keys';
 import { planKeys } from '@/features/plans/api/keys';
+import { MyDataCard } from '@/features/data-rights/components/my-data-card';
 import { ChangePasswordForm } from '@/features/settings/components/change-password-form';
 import { GuardrailFloorsForm } from '@/features/settings/components/guardrail-floors-form';
+import { NotificationPreferencesForm } from '@/features/settings/components/notification-preferences-form';
 import { SettingsForm } from '@/features/settings/components/settings-form';
+import { CheckInQuestionsEditor } from '@/features/weekly/components/check-in-questions-editor';
 import { SignOutButton } from '../layouts/sign-out-button';
 import { useCurrentUser } from '../session';
 
@@ -40,6 +43,15 @@ export function SettingsRoute() {
             />
           </Card>
         ) : null}
+        {staff ? (
+          <Card aria-labelledby="check-in-questions-heading">
+            <CardHeader id="check-in-questions-heading" eyebrow="Team" title="Weekly check-in questions" />
+            <p className="mb-4 text-sm text-ink-muted">
+              Every athlete answers these with their weekly check-in, beside the week&apos;s figures.
+            </p>
+            <CheckInQuestionsEditor canEdit={me.role === 'owner' || me.role === 'coach'} />
+          </Card>
+        ) : null}
         {!staff ? (
           <Card padding="compact" aria-labelledby="details-heading">
             <h2 id="details-heading" className="font-semibold text-ink">
@@ -51,6 +63,16 @@ export function SettingsRoute() {
             </ButtonLink>
           </Card>
         ) : null}
+        {!staff ? (
+          <Card id="my-data" aria-labelledby="my-data-heading">
+            <CardHeader id="my-data-heading" title="Your data" />
+            <MyDataCard />
+          </Card>
+        ) : null}
+        <Card id="e-mail" aria-labelledby="e-mail-heading">
+          <CardHeader id="e-mail-heading" title="E-mail" />
+          <NotificationPreferencesForm staff={staff} timeZone={me.timeZone} />
+        </Card>
         <Card aria-labelledby="password-heading">
           <CardHeader id="password-heading" title="Your password" />
           <ChangePasswordForm onChanged={setMe} />

@@ -2,3 +2,10 @@ export const guardrailKeys = {
   /** The team's guardrail floors (GET /api/team/guardrails). */
   floors: ['team-guardrails'] as const,
 };
+
+export const notificationKeys = {
+  /** The signed-in user's e-mail choices (GET /api/me/notifications). */
+  preferences: ['me-notifications'] as const,
+  /** What an unsubscribe link would stop (GET /api/unsubscribe?token=). */
+  unsubscribe: (token: string) => ['unsubscribe', token] as const,
+};
