@@ -253,7 +253,9 @@ export function ReportWeekRoute() {
                               ? answer
                                 ? 'Yes'
                                 : 'No'
-                              : String(answer)}
+                              : q.kind === 'scale'
+                                ? `${answer} of 5`
+                                : String(answer)}
                         </dd>
                       </div>
                     );
