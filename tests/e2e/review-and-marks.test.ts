@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openSession, screenshot, signIn, type Session } from './support/browser.js';
+import { anyLinkIn, appPath, waitForMail } from './support/mail.js';
 
 // The head coach starts from the review queue, opens the countdown athlete, drags across the weight
 // chart to pin a mark on a date range; the athlete reads it on their own chart and replies; the coach
@@ -8,6 +9,7 @@ describe('review queue, charts and marks', () => {
   let desktop: Session;
   let phone: Session;
   const note = 'Scale down across these days as planned; keep the water steady.';
+  let pinnedAt = new Date();
   const reply = 'Felt flat on the second day, better after the evening meal.';
 
   beforeAll(async () => {
@@ -75,6 +77,7 @@ describe('review queue, charts and marks', () => {
     expect(from).toMatch(/^\d{4}-\d{2}-\d{2}$/);
     expect(to > from).toBe(true);
     await composer.getByLabel('Note').fill(note);
+    pinnedAt = new Date();
     await composer.getByRole('button', { name: 'Pin mark' }).click();
     await composer.waitFor({ state: 'hidden' });
 
@@ -88,12 +91,20 @@ describe('review queue, charts and marks', () => {
     const { page } = phone;
     await signIn(page, 'athlete@driftmark.test');
     await page.waitForURL('**/athlete**');
-    await page.getByRole('link', { name: /Trends/ }).click();
+    // The athlete is told by e-mail; its link opens their Trends on that mark.
+    const mail = await waitForMail({
+      to: 'athlete@driftmark.test',
+      subject: 'left a note on your chart',
+      since: pinnedAt,
+    });
+    expect(mail.text).toContain(note);
+    await page.goto(appPath(anyLinkIn(mail, '/athlete/trends')));
     await page.getByRole('figure', { name: 'Your weight' }).waitFor();
     await expect(page.locator('[data-pin-mark-id]').count()).resolves.toBeGreaterThan(0);
 
     const mark = page.getByRole('article').filter({ hasText: note });
     await mark.waitFor();
+    await mark.getByText('On the chart').waitFor();
     await mark.getByRole('button', { name: 'Reply' }).click();
     await mark.getByRole('textbox', { name: 'Your reply' }).fill(reply);
     await mark.getByRole('button', { name: 'Send reply' }).click();

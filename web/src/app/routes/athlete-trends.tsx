@@ -1,4 +1,5 @@
 import { useCallback, useMemo, useState } from 'react';
+import { useSearchParams } from 'react-router';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -56,7 +57,9 @@ export function AthleteTrendsRoute() {
   const marksQuery = useMarks(athleteId);
   const marks = useMemo(() => marksQuery.data?.data ?? [], [marksQuery.data]);
   const numbers = useMemo(() => numberMarks(marks, from, to), [marks, from, to]);
-  const [selectedMarkId, setSelectedMarkId] = useState<string | null>(null);
+  // E-mails about a mark link here with ?mark=<id>: open on that mark.
+  const [searchParams] = useSearchParams();
+  const [selectedMarkId, setSelectedMarkId] = useState<string | null>(() => searchParams.get('mark'));
   const openMark = useCallback((id: string) => {
     setSelectedMarkId(id);
     scrollToThread(id);

@@ -65,7 +65,8 @@ export function CoachAthleteTrendsRoute() {
   const canAnnotate = marksQuery.data?.abilities.create === true;
   const numbers = useMemo(() => numberMarks(marks, from, to), [marks, from, to]);
   const [pin, setPin] = useState<PinRequest | null>(null);
-  const [selectedMarkId, setSelectedMarkId] = useState<string | null>(null);
+  // E-mails about a mark link here with ?mark=<id>: open on that mark.
+  const [selectedMarkId, setSelectedMarkId] = useState<string | null>(() => params.get('mark'));
   const onPin = canAnnotate ? setPin : undefined;
   const selectFromChart = useCallback(
     (id: string) => setSelectedMarkId((cur) => (cur === id ? null : id)),
