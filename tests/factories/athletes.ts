@@ -4,6 +4,11 @@ import { AthleteShare } from '../../api/src/entities/athlete-share.entity.js';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { createUser, type UserOverrides } from './users.js';
 
+/** When the default athlete finished the intake; their event is placed from it, not from the calendar. */
+const INTAKE_AT = new Date('2026-01-05T10:00:00Z');
+/** The default event: about 17 months after the intake (tests that care pin their clock and set it). */
+const EVENT_DATE = new Date(INTAKE_AT.getTime() + 512 * 86_400_000).toISOString().slice(0, 10);
+
 export function buildAthlete(overrides: Partial<Athlete> = {}): Partial<Athlete> {
   return {
     status: 'active',
@@ -15,13 +20,13 @@ export function buildAthlete(overrides: Partial<Athlete> = {}): Partial<Athlete>
     goal: 'lose',
     eventType: 'show',
     eventName: 'Test Classic',
-    eventDate: '2027-06-01',
+    eventDate: EVENT_DATE,
     eventTime: '09:00',
     eventTimeZone: 'UTC',
     division: 'Bikini',
     weighInLimitKg: null,
     photoConsent: true,
-    intakeCompletedAt: new Date('2026-01-05T10:00:00Z'),
+    intakeCompletedAt: INTAKE_AT,
     ...overrides,
   };
 }

@@ -7,7 +7,8 @@ interface Schemas<
   P extends z.ZodType | undefined,
   Q extends z.ZodType | undefined,
 > {
-  body?: B;
+  /** The body's schema, or a function of the request for rules that need its clock (dates "as of today"). */
+  body?: B | ((req: Request) => B);
   params?: P;
   query?: Q;
 }
@@ -43,8 +44,9 @@ export function validate<
         enumerable: true,
       });
     }
-    if (schemas.body) {
-      const parsed = schemas.body.safeParse(req.body ?? {});
+    const body = typeof schemas.body === 'function' ? schemas.body(req as unknown as Request) : schemas.body;
+    if (body) {
+      const parsed = body.safeParse(req.body ?? {});
       if (!parsed.success) return next(parsed.error);
       req.body = parsed.data as typeof req.body;
     }

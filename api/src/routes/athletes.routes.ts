@@ -1,4 +1,4 @@
-import { intakeRequest, shareAthleteRequest, updateEventRequest, uuid } from '@driftmark/shared';
+import { intakeRequestOn, shareAthleteRequest, updateEventRequest, uuid } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { forbidden, notFound } from '../errors.js';
@@ -12,6 +12,7 @@ import {
 } from '../policies/athlete.policy.js';
 import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
+import { todayIn } from '../lib/dates.js';
 import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { PlanService } from '../services/plan.service.js';
@@ -59,7 +60,8 @@ export function athletesRouter(): Router {
   router.put(
     '/:athleteId/intake',
     authenticate(),
-    validate({ params: athleteParams, body: intakeRequest }),
+    // Ages are counted to the server's today (UTC: the athlete's own zone is part of this very form).
+    validate({ params: athleteParams, body: (req) => intakeRequestOn(todayIn('UTC', req.ctx.clock())) }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'completeIntake');
       res.json({ data: await new AthleteService(req.ctx).completeIntake(athlete, req.body) });

@@ -71,6 +71,13 @@ export interface DemoAthleteDefinition {
     checkInRate: number;
     /** A show that ended before the seed date (regain phase). */
     pastEvent?: { name: string; division: string; daysBeforeSeed: number };
+    /**
+     * A faster loss over the last `days` days before the seed date, kg a week: the model reaches
+     * seedDateWeightKg on the seed date at this rate, and the earlier history leads up to it.
+     */
+    lateLoss?: { days: number; kgPerWeek: number };
+    /** Days before the seed date with nothing logged, whatever the check-in rate draws (1 = yesterday). */
+    missedDaysBeforeSeed?: readonly number[];
   };
 }
 
@@ -182,7 +189,14 @@ export const DEMO_ATHLETES: readonly DemoAthleteDefinition[] = [
       division: null,
       weighInLimitKg: null,
     },
-    history: { seed: 303, startWeightKg: 61.8, seedDateWeightKg: 58.9, checkInRate: 0.9 },
+    history: {
+      seed: 303,
+      startWeightKg: 63.4,
+      seedDateWeightKg: 58.9,
+      checkInRate: 0.9,
+      // Pushing too hard for the shoot: about 1.8 % of body weight a week over the last three weeks.
+      lateLoss: { days: 21, kgPerWeek: 1.05 },
+    },
   },
   {
     key: 'long_diet',
@@ -260,6 +274,13 @@ export const DEMO_ATHLETES: readonly DemoAthleteDefinition[] = [
       photoConsent: true,
     },
     event: { type: 'none' },
-    history: { seed: 606, startWeightKg: 79.4, seedDateWeightKg: 76.8, checkInRate: 0.45 },
+    history: {
+      seed: 606,
+      startWeightKg: 79.4,
+      seedDateWeightKg: 76.8,
+      checkInRate: 0.45,
+      // The last two days are always missed: the coach sees the missed check-ins in the queue.
+      missedDaysBeforeSeed: [1, 2],
+    },
   },
 ];

@@ -162,6 +162,11 @@ interface Habits {
   tracksCycle: boolean;
   /** Cycle length in days (women) or null. */
   cycleDays: number | null;
+  /**
+   * The cycle day on the day before the seed date, when the situation depends on it (a steady
+   * loss must not end in the water of the late luteal phase); otherwise drawn from the seed.
+   */
+  cycleDayYesterday?: number;
   /** Trips as [first, last] days before the seed date. */
   trips: readonly (readonly [number, number])[];
   /** Mean length of a run of missed days. */
@@ -323,6 +328,8 @@ const HABITS: Record<DemoSituation, Habits> = {
     poorSleep: 0.06,
     tracksCycle: true,
     cycleDays: 30,
+    // Mid-cycle: the last two weeks hold no menstrual water, so the 14-day rate shows the diet.
+    cycleDayYesterday: 17,
     trips: [[33, 32]],
     missedRunDays: 1.3,
     notes: [
@@ -498,6 +505,13 @@ export function modelWeightKg(def: DemoAthleteDefinition, t: number): number {
     const s = (span - t) / (span - showT);
     return start - (start - showKg) * clamp(s, 0, 1);
   }
+  const late = def.history.lateLoss;
+  if (late) {
+    // A steady loss up to the last `late.days` days, then the faster one that ends at `end`.
+    const kneeKg = end + (late.kgPerWeek / 7) * late.days;
+    if (t <= late.days) return end + (late.kgPerWeek / 7) * t;
+    return start - (start - kneeKg) * clamp((span - t) / (span - late.days), 0, 1);
+  }
   const s = clamp((span - t) / span, 0, 1);
   return start - (start - end) * lossShape(def.key, s);
 }
@@ -533,7 +547,11 @@ interface DayPlan {
  * the next sub-stream) until the share of logged days is within two points of the athlete's
  * check-in rate, so the realised rate matches the definition, not just its expectation.
  */
-function presence(def: DemoAthleteDefinition, mustLog: readonly boolean[]): boolean[] {
+function presence(
+  def: DemoAthleteDefinition,
+  mustLog: readonly boolean[],
+  mustMiss: readonly boolean[],
+): boolean[] {
   const habits = HABITS[def.key];
   const rate = def.history.checkInRate;
   const backToLogging = 1 / habits.missedRunDays;
@@ -545,13 +563,13 @@ function presence(def: DemoAthleteDefinition, mustLog: readonly boolean[]): bool
     let logging = true;
     for (let i = 0; i < mustLog.length; i++) {
       if (i > 0) logging = logging ? !r.chance(stopLogging) : r.chance(backToLogging);
-      days.push(logging || (mustLog[i] ?? false));
+      days.push((logging || (mustLog[i] ?? false)) && !(mustMiss[i] ?? false));
     }
     const error = Math.abs(days.filter(Boolean).length / days.length - rate);
     if (!best || error < best.error) best = { days, error };
     if (error <= 0.02) break;
   }
-  return best?.days ?? mustLog.map(() => true);
+  return best?.days ?? mustLog.map((_, i) => !(mustMiss[i] ?? false));
 }
 
 /** Days the athlete certainly logged. */
@@ -569,17 +587,30 @@ function mustLog(def: DemoAthleteDefinition, t: number, index: number): boolean 
 
 function planDays(def: DemoAthleteDefinition, dates: string[], seedDate: string): DayPlan[] {
   const habits = HABITS[def.key];
+  const ts = dates.map((date) => daysBetween(date, seedDate));
   const logged = presence(
     def,
-    dates.map((date, index) => mustLog(def, daysBetween(date, seedDate), index)),
+    ts.map((t, index) => mustLog(def, t, index)),
+    ts.map((t) => def.history.missedDaysBeforeSeed?.includes(t) ?? false),
   );
-  const cycleOffset = stream(def.history.seed, 'cycle').int(0, 27);
+  const drawn = stream(def.history.seed, 'cycle').int(0, 27);
+  // The index yesterday would have in `dates` (the last date is yesterday unless endDate says otherwise).
+  const yesterdayIndex =
+    dates.length - 1 + (dates.length > 0 ? daysBetween(dates[dates.length - 1]!, addDays(seedDate, -1)) : 0);
+  const mod = (x: number, n: number) => ((x % n) + n) % n;
+  const cycleOffset =
+    habits.cycleDays !== null && habits.cycleDayYesterday !== undefined
+      ? mod(habits.cycleDayYesterday - 1 - yesterdayIndex, habits.cycleDays)
+      : drawn;
   return dates.map((date, index) => {
     const t = daysBetween(date, seedDate);
     const r = stream(def.history.seed, 'plan', t);
     const dow = weekday(date);
     const toShow = daysToShow(def, t);
-    const inFinalWeeks = toShow !== null && toShow >= 0 && toShow <= 14;
+    // No salty evenings in the last weeks before a show, nor while pushing a late loss: the
+    // situation the demo shows there must not hang on how the weekdays fall.
+    const inFinalWeeks =
+      (toShow !== null && toShow >= 0 && toShow <= 14) || t <= (def.history.lateLoss?.days ?? 0);
     const travelling = habits.trips.some(([first, last]) => t <= first && t >= last);
     const refeed = def.key === 'long_diet' && dow === 6;
     const celebration = def.key === 'regain' && toShow !== null && toShow <= 0 && toShow >= -2;
@@ -661,6 +692,19 @@ function weighIn(
   const peak = toShow === null ? 0 : peakWeekOffset(toShow);
   const observedKg = model + peak + wanderKg + bump + r.normal(0, WHITE_CV * model);
 
+  return { entry: typedWeighIn(def, plan, r, observedKg, tags, phase), observedKg };
+}
+
+/** A weigh-in as the athlete types it: the scale's reading in their unit, at their waking time. */
+function typedWeighIn(
+  def: DemoAthleteDefinition,
+  plan: DayPlan,
+  r: Random,
+  observedKg: number,
+  tags: WeighInTag[],
+  cyclePhase: CyclePhase | null,
+): GeneratedWeighIn {
+  const habits = HABITS[def.key];
   const weekend = [0, 6].includes(weekday(plan.date));
   const time = clock(habits.wakeMin + (weekend ? habits.weekendLieInMin : 0) + r.int(3, 25));
   const entered =
@@ -668,7 +712,17 @@ function weighIn(
       ? { value: fixed(round(observedKg, 0.1), 1), unit: 'kg' as const }
       : { value: fixed(round(observedKg / KG_PER_LB, 0.2), 1), unit: 'lb' as const };
   const weightKg = entered.unit === 'kg' ? entered.value : entered.value * KG_PER_LB;
-  return { entry: { time, weightKg, entered, tags, cyclePhase: phase }, observedKg };
+  return { time, weightKg, entered, tags, cyclePhase };
+}
+
+function scriptedWeighIn(
+  def: DemoAthleteDefinition,
+  plan: DayPlan,
+  r: Random,
+  observedKg: number,
+  tags: WeighInTag[],
+): { entry: GeneratedWeighIn; observedKg: number } {
+  return { entry: typedWeighIn(def, plan, r, observedKg, tags, null), observedKg };
 }
 
 /** Fraction of the usual energy intake eaten on the day `t` days before the seed. */
@@ -965,6 +1019,8 @@ interface Script {
   t: number;
   symptom?: { time: string; symptoms: Symptom[]; note: string | null };
   note?: string;
+  /** That morning's weigh-in sits exactly `offsetKg` off the model curve (no noise, no other bumps). */
+  weighIn?: { offsetKg: number; tags: WeighInTag[] };
 }
 
 const SCRIPTS: Partial<Record<DemoSituation, readonly Script[]>> = {
@@ -988,6 +1044,15 @@ const SCRIPTS: Partial<Record<DemoSituation, readonly Script[]>> = {
   weigh_in: [
     { t: 27, symptom: { time: '15:20', symptoms: ['headache'], note: 'Mild headache after a long day.' } },
     { t: 9, note: 'Weight moving as planned, coach says keep the food the same.' },
+    // A drop of more than 2 % of body mass in a day (≥ 2 %/48 h raises the safety flag, ACSM 2007):
+    // up after a salty dinner, then down after an extra sweat session the coach never planned.
+    { t: 3, note: 'Ramen night with the team.' },
+    {
+      t: 2,
+      weighIn: { offsetKg: 0.5, tags: ['salty_meal'] },
+      note: 'Extra sweat session in a sauna suit after randori to see where I am.',
+    },
+    { t: 1, weighIn: { offsetKg: -1.0, tags: [] } },
   ],
   photo_shoot: [
     {
@@ -1054,14 +1119,13 @@ export function generateHistory(def: DemoAthleteDefinition, options: HistoryOpti
     const training = trainingName !== 'rest';
 
     // What gets logged on a logged day: the weigh-in nearly always, the rest by habit.
-    const weighed = def.key === 'skips_check_ins' ? r.chance(0.88) : r.chance(0.97) || i === 0;
-    const { entry, observedKg } = weighIn(
-      def,
-      plan,
-      plans[i - 1],
-      stream(def.history.seed, 'weigh-in', plan.t),
-      wander,
-    );
+    const weighed =
+      script?.weighIn !== undefined ||
+      (def.key === 'skips_check_ins' ? r.chance(0.88) : r.chance(0.97) || i === 0);
+    const weighStream = stream(def.history.seed, 'weigh-in', plan.t);
+    const { entry, observedKg } = script?.weighIn
+      ? scriptedWeighIn(def, plan, weighStream, model + script.weighIn.offsetKg, script.weighIn.tags)
+      : weighIn(def, plan, plans[i - 1], weighStream, wander);
     const dayMeals = r.chance(habits.mealLogging)
       ? meals(def, plan, stream(def.history.seed, 'meals', plan.t), observedKg, wake, training)
       : [];

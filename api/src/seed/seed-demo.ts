@@ -53,6 +53,11 @@ export interface SeedDemoOptions {
    * server reads it). null seeds no photos.
    */
   storage?: StorageAdapter | null;
+  /**
+   * A bcrypt hash of DEMO_PASSWORD to reuse (tests that seed many times); by default one is made
+   * at the cost real accounts use.
+   */
+  passwordHash?: string;
 }
 
 export interface SeedDemoResult {
@@ -114,7 +119,7 @@ export async function seedDemo(
   }
   const plans = planDemoHistory(DEMO_ATHLETES, now);
   // One hash for all demo accounts: bcrypt at cost 12 takes a noticeable fraction of a second.
-  const passwordHash = await bcrypt.hash(DEMO_PASSWORD, BCRYPT_COST);
+  const passwordHash = options.passwordHash ?? (await bcrypt.hash(DEMO_PASSWORD, BCRYPT_COST));
 
   const written: string[] = [];
   let rendering: Promise<unknown> = Promise.resolve();

@@ -35,50 +35,56 @@ export function ageOn(birthDate: string, onDate: string): number {
   return oy - by - (om < bm || (om === bm && od < bd) ? 1 : 0);
 }
 
-/** PUT /api/athletes/:athleteId/intake: the athlete's intake form. All quantities in SI. */
-export const intakeRequest = z
-  .object({
-    /** Sex, for energy and body-composition equations. */
-    sex: z.enum(SEXES, { error: 'Choose one' }),
-    /** Birth date, YYYY-MM-DD. */
-    birthDate: isoDate,
-    /** Standing height, cm. */
-    heightCm: inRange(LIMITS.heightCm.min, LIMITS.heightCm.max, 'Height', 'cm'),
-    /** Usual daily fluid intake, mL. */
-    usualWaterMl: inRange(LIMITS.usualWaterMl.min, LIMITS.usualWaterMl.max, 'Usual water', 'mL'),
-    /** Usual daily energy intake, kcal. */
-    usualEnergyKcal: inRange(LIMITS.usualEnergyKcal.min, LIMITS.usualEnergyKcal.max, 'Usual energy', 'kcal'),
-    /** Direction of the body-weight goal. */
-    goal: z.enum(GOALS, { error: 'Choose a goal' }),
-    /** The dated event being prepared for. */
-    eventType: z.enum(EVENT_TYPES, { error: 'Choose an event type' }),
-    /** The event's name (e.g. "Regional classic"); optional. */
-    eventName: z.string().trim().max(100, 'At most 100 characters').optional(),
-    /** Event date in the event's time zone; required unless there is no event. */
-    eventDate: isoDate.optional(),
-    /** Event clock time (or weigh-in time), HH:MM in the event's time zone. */
-    eventTime: clockTime.optional(),
-    /** The event's own time zone. */
-    eventTimeZone: timeZone.optional(),
-    /** Division (shows) or weight class (weigh-ins). */
-    division: z
-      .string()
-      .trim()
-      .max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`)
-      .optional(),
-    /** Weigh-in limit for the class, kg. */
-    weighInLimitKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Weigh-in limit', 'kg').optional(),
-    /** The athlete's own time zone: decides which date a log belongs to. */
-    timeZone,
-    /** Units the athlete reads and types in. */
-    weightUnit: z.enum(WEIGHT_UNITS, { error: 'Choose kg or lb' }),
-    volumeUnit: z.enum(VOLUME_UNITS, { error: 'Choose mL or fl oz' }),
-    /** Agreement to store condition photos. */
-    photoConsent: z.boolean({ error: 'Choose yes or no' }),
-    /** Must be true: not medical advice, medical clearance held. */
-    safetyAcknowledged: z.literal(true, { error: 'Please read and tick this to continue' }),
-  })
-  .superRefine(
+/** The intake's fields, before the cross-field rules (intakeRequestOn). */
+const intakeFields = z.object({
+  /** Sex, for energy and body-composition equations. */
+  sex: z.enum(SEXES, { error: 'Choose one' }),
+  /** Birth date, YYYY-MM-DD. */
+  birthDate: isoDate,
+  /** Standing height, cm. */
+  heightCm: inRange(LIMITS.heightCm.min, LIMITS.heightCm.max, 'Height', 'cm'),
+  /** Usual daily fluid intake, mL. */
+  usualWaterMl: inRange(LIMITS.usualWaterMl.min, LIMITS.usualWaterMl.max, 'Usual water', 'mL'),
+  /** Usual daily energy intake, kcal. */
+  usualEnergyKcal: inRange(LIMITS.usualEnergyKcal.min, LIMITS.usualEnergyKcal.max, 'Usual energy', 'kcal'),
+  /** Direction of the body-weight goal. */
+  goal: z.enum(GOALS, { error: 'Choose a goal' }),
+  /** The dated event being prepared for. */
+  eventType: z.enum(EVENT_TYPES, { error: 'Choose an event type' }),
+  /** The event's name (e.g. "Regional classic"); optional. */
+  eventName: z.string().trim().max(100, 'At most 100 characters').optional(),
+  /** Event date in the event's time zone; required unless there is no event. */
+  eventDate: isoDate.optional(),
+  /** Event clock time (or weigh-in time), HH:MM in the event's time zone. */
+  eventTime: clockTime.optional(),
+  /** The event's own time zone. */
+  eventTimeZone: timeZone.optional(),
+  /** Division (shows) or weight class (weigh-ins). */
+  division: z
+    .string()
+    .trim()
+    .max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`)
+    .optional(),
+  /** Weigh-in limit for the class, kg. */
+  weighInLimitKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Weigh-in limit', 'kg').optional(),
+  /** The athlete's own time zone: decides which date a log belongs to. */
+  timeZone,
+  /** Units the athlete reads and types in. */
+  weightUnit: z.enum(WEIGHT_UNITS, { error: 'Choose kg or lb' }),
+  volumeUnit: z.enum(VOLUME_UNITS, { error: 'Choose mL or fl oz' }),
+  /** Agreement to store condition photos. */
+  photoConsent: z.boolean({ error: 'Choose yes or no' }),
+  /** Must be true: not medical advice, medical clearance held. */
+  safetyAcknowledged: z.literal(true, { error: 'Please read and tick this to continue' }),
+});
+
+/**
+ * PUT /api/athletes/:athleteId/intake: the athlete's intake form, all quantities in SI, checked as
+ * of `today` (YYYY-MM-DD: the server's clock on the server, the device's date in the form), which
+ * the age limits are counted to.
+ */
+export const intakeRequestOn = (today: string) =>
+  intakeFields.superRefine(
     (v, ctx) => {
       if (v.eventType !== 'none') {
         if (!v.eventDate)
@@ -93,7 +99,6 @@ export const intakeRequest = z
           message: 'Weigh-in limit is required for a weigh-in',
         });
       }
-      const today = new Date().toISOString().slice(0, 10);
       if (typeof v.birthDate === 'string' && /^\d{4}-\d{2}-\d{2}$/.test(v.birthDate)) {
         const age = ageOn(v.birthDate, today);
         if (age < LIMITS.ageYears.min || age > LIMITS.ageYears.max) {
@@ -109,7 +114,7 @@ export const intakeRequest = z
     // problem in one round (zod otherwise skips object refinements after any field error).
     { when: () => true },
   );
-export type IntakeRequest = z.infer<typeof intakeRequest>;
+export type IntakeRequest = z.infer<ReturnType<typeof intakeRequestOn>>;
 
 /** An athlete's profile as the API returns it. */
 export const athleteProfile = z.object({

@@ -1,8 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { intakeRequest, ageOn } from './athletes.js';
+import { intakeRequestOn, ageOn } from './athletes.js';
+import { LIMITS } from '../limits.js';
 import { signInRequest, changePasswordRequest } from './auth.js';
 import { createInvitationRequest } from './invitations.js';
 import { isoDate } from './common.js';
+
+/** The pinned day the intakes below are checked on. */
+const TODAY = '2026-06-01';
+const intakeRequest = intakeRequestOn(TODAY);
 
 const validIntake = {
   sex: 'female',
@@ -102,6 +107,18 @@ describe('auth schemas', () => {
 });
 
 describe('intakeRequest cross-field rules', () => {
+  it('counts the age limits to the day it is given, not to the machine’s clock', () => {
+    const youngest = `${2026 - LIMITS.ageYears.min}-06-01`;
+    const dayAfter = `${2026 - LIMITS.ageYears.min}-06-02`;
+    expect(intakeRequestOn(TODAY).safeParse({ ...validIntake, birthDate: youngest }).success).toBe(true);
+    expect(fieldsOf(intakeRequestOn(TODAY).safeParse({ ...validIntake, birthDate: dayAfter }))).toEqual([
+      'birthDate',
+    ]);
+    expect(intakeRequestOn('2026-06-02').safeParse({ ...validIntake, birthDate: dayAfter }).success).toBe(
+      true,
+    );
+  });
+
   it('reports a missing event date together with other field errors in one round', () => {
     const r = intakeRequest.safeParse({ ...validIntake, heightCm: 5, eventDate: undefined });
     expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'eventDate']));

@@ -56,3 +56,11 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
+
+/**
+ * The date `days` from today (UTC), YYYY-MM-DD. The e2e server runs on this machine's clock, so a
+ * date typed into a form is placed relative to it instead of written as a literal that expires.
+ */
+export function daysFromToday(days: number): string {
+  return new Date(Date.now() + days * 86_400_000).toISOString().slice(0, 10);
+}

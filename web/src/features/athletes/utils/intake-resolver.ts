@@ -1,4 +1,4 @@
-import { intakeRequest, type IntakeRequest } from '@driftmark/shared';
+import { intakeRequestOn, type IntakeRequest } from '@driftmark/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { FieldError, FieldErrors, Resolver } from 'react-hook-form';
 import {
@@ -9,13 +9,21 @@ import {
   type IntakeFormValues,
 } from './intake-values';
 
+/** The device's own date (the server checks again against its clock). */
+function localToday(): string {
+  const d = new Date();
+  return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}
+
 /**
- * Validates the intake with the shared `intakeRequest` schema: the typed values are first
+ * Validates the intake with the shared `intakeRequestOn` schema: the typed values are first
  * converted to SI (the shape the API takes), then checked, and each error is put back on the box
  * the athlete typed into, in their units. On success the form hands over the SI request.
  */
-export function createIntakeResolver(): Resolver<IntakeFormValues, unknown, IntakeRequest> {
-  const schemaResolver = zodResolver(intakeRequest);
+export function createIntakeResolver(
+  today: string = localToday(),
+): Resolver<IntakeFormValues, unknown, IntakeRequest> {
+  const schemaResolver = zodResolver(intakeRequestOn(today));
   return async (values, context, options) => {
     const { request, numberErrors } = toIntakeRequest(values);
     const result = await (

@@ -1,4 +1,4 @@
-import { intakeRequest, type AthleteProfile } from '@driftmark/shared';
+import { intakeRequestOn, type AthleteProfile } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
 import { createIntakeResolver } from './intake-resolver';
 import {
@@ -68,7 +68,7 @@ describe('toIntakeRequest', () => {
       weighInLimitKg: 63,
       eventName: 'Harbour Open',
     });
-    expect(intakeRequest.safeParse(request).success).toBe(true);
+    expect(intakeRequestOn('2026-06-01').safeParse(request).success).toBe(true);
   });
 
   it('converts feet/inches, fluid ounces and pounds to SI with the exact factors', () => {

@@ -23,7 +23,7 @@ type EventType = (typeof EVENT_TYPES)[number];
 
 /**
  * The intake form as the athlete types it: numbers as text in their own units. The shared
- * `intakeRequest` schema validates what these values become in SI (see toIntakeRequest).
+ * `intakeRequestOn` schema validates what these values become in SI (see toIntakeRequest).
  */
 export interface IntakeFormValues {
   weightUnit: WeightUnit;
