@@ -1,3 +1,4 @@
+import { parseTypedNumber } from '@driftmark/shared';
 import { intakeRequestOn, type AthleteProfile } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
 import { createIntakeResolver } from './intake-resolver';
@@ -7,7 +8,6 @@ import {
   initialIntakeValues,
   messageInUnits,
   NOT_A_NUMBER,
-  parseDecimal,
   rangeInUnits,
   toIntakeRequest,
   type IntakeFormValues,
@@ -47,13 +47,13 @@ const imperial: IntakeFormValues = {
   weighInLimit: '139',
 };
 
-describe('parseDecimal', () => {
+describe('parseTypedNumber', () => {
   it('reads plain numbers and a decimal comma', () => {
-    expect(parseDecimal(' 72.5 ')).toBe(72.5);
-    expect(parseDecimal('72,5')).toBe(72.5);
-    expect(parseDecimal('')).toBeUndefined();
-    expect(parseDecimal('abc')).toBeNaN();
-    expect(parseDecimal('1e3')).toBeNaN();
+    expect(parseTypedNumber(' 72.5 ')).toBe(72.5);
+    expect(parseTypedNumber('72,5')).toBe(72.5);
+    expect(parseTypedNumber('')).toBeUndefined();
+    expect(parseTypedNumber('abc')).toBeNaN();
+    expect(parseTypedNumber('1e3')).toBeNaN();
   });
 });
 

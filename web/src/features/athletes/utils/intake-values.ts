@@ -1,3 +1,4 @@
+import { parseTypedNumber, toTypedText } from '@driftmark/shared';
 import {
   cmToIn,
   EVENT_TYPES,
@@ -66,23 +67,6 @@ export function eventHasWeighIn(eventType: IntakeFormValues['eventType']): boole
   return eventType === 'weigh_in' || eventType === 'show';
 }
 
-/**
- * Reads a typed number: "" → undefined (the schema then says what is required), a decimal comma
- * is accepted ("72,5"), anything else that is not a plain number → NaN.
- */
-export function parseDecimal(text: string): number | undefined {
-  const t = text.trim().replace(/\s+/g, '').replace(',', '.');
-  if (t === '') return undefined;
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)$/.test(t)) return Number.NaN;
-  return Number(t);
-}
-
-/** A converted value put back into a box: rounded to `digits`, without trailing zeros. */
-export function toInputText(value: number, digits: number): string {
-  const f = 10 ** digits;
-  return String(Math.round(value * f) / f);
-}
-
 function optionalText(text: string): string | undefined {
   const t = text.trim();
   return t === '' ? undefined : t;
@@ -99,7 +83,7 @@ export interface IntakeConversion {
 export function toIntakeRequest(v: IntakeFormValues): IntakeConversion {
   const numberErrors: IntakeConversion['numberErrors'] = {};
   const read = (field: IntakeFormField, text: string): number | undefined => {
-    const n = parseDecimal(text);
+    const n = parseTypedNumber(text);
     if (n !== undefined && Number.isNaN(n)) numberErrors[field] = NOT_A_NUMBER;
     return n;
   };
@@ -248,7 +232,7 @@ export function heightToInputs(
     const { feet, inches } = cmToFeetAndInches(cm, 1);
     return { heightCm: '', heightFt: String(feet), heightIn: String(inches) };
   }
-  return { heightCm: toInputText(cm, 1), heightFt: '', heightIn: '' };
+  return { heightCm: toTypedText(cm, 1), heightFt: '', heightIn: '' };
 }
 
 /** Boxes rewritten when the athlete switches units, so typed values keep their meaning. */
@@ -262,16 +246,16 @@ export function convertForUnitChange(
     const cm = request.heightCm;
     if (typeof cm === 'number' && Number.isFinite(cm))
       Object.assign(out, heightToInputs(cm, next.weightUnit));
-    const limit = parseDecimal(v.weighInLimit);
+    const limit = parseTypedNumber(v.weighInLimit);
     if (limit !== undefined && Number.isFinite(limit)) {
-      out.weighInLimit = toInputText(weightFromKg(weightToKg(limit, v.weightUnit), next.weightUnit), 1);
+      out.weighInLimit = toTypedText(weightFromKg(weightToKg(limit, v.weightUnit), next.weightUnit), 1);
     }
   }
   if (next.volumeUnit !== v.volumeUnit) {
-    const water = parseDecimal(v.usualWater);
+    const water = parseTypedNumber(v.usualWater);
     if (water !== undefined && Number.isFinite(water)) {
       const ml = volumeToMl(water, v.volumeUnit);
-      out.usualWater = toInputText(volumeFromMl(ml, next.volumeUnit), next.volumeUnit === 'ml' ? 0 : 1);
+      out.usualWater = toTypedText(volumeFromMl(ml, next.volumeUnit), next.volumeUnit === 'ml' ? 0 : 1);
     }
   }
   return out;
@@ -298,9 +282,9 @@ export function initialIntakeValues(
     ...height,
     usualWater:
       profile?.usualWaterMl != null
-        ? toInputText(volumeFromMl(profile.usualWaterMl, volumeUnit), volumeUnit === 'ml' ? 0 : 1)
+        ? toTypedText(volumeFromMl(profile.usualWaterMl, volumeUnit), volumeUnit === 'ml' ? 0 : 1)
         : '',
-    usualEnergyKcal: profile?.usualEnergyKcal != null ? toInputText(profile.usualEnergyKcal, 0) : '',
+    usualEnergyKcal: profile?.usualEnergyKcal != null ? toTypedText(profile.usualEnergyKcal, 0) : '',
     goal: profile?.goal ?? '',
     eventType: profile?.eventType ?? '',
     eventName: profile?.eventName ?? '',
@@ -309,7 +293,7 @@ export function initialIntakeValues(
     eventTimeZone: profile?.eventTimeZone ?? timeZone,
     division: profile?.division ?? '',
     weighInLimit:
-      profile?.weighInLimitKg != null ? toInputText(weightFromKg(profile.weighInLimitKg, weightUnit), 1) : '',
+      profile?.weighInLimitKg != null ? toTypedText(weightFromKg(profile.weighInLimitKg, weightUnit), 1) : '',
     photoConsent: profile?.photoConsent ?? false,
     // Agreement is given again on every save: it is stored with the text's version and time.
     safetyAcknowledged: false,

@@ -1,5 +1,5 @@
+import { parseTypedNumber } from '@driftmark/shared';
 import { atwaterKcal, type FoodView } from '@driftmark/shared';
-import { parseDecimal } from './numbers';
 
 export interface MacroTexts {
   proteinG: string;
@@ -9,7 +9,7 @@ export interface MacroTexts {
 }
 
 function readGrams(text: string | undefined): number | null | undefined {
-  const n = parseDecimal(text);
+  const n = parseTypedNumber(text);
   if (n === undefined) return undefined;
   if (!Number.isFinite(n) || n < 0) return null;
   return n;

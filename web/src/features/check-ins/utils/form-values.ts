@@ -1,3 +1,4 @@
+import { toTypedText } from '@driftmark/shared';
 import {
   RATING_KEYS,
   WEIGH_IN_TAGS,
@@ -11,7 +12,7 @@ import {
   type WeighInTag,
   type WeightUnit,
 } from '@driftmark/shared';
-import { numberReader, toInputText } from './numbers';
+import { numberReader } from './numbers';
 import { volumeInputText, weightInputText } from './units';
 
 /*
@@ -194,19 +195,19 @@ export function mealFormValues(entry: DayView['meals'][number] | null, now: stri
       time: entry.time,
       source: 'food',
       foodId: entry.food.id,
-      quantityG: toInputText(entry.food.quantityG, 1),
+      quantityG: toTypedText(entry.food.quantityG, 1),
     };
   }
   return {
     ...empty,
     name: entry.name,
     time: entry.time,
-    proteinG: toInputText(entry.proteinG, 1),
-    carbohydrateG: toInputText(entry.carbohydrateG, 1),
-    fatG: toInputText(entry.fatG, 1),
-    fibreG: toInputText(entry.fibreG, 1),
-    alcoholG: toInputText(entry.alcoholG, 1),
-    sodiumMg: toInputText(entry.sodiumMg, 0),
+    proteinG: toTypedText(entry.proteinG, 1),
+    carbohydrateG: toTypedText(entry.carbohydrateG, 1),
+    fatG: toTypedText(entry.fatG, 1),
+    fibreG: toTypedText(entry.fibreG, 1),
+    alcoholG: toTypedText(entry.alcoholG, 1),
+    sodiumMg: toTypedText(entry.sodiumMg, 0),
   };
 }
 
@@ -240,7 +241,7 @@ export function supplementFormValues(
   if (!entry) return { name: '', dose: '', doseUnit: '', time: now };
   return {
     name: entry.name,
-    dose: toInputText(entry.dose, 3),
+    dose: toTypedText(entry.dose, 3),
     doseUnit: entry.doseUnit ?? '',
     time: entry.time,
   };
@@ -287,9 +288,9 @@ export function eveningFormValues(view: DayView['evening']): EveningFormValues {
     }),
   ) as Record<RatingKey, string>;
   return {
-    steps: toInputText(view?.steps, 0),
-    sleepHours: toInputText(view?.sleepHours, 2),
-    cardioMinutes: toInputText(view?.cardioMinutes, 0),
+    steps: toTypedText(view?.steps, 0),
+    sleepHours: toTypedText(view?.sleepHours, 2),
+    cardioMinutes: toTypedText(view?.cardioMinutes, 0),
     trainingDone: view?.trainingDone === true ? 'yes' : view?.trainingDone === false ? 'no' : '',
     trainingNote: view?.trainingNote ?? '',
     ratings,

@@ -1,3 +1,4 @@
+import { toTypedText } from '@driftmark/shared';
 import {
   VOLUME_UNIT_LABELS,
   volumeFromMl,
@@ -8,7 +9,6 @@ import {
 } from '@driftmark/shared';
 // Relative on purpose: these helpers are unit-tested without the web app's path alias.
 import { formatNumber, NBSP } from '../../../lib/format';
-import { toInputText } from './numbers';
 
 /** Quick-add buttons: common glass and bottle sizes in the athlete's own unit. */
 export const QUICK_VOLUMES: Record<VolumeUnit, readonly number[]> = {
@@ -75,7 +75,7 @@ export function weightInputText(
   unit: WeightUnit,
 ): string {
   if (entered && entered.unit === unit) return String(entered.value);
-  return toInputText(weightFromKg(kg, unit), WEIGHT_DIGITS);
+  return toTypedText(weightFromKg(kg, unit), WEIGHT_DIGITS);
 }
 
 export function volumeInputText(
@@ -84,5 +84,5 @@ export function volumeInputText(
   unit: VolumeUnit,
 ): string {
   if (entered && entered.unit === unit) return String(entered.value);
-  return toInputText(volumeFromMl(ml, unit), volumeDigits(unit));
+  return toTypedText(volumeFromMl(ml, unit), volumeDigits(unit));
 }

@@ -1,3 +1,4 @@
+import { toTypedText } from '@driftmark/shared';
 import {
   atwaterKcal,
   PLAN_LIMITS,
@@ -17,7 +18,6 @@ import {
   MACROS,
   newSupplementRow,
   NO_BASELINE,
-  toInputText,
   type DayTargetsFormValues,
   type DayWarning,
   type Macro,
@@ -139,23 +139,23 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
     if (metric === 'energy') {
       const e = resolved.energyKcal;
       if (e === null) return '';
-      if (kind === 'kcal') return toInputText(e, 0);
-      return base.usualEnergyKcal ? toInputText(e / base.usualEnergyKcal, 2) : '';
+      if (kind === 'kcal') return toTypedText(e, 0);
+      return base.usualEnergyKcal ? toTypedText(e / base.usualEnergyKcal, 2) : '';
     }
     if (metric === 'water') {
       const w = resolved.waterMl;
       if (w === null) return '';
-      if (kind === 'ml') return toInputText(w, 0);
+      if (kind === 'ml') return toTypedText(w, 0);
       if (!base.usualWaterMl) return '';
       return kind === 'usual_plus'
-        ? toInputText(w - base.usualWaterMl, 0)
-        : toInputText(w / base.usualWaterMl, 2);
+        ? toTypedText(w - base.usualWaterMl, 0)
+        : toTypedText(w / base.usualWaterMl, 2);
     }
     const g = resolved[`${metric}G`];
     const p = resolved[`${metric}Pct`];
-    if (kind === 'g') return toInputText(g, 0);
-    if (kind === 'pct') return toInputText(p, 0);
-    return g !== null && base.weightKg ? toInputText(g / base.weightKg, 2) : '';
+    if (kind === 'g') return toTypedText(g, 0);
+    if (kind === 'pct') return toTypedText(p, 0);
+    return g !== null && base.weightKg ? toTypedText(g / base.weightKg, 2) : '';
   }
 
   const kindSelect = (

@@ -1,3 +1,4 @@
+import { parseTypedNumber, toTypedText } from '@driftmark/shared';
 import type {
   DayTargets,
   GuardrailWarning,
@@ -52,26 +53,6 @@ export interface DayTargetsFormValues {
 
 export const NOT_A_NUMBER = 'Enter a number, e.g. 2400';
 
-/**
- * "" → undefined, "72,5" → 72.5, "2,300" → 2300 (figures are shown with thousands commas, so a
- * comma before exactly three digits groups thousands), anything else not a plain number → NaN.
- */
-export function parseDecimal(text: string | null | undefined): number | undefined {
-  let t = (text ?? '').trim().replace(/\s+/g, '');
-  t = /^[+-]?[1-9]\d{0,2}(,\d{3})+(\.\d+)?$/.test(t) ? t.replaceAll(',', '') : t.replace(',', '.');
-  if (t === '') return undefined;
-  if (!/^[+-]?(\d+\.?\d*|\.\d+)$/.test(t)) return Number.NaN;
-  return Number(t);
-}
-
-/** A number put back into a box, rounded to `digits` without trailing zeros. */
-export function toInputText(value: number | null | undefined, digits = 1): string {
-  if (value === null || value === undefined || !Number.isFinite(value)) return '';
-  const f = 10 ** digits;
-  const rounded = Math.round(value * f) / f;
-  return String(Object.is(rounded, -0) ? 0 : rounded);
-}
-
 export function newSupplementRow(): SupplementFormValues {
   return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '' };
 }
@@ -95,22 +76,22 @@ export function emptyDayTargetsFormValues(): DayTargetsFormValues {
 function energyValue(t: EnergyTarget | null): DayTargetsFormValues['energy'] {
   if (!t) return { kind: 'none', value: '' };
   return t.kind === 'kcal'
-    ? { kind: 'kcal', value: toInputText(t.kcal, 0) }
-    : { kind: 'usual_times', value: toInputText(t.factor, 3) };
+    ? { kind: 'kcal', value: toTypedText(t.kcal, 0) }
+    : { kind: 'usual_times', value: toTypedText(t.factor, 3) };
 }
 
 function macroValue(t: MacroTarget | null): DayTargetsFormValues['protein'] {
   if (!t) return { kind: 'none', value: '' };
-  if (t.kind === 'g') return { kind: 'g', value: toInputText(t.g, 1) };
-  if (t.kind === 'pct') return { kind: 'pct', value: toInputText(t.pct, 1) };
-  return { kind: 'g_per_kg', value: toInputText(t.perKg, 2) };
+  if (t.kind === 'g') return { kind: 'g', value: toTypedText(t.g, 1) };
+  if (t.kind === 'pct') return { kind: 'pct', value: toTypedText(t.pct, 1) };
+  return { kind: 'g_per_kg', value: toTypedText(t.perKg, 2) };
 }
 
 function waterValue(t: WaterTarget | null): DayTargetsFormValues['water'] {
   if (!t) return { kind: 'none', value: '' };
-  if (t.kind === 'ml') return { kind: 'ml', value: toInputText(t.ml, 0) };
-  if (t.kind === 'usual_plus') return { kind: 'usual_plus', value: toInputText(t.ml, 0) };
-  return { kind: 'usual_times', value: toInputText(t.factor, 3) };
+  if (t.kind === 'ml') return { kind: 'ml', value: toTypedText(t.ml, 0) };
+  if (t.kind === 'usual_plus') return { kind: 'usual_plus', value: toTypedText(t.ml, 0) };
+  return { kind: 'usual_times', value: toTypedText(t.factor, 3) };
 }
 
 /** A saved DayTargets put into the form. */
@@ -121,16 +102,16 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
     carbohydrate: macroValue(t.carbohydrate),
     fat: macroValue(t.fat),
     water: waterValue(t.water),
-    sodiumMg: toInputText(t.sodiumMg, 0),
+    sodiumMg: toTypedText(t.sodiumMg, 0),
     fluidCutoff: t.fluidCutoff
-      ? { on: true, time: t.fluidCutoff.time, allowanceMl: toInputText(t.fluidCutoff.allowanceMl, 0) }
+      ? { on: true, time: t.fluidCutoff.time, allowanceMl: toTypedText(t.fluidCutoff.allowanceMl, 0) }
       : { on: false, time: '', allowanceMl: '' },
-    steps: toInputText(t.steps, 0),
-    cardioMinutes: toInputText(t.cardioMinutes, 0),
+    steps: toTypedText(t.steps, 0),
+    cardioMinutes: toTypedText(t.cardioMinutes, 0),
     supplements: t.supplements.map((s) => ({
       itemId: s.id,
       item: s.item,
-      dose: toInputText(s.dose, 3),
+      dose: toTypedText(s.dose, 3),
       unit: s.unit ?? '',
       times: s.times.join(', '),
     })),
@@ -157,7 +138,7 @@ export interface TargetsConversion {
 export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
   const numberErrors: Record<string, string> = {};
   const read = (path: string, text: string): number | undefined => {
-    const n = parseDecimal(text);
+    const n = parseTypedNumber(text);
     if (n !== undefined && Number.isNaN(n)) numberErrors[path] = NOT_A_NUMBER;
     return n;
   };

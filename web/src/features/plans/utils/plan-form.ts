@@ -1,3 +1,4 @@
+import { parseTypedNumber, toTypedText } from '@driftmark/shared';
 import {
   createPlanVersionRequest,
   DEFAULT_TOLERANCES,
@@ -13,10 +14,8 @@ import { set, type FieldErrors, type FieldValues, type Resolver } from 'react-ho
 import {
   dayTargetsFormValues,
   liveDayTargets,
-  parseDecimal,
   targetsFormPath,
   toDayTargets,
-  toInputText,
   NOT_A_NUMBER,
   type DayTargetsFormValues,
   type DayWarning,
@@ -76,7 +75,7 @@ export function planContentFormValues(content: PlanContent): PlanContentFormValu
         targets: dayTargetsFormValues(d.targets),
       })),
     tolerances: Object.fromEntries(
-      TOLERANCE_KEYS.map((k) => [k, toInputText(content.tolerances[k], 1)]),
+      TOLERANCE_KEYS.map((k) => [k, toTypedText(content.tolerances[k], 1)]),
     ) as Record<keyof Tolerances, string>,
     countdown: content.countdown,
   };
@@ -103,7 +102,7 @@ export function toPlanContent(v: PlanContentFormValues, lenient = false): Conten
   };
   const tolerances = Object.fromEntries(
     TOLERANCE_KEYS.map((k) => {
-      const n = parseDecimal(v.tolerances[k]);
+      const n = parseTypedNumber(v.tolerances[k]);
       if (n !== undefined && Number.isNaN(n) && !lenient)
         numberErrors[`content.tolerances.${k}`] = NOT_A_NUMBER;
       return [k, lenient && (n === undefined || Number.isNaN(n)) ? DEFAULT_TOLERANCES[k] : n];

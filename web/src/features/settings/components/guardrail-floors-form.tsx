@@ -1,4 +1,10 @@
-import { GUARDRAIL_DEFAULTS, guardrailFloors, SEXES, type GuardrailFloors } from '@driftmark/shared';
+import {
+  GUARDRAIL_DEFAULTS,
+  guardrailFloors,
+  parseTypedNumber,
+  SEXES,
+  type GuardrailFloors,
+} from '@driftmark/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -13,14 +19,10 @@ import { useUpdateGuardrails } from '../api/update-guardrails';
 
 const SEX_LABELS: Record<(typeof SEXES)[number], string> = { female: 'Women', male: 'Men' };
 
-/** A typed number ("1 200", "1200,5") for the schema; empty or not a number → NaN (the schema says so). */
+/** A typed number ("1 200", "1,200") for the schema; empty or not a number → NaN (the schema says so). */
 function readNumber(value: unknown): number {
   if (typeof value === 'number') return value;
-  const text = String(value ?? '')
-    .trim()
-    .replace(/\s+/g, '')
-    .replace(',', '.');
-  return text === '' || !/^\d+(\.\d*)?$/.test(text) ? Number.NaN : Number(text);
+  return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
 }
 
 const kcal = (n: number) => `${formatNumber(n)}${NBSP}kcal`;
