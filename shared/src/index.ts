@@ -27,3 +27,4 @@ export * from './schemas/weekly.js';
 export * from './schemas/notifications.js';
 export * from './schemas/data.js';
 export * from './typed-numbers.js';
+export * from './calendar.js';

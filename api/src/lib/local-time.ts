@@ -1,11 +1,9 @@
 import { TZDate } from '@date-fns/tz';
-import { LIMITS } from '@driftmark/shared';
-import { format } from 'date-fns';
+import { clockIn, LIMITS, todayIn } from '@driftmark/shared';
 
 /** The calendar date (YYYY-MM-DD) and clock time (HH:MM) of an instant in an IANA time zone. */
 export function localDateTime(now: Date, timeZone: string): { date: string; time: string } {
-  const local = new TZDate(now.getTime(), timeZone);
-  return { date: format(local, 'yyyy-MM-dd'), time: format(local, 'HH:mm') };
+  return { date: todayIn(timeZone, now), time: clockIn(timeZone, now) };
 }
 
 /**

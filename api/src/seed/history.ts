@@ -21,6 +21,7 @@ import {
   type WeighInTag,
   type WeightUnit,
   URGENT_SYMPTOMS,
+  weekdayNumber,
 } from '@driftmark/shared';
 import { addDays, daysBetween } from './calendar.js';
 import { DEMO_HISTORY_DAYS, type DemoAthleteDefinition, type DemoSituation } from './demo-team.js';
@@ -440,9 +441,7 @@ export function clock(minutes: number): string {
   return `${String(Math.floor(m / 60)).padStart(2, '0')}:${String(m % 60).padStart(2, '0')}`;
 }
 
-function weekday(date: string): number {
-  return new Date(`${date}T00:00:00Z`).getUTCDay();
-}
+const weekday = weekdayNumber;
 
 // ---------------------------------------------------------------------------------------------
 // Body mass.

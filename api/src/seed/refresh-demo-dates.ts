@@ -16,7 +16,7 @@
  * figures and the athlete's check-in weekday (so a due date stays on it). Not moved: birth dates, countdown templates (offsets only),
  * accounts, sessions, invitations, mail and notification sends (not part of anyone's history).
  */
-import { planContent, type GuardrailScope, type PlanContent } from '@driftmark/shared';
+import { planContent, utcMidnight, type GuardrailScope, type PlanContent } from '@driftmark/shared';
 import { In, type EntityManager } from 'typeorm';
 import { GuardrailAcknowledgement } from '../entities/guardrail-acknowledgement.entity.js';
 import { PlanVersion } from '../entities/plan-version.entity.js';
@@ -243,7 +243,7 @@ const DATE_IN_TEXT = new RegExp(
 
 /** "Fri 4 Dec", the way the guardrail messages write a date (fmtDate in shared/src/plans/format.ts). */
 function shortDate(date: string): string {
-  const d = new Date(`${date}T00:00:00Z`);
+  const d = utcMidnight(date);
   return `${WEEKDAY_NAMES[d.getUTCDay()]} ${d.getUTCDate()} ${MONTH_NAMES[d.getUTCMonth()]}`;
 }
 

@@ -1,3 +1,4 @@
+import { utcMidnight } from '../calendar.js';
 import type { Weekday } from '../schemas/plans.js';
 
 /** Plain-words number formatting for messages: thousands separated by commas ("3,000"). */
@@ -29,25 +30,14 @@ const DAY_NAMES: Record<Weekday, string> = {
 };
 
 /** A calendar date as a UTC midnight instant (calendar arithmetic only, no time zone involved). */
-export function utcDate(date: string): Date {
-  return new Date(`${date}T00:00:00Z`);
-}
+export const utcDate = utcMidnight;
 
 export function weekdayIndex(date: string): Weekday {
   return WEEKDAY_INDEX[utcDate(date).getUTCDay()] as Weekday;
 }
 
-/** YYYY-MM-DD plus `days` calendar days. */
-export function addDays(date: string, days: number): string {
-  const d = utcDate(date);
-  d.setUTCDate(d.getUTCDate() + days);
-  return d.toISOString().slice(0, 10);
-}
-
-/** Whole calendar days from `from` to `to` (negative when `to` is earlier). */
-export function daysBetween(from: string, to: string): number {
-  return Math.round((utcDate(to).getTime() - utcDate(from).getTime()) / 86_400_000);
-}
+// Calendar arithmetic lives in ../calendar.ts; the plan rules import it from here too.
+export { addDays, daysBetween } from '../calendar.js';
 
 /** "Fri 4 Dec". */
 export function fmtDate(date: string): string {

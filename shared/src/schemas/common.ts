@@ -1,3 +1,4 @@
+import { isIsoDate } from '../calendar.js';
 import { z } from 'zod';
 import { LIMITS } from '../limits.js';
 import { isValidTimeZone } from '../time-zones.js';
@@ -27,10 +28,7 @@ export const personName = z
 export const isoDate = z
   .string({ error: 'Date is required' })
   .regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD')
-  .refine((s) => {
-    const d = new Date(`${s}T00:00:00Z`);
-    return !Number.isNaN(d.getTime()) && d.toISOString().slice(0, 10) === s;
-  }, 'Not a real date');
+  .refine(isIsoDate, 'Not a real date');
 
 /** A clock time, `HH:MM` (24 h). */
 export const clockTime = z

@@ -1,3 +1,4 @@
+import { utcMidnight } from '@driftmark/shared';
 import {
   cmToIn,
   VOLUME_UNIT_LABELS,
@@ -69,13 +70,7 @@ export function formatHeight(cm: number, weightUnit: WeightUnit): string {
   return `${feet}${NBSP}ft ${inches}${NBSP}in`;
 }
 
-const UTC_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
-
-function isoDateToUtc(isoDate: string): Date {
-  const m = UTC_DATE.exec(isoDate);
-  if (!m) throw new RangeError(`Not a YYYY-MM-DD date: ${isoDate}`);
-  return new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
-}
+const isoDateToUtc = utcMidnight;
 
 /** A calendar date (YYYY-MM-DD, no time zone) such as "Sun 2 May 2027". */
 export function formatDate(isoDate: string, style: 'long' | 'short' = 'long'): string {
@@ -113,27 +108,10 @@ export function formatInstantDate(iso: string, timeZone?: string): string {
   }).format(d);
 }
 
-/** Today's date (YYYY-MM-DD) as a clock in `timeZone` reads it. */
-export function todayIn(timeZone: string, now: Date = new Date()): string {
-  const parts = new Intl.DateTimeFormat('en-CA', {
-    timeZone,
-    year: 'numeric',
-    month: '2-digit',
-    day: '2-digit',
-  }).formatToParts(now);
-  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
-  return `${get('year')}-${get('month')}-${get('day')}`;
-}
-
 /** The hour (0–23) on a clock in `timeZone`. */
 export function hourIn(timeZone: string, now: Date = new Date()): number {
   const h = new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', hourCycle: 'h23' }).format(now);
   return Number(h);
-}
-
-/** Whole calendar days from one date to another (both YYYY-MM-DD); negative when `to` is earlier. */
-export function daysBetween(from: string, to: string): number {
-  return Math.round((isoDateToUtc(to).getTime() - isoDateToUtc(from).getTime()) / 86_400_000);
 }
 
 /** "6 days to go", "1 day to go", "Event day", "3 days ago". */
@@ -160,3 +138,6 @@ export function firstName(name: string): string {
 export function formatClock(time: string | null | undefined): string | null {
   return time && /^\d{2}:\d{2}$/.test(time) ? time : null;
 }
+
+// Calendar dates and today in a zone: one implementation, in shared/src/calendar.ts.
+export { daysBetween, todayIn } from '@driftmark/shared';

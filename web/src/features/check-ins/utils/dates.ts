@@ -1,32 +1,7 @@
-const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+// Calendar dates and the clock in a zone: one implementation, in shared/src/calendar.ts.
+import { addDays } from '@driftmark/shared';
 
-/** True for a real calendar date written YYYY-MM-DD. */
-export function isIsoDate(text: string | null | undefined): text is string {
-  const m = ISO_DATE.exec(text ?? '');
-  if (!m) return false;
-  const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3])));
-  return d.toISOString().slice(0, 10) === text;
-}
-
-/** A calendar date moved by whole days (no time zone involved: dates are labels, not instants). */
-export function addDays(isoDate: string, days: number): string {
-  const m = ISO_DATE.exec(isoDate);
-  if (!m) throw new RangeError(`Not a YYYY-MM-DD date: ${isoDate}`);
-  const d = new Date(Date.UTC(Number(m[1]), Number(m[2]) - 1, Number(m[3]) + days));
-  return d.toISOString().slice(0, 10);
-}
-
-/** The clock time "HH:MM" (24 h) in `timeZone` at `now`. */
-export function clockIn(timeZone: string, now: Date = new Date()): string {
-  const parts = new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).formatToParts(now);
-  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '00';
-  return `${get('hour')}:${get('minute')}`;
-}
+export { addDays, clockIn, isIsoDate } from '@driftmark/shared';
 
 /**
  * The pages of the history list: the newest `pageDays` days up to `to`, then the block before it,

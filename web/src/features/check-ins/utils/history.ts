@@ -1,14 +1,11 @@
 import type { DaySummary } from '@driftmark/shared';
+import { daysBetween } from '@driftmark/shared';
 import { addDays } from './dates';
 
 export type HistoryItem =
   | { kind: 'day'; day: DaySummary }
   /** Days without anything logged between two logged days (or before the first one shown). */
   | { kind: 'gap'; from: string; to: string; days: number };
-
-function daysBetween(from: string, to: string): number {
-  return Math.round((Date.parse(`${to}T00:00:00Z`) - Date.parse(`${from}T00:00:00Z`)) / 86_400_000);
-}
 
 /**
  * Logged days newest first, with the stretches nothing was logged shown as gaps, so a missed

@@ -1,0 +1,91 @@
+/**
+ * Calendar dates (YYYY-MM-DD) and the clock in a time zone: the one implementation every part of
+ * the product uses (api, web, seed and shared rules). A date is a label, not an instant: date
+ * arithmetic runs on UTC midnights so no time zone or daylight-saving change can shift it; "today"
+ * and the clock time are read in an IANA zone through Intl (the tz database the runtime ships).
+ */
+
+const ISO_DATE = /^(\d{4})-(\d{2})-(\d{2})$/;
+const DAY_MS = 86_400_000;
+
+/**
+ * True for a real calendar date written YYYY-MM-DD ("2026-02-30" is not one), from the year 1000
+ * on: nothing here predates it, and PostgreSQL has no year 0.
+ */
+export function isIsoDate(text: string | null | undefined): text is string {
+  const m = ISO_DATE.exec(text ?? '');
+  if (!m || Number(m[1]) < 1000) return false;
+  return utcMidnight(text!).toISOString().slice(0, 10) === text;
+}
+
+/** A calendar date as its UTC midnight (calendar arithmetic only). */
+export function utcMidnight(date: string): Date {
+  const m = ISO_DATE.exec(date);
+  if (!m) throw new RangeError(`Not a YYYY-MM-DD date: ${date}`);
+  const d = new Date(0);
+  d.setUTCFullYear(Number(m[1]), Number(m[2]) - 1, Number(m[3]));
+  return d;
+}
+
+/** `date` moved by `days` calendar days (negative goes back). */
+export function addDays(date: string, days: number): string {
+  const d = utcMidnight(date);
+  d.setUTCDate(d.getUTCDate() + days);
+  return d.toISOString().slice(0, 10);
+}
+
+/** Whole calendar days from `from` to `to`; negative when `to` is earlier. */
+export function daysBetween(from: string, to: string): number {
+  return Math.round((utcMidnight(to).getTime() - utcMidnight(from).getTime()) / DAY_MS);
+}
+
+/** Every date from `from` to `to`, both included (empty when `to` is earlier). */
+export function eachDay(from: string, to: string): string[] {
+  const out: string[] = [];
+  for (let d = from; d <= to; d = addDays(d, 1)) out.push(d);
+  return out;
+}
+
+/** Day of the week of a date, 0 = Sunday … 6 = Saturday. */
+export function weekdayNumber(date: string): number {
+  return utcMidnight(date).getUTCDay();
+}
+
+const dateParts = new Map<string, Intl.DateTimeFormat>();
+const clockParts = new Map<string, Intl.DateTimeFormat>();
+
+function formatter(
+  cache: Map<string, Intl.DateTimeFormat>,
+  timeZone: string,
+  make: () => Intl.DateTimeFormat,
+) {
+  let f = cache.get(timeZone);
+  if (!f) {
+    f = make();
+    cache.set(timeZone, f);
+  }
+  return f;
+}
+
+/** The calendar date a clock in `timeZone` shows at `now`. */
+export function todayIn(timeZone: string, now: Date = new Date()): string {
+  const parts = formatter(
+    dateParts,
+    timeZone,
+    () => new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }),
+  ).formatToParts(now);
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${get('year')}-${get('month')}-${get('day')}`;
+}
+
+/** The clock time "HH:MM" (24 h) in `timeZone` at `now`. */
+export function clockIn(timeZone: string, now: Date = new Date()): string {
+  const parts = formatter(
+    clockParts,
+    timeZone,
+    () =>
+      new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }),
+  ).formatToParts(now);
+  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '00';
+  return `${get('hour')}:${get('minute')}`;
+}
