@@ -1,5 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { addDays, clockIn, daysBetween, eachDay, isIsoDate, todayIn, weekdayNumber } from './calendar.js';
+import {
+  addDays,
+  clockIn,
+  daysBetween,
+  eachDay,
+  inFinalWeek,
+  isIsoDate,
+  todayIn,
+  weekdayNumber,
+} from './calendar.js';
 
 // Reference: the proleptic Gregorian calendar (ISO 8601) and the IANA tz database as the runtime
 // ships it; each expected value below can be read off any calendar.
@@ -44,5 +53,18 @@ describe('calendar dates', () => {
     expect(todayIn('Pacific/Honolulu', at)).toBe('2026-10-24'); // 14:30 HST
     expect(clockIn('Europe/Madrid', at)).toBe('02:30'); // still CEST (UTC+2)
     expect(clockIn('Europe/Madrid', new Date('2026-10-25T01:30:00Z'))).toBe('02:30'); // now CET (UTC+1)
+  });
+});
+
+describe('inFinalWeek', () => {
+  // E-7 … E-0 (common practice, no source).
+  it.each([
+    [null, false],
+    [8, false],
+    [7, true],
+    [0, true],
+    [-1, false],
+  ])('%s days to the event → %s', (days, expected) => {
+    expect(inFinalWeek(days)).toBe(expected);
   });
 });

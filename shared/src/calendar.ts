@@ -89,3 +89,15 @@ export function clockIn(timeZone: string, now: Date = new Date()): string {
   const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '00';
   return `${get('hour')}:${get('minute')}`;
 }
+
+/**
+ * The final week before an event: from 7 days out to the event day (E-7 … E-0), where energy,
+ * water and sodium are changed on purpose and the product shows its cautions (common practice, no
+ * source). `daysToEvent` is counted in the athlete's own calendar; null (no event) is never in it.
+ */
+export const FINAL_WEEK_DAYS = 7;
+export function inFinalWeek(daysToEvent: number | null | undefined): boolean {
+  return (
+    daysToEvent !== null && daysToEvent !== undefined && daysToEvent >= 0 && daysToEvent <= FINAL_WEEK_DAYS
+  );
+}

@@ -1,8 +1,9 @@
 import {
+  type AthleteProfile,
   EVENT_TYPE_LABELS,
+  inFinalWeek,
   VOLUME_UNIT_LABELS,
   WEIGHT_UNIT_LABELS,
-  type AthleteProfile,
 } from '@driftmark/shared';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router';
 import { SafetyNote } from '@/components/safety-note';
@@ -24,7 +25,6 @@ import { daysBetween, formatDate, formatWeight } from '@/lib/format';
 import { useCurrentUser } from '../session';
 
 /** Days at or under which the final-week countdown applies. */
-const FINAL_WEEK_DAYS = 7;
 
 /** Who the athlete is and how far off their event: the head of every tab of the athlete page. */
 export function AthleteHeader({ profile, today }: { profile: AthleteProfile; today: string }) {
@@ -32,7 +32,7 @@ export function AthleteHeader({ profile, today }: { profile: AthleteProfile; tod
   const clock = useClock(profile.timeZone);
   const hasEvent = profile.eventType !== null && profile.eventType !== 'none' && profile.eventDate !== null;
   const days = hasEvent && profile.eventDate ? daysBetween(today, profile.eventDate) : null;
-  const finalWeek = days !== null && days >= 0 && days <= FINAL_WEEK_DAYS;
+  const finalWeek = inFinalWeek(days);
   const { units } = profile;
   const facts: Array<{ label: string; value: string }> = [
     { label: 'Division', value: profile.division ?? '—' },

@@ -1,4 +1,4 @@
-import { EVENT_TYPE_LABELS, type AthleteProfile, type WeightUnit } from '@driftmark/shared';
+import { type AthleteProfile, EVENT_TYPE_LABELS, inFinalWeek, type WeightUnit } from '@driftmark/shared';
 import { Badge } from '@/components/ui/badge';
 import { ButtonLink } from '@/components/ui/button';
 import { Card, CardHeader } from '@/components/ui/card';
@@ -7,7 +7,6 @@ import { ClockIcon, FlagIcon, PersonIcon } from '@/components/ui/icons';
 import { daysBetween, formatDate, formatWeight } from '@/lib/format';
 
 /** Days at or under which the final-week countdown applies. */
-const FINAL_WEEK_DAYS = 7;
 
 interface EventCountdownProps {
   profile: AthleteProfile;
@@ -36,7 +35,7 @@ export function EventCountdownCard({ profile, today, weightUnit, editHref }: Eve
   }
 
   const days = daysBetween(today, profile.eventDate);
-  const finalWeek = days >= 0 && days <= FINAL_WEEK_DAYS;
+  const finalWeek = inFinalWeek(days);
   const title = profile.eventName || EVENT_TYPE_LABELS[profile.eventType];
   // Three-digit countdowns (a long prep) step down a size so the figure fits its block.
   const figureSize = Math.abs(days) >= 100 ? 'text-3xl' : 'text-figure';

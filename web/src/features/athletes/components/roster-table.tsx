@@ -1,9 +1,10 @@
 import {
   EVENT_TYPE_LABELS,
+  type FlagKind,
+  inFinalWeek,
+  type Phase,
   PHASE_LABELS,
   PHASES,
-  type FlagKind,
-  type Phase,
   type RosterRow,
   type WeightUnit,
 } from '@driftmark/shared';
@@ -42,7 +43,6 @@ const STATUS: Record<RosterRow['status'], { label: string; tone: BadgeTone }> = 
 };
 
 /** Days at or under which the final-week countdown applies. */
-export const FINAL_WEEK_DAYS = 7;
 
 /** Safety flags in the caution and off-plan tokens; each tone carries its own glyph (Badge). */
 const FLAG_TONES: Record<FlagKind, BadgeTone> = {
@@ -453,7 +453,7 @@ function EventCell({ row }: { row: RosterRow }) {
     );
   }
   const days = row.daysToEvent;
-  const finalWeek = days !== null && days >= 0 && days <= FINAL_WEEK_DAYS;
+  const finalWeek = inFinalWeek(days);
   const label =
     days === null
       ? '—'
@@ -567,13 +567,7 @@ function Missing({ label = 'not given' }: { label?: string }) {
 
 /** Counts a coach reads at a glance above the table. */
 export function RosterSummary({ rows }: { rows: RosterRow[] }) {
-  const finalWeek = rows.filter(
-    (r) =>
-      r.eventType !== 'none' &&
-      r.daysToEvent !== null &&
-      r.daysToEvent >= 0 &&
-      r.daysToEvent <= FINAL_WEEK_DAYS,
-  ).length;
+  const finalWeek = rows.filter((r) => r.eventType !== 'none' && inFinalWeek(r.daysToEvent)).length;
   const flagged = rows.filter((r) => r.figures.flags.length > 0).length;
   const pending = rows.filter((r) => r.status === 'intake_pending').length;
   const items = [

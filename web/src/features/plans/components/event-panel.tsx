@@ -1,7 +1,8 @@
 import {
-  EVENT_TYPE_LABELS,
   type CountdownPreview,
+  EVENT_TYPE_LABELS,
   type EVENT_TYPES,
+  inFinalWeek,
   type PlanVersionView,
 } from '@driftmark/shared';
 import { useId, useState } from 'react';
@@ -20,7 +21,6 @@ import { isIsoDate } from '../utils/dates';
 import { CountdownReview } from './countdown-review';
 
 /** Days at or under which the final-week countdown applies. */
-const FINAL_WEEK_DAYS = 7;
 
 interface EventPanelProps {
   athleteId: string;
@@ -119,7 +119,7 @@ export function EventPanel({ athleteId, event, today, canChange, canEditPlan, li
             <span className="text-2xl font-bold text-accent-strong tabular-nums">
               {formatDaysToEvent(days)}
             </span>
-            {days >= 0 && days <= FINAL_WEEK_DAYS ? <Badge tone="caution">Final week</Badge> : null}
+            {inFinalWeek(days) ? <Badge tone="caution">Final week</Badge> : null}
           </p>
         ) : null}
         {canChange && hasEvent && step.kind !== 'editing' ? (
