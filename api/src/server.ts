@@ -6,6 +6,8 @@ import { createDataSource } from './db/data-source.js';
 import { startMailWorker } from './jobs/mail.worker.js';
 import { startNotifyScheduler } from './jobs/notify.scheduler.js';
 import { createLogger } from './logger.js';
+import { uploadsSettled } from './middleware/upload.js';
+import { installProcessErrorHandlers } from './process-errors.js';
 
 /** How long a shutdown may take before the process exits anyway. */
 const FORCED_EXIT_MS = 10_000;
@@ -19,6 +21,7 @@ async function main(): Promise<void> {
     process.exit(1);
   }
   const logger = createLogger(config.logLevel);
+  installProcessErrorHandlers(logger);
 
   const dataSource = createDataSource(config);
   await dataSource.initialize();
@@ -54,6 +57,8 @@ async function main(): Promise<void> {
       void (async () => {
         let code = closeErr ? 1 : 0;
         if (closeErr) logger.error({ err: closeErr }, 'HTTP server close failed');
+        // Requests are over; uploads cut off by the close may still be removing their temp files.
+        await uploadsSettled();
         try {
           await scheduler.stop();
         } catch (err) {

@@ -1,7 +1,8 @@
 /**
  * `npm start`: the built app in demo mode on http://127.0.0.1:${PORT:-3000}, with the demo team seeded
- * and mail captured by the SMTP fake (readable in the dev inbox). Ctrl-C stops the server gracefully
- * and the SMTP fake, and exits 0; the database and the PostgreSQL cluster keep running (npm run db:stop).
+ * and mail captured by the SMTP fake (readable in the dev inbox). An API server that dies is started
+ * again after a back-off. Ctrl-C stops the server gracefully and the SMTP fake, and exits 0; the
+ * database and the PostgreSQL cluster keep running (npm run db:stop).
  */
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
@@ -12,20 +13,20 @@ import {
   buildWorkspace,
   DEMO_ACCOUNTS,
   DEMO_PASSWORD,
-  startBuiltServer,
   startSmtpFake,
-  waitForHealth,
+  superviseBuiltServer,
   type RunningSmtpFake,
+  type SupervisedServer,
 } from './lib/app.js';
 import { color, fail, log, seconds, warn } from './lib/log.js';
 import { repoPath } from './lib/paths.js';
 import { isPortFree } from './lib/ports.js';
 import { ensureCluster, ensureDatabase } from './lib/postgres.js';
-import { onShutdownSignal, type Service } from './lib/proc.js';
+import { onShutdownSignal } from './lib/proc.js';
 import { ensureJwtSecret } from './lib/secrets.js';
 
 const startedAt = Date.now();
-let server: Service | undefined;
+let server: SupervisedServer | undefined;
 let smtp: RunningSmtpFake | undefined;
 let stopping = false;
 
@@ -81,18 +82,13 @@ async function main(): Promise<void> {
   if (stopping) return;
 
   smtp = await startSmtpFake({ preferredPort: 2525, captureDir: mailDir, exclude: [port] });
-  server = startBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url }));
+  // A server that dies later (a bug) is started again after a short wait; see superviseBuiltServer.
+  server = superviseBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url }), { baseUrl });
   void smtp.service.exited.then((exit) => {
     if (!stopping)
       warn(`The SMTP fake stopped (${exit.signal ?? `exit ${exit.code}`}); e-mail will not be captured.`);
   });
-  void server.exited.then(async (exit) => {
-    if (stopping) return;
-    fail(`The API server stopped (${exit.signal ?? `exit ${exit.code}`}).`);
-    await smtp?.service.stop();
-    process.exit(exit.code || 1);
-  });
-  await waitForHealth(baseUrl, server);
+  await server.ready;
 
   const width = Math.max(...DEMO_ACCOUNTS.map((account) => account.email.length));
   console.log(

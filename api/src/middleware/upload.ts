@@ -8,9 +8,29 @@ import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import { AppError } from '../errors.js';
 
-/** Where multer puts uploads while a request runs: per process, emptied as each request ends. */
+/**
+ * Where multer puts uploads while a request runs: per process, one folder per upload inside it,
+ * removed as each upload ends.
+ */
 export function uploadTempDir(): string {
   return path.join(os.tmpdir(), 'driftmark-uploads', String(process.pid));
+}
+
+/**
+ * Each upload's own folder under `uploadTempDir()`. Removing the folder removes whatever multer
+ * wrote for the request, including a file it was still writing when the client went away.
+ */
+const uploadDirs = new WeakMap<Request, string>();
+
+/** Uploads whose temp folder is not yet removed (see `uploadsSettled`). */
+const unsettled = new Set<Promise<void>>();
+
+/**
+ * Resolves once every upload in progress now has ended and its temp folder is gone: the server
+ * awaits it when shutting down, tests after dropping a connection.
+ */
+export async function uploadsSettled(): Promise<void> {
+  await Promise.all([...unsettled]);
 }
 
 /** A file received with the request, still in the temp folder. */
@@ -31,8 +51,9 @@ const MAX_DRAIN_BYTES = LIMITS.photosPerUpload * LIMITS.photoMaxBytes + MB;
 
 const uploader = multer({
   storage: multer.diskStorage({
-    destination: (_req, _file, cb) => {
-      const dir = uploadTempDir();
+    destination: (req, _file, cb) => {
+      const dir = uploadDirs.get(req);
+      if (!dir) return cb(new Error('The upload has no temp folder.'), '');
       try {
         mkdirSync(dir, { recursive: true, mode: 0o700 });
         cb(null, dir);
@@ -78,10 +99,18 @@ function fromMulter(error: multer.MulterError): AppError {
   }
 }
 
-/** Removes the request's temp files (safe to call twice). */
+/**
+ * Removes the request's temp folder with every file in it (safe to call twice). Never rejects: a
+ * folder that cannot be removed is logged, and the answer to the request does not depend on it.
+ */
 export async function discardUploads(req: Request): Promise<void> {
-  const files = Array.isArray(req.files) ? req.files : [];
-  await Promise.all(files.map((f) => rm(f.path, { force: true })));
+  const dir = uploadDirs.get(req);
+  if (!dir) return;
+  try {
+    await rm(dir, { recursive: true, force: true });
+  } catch (err) {
+    req.log.warn({ err, dir }, 'could not remove an upload temp folder');
+  }
 }
 
 /** The files of a request that passed `photoUpload()`. */
@@ -90,12 +119,20 @@ export function uploadedFiles(req: Request): UploadedFile[] {
   return files.map((f) => ({ path: f.path, originalName: f.originalname, size: f.size }));
 }
 
+/** The client went away before the whole body arrived; nobody reads the answer, the log does. */
+function cutOff(): AppError {
+  return new AppError('validation_failed', 'The upload was cut off before it finished. Please try again.', {
+    files: 'The upload did not finish.',
+  });
+}
+
 /**
  * Receives `multipart/form-data` with up to LIMITS.photosPerUpload files in `files` (each at most
  * LIMITS.photoMaxBytes) into a private temp folder; text fields land in `req.body`. Limits become
- * 413 payload_too_large / 400 validation_failed; anything multer wrote is gone before the error is
- * sent, and the temp files of a finished request are removed when the response closes (handlers
- * call `discardUploads` earlier, as soon as they are done with the files).
+ * 413 payload_too_large / 400 validation_failed, a body cut off by the client 400. The request's
+ * temp folder is removed once multer has let go of the request and the response has closed,
+ * whichever way it ended (handlers call `discardUploads` earlier, as soon as they are done with
+ * the files).
  */
 export function photoUpload(): RequestHandler {
   return (req, res, next) => {
@@ -106,10 +143,34 @@ export function photoUpload(): RequestHandler {
         }),
       );
     }
-    res.once('close', () => void discardUploads(req));
+    // Gone while the steps before the upload ran: multer would wait for a body that never comes.
+    if (req.destroyed || res.closed) return next(cutOff());
+
+    uploadDirs.set(req, path.join(uploadTempDir(), randomUUID()));
+    let read = false;
+    let closed = false;
+    let settle!: () => void;
+    const settled = new Promise<void>((resolve) => (settle = resolve));
+    unsettled.add(settled);
+    // Before multer has called back, it may still be writing a file into the folder.
+    const cleanUp = () => {
+      if (!read || !closed) return;
+      void discardUploads(req).then(() => {
+        unsettled.delete(settled);
+        settle();
+      });
+    };
+    res.once('close', () => {
+      closed = true;
+      cleanUp();
+    });
+
     uploader(req, res, (error: unknown) => {
+      read = true;
+      cleanUp();
       if (!error) return next();
       if (error instanceof multer.MulterError) return next(fromMulter(error));
+      if (req.destroyed && !req.complete) return next(cutOff());
       next(error);
     });
   };

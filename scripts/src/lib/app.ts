@@ -1,10 +1,19 @@
 /** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP fake, the server. */
 import path from 'node:path';
 import { isBuildFresh, recordBuild, type BuildCheck } from './fingerprint.js';
-import { log, seconds } from './log.js';
+import { fail, log, seconds, warn } from './log.js';
 import { repoPath, repoRoot } from './paths.js';
 import { pickFreePort } from './ports.js';
-import { npmCommand, packageBin, runChecked, sleep, startService, type Service } from './proc.js';
+import {
+  npmCommand,
+  packageBin,
+  runChecked,
+  sleep,
+  startService,
+  type Service,
+  type ServiceExit,
+} from './proc.js';
+import { API_RESTART, nextRestart, type RestartPolicy } from './restart-policy.js';
 
 export const DEMO_PASSWORD = 'driftmark-demo';
 export const DEMO_ACCOUNTS = [
@@ -175,6 +184,70 @@ export async function waitForHealth(baseUrl: string, server: Service, timeoutMs 
 /** `node api/dist/server.js` in its own process group. */
 export function startBuiltServer(env: NodeJS.ProcessEnv, logFile?: string): Service {
   return startService('api', node, [repoPath('api', 'dist', 'server.js')], { env, logFile });
+}
+
+export interface SupervisedServer {
+  /** Resolves once the first server answers its health check; rejects when it exits before. */
+  readonly ready: Promise<void>;
+  /** Stops the server for good: no restart follows. */
+  stop(signal?: NodeJS.Signals, timeoutMs?: number): Promise<void>;
+}
+
+function describeExit(exit: ServiceExit): string {
+  return exit.signal ?? `exit ${exit.code}`;
+}
+
+/**
+ * `node api/dist/server.js`, started again whenever it exits without being asked to (after a
+ * server that answered its health check once): a crash then costs the requests in flight, not the
+ * whole product. Waits between restarts follow `policy`.
+ */
+export function superviseBuiltServer(
+  env: NodeJS.ProcessEnv,
+  options: { baseUrl: string; policy?: RestartPolicy },
+): SupervisedServer {
+  const policy = options.policy ?? API_RESTART;
+  let current = startBuiltServer(env);
+  let startedAt = Date.now();
+  let streak = 0;
+  let stopped = false;
+  let pending: NodeJS.Timeout | undefined;
+
+  const restartWhenItDies = (service: Service): void => {
+    void service.exited.then((exit) => {
+      if (stopped) return;
+      const next = nextRestart(streak, Date.now() - startedAt, policy);
+      streak = next.streak;
+      fail(
+        `The API server stopped unexpectedly (${describeExit(exit)}); starting it again in ` +
+          `${seconds(next.delayMs)} (restart ${streak} in a row). The SMTP fake keeps running.`,
+      );
+      pending = setTimeout(() => {
+        pending = undefined;
+        if (stopped) return;
+        current = startBuiltServer(env);
+        startedAt = Date.now();
+        restartWhenItDies(current);
+        waitForHealth(options.baseUrl, current).then(
+          () => log(`The API server is back on ${options.baseUrl}.`),
+          // An exit before the health check is handled above; anything else is worth a word.
+          (error: unknown) => {
+            if (!current.hasExited()) warn((error as Error).message);
+          },
+        );
+      }, next.delayMs);
+    });
+  };
+
+  const ready = waitForHealth(options.baseUrl, current).then(() => restartWhenItDies(current));
+  return {
+    ready,
+    async stop(signal = 'SIGINT', timeoutMs = 15_000) {
+      stopped = true;
+      if (pending) clearTimeout(pending);
+      await current.stop(signal, timeoutMs);
+    },
+  };
 }
 
 export function relative(file: string): string {
