@@ -171,6 +171,15 @@ describe('diuretic (strong; REFERENCES §7 rule 3: Sturmi 1995; Mayr 2012; Cheun
     'Uva ursi',
     'Juniper berry',
     'Horsetail extract',
+    // The ATC C03 list and herbal water pills of diuretics.ts (its own tests list every name).
+    'Aldactone',
+    'Diamox',
+    'Burinex',
+    'Demadex',
+    'Zaroxolyn',
+    'Furosemid',
+    'Taraxacum officinale',
+    'Water pill',
   ])('“%s” is flagged', (name) => {
     const ws = checkGuardrails(dated('2026-12-04', { supplements: [item(name)] }, -1), ctx());
     const w = only(ws, 'diuretic')[0];

@@ -10,6 +10,7 @@ import type {
 } from '../schemas/plans.js';
 import { WEEKDAYS } from '../schemas/plans.js';
 import { atwaterKcal } from '../nutrition.js';
+import { isDiureticItem } from './diuretics.js';
 import { daysBetween, fmt, fmtDate, fmtFixed, listWords } from './format.js';
 import { countdownDayLabel, resolveTargets } from './resolve.js';
 
@@ -87,42 +88,8 @@ const ADVICE: Record<GuardrailCode, string> = {
     'The time between weigh-in and competition limits how much of a fast loss can be won back (Reale 2017).',
 };
 
-const DIURETIC_PATTERN = new RegExp(
-  '\\b(' +
-    [
-      'diuretics?',
-      'water pills?',
-      'water tablets?',
-      'furosemide',
-      'frusemide',
-      'lasix',
-      'bumetanide',
-      'torsemide',
-      'torasemide',
-      'hydrochlorothiazide',
-      'hctz',
-      'chlorothiazide',
-      'chlorthalidone',
-      'indapamide',
-      'metolazone',
-      'spironolactone',
-      'eplerenone',
-      'amiloride',
-      'triamterene',
-      'acetazolamide',
-      'mannitol',
-      'dandelion',
-      'uva ursi',
-      'juniper',
-      'horsetail',
-      'nettle',
-      'hibiscus',
-      'buchu',
-    ].join('|') +
-    ')\\b',
-  'i',
-);
 const POTASSIUM_PATTERN = /\b(potassium|kcl|salt substitute)\b|\bK\+/i;
+const isPotassiumItem = (item: string): boolean => POTASSIUM_PATTERN.test(item);
 
 /** `${code}:${scopeKey}` with scopeKey `plan` | `type:<key>` | `date:<YYYY-MM-DD>`. */
 export function guardrailKey(code: GuardrailCode, scope: GuardrailScope): string {
@@ -229,7 +196,7 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
     }
 
     // Potassium in the schedule: NASEM 2019; REFERENCES §7 rule 4.
-    const potassium = matchingItems(e.targets, POTASSIUM_PATTERN);
+    const potassium = matchingItems(e.targets, isPotassiumItem);
     if (potassium.length > 0) {
       hit(
         'potassium',
@@ -239,8 +206,9 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
       );
     }
 
-    // Diuretic-type items: Sturmi 1995; Mayr 2012; Cheung 2014 (REFERENCES §7 rule 3).
-    const diuretics = matchingItems(e.targets, DIURETIC_PATTERN);
+    // Diuretic-type items (the ATC C03 list and herbal water pills, diuretics.ts): Sturmi 1995;
+    // Mayr 2012; Cheung 2014 (REFERENCES §7 rule 3).
+    const diuretics = matchingItems(e.targets, isDiureticItem);
     if (diuretics.length > 0) {
       hit(
         'diuretic',
@@ -396,8 +364,11 @@ function merge(hits: readonly Hit[]): GuardrailWarning[] {
   });
 }
 
-function matchingItems(targets: DayTargets, pattern: RegExp): { item: string; index: number }[] {
-  return targets.supplements.flatMap((s, index) => (pattern.test(s.item) ? [{ item: s.item, index }] : []));
+function matchingItems(
+  targets: DayTargets,
+  matches: (item: string) => boolean,
+): { item: string; index: number }[] {
+  return targets.supplements.flatMap((s, index) => (matches(s.item) ? [{ item: s.item, index }] : []));
 }
 
 function quoted(items: readonly { item: string }[]): string {
