@@ -19,16 +19,7 @@
  */
 
 export type DiureticGroup =
-  | 'C03A'
-  | 'C03B'
-  | 'C03C'
-  | 'C03D'
-  | 'C03E'
-  | 'C03X'
-  | 'S01EC'
-  | 'B05BC'
-  | 'herbal'
-  | 'words';
+  'C03A' | 'C03B' | 'C03C' | 'C03D' | 'C03E' | 'C03X' | 'S01EC' | 'B05BC' | 'herbal' | 'words';
 
 export interface DiureticEntry {
   /** The generic (INN) name, the herb, or the words. */
@@ -163,7 +154,8 @@ function editDistance(a: string, b: string): number {
     for (let j = 1; j <= b.length; j++) {
       const cost = a[i - 1] === b[j - 1] ? 0 : 1;
       let v = Math.min(d[i - 1]![j]! + 1, d[i]![j - 1]! + 1, d[i - 1]![j - 1]! + cost);
-      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1]) v = Math.min(v, d[i - 2]![j - 2]! + 1);
+      if (i > 1 && j > 1 && a[i - 1] === b[j - 2] && a[i - 2] === b[j - 1])
+        v = Math.min(v, d[i - 2]![j - 2]! + 1);
       d[i]![j] = v;
     }
   }
