@@ -11,8 +11,8 @@
  * group headings are the index's own. Trade names are the usual ones in the US, UK, EU and India,
  * from memory.
  *
- * Herbal "water pill" ingredients have no formal classification: the list is common practice, no
- * source (ingredients sold as water pills and named in the diuretic case reports of REFERENCES §7).
+ * Herbal "water pill" ingredients have no formal classification: that part of the list (ingredients
+ * commonly sold as water pills) is common practice, no source, from memory.
  * Caffeine and green tea extract are left out on purpose: their diuretic effect is small in people
  * used to them (Maughan & Griffin 2003, J Hum Nutr Diet 16:411–420, from memory) and flagging every
  * pre-workout drink would drown the strong warning this list raises.
