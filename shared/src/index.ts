@@ -17,6 +17,7 @@ export * from './plans/macros.js';
 export * from './plans/resolve.js';
 export * from './plans/validate.js';
 export * from './plans/guardrails.js';
+export * from './plans/diuretics.js';
 export * from './plans/countdown.js';
 export * from './plans/diff.js';
 export * from './plans/cautions.js';

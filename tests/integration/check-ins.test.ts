@@ -377,13 +377,14 @@ describe('meals', () => {
   });
 
   it('computes a reference food meal from its per-100 g values × quantity / 100', async () => {
-    // ifct2017 A001 amaranth seed, black: 1490 kJ, 14.59 g protein, 59.98 g carbohydrate, 5.74 g fat,
-    // 7.02 g fibre per 100 g (REFERENCES.md §10).
+    // ifct2017 A001 amaranth seed, black: 14.59 g protein, 59.98 g carbohydrate, 5.74 g fat, 7.02 g
+    // fibre per 100 g (REFERENCES.md §10); energy from its macros with the Atwater factors (FAO 2003
+    // FNP 77): 4·14.59 + 4·59.98 + 9·5.74 = 349.94 kcal per 100 g, fibre counting none.
     const res = await agent.post(`${base}/days/${TODAY}/meals`).send(foodMealBody('ifct:A001', 150));
     expect(res.status).toBe(201);
     const meal = res.body.data.meals[0];
     expect(meal.food).toEqual({ id: 'ifct:A001', name: 'Amaranth seed, black', quantityG: 150 });
-    expect(meal.energyKcal).toBeCloseTo((1490 / 4.184) * 1.5, 9);
+    expect(meal.energyKcal).toBeCloseTo(349.94 * 1.5, 9);
     expect(meal.proteinG).toBeCloseTo(21.885, 9);
     expect(meal.carbohydrateG).toBeCloseTo(89.97, 9);
     expect(meal.fatG).toBeCloseTo(8.61, 9);
@@ -462,11 +463,11 @@ describe('meals', () => {
   it('PATCH rescales a food meal, switches to macros, and DELETE removes it', async () => {
     const created = await agent.post(`${base}/days/${TODAY}/meals`).send(foodMealBody('ifct:E053', 100));
     const id = created.body.data.meals[0].id;
-    // E053 pineapple: listed 180 kJ per 100 g.
-    expect(created.body.data.meals[0].energyKcal).toBeCloseTo(180 / 4.184, 9);
+    // E053 pineapple: P 0.52, C 9.42, F 0.16 g per 100 g → 4·0.52 + 4·9.42 + 9·0.16 = 41.20 kcal (Atwater).
+    expect(created.body.data.meals[0].energyKcal).toBeCloseTo(41.2, 9);
     const doubled = await agent.patch(`${base}/meals/${id}`).send({ quantityG: 200 });
     expect(doubled.status).toBe(200);
-    expect(doubled.body.data.meals[0].energyKcal).toBeCloseTo(360 / 4.184, 9);
+    expect(doubled.body.data.meals[0].energyKcal).toBeCloseTo(82.4, 9);
     expect(doubled.body.data.meals[0].food.quantityG).toBe(200);
 
     const switched = await agent

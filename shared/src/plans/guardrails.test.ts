@@ -8,6 +8,7 @@ import type {
   ScheduleItem,
 } from '../schemas/plans.js';
 import { checkGuardrails, GUARDRAIL_DEFAULTS, unacknowledged } from './guardrails.js';
+import { addDays } from './format.js';
 import { emptyDayTargets, starterPlanContent } from './resolve.js';
 
 const day = (t: Partial<DayTargets>): DayTargets => ({ ...emptyDayTargets(), ...t });
@@ -171,6 +172,15 @@ describe('diuretic (strong; REFERENCES §7 rule 3: Sturmi 1995; Mayr 2012; Cheun
     'Uva ursi',
     'Juniper berry',
     'Horsetail extract',
+    // The ATC C03 list and herbal water pills of diuretics.ts (its own tests list every name).
+    'Aldactone',
+    'Diamox',
+    'Burinex',
+    'Demadex',
+    'Zaroxolyn',
+    'Furosemid',
+    'Taraxacum officinale',
+    'Water pill',
   ])('“%s” is flagged', (name) => {
     const ws = checkGuardrails(dated('2026-12-04', { supplements: [item(name)] }, -1), ctx());
     const w = only(ws, 'diuretic')[0];
@@ -309,6 +319,67 @@ describe('loss_rate (> 1 %/wk, Helms 2014) and loss_rate_strong (> 1.4 %/wk, Gar
     const ws = checkGuardrails(plan(grams, { energy: { kind: 'kcal', kcal: 1450 } }), ctx());
     expect(ws.map((w) => w.key)).toEqual(['loss_rate:plan']);
     expect(ws[0]!.message).toContain('averages 1,450 kcal a day');
+  });
+
+  // Any 7 consecutive planned days count, not only the weekly pattern (issue 11 item 6).
+  const datedRun = (from: string, days: number, targets: Partial<DayTargets>, lastOffset?: number) => {
+    const c = starterPlanContent();
+    c.dates = Array.from({ length: days }, (_, i) => ({
+      date: addDays(from, i),
+      label: null,
+      countdownOffset: lastOffset === undefined ? null : lastOffset - (days - 1 - i),
+      targets: day(targets),
+    }));
+    return c;
+  };
+
+  it('60 dated days at 1,600 kcal (usual 2,600, pattern without targets): 1,000 kcal/d → 0.91 kg → 1.1 % a week', () => {
+    const ws = checkGuardrails(
+      datedRun('2026-12-01', 60, { energy: { kind: 'kcal', kcal: 1600 } }),
+      ctx({}, { usualEnergyKcal: 2600 }),
+    );
+    expect(ws.map((w) => [w.key, w.severity])).toEqual([['loss_rate:plan', 'warning']]);
+    expect(ws[0]!.message).toBe(
+      'The 7 planned days from Tue 1 Dec to Mon 7 Dec average 1,600 kcal a day, 1,000 kcal below the usual ' +
+        '2,600 kcal: about 0.91 kg a week, 1.1 % of body weight (80.0 kg) a week. ' +
+        'Losing about 0.5–1 % of body weight a week is advised to keep muscle (Helms 2014).',
+    );
+  });
+
+  it('a countdown E-6…E-0 at 0.5 × usual (1,200 of 2,400 kcal), 58 kg: 1.09 kg → 1.9 % a week → strong', () => {
+    const c = datedRun('2026-12-03', 7, { energy: { kind: 'usual_times', factor: 0.5 } }, 0);
+    expect(c.dates.map((d) => d.countdownOffset)).toEqual([-6, -5, -4, -3, -2, -1, 0]);
+    const ws = checkGuardrails(c, ctx({}, { weightKg: 58 }));
+    expect(ws.map((w) => [w.key, w.severity])).toEqual([['loss_rate_strong:plan', 'strong']]);
+    expect(ws[0]!.message).toContain(
+      'The 7 planned days from Thu 3 Dec to Wed 9 Dec average 1,200 kcal a day, 1,200 kcal below the usual ' +
+        '2,400 kcal: about 1.09 kg a week, 1.9 % of body weight (58.0 kg) a week',
+    );
+    expect(ws[0]!.source).toContain('Garthe et al. 2011');
+  });
+
+  it('dated days mix with the pattern days around them; the fastest week is reported', () => {
+    // Three dated days at 1,000 kcal among pattern days at 2,400: (3·1,000 + 4·2,400)/7 = 1,800 kcal,
+    // 600 kcal/d → 0.55 kg a week: 0.7 % at 80 kg (none), 1.1 % at 50 kg (warning).
+    const c = datedRun('2026-12-10', 3, { energy: { kind: 'kcal', kcal: 1000 } });
+    c.dayTypes[0]!.targets = day({ energy: { kind: 'kcal', kcal: 2400 } });
+    c.dayTypes[1]!.targets = day({ energy: { kind: 'kcal', kcal: 2400 } });
+    const rates = (weightKg: number) =>
+      checkGuardrails(c, ctx({}, { weightKg })).filter((w) => w.scope.kind === 'plan');
+    expect(rates(80)).toEqual([]);
+    const ws = rates(50);
+    expect(ws.map((w) => w.key)).toEqual(['loss_rate:plan']);
+    // The earliest run of 7 holding all three (10–12 Dec) starts on 6 Dec.
+    expect(ws[0]!.message).toContain(
+      'The 7 planned days from Sun 6 Dec to Sat 12 Dec average 1,800 kcal a day',
+    );
+  });
+
+  it('dated days before today are not counted', () => {
+    const c = datedRun('2026-11-20', 10, { energy: { kind: 'kcal', kcal: 1000 } });
+    expect(checkGuardrails(c, ctx({ today: '2026-12-01' }))).toEqual([]);
+    // The same days from today on: 1,400 kcal/d below usual → 1.27 kg, 1.6 % a week.
+    expect(codes(checkGuardrails(c, ctx({ today: '2026-11-20' })))).toContain('loss_rate_strong:plan');
   });
 
   it('needs the usual energy and a weight', () => {

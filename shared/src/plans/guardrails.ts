@@ -5,13 +5,15 @@ import type {
   GuardrailFloors,
   GuardrailScope,
   GuardrailWarning,
+  PlanBaseline,
   PlanContent,
   ResolvedTargets,
 } from '../schemas/plans.js';
 import { WEEKDAYS } from '../schemas/plans.js';
 import { atwaterKcal } from '../nutrition.js';
-import { daysBetween, fmt, fmtDate, fmtFixed, listWords } from './format.js';
-import { countdownDayLabel, resolveTargets } from './resolve.js';
+import { isDiureticItem } from './diuretics.js';
+import { addDays, daysBetween, fmt, fmtDate, fmtFixed, listWords } from './format.js';
+import { countdownDayLabel, resolveTargets, weekdayOf } from './resolve.js';
 
 /**
  * Team defaults for the floors.
@@ -87,42 +89,8 @@ const ADVICE: Record<GuardrailCode, string> = {
     'The time between weigh-in and competition limits how much of a fast loss can be won back (Reale 2017).',
 };
 
-const DIURETIC_PATTERN = new RegExp(
-  '\\b(' +
-    [
-      'diuretics?',
-      'water pills?',
-      'water tablets?',
-      'furosemide',
-      'frusemide',
-      'lasix',
-      'bumetanide',
-      'torsemide',
-      'torasemide',
-      'hydrochlorothiazide',
-      'hctz',
-      'chlorothiazide',
-      'chlorthalidone',
-      'indapamide',
-      'metolazone',
-      'spironolactone',
-      'eplerenone',
-      'amiloride',
-      'triamterene',
-      'acetazolamide',
-      'mannitol',
-      'dandelion',
-      'uva ursi',
-      'juniper',
-      'horsetail',
-      'nettle',
-      'hibiscus',
-      'buchu',
-    ].join('|') +
-    ')\\b',
-  'i',
-);
 const POTASSIUM_PATTERN = /\b(potassium|kcl|salt substitute)\b|\bK\+/i;
+const isPotassiumItem = (item: string): boolean => POTASSIUM_PATTERN.test(item);
 
 /** `${code}:${scopeKey}` with scopeKey `plan` | `type:<key>` | `date:<YYYY-MM-DD>`. */
 export function guardrailKey(code: GuardrailCode, scope: GuardrailScope): string {
@@ -229,7 +197,7 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
     }
 
     // Potassium in the schedule: NASEM 2019; REFERENCES §7 rule 4.
-    const potassium = matchingItems(e.targets, POTASSIUM_PATTERN);
+    const potassium = matchingItems(e.targets, isPotassiumItem);
     if (potassium.length > 0) {
       hit(
         'potassium',
@@ -239,8 +207,9 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
       );
     }
 
-    // Diuretic-type items: Sturmi 1995; Mayr 2012; Cheung 2014 (REFERENCES §7 rule 3).
-    const diuretics = matchingItems(e.targets, DIURETIC_PATTERN);
+    // Diuretic-type items (the ATC C03 list and herbal water pills, diuretics.ts): Sturmi 1995;
+    // Mayr 2012; Cheung 2014 (REFERENCES §7 rule 3).
+    const diuretics = matchingItems(e.targets, isDiureticItem);
     if (diuretics.length > 0) {
       hit(
         'diuretic',
@@ -296,26 +265,31 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
     }
   }
 
-  // Energy-implied rate of loss over the weekly pattern: Helms 2014 (> 1 %/wk), Garthe 2011 (> 1.4 %/wk).
-  // A day's planned energy is its energy target, else the Atwater energy of its three macros; a day
-  // with neither plans no deficit and counts at the usual energy.
+  // Energy-implied rate of loss over any 7 consecutive planned days from today — the weekly pattern,
+  // dated days and countdown days alike: Helms 2014 (> 1 %/wk), Garthe 2011 (> 1.4 %/wk). The
+  // fastest week is reported. A day's planned energy is its energy target, else the Atwater energy
+  // of its three macros; a day with neither plans no deficit and counts at the usual energy (the
+  // athlete's maintenance as the baseline has it).
   const usualEnergy = baseline.usualEnergyKcal;
   const weight = baseline.weightKg;
-  const planned = patternDays.map(plannedEnergy);
-  if (usualEnergy != null && weight != null && weight > 0 && planned.some((k) => k != null)) {
-    const mean = planned.reduce<number>((a, k) => a + (k ?? usualEnergy), 0) / planned.length;
-    const deficit = usualEnergy - mean;
+  if (usualEnergy != null && weight != null && weight > 0) {
+    const week = fastestPlannedWeek(content, entries, ctx.today, usualEnergy, baseline);
+    const deficit = usualEnergy - week.meanKcal;
     const kgPerWeek = (deficit * 7) / KCAL_PER_KG_LOST;
     const pctPerWeek = (kgPerWeek / weight) * 100;
     if (pctPerWeek > LOSS_RATE_WARNING_PCT_PER_WEEK) {
       const strong = pctPerWeek > LOSS_RATE_STRONG_PCT_PER_WEEK;
+      const span =
+        week.from === null
+          ? 'The weekly pattern averages'
+          : `The 7 planned days from ${fmtDate(week.from)} to ${fmtDate(addDays(week.from, 6))} average`;
       hits.push({
         code: strong ? 'loss_rate_strong' : 'loss_rate',
         severity: strong ? 'strong' : 'warning',
         scope: { kind: 'plan' },
         label: null,
         fact:
-          `The weekly pattern averages ${fmt(mean)} kcal a day, ${fmt(deficit)} kcal below the usual ` +
+          `${span} ${fmt(week.meanKcal)} kcal a day, ${fmt(deficit)} kcal below the usual ` +
           `${fmt(usualEnergy)} kcal: about ${fmtFixed(kgPerWeek, 2)} kg a week, ` +
           `${fmtFixed(pctPerWeek, 1)} % of body weight (${fmtFixed(weight, 1)} kg) a week`,
         field: null,
@@ -396,8 +370,11 @@ function merge(hits: readonly Hit[]): GuardrailWarning[] {
   });
 }
 
-function matchingItems(targets: DayTargets, pattern: RegExp): { item: string; index: number }[] {
-  return targets.supplements.flatMap((s, index) => (pattern.test(s.item) ? [{ item: s.item, index }] : []));
+function matchingItems(
+  targets: DayTargets,
+  matches: (item: string) => boolean,
+): { item: string; index: number }[] {
+  return targets.supplements.flatMap((s, index) => (matches(s.item) ? [{ item: s.item, index }] : []));
 }
 
 function quoted(items: readonly { item: string }[]): string {
@@ -412,6 +389,53 @@ function plannedEnergy(r: ResolvedTargets): number | null {
   if (r.energyKcal != null) return r.energyKcal;
   if (r.proteinG == null || r.carbohydrateG == null || r.fatG == null) return null;
   return atwaterKcal({ proteinG: r.proteinG, carbohydrateG: r.carbohydrateG, fatG: r.fatG });
+}
+
+/**
+ * The 7 consecutive planned days with the lowest mean planned energy: the weekly pattern (`from`
+ * null; any 7 consecutive pattern days are one whole pattern week) or a run of 7 calendar days from
+ * today on that holds at least one dated day (`from` its first day; the pattern fills the days between).
+ * Ties keep the pattern, then the earliest run.
+ */
+function fastestPlannedWeek(
+  content: PlanContent,
+  entries: readonly Entry[],
+  today: string,
+  usualEnergy: number,
+  baseline: PlanBaseline,
+): { from: string | null; meanKcal: number } {
+  const typeByKey = new Map(content.dayTypes.map((t) => [t.key, t]));
+  const patternKcal = new Map(
+    WEEKDAYS.map((d) => {
+      const t = typeByKey.get(content.weekdays[d]);
+      return [d, (t ? plannedEnergy(resolveTargets(t.targets, baseline)) : null) ?? usualEnergy] as const;
+    }),
+  );
+  const datedKcal = new Map(
+    entries.flatMap((e) =>
+      e.scope.kind === 'date' ? [[e.scope.date, plannedEnergy(e.resolved) ?? usualEnergy] as const] : [],
+    ),
+  );
+  const kcalOn = (date: string) => datedKcal.get(date) ?? patternKcal.get(weekdayOf(date))!;
+
+  let best = { from: null as string | null, meanKcal: mean([...patternKcal.values()]) };
+  const dated = [...datedKcal.keys()].sort();
+  if (dated.length === 0) return best;
+  // Every run that holds a dated day starts at most 6 days before one, and not before today.
+  const sixBefore = addDays(dated[0]!, -6);
+  const first = sixBefore > today ? sixBefore : today;
+  const last = dated[dated.length - 1]!;
+  for (let from = first; from <= last; from = addDays(from, 1)) {
+    const days = Array.from({ length: 7 }, (_, i) => addDays(from, i));
+    if (!days.some((d) => datedKcal.has(d))) continue;
+    const meanKcal = mean(days.map(kcalOn));
+    if (meanKcal < best.meanKcal - 1e-9) best = { from, meanKcal };
+  }
+  return best;
+}
+
+function mean(values: readonly number[]): number {
+  return values.reduce((a, v) => a + v, 0) / values.length;
 }
 
 function median(values: readonly number[]): number | null {

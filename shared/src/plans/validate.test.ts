@@ -132,6 +132,69 @@ describe('validatePlanContent: shares (Atwater factors, FAO 2003 FNP 77; Merrill
     expect(validatePlanContent(bad, baseline)['dayTypes.0.targets.fat']).toMatch(/add up to 94\.7 %/);
   });
 
+  // A blank macro (issue 11 item 5): a split needs all three; grams alone may not exceed the energy.
+  it('a split with a blank macro is refused on the blank field: 60 % P + 60 % C + blank fat', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 2400 },
+        protein: { kind: 'pct', pct: 60 },
+        carbohydrate: { kind: 'pct', pct: 60 },
+      }),
+    );
+    const over = 'Protein and carbohydrate shares already add up to 120 %; they must add up to 100 % (±1)';
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.protein': over,
+      'dayTypes.0.targets.carbohydrate': over,
+      'dayTypes.0.targets.fat': 'A split in % needs all three macros; set fat too (%, g or g/kg)',
+    });
+  });
+
+  it('a split with a blank macro is refused even when the shares set add up (30 % P + 70 % C)', () => {
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 2400 },
+        protein: { kind: 'pct', pct: 30 },
+        carbohydrate: { kind: 'pct', pct: 70 },
+      }),
+    );
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.fat': 'A split in % needs all three macros; set fat too (%, g or g/kg)',
+    });
+  });
+
+  it('grams of some macros, others blank: 200 g P + 400 g C = 2,400 kcal is 160 % of 1,500 kcal → refused', () => {
+    // Atwater general factors, FAO 2003 FNP 77: 4·200 + 4·400 = 2,400 kcal.
+    const c = withTraining(
+      day({
+        energy: { kind: 'kcal', kcal: 1500 },
+        protein: { kind: 'g', g: 200 },
+        carbohydrate: { kind: 'g', g: 400 },
+      }),
+    );
+    const message =
+      'Protein and carbohydrate alone supply 2,400 kcal, 160 % of the 1,500 kcal energy target; lower them or raise the energy';
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.protein': message,
+      'dayTypes.0.targets.carbohydrate': message,
+    });
+  });
+
+  it('grams of some macros within the energy pass: 2 g/kg × 80 kg = 160 g P (640 kcal) of 2,400 kcal; 101 % passes, 102 % not', () => {
+    const protein = (perKg: number, kcal: number) =>
+      withTraining(day({ energy: { kind: 'kcal', kcal }, protein: { kind: 'g_per_kg', perKg } }));
+    expect(validatePlanContent(protein(2, 2400), baseline)).toEqual({});
+    // 150 g P + 100 g fat = 600 + 900 = 1,500 kcal against 1,485 (101.0 %) and 1,470 kcal (102.0 %).
+    const pf = (kcal: number) =>
+      withTraining(
+        day({ energy: { kind: 'kcal', kcal }, protein: { kind: 'g', g: 150 }, fat: { kind: 'g', g: 100 } }),
+      );
+    expect(validatePlanContent(pf(1500 / 1.01), baseline)).toEqual({});
+    expect(Object.keys(validatePlanContent(pf(1470), baseline))).toEqual([
+      'dayTypes.0.targets.protein',
+      'dayTypes.0.targets.fat',
+    ]);
+  });
+
   it('dated days are checked on their own paths', () => {
     const c = starterPlanContent();
     c.dates = [
@@ -190,6 +253,24 @@ describe('validateTemplate', () => {
       { offset: -3, label: null, targets: emptyDayTargets() },
     ]);
     expect(validateTemplate(t)).toEqual({ 'days.1.offset': 'E-3 is listed twice' });
+  });
+
+  it('a split with a blank macro is refused in a template too (no baseline needed)', () => {
+    const t = template([
+      {
+        offset: -1,
+        label: null,
+        targets: day({
+          energy: { kind: 'usual_times', factor: 1 },
+          protein: { kind: 'pct', pct: 60 },
+          fat: { kind: 'pct', pct: 40 },
+        }),
+      },
+    ]);
+    expect(validateTemplate(t)).toEqual({
+      'days.0.targets.carbohydrate':
+        'A split in % needs all three macros; set carbohydrate too (%, g or g/kg)',
+    });
   });
 
   it('shares that do not add up (known without a baseline), and a share without energy', () => {

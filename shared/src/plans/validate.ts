@@ -1,7 +1,13 @@
-import type { DayTargets, PlanBaseline, PlanContent, TemplateRequest } from '../schemas/plans.js';
+import type {
+  DayTargets,
+  PlanBaseline,
+  PlanContent,
+  ResolvedTargets,
+  TemplateRequest,
+} from '../schemas/plans.js';
 import { WEEKDAYS, WEEKDAY_LABELS } from '../schemas/plans.js';
-import { atwaterKcal } from '../nutrition.js';
-import { fmt } from './format.js';
+import { ATWATER_KCAL_PER_G, atwaterKcal } from '../nutrition.js';
+import { fmt, listWords } from './format.js';
 import type { MacroName } from './macros.js';
 import { countdownDayLabel, resolveTargets } from './resolve.js';
 
@@ -13,8 +19,9 @@ const SHARE_TOLERANCE_PCT = 1;
 /**
  * Refusals beyond the zod shape, as path → message (empty when fine): weekdays naming a missing day
  * type, duplicate day-type keys or dates, a share (%) without an energy target, shares of a day that
- * do not add up to 100 % within 1 point (message names the fields; path on each macro), and — with a
- * baseline — relative targets that need a baseline figure the athlete lacks.
+ * do not add up to 100 % within 1 point (message names the fields; path on each macro), a split with
+ * a blank macro (path on the blank one), grams of some macros that alone exceed the energy target,
+ * and — with a baseline — relative targets that need a baseline figure the athlete lacks.
  */
 export function validatePlanContent(
   content: PlanContent,
@@ -101,12 +108,53 @@ function dayTargetErrors(
   }
 
   const [p, c, f] = [targets.protein, targets.carbohydrate, targets.fat];
-  if (!targets.energy || !p || !c || !f) return;
+  if (!targets.energy) return;
+  const set = MACROS.filter((m) => targets[m] != null);
+  const blank = MACROS.filter((m) => targets[m] == null);
+  if (set.length === 0) return;
+
+  // A split (any macro as a share of energy) needs all three macros: a blank macro is refused on its
+  // own field (dayTypes.N.targets.fat …) rather than read as 0 %, so "60 % / 60 % / blank" cannot pass.
+  const shares = MACROS.filter((m) => targets[m]?.kind === 'pct');
+  if (shares.length > 0 && blank.length > 0) {
+    for (const macro of blank) {
+      add(
+        `${prefix}.${macro}`,
+        `A split in % needs all three macros; set ${MACRO_WORDS[macro]} too (%, g or g/kg)`,
+      );
+    }
+    const sum = shares.reduce((a, m) => a + pctOf(targets[m]), 0);
+    if (sum > 100 + SHARE_TOLERANCE_PCT + 1e-9) {
+      const message = `${capitalise(listWords(shares.map((m) => MACRO_WORDS[m])))} shares already add up to ${fmt(sum, 1)} %; they must add up to 100 % (±1)`;
+      for (const macro of shares) add(`${prefix}.${macro}`, message);
+    }
+    return;
+  }
+
+  if (blank.length > 0) {
+    // Grams (or g/kg) for some macros, the others blank: those grams alone may not supply more than
+    // the day's energy (Atwater general factors, FAO 2003 FNP 77; same 1-point tolerance as a split).
+    // Refused here rather than warned in guardrails.ts: like a split that does not add up, it is a
+    // plan that cannot be eaten as written (the macros overshoot their own energy target), not a
+    // possible plan with a risk the coach may accept; guardrails.ts only warns on risky but coherent days.
+    const r = resolveTargets(targets, baseline ?? NO_BASELINE);
+    const grams = set.map((m) => gramsOf(r, m));
+    if (r.energyKcal == null || r.energyKcal <= 0 || grams.some((g) => g == null)) return;
+    const kcal = set.reduce((a, m, i) => a + ATWATER_KCAL_PER_G[m] * grams[i]!, 0);
+    const pct = (100 * kcal) / r.energyKcal;
+    if (pct > 100 + SHARE_TOLERANCE_PCT + 1e-9) {
+      const message =
+        `${capitalise(listWords(set.map((m) => MACRO_WORDS[m])))} alone supply ${fmt(kcal)} kcal, ` +
+        `${fmt(pct, 1)} % of the ${fmt(r.energyKcal)} kcal energy target; lower them or raise the energy`;
+      for (const macro of set) add(`${prefix}.${macro}`, message);
+    }
+    return;
+  }
 
   let message: string | null = null;
-  if (p.kind === 'pct' && c.kind === 'pct' && f.kind === 'pct') {
+  if (p!.kind === 'pct' && c!.kind === 'pct' && f!.kind === 'pct') {
     // Known without resolving the energy: the shares themselves.
-    const sum = p.pct + c.pct + f.pct;
+    const sum = p!.pct + c!.pct + f!.pct;
     if (Math.abs(sum - 100) > SHARE_TOLERANCE_PCT + 1e-9) {
       message = `Protein, carbohydrate and fat shares add up to ${fmt(sum, 1)} %; they must add up to 100 % (±1)`;
     }
@@ -130,4 +178,24 @@ function dayTargetErrors(
     }
   }
   if (message) for (const macro of MACROS) add(`${prefix}.${macro}`, message);
+}
+
+const MACRO_WORDS: Record<MacroName, string> = {
+  protein: 'protein',
+  carbohydrate: 'carbohydrate',
+  fat: 'fat',
+};
+
+function pctOf(t: DayTargets[MacroName]): number {
+  return t?.kind === 'pct' ? t.pct : 0;
+}
+
+function gramsOf(r: ResolvedTargets, macro: MacroName): number | null {
+  if (macro === 'protein') return r.proteinG;
+  if (macro === 'carbohydrate') return r.carbohydrateG;
+  return r.fatG;
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
 }

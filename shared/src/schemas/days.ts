@@ -146,7 +146,13 @@ export const foodView = z.object({
   name: z.string(),
   source: z.enum(['team', 'reference']),
   per100g: z.object({
+    /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),
+    /**
+     * The reference table's own listed energy when it differs from `energyKcal` by more than 5 %
+     * (the server decides); null otherwise, and for team foods.
+     */
+    listedEnergyKcal: z.number().nullable(),
     proteinG: z.number(),
     carbohydrateG: z.number(),
     fatG: z.number(),

@@ -25,6 +25,16 @@ export function per100gLine(food: Pick<FoodView, 'per100g'>): string {
   return `${formatNumber(p.energyKcal, 0)}${NBSP}kcal · P ${g(p.proteinG)} · C ${g(p.carbohydrateG)} · F ${g(p.fatG)} per 100${NBSP}g`;
 }
 
+/**
+ * The reference table's own energy figure, when the server sent it (it differs from the Atwater
+ * figure by more than 5 %): "The food table lists 384 kcal per 100 g; counted here from its macros."
+ */
+export function listedEnergyLine(food: Pick<FoodView, 'per100g'>): string | null {
+  const listed = food.per100g.listedEnergyKcal;
+  if (listed === null) return null;
+  return `The food table lists ${formatNumber(listed, 0)}${NBSP}kcal per 100${NBSP}g; counted here from its protein, carbohydrate and fat (Atwater factors).`;
+}
+
 interface FoodPickerProps {
   chosen: FoodView | null;
   onChoose: (food: FoodView | null) => void;
@@ -48,6 +58,9 @@ export function FoodPicker({ chosen, onChoose, errorId, invalid }: FoodPickerPro
         <p className="text-xs font-semibold tracking-wide text-ink-faint uppercase">Food</p>
         <p className="font-semibold text-ink">{chosen.name}</p>
         <p className="text-sm text-ink-muted tabular-nums">{per100gLine(chosen)}</p>
+        {listedEnergyLine(chosen) ? (
+          <p className="mt-1 text-xs text-ink-muted tabular-nums">{listedEnergyLine(chosen)}</p>
+        ) : null}
         <Button variant="ghost" className="mt-1 -ml-3" onClick={() => onChoose(null)}>
           Change food
         </Button>
@@ -108,6 +121,12 @@ export function FoodPicker({ chosen, onChoose, errorId, invalid }: FoodPickerPro
                     {food.source === 'team' ? 'Team food · ' : ''}
                     {per100gLine(food)}
                   </span>
+                  {food.per100g.listedEnergyKcal !== null ? (
+                    <span className="text-xs text-ink-faint tabular-nums">
+                      Food table: {formatNumber(food.per100g.listedEnergyKcal, 0)}
+                      {NBSP}kcal
+                    </span>
+                  ) : null}
                 </button>
               </li>
             ))}

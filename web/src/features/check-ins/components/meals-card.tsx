@@ -127,6 +127,7 @@ function foodFromEntry(entry: DayView['meals'][number]): FoodView | null {
     source: entry.food.id.startsWith('ifct:') ? 'reference' : 'team',
     per100g: {
       energyKcal: entry.energyKcal * f,
+      listedEnergyKcal: null,
       proteinG: entry.proteinG * f,
       carbohydrateG: entry.carbohydrateG * f,
       fatG: entry.fatG * f,

@@ -18,7 +18,15 @@ describe('macroEnergyPreview (Atwater: P 4, C 4, F 9, alcohol 7 kcal/g)', () => 
 
 describe('foodPortionPreview', () => {
   const rice = {
-    per100g: { energyKcal: 356, proteinG: 7.9, carbohydrateG: 78.2, fatG: 0.5, fibreG: 2.8, sodiumMg: null },
+    per100g: {
+      energyKcal: 356,
+      listedEnergyKcal: null,
+      proteinG: 7.9,
+      carbohydrateG: 78.2,
+      fatG: 0.5,
+      fibreG: 2.8,
+      sodiumMg: null,
+    },
   };
 
   it('scales the per-100 g values by the grams eaten', () => {

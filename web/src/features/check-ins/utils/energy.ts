@@ -38,7 +38,8 @@ export interface FoodPortion {
 
 /**
  * Live energy and macros of a quantity of a food from the list: its per-100 g values × grams / 100
- * (the food's own listed energy, as the server stores it). Null until a usable quantity is typed.
+ * (the energy the server gives the food — Atwater from its macros — as it stores it). Null until a
+ * usable quantity is typed.
  */
 export function foodPortionPreview(
   food: Pick<FoodView, 'per100g'>,

@@ -1,6 +1,6 @@
 import { toTypedText } from '@driftmark/shared';
 import {
-  atwaterKcal,
+  ATWATER_KCAL_PER_G,
   PLAN_LIMITS,
   resolveTargets,
   type PlanBaseline,
@@ -76,8 +76,6 @@ const SUFFIX: Record<string, string> = {
 };
 const MACRO_LABEL: Record<Macro, string> = { protein: 'Protein', carbohydrate: 'Carbohydrate', fat: 'Fat' };
 const DOSE_UNITS = ['g', 'mg', 'mcg', 'IU', 'mL', 'capsule', 'tablet', 'scoop'];
-/** Shares must add up to 100 % within 1 point (issue 4; common practice, no source). */
-const SHARE_TOLERANCE = 1;
 
 function safeResolve(
   targets: ReturnType<typeof liveDayTargets>,
@@ -364,7 +362,11 @@ function waterLive(
   return r.waterMl !== null ? `= ${fig.ml(r.waterMl)} (usual ${fig.ml(b.usualWaterMl)})` : null;
 }
 
-/** The macros' share of the energy, and whether they add up to 100 % (± 1). */
+/**
+ * The set macros' share of the energy (Atwater general factors, 4/4/9 kcal per g; FAO 2003 FNP 77),
+ * shown as a figure only: whether it is acceptable is validatePlanContent's / validateTemplate's call,
+ * which arrives as `issue` (the same code the server runs).
+ */
 function ShareTotal({
   values,
   resolved,
@@ -378,28 +380,21 @@ function ShareTotal({
   if (set.length === 0 && !issue) return null;
   let total: number | null = null;
   let detail: string | null = null;
-  if (MACROS.every((m) => values[m].kind === 'pct') && resolved) {
-    const shares = MACROS.map((m) => resolved[`${m}Pct`]);
-    if (shares.every((s): s is number => s !== null)) total = shares.reduce((a, s) => a + s, 0);
-  } else if (
+  const grams = set.map((m) => (resolved ? resolved[`${m}G`] : null));
+  if (
     resolved &&
     resolved.energyKcal !== null &&
     resolved.energyKcal > 0 &&
-    resolved.proteinG !== null &&
-    resolved.carbohydrateG !== null &&
-    resolved.fatG !== null
+    set.length > 0 &&
+    grams.every((g): g is number => g !== null)
   ) {
-    // Atwater general factors, 4/4/9 kcal per g (FAO 2003 FNP 77).
-    const kcal = atwaterKcal({
-      proteinG: resolved.proteinG,
-      carbohydrateG: resolved.carbohydrateG,
-      fatG: resolved.fatG,
-    });
+    const kcal = set.reduce((a, m, i) => a + ATWATER_KCAL_PER_G[m] * grams[i]!, 0);
     total = (100 * kcal) / resolved.energyKcal;
-    detail = `${fig.kcal(kcal)} of ${fig.kcal(resolved.energyKcal)}`;
+    if (!set.every((m) => values[m].kind === 'pct')) {
+      detail = `${fig.kcal(kcal)} of ${fig.kcal(resolved.energyKcal)}`;
+    }
   }
-  const off = total !== null && Math.abs(total - 100) > SHARE_TOLERANCE + 1e-9;
-  const bad = Boolean(issue) || off;
+  const bad = Boolean(issue);
   return (
     <div
       className={cn(
@@ -412,19 +407,15 @@ function ShareTotal({
         <p className="flex flex-wrap items-center gap-x-2">
           {bad ? <ErrorIcon aria-hidden="true" className="text-off-plan" /> : null}
           <span>
-            Protein + carbohydrate + fat = <span className="font-semibold text-ink">{fig.pct(total)}</span> of
-            the energy{detail ? ` (${detail})` : ''}
+            {set.map((m) => MACRO_LABEL[m]).join(' + ')} ={' '}
+            <span className="font-semibold text-ink">{fig.pct(total)}</span> of the energy
+            {detail ? ` (${detail})` : ''}
           </span>
         </p>
       ) : (
-        <p>Shares are checked once energy and all three macros are set.</p>
+        <p>Shares are worked out once the energy and the macros are set.</p>
       )}
-      {bad ? (
-        <p className="mt-0.5 font-medium text-off-plan">
-          {issue ??
-            `The shares must add up to 100 % (± ${SHARE_TOLERANCE}); adjust protein, carbohydrate or fat.`}
-        </p>
-      ) : null}
+      {bad ? <p className="mt-0.5 font-medium text-off-plan">{issue}</p> : null}
     </div>
   );
 }
