@@ -26,3 +26,4 @@ export * from './schemas/review.js';
 export * from './schemas/weekly.js';
 export * from './schemas/notifications.js';
 export * from './schemas/data.js';
+export * from './rules/day-verdicts.js';
