@@ -78,6 +78,19 @@ describe('metricVerdict', () => {
     expect(verdict('steps', 10000, 7500).state).toBe('off_plan');
   });
 
+  it('a plan may set how far short of steps and cardio still counts (absent: the 10 % default)', () => {
+    const steps = (activityPct: number | undefined) =>
+      metricVerdict({
+        metric: 'steps',
+        target: 10000,
+        actual: 8000,
+        tolerances: { ...DEFAULT_TOLERANCES, activityPct },
+        inProgress: false,
+      });
+    expect(steps(20)).toMatchObject({ tolerance: 2000, state: 'on_plan' });
+    expect(steps(undefined)).toMatchObject({ tolerance: 1000, state: 'drifting' });
+  });
+
   it('energy above its range is still drifting or off plan (a range, not a minimum)', () => {
     expect(verdict('energy', 2400, 2600)).toMatchObject({
       kind: 'range',

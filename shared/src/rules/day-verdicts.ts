@@ -1,4 +1,4 @@
-import type { ResolvedTargets, Tolerances } from '../schemas/plans.js';
+import { DEFAULT_TOLERANCES, type ResolvedTargets, type Tolerances } from '../schemas/plans.js';
 import {
   DRIFT_METRICS,
   type CutoffStatus,
@@ -53,8 +53,11 @@ export const CUTOFF_RULE: { kind: 'at_most'; source: string; toleranceMl: 0 } = 
   toleranceMl: 0,
 };
 
-/** Steps and cardio: how far short of the target still counts as on plan (common practice, no source). */
-export const ACTIVITY_TOLERANCE_PCT = 10;
+/**
+ * Steps and cardio: how far short of the target (% of it) still counts as on plan, unless the plan
+ * sets its own (common practice, no source).
+ */
+export const ACTIVITY_TOLERANCE_PCT = DEFAULT_TOLERANCES.activityPct;
 
 const pctOf = (target: number, pct: number): number => (Math.abs(target) * pct) / 100;
 
@@ -75,7 +78,7 @@ export function metricTolerance(metric: DriftMetric, target: number, tol: Tolera
       return pctOf(target, tol.sodiumPct);
     case 'steps':
     case 'cardio':
-      return pctOf(target, ACTIVITY_TOLERANCE_PCT);
+      return pctOf(target, tol.activityPct ?? ACTIVITY_TOLERANCE_PCT);
   }
 }
 
