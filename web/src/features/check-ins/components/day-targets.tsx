@@ -333,7 +333,11 @@ function cutoffBadge(
       if (clock && clockMinutes(clock) <= clockMinutes(c.cutoff)) {
         return <Badge tone="neutral">In {untilText(clockMinutes(c.cutoff) - clockMinutes(clock))}</Badge>;
       }
-      return <Badge tone={DRIFT_STATE_STYLE.in_progress.tone}>{DRIFT_STATE_LABELS.in_progress}</Badge>;
+      return (
+        <Badge tone={DRIFT_STATE_STYLE.in_progress.tone}>
+          {c.allowanceMl > 0 ? 'Within the allowance so far' : 'Nothing after it so far'}
+        </Badge>
+      );
     case 'off_plan':
     case 'drifting':
       return <Badge tone={DRIFT_STATE_STYLE[c.state].tone}>{over}</Badge>;
