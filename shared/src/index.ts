@@ -29,3 +29,4 @@ export * from './schemas/notifications.js';
 export * from './schemas/data.js';
 export * from './typed-numbers.js';
 export * from './calendar.js';
+export * from './rules/day-verdicts.js';

@@ -78,6 +78,7 @@ describe('the day view', () => {
       countdown: null,
       cautions: [],
       drift: [],
+      cutoff: null,
       breach: null,
     });
     expect((await day(YESTERDAY)).isToday).toBe(false);

@@ -427,6 +427,8 @@ describe('the day view judged by the version in force', () => {
       fatG: 7,
       waterPct: 10,
       sodiumPct: 15,
+      // Steps and cardio: 10 % short still on plan (common practice, no source).
+      activityPct: 10,
     });
     expect((await day('2026-12-02')).targets!.versionNumber).toBe(1);
     const third = await day('2026-12-03');

@@ -217,7 +217,7 @@ describe('driftFor and weeklyAdherence invariants', () => {
     cardioMinutes: actual,
   });
 
-  it('states follow |diff| against 1× and 2× the tolerance; nothing logged is never on plan', () => {
+  it('states follow the shortfall on the wrong side (|diff| for a range, target − actual for a minimum) against 1× and 2× the tolerance; nothing logged is never on plan', () => {
     fc.assert(
       fc.property(actuals, (a) => {
         const entries = driftFor(targets, DEFAULT_TOLERANCES, a);
@@ -227,7 +227,8 @@ describe('driftFor and weeklyAdherence invariants', () => {
             expect(e.state).toBe('not_logged');
             continue;
           }
-          const off = Math.abs(e.diff!);
+          // Steps and cardio are minimums (common practice, no source): only falling short counts.
+          const off = e.kind === 'at_least' ? Math.max(0, -e.diff!) : Math.abs(e.diff!);
           // Right at a boundary the module allows for binary rounding (analysis.test.ts checks that).
           if (Math.abs(off - e.tolerance) < 1e-6 || Math.abs(off - 2 * e.tolerance) < 1e-6) continue;
           const expected = off <= e.tolerance ? 'on_plan' : off <= 2 * e.tolerance ? 'drifting' : 'off_plan';

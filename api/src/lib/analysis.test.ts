@@ -326,14 +326,30 @@ describe('driftFor (state per metric against the plan tolerances)', () => {
     });
   });
 
-  it('steps and cardio ±10 % (common practice, no source)', () => {
-    expect(driftOf({ steps: 10000 }, { steps: 9000 })).toMatchObject({ tolerance: 1000, state: 'on_plan' });
-    expect(driftOf({ steps: 10000 }, { steps: 8000 }).state).toBe('drifting');
-    expect(driftOf({ cardioMinutes: 30 }, { cardioMinutes: 36 })).toMatchObject({
-      tolerance: 3,
-      state: 'drifting',
+  it('steps and cardio are minimums: reached or passed is on plan; a shortfall is judged against 10 % (common practice, no source)', () => {
+    expect(driftOf({ steps: 10000 }, { steps: 15998 })).toMatchObject({
+      kind: 'at_least',
+      tolerance: 1000,
+      onPlan: { min: 9000, max: null },
+      state: 'on_plan',
     });
+    expect(driftOf({ steps: 10000 }, { steps: 9000 }).state).toBe('on_plan');
+    expect(driftOf({ steps: 10000 }, { steps: 8000 }).state).toBe('drifting');
+    expect(driftOf({ cardioMinutes: 30 }, { cardioMinutes: 36 }).state).toBe('on_plan');
     expect(driftOf({ cardioMinutes: 30 }, { cardioMinutes: 20 }).state).toBe('off_plan');
+  });
+
+  it('the athlete’s today is in progress whatever was logged: never on or off plan', () => {
+    const today = driftFor(
+      { ...NO_TARGETS, energyKcal: 2210, steps: 10000 },
+      DEFAULT_TOLERANCES,
+      { ...NOTHING_LOGGED, energyKcal: 849 },
+      true,
+    );
+    expect(today.map((e) => [e.metric, e.actual, e.state])).toEqual([
+      ['energy', 849, 'in_progress'],
+      ['steps', null, 'in_progress'],
+    ]);
   });
 
   it('nothing logged is not logged, never on plan, with no diff', () => {
@@ -344,6 +360,8 @@ describe('driftFor (state per metric against the plan tolerances)', () => {
       diff: null,
       relative: null,
       tolerance: 120,
+      kind: 'range',
+      onPlan: { min: 2280, max: 2520 },
       state: 'not_logged',
     });
   });
@@ -355,7 +373,7 @@ describe('driftFor (state per metric against the plan tolerances)', () => {
       { ...NOTHING_LOGGED, energyKcal: 2000, cardioMinutes: 10 },
     );
     expect(entries.map((e) => e.metric)).toEqual(['energy', 'fat', 'cardio']);
-    expect(entries[2]).toMatchObject({ diff: 10, relative: null, tolerance: 0, state: 'off_plan' });
+    expect(entries[2]).toMatchObject({ diff: 10, relative: null, tolerance: 0, state: 'on_plan' });
     expect(driftFor(NO_TARGETS, DEFAULT_TOLERANCES, NOTHING_LOGGED)).toEqual([]);
   });
 });
@@ -436,6 +454,25 @@ describe('weeklyAdherence (Monday weeks; share of logged days on plan)', () => {
     expect(weeks).toEqual([expect.objectContaining({ onPlanDays: 0, adherence: null, loggedShare: 0 })]);
   });
 
+  it('leaves the day in progress out entirely: neither a target day nor a logged one', () => {
+    const inProgress = driftFor(
+      { ...NO_TARGETS, energyKcal: 2210 },
+      DEFAULT_TOLERANCES,
+      {
+        ...NOTHING_LOGGED,
+        energyKcal: 849,
+      },
+      true,
+    );
+    const weeks = weeklyAdherence([
+      { date: day(2), drift: energy(2400, 2400) },
+      { date: day(3), drift: inProgress },
+    ]);
+    expect(weeks).toEqual([
+      expect.objectContaining({ targetDays: 1, loggedDays: 1, onPlanDays: 1, adherence: 1, loggedShare: 1 }),
+    ]);
+  });
+
   it('lists each week’s metrics in DRIFT_METRICS order and leaves out days without targets', () => {
     const both = driftFor(
       { ...NO_TARGETS, waterMl: 3000, energyKcal: 2000 },
@@ -496,6 +533,15 @@ describe('maintenanceEstimate (mean intake − Δtrend × 7700 kcal/kg ÷ days; 
     const cut = trend.map((t, i) => (i >= 16 ? { ...t, trendKg: t.trendKg - 3 } : t));
     const estimate = maintenanceEstimate(marked, cut, day(24))!;
     expect(estimate).toMatchObject({ days: 16, from: day(1), to: day(16) });
+    expect(estimate.kcalPerDay).toBeCloseTo(2770, 9);
+  });
+
+  it('leaves the day in progress out: a partial day’s intake never enters the estimate', () => {
+    // 28 days at 2,000 kcal losing 0.1 kg/day, the 28th in progress with 849 kcal so far.
+    const { days, trend } = steady(28, 2000, 0.1);
+    const withToday = days.map((d, i) => (i === 27 ? { ...d, energyKcal: 849, inProgress: true } : d));
+    const estimate = maintenanceEstimate(withToday, trend, day(28))!;
+    expect(estimate).toMatchObject({ days: 27, from: day(1), to: day(27) });
     expect(estimate.kcalPerDay).toBeCloseTo(2770, 9);
   });
 

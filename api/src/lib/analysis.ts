@@ -8,13 +8,18 @@
  * that morning's weigh-in, so consecutive dates are 24 h apart.
  */
 import {
+  adherenceOf,
+  dayVerdicts,
   DRIFT_METRICS,
+  fluidsAfterCutoff,
+  isCounted,
   KCAL_PER_KG_LOST,
   LOSS_RATE_STRONG_PCT_PER_WEEK,
   LOSS_RATE_WARNING_PCT_PER_WEEK,
   SYMPTOM_LABELS,
 } from '@driftmark/shared';
 import type {
+  DayActuals as SharedDayActuals,
   AdherenceWeek,
   CutoffBreach,
   DriftEntry,
@@ -238,106 +243,25 @@ export function projectTo(
 
 // Drift -----------------------------------------------------------------------------------------
 
-/** What was logged on a day, for drift. Null = nothing logged for that metric. */
-export interface DayActuals {
-  energyKcal: number | null;
-  proteinG: number | null;
-  carbohydrateG: number | null;
-  fatG: number | null;
-  fluidMl: number | null;
-  sodiumMg: number | null;
-  steps: number | null;
-  cardioMinutes: number | null;
-}
-
-/** Steps and cardio have no plan tolerance; ±10 % of the target is common practice, no source. */
-export const ACTIVITY_TOLERANCE_PCT = 10;
-
-const pctOf = (target: number, pct: number): number => (Math.abs(target) * pct) / 100;
-
-/** Where each metric's target, actual and tolerance come from. */
-const METRIC_SOURCES: Record<
-  DriftMetric,
-  {
-    target: (t: ResolvedTargets) => number | null;
-    actual: (a: DayActuals) => number | null;
-    tolerance: (target: number, tol: Tolerances) => number;
-  }
-> = {
-  energy: {
-    target: (t) => t.energyKcal,
-    actual: (a) => a.energyKcal,
-    tolerance: (v, tol) => pctOf(v, tol.energyPct),
-  },
-  protein: { target: (t) => t.proteinG, actual: (a) => a.proteinG, tolerance: (_, tol) => tol.proteinG },
-  carbohydrate: {
-    target: (t) => t.carbohydrateG,
-    actual: (a) => a.carbohydrateG,
-    tolerance: (_, tol) => tol.carbohydrateG,
-  },
-  fat: { target: (t) => t.fatG, actual: (a) => a.fatG, tolerance: (_, tol) => tol.fatG },
-  water: {
-    target: (t) => t.waterMl,
-    actual: (a) => a.fluidMl,
-    tolerance: (v, tol) => pctOf(v, tol.waterPct),
-  },
-  sodium: {
-    target: (t) => t.sodiumMg,
-    actual: (a) => a.sodiumMg,
-    tolerance: (v, tol) => pctOf(v, tol.sodiumPct),
-  },
-  steps: {
-    target: (t) => t.steps,
-    actual: (a) => a.steps,
-    tolerance: (v) => pctOf(v, ACTIVITY_TOLERANCE_PCT),
-  },
-  cardio: {
-    target: (t) => t.cardioMinutes,
-    actual: (a) => a.cardioMinutes,
-    tolerance: (v) => pctOf(v, ACTIVITY_TOLERANCE_PCT),
-  },
-};
-
-/** The state of a logged value: within the tolerance, within twice it, or beyond. */
-export function driftState(diff: number, tolerance: number): Exclude<DriftState, 'not_logged'> {
-  const off = Math.abs(diff);
-  if (atMost(off, tolerance)) return 'on_plan';
-  if (atMost(off, 2 * tolerance)) return 'drifting';
-  return 'off_plan';
-}
+/** What was logged on a day, for drift (shared/src/rules/day-verdicts.ts). */
+export type DayActuals = SharedDayActuals;
 
 /**
- * Drift for each metric with a target: on plan within the tolerance, drifting up to twice it, off
- * plan beyond, not logged without an entry (never on plan). Energy/water/sodium tolerances are %
- * of the target; protein/carbohydrate/fat in g; steps and cardio: common practice ±10 %.
+ * Drift for each metric with a target, by the shared day-verdict rules (shared/src/rules/day-verdicts.ts):
+ * a range for energy, macros, water and sodium, at least for steps and cardio; on plan within the
+ * tolerance, drifting up to twice it, off plan beyond, not logged without an entry (never on plan),
+ * in progress on the athlete's today (never judged).
  */
 export function driftFor(
   targets: ResolvedTargets,
   tolerances: Tolerances,
   actuals: DayActuals,
+  inProgress = false,
 ): DriftEntry[] {
-  return DRIFT_METRICS.flatMap((metric): DriftEntry[] => {
-    const source = METRIC_SOURCES[metric];
-    const target = source.target(targets);
-    if (target === null) return [];
-    const actual = source.actual(actuals);
-    const tolerance = source.tolerance(target, tolerances);
-    if (actual === null) {
-      return [{ metric, target, actual: null, diff: null, relative: null, tolerance, state: 'not_logged' }];
-    }
-    const diff = actual - target;
-    const relative = target === 0 ? null : diff / target;
-    return [{ metric, target, actual, diff, relative, tolerance, state: driftState(diff, tolerance) }];
-  });
+  return dayVerdicts({ targets, tolerances, actuals, inProgress });
 }
 
 // Timing ----------------------------------------------------------------------------------------
-
-/** Seconds since midnight of "HH:MM" or "HH:MM:SS". */
-function clockSeconds(time: string): number {
-  const [h = 0, m = 0, s = 0] = time.split(':').map(Number);
-  return h * 3600 + m * 60 + s;
-}
 
 /** Fluids after the cut-off (strictly later clock time) beyond the allowance; null without a cut-off or a breach. */
 export function cutoffBreachFor(
@@ -345,10 +269,7 @@ export function cutoffBreachFor(
   fluids: readonly { time: string; volumeMl: number }[],
 ): CutoffBreach | null {
   if (!cutoff) return null;
-  const limit = clockSeconds(cutoff.time);
-  const afterCutoffMl = fluids
-    .filter((f) => clockSeconds(f.time) > limit)
-    .reduce((sum, f) => sum + f.volumeMl, 0);
+  const afterCutoffMl = fluidsAfterCutoff(cutoff.time, fluids);
   const excessMl = afterCutoffMl - cutoff.allowanceMl;
   if (excessMl <= 0) return null;
   return { cutoff: cutoff.time, allowanceMl: cutoff.allowanceMl, afterCutoffMl, excessMl };
@@ -362,40 +283,34 @@ export function mondayOf(date: string): string {
   return shiftDate(date, -((weekday + 6) % 7));
 }
 
-/** Per ISO week (Monday start) and metric: logged share and share of logged days on plan. */
+/**
+ * Per ISO week (Monday start) and metric: logged share and share of logged days on plan
+ * (adherenceOf in shared/src/rules/day-verdicts.ts: a day in progress counts nowhere).
+ */
 export function weeklyAdherence(
   days: readonly { date: string; drift: readonly DriftEntry[] }[],
 ): AdherenceWeek[] {
-  const weeks = new Map<string, Map<DriftMetric, AdherenceWeek>>();
+  const weeks = new Map<string, Map<DriftMetric, DriftState[]>>();
   for (const day of sortedByDate(days)) {
     const weekStart = mondayOf(day.date);
-    const week = weeks.get(weekStart) ?? new Map<DriftMetric, AdherenceWeek>();
+    const week = weeks.get(weekStart) ?? new Map<DriftMetric, DriftState[]>();
     weeks.set(weekStart, week);
     for (const { metric, state } of day.drift) {
-      const row = week.get(metric) ?? {
-        weekStart,
-        metric,
-        targetDays: 0,
-        loggedDays: 0,
-        onPlanDays: 0,
-        adherence: null,
-        loggedShare: null,
-      };
-      row.targetDays += 1;
-      if (state !== 'not_logged') row.loggedDays += 1;
-      if (state === 'on_plan') row.onPlanDays += 1;
-      week.set(metric, row);
+      if (!isCounted(state)) continue;
+      week.set(metric, [...(week.get(metric) ?? []), state]);
     }
   }
-  return [...weeks.values()].flatMap((week) =>
+  return [...weeks].flatMap(([weekStart, week]) =>
     DRIFT_METRICS.flatMap((metric) => {
-      const row = week.get(metric);
-      if (!row) return [];
+      const states = week.get(metric);
+      if (!states) return [];
+      const counts = adherenceOf(states);
       return [
         {
-          ...row,
-          adherence: row.loggedDays === 0 ? null : row.onPlanDays / row.loggedDays,
-          loggedShare: row.targetDays === 0 ? null : row.loggedDays / row.targetDays,
+          weekStart,
+          metric,
+          ...counts,
+          loggedShare: counts.targetDays === 0 ? null : counts.loggedDays / counts.targetDays,
         },
       ];
     }),
@@ -409,9 +324,10 @@ export const MAINTENANCE_MAX_DAYS = 28;
 
 export const MAINTENANCE_NOTE =
   'Rule-of-thumb estimate: mean energy intake minus the trend weight change × 7,700 kcal per kg, per day ' +
-  '(common practice, no source). Countdown days are left out.';
+  '(common practice, no source). Countdown days and the day in progress are left out.';
 
-type MaintenanceDay = { date: string; energyKcal: number | null; countdown: boolean };
+/** One day's intake; `inProgress` marks the athlete's today, whose partial intake never counts. */
+type MaintenanceDay = { date: string; energyKcal: number | null; countdown: boolean; inProgress?: boolean };
 
 /**
  * The most recent run of days between countdown days that has enough logged intake. A countdown
@@ -424,7 +340,7 @@ function latestUsableStretch(days: readonly MaintenanceDay[]): MaintenanceDay[] 
     if (day.countdown) stretches.push([]);
     else stretches[stretches.length - 1]!.push(day);
   }
-  const logged = stretches.map((s) => s.filter((d) => d.energyKcal !== null));
+  const logged = stretches.map((s) => s.filter((d) => d.energyKcal !== null && !d.inProgress));
   for (let i = logged.length - 1; i >= 0; i -= 1) {
     if (logged[i]!.length >= MAINTENANCE_MIN_DAYS) return logged[i]!;
   }
@@ -432,8 +348,9 @@ function latestUsableStretch(days: readonly MaintenanceDay[]): MaintenanceDay[] 
 }
 
 /**
- * Mean daily energy intake over the last 14–28 logged days (countdown days excluded) minus the
- * trend's change × 7700 kcal/kg ÷ days (common practice, no source). Null with fewer than 14 logged days.
+ * Mean daily energy intake over the last 14–28 logged days (countdown days and the day in progress
+ * excluded) minus the trend's change × 7700 kcal/kg ÷ days (common practice, no source). Null with
+ * fewer than 14 logged days.
  * The window is the 28 calendar days ending `endDate`; the trend change is taken between the first and
  * last trend values inside the days used and divided by the calendar days between them.
  */

@@ -109,7 +109,7 @@ export interface DayParts {
   /** The plan's part, worked out by the day service. */
   plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
   /** Drift against the targets and the cut-off breach, worked out by the day service. */
-  judged: Pick<DayView, 'drift' | 'breach'>;
+  judged: Pick<DayView, 'drift' | 'cutoff' | 'breach'>;
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -133,6 +133,7 @@ export function presentDay(p: DayParts): DayView {
     countdown: p.plan.countdown,
     cautions: p.plan.cautions,
     drift: p.judged.drift,
+    cutoff: p.judged.cutoff,
     breach: p.judged.breach,
   };
 }

@@ -1,4 +1,5 @@
 import {
+  adherenceOf,
   FLAG_KINDS,
   type CutoffBreach,
   type DriftEntry,
@@ -52,18 +53,12 @@ const PHASE_BY_GOAL: Record<NonNullable<AthleteWithPeople['goal']>, Phase> = {
   gain: 'regaining',
 };
 
-/** Share of logged metric-days on plan; null when nothing was logged against a target. */
-export function adherenceOf(days: readonly { drift: readonly DriftEntry[] }[]): number | null {
-  let logged = 0;
-  let onPlan = 0;
-  for (const day of days) {
-    for (const entry of day.drift) {
-      if (entry.state === 'not_logged') continue;
-      logged += 1;
-      if (entry.state === 'on_plan') onPlan += 1;
-    }
-  }
-  return logged === 0 ? null : onPlan / logged;
+/**
+ * Share of logged metric-days on plan (the shared adherence rule: a day in progress counts nowhere);
+ * null when nothing was logged against a target.
+ */
+export function adherenceShare(days: readonly { drift: readonly DriftEntry[] }[]): number | null {
+  return adherenceOf(days.flatMap((d) => d.drift.map((e) => e.state))).adherence;
 }
 
 /** The figures of one athlete from their loaded history (pure). */
@@ -121,7 +116,7 @@ export function snapshotOf(input: {
       trendKg: latestWeighIn ? (trend.get(latestWeighIn.date) ?? null) : null,
       ratePercentPerWeek: rate?.percentPerWeek ?? null,
       rateBand: band ? { minPct: band.minPct, maxPct: band.maxPct } : null,
-      adherence7: adherenceOf(recent),
+      adherence7: adherenceShare(recent),
       lastCheckInDate: input.lastCheckInDate,
       flags: FLAG_KINDS.filter((k) => kinds.has(k)),
     },

@@ -1,4 +1,4 @@
-import type { TrendDay, TrendFlag, TrendView } from '@driftmark/shared';
+import { isInProgress, type TrendDay, type TrendFlag, type TrendView } from '@driftmark/shared';
 import type { DataSource } from 'typeorm';
 import { validationFailed } from '../errors.js';
 import {
@@ -173,7 +173,12 @@ export class TrendService {
       maintenance: maintenanceEstimate(
         all
           .filter((d) => d.date <= end)
-          .map((d) => ({ date: d.date, energyKcal: d.actuals.energyKcal, countdown: d.countdown !== null })),
+          .map((d) => ({
+            date: d.date,
+            energyKcal: d.actuals.energyKcal,
+            countdown: d.countdown !== null,
+            inProgress: isInProgress(d.date, today),
+          })),
         trend,
         end,
       ),

@@ -97,6 +97,17 @@ describe('describeChanges', () => {
     ]);
   });
 
+  it('the steps and cardio tolerance: a version saved without it reads as the 10 % default', () => {
+    const prev = base();
+    const { activityPct: _dropped, ...older } = prev.tolerances;
+    prev.tolerances = older;
+    const same = base();
+    expect(describeChanges(prev, same)).toEqual(['No changes to the targets']);
+    const next = base();
+    next.tolerances = { ...next.tolerances, activityPct: 20 };
+    expect(describeChanges(prev, next)).toEqual(['Tolerances: steps and cardio −10 → −20 %']);
+  });
+
   it('dated days that were past when the version was saved are not reported as removed', () => {
     const prev = base();
     prev.dates = [

@@ -8,7 +8,7 @@ import type {
   Tolerances,
   WaterTarget,
 } from '../schemas/plans.js';
-import { WEEKDAYS, WEEKDAY_LABELS } from '../schemas/plans.js';
+import { DEFAULT_TOLERANCES, WEEKDAYS, WEEKDAY_LABELS } from '../schemas/plans.js';
 import { fmt, fmtDate } from './format.js';
 import { countdownDayLabel } from './resolve.js';
 
@@ -197,15 +197,21 @@ function supplementChanges(a: readonly ScheduleItem[], b: readonly ScheduleItem[
 }
 
 function toleranceChanges(a: Tolerances, b: Tolerances): string[] {
-  const rows: [keyof Tolerances, string, string][] = [
-    ['energyPct', 'energy', '%'],
-    ['proteinG', 'protein', 'g'],
-    ['carbohydrateG', 'carbohydrate', 'g'],
-    ['fatG', 'fat', 'g'],
-    ['waterPct', 'water', '%'],
-    ['sodiumPct', 'sodium', '%'],
+  // [key, what, unit, sign]: steps and cardio are minimums, so their tolerance only reaches below.
+  const rows: [keyof Tolerances, string, string, string][] = [
+    ['energyPct', 'energy', '%', '±'],
+    ['proteinG', 'protein', 'g', '±'],
+    ['carbohydrateG', 'carbohydrate', 'g', '±'],
+    ['fatG', 'fat', 'g', '±'],
+    ['waterPct', 'water', '%', '±'],
+    ['sodiumPct', 'sodium', '%', '±'],
+    ['activityPct', 'steps and cardio', '%', '−'],
   ];
+  // A version saved before a tolerance existed reads as its default.
+  const at = (t: Tolerances, k: keyof Tolerances) => t[k] ?? DEFAULT_TOLERANCES[k];
   return rows
-    .filter(([k]) => a[k] !== b[k])
-    .map(([k, what, unit]) => `${what} ±${fmt(a[k], 1)} → ±${fmt(b[k], 1)} ${unit}`);
+    .filter(([k]) => at(a, k) !== at(b, k))
+    .map(
+      ([k, what, unit, sign]) => `${what} ${sign}${fmt(at(a, k), 1)} → ${sign}${fmt(at(b, k), 1)} ${unit}`,
+    );
 }

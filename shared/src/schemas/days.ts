@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { CYCLE_PHASES, FLUID_KINDS, SYMPTOMS, WEIGH_IN_TAGS } from './check-ins.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
 import { countdownDay, dayCaution, dayTargetsInForce } from './plans.js';
-import { cutoffBreach, driftEntry } from './trends.js';
+import { cutoffBreach, cutoffStatus, driftEntry } from './trends.js';
 
 /** How a value was typed, kept so it comes back exactly as typed. */
 const entered = <U extends readonly [string, ...string[]]>(units: U) =>
@@ -118,8 +118,10 @@ export const dayView = z.object({
   countdown: countdownDay.nullable(),
   /** Cautions for the athlete: every countdown day and every day a guardrail warning was acknowledged. */
   cautions: z.array(dayCaution),
-  /** Drift per metric against the targets (empty without a plan). */
+  /** Drift per metric against the targets (empty without a plan); `in_progress` on the athlete's today. */
   drift: z.array(driftEntry),
+  /** Fluids after the day's cut-off against its allowance (null without a cut-off). */
+  cutoff: cutoffStatus.nullable(),
   /** Fluids after the cut-off beyond the allowance, if any. */
   breach: cutoffBreach.nullable(),
 });

@@ -144,17 +144,23 @@ export const tolerances = z.object({
   fatG: num(0, 100, 'Fat tolerance', ' g'),
   waterPct: num(0, 50, 'Water tolerance', ' %'),
   sodiumPct: num(0, 50, 'Sodium tolerance', ' %'),
+  /**
+   * Steps and cardio are minimums: how far short of the target (% of it) still counts as on plan.
+   * Absent in versions saved before it existed: the default applies.
+   */
+  activityPct: num(0, 50, 'Steps and cardio tolerance', ' %').optional(),
 });
 export type Tolerances = z.infer<typeof tolerances>;
 
-/** Defaults from the product brief (common practice, no source). */
-export const DEFAULT_TOLERANCES: Tolerances = {
+/** Defaults from the product brief (common practice, no source); steps and cardio 10 % short (the same). */
+export const DEFAULT_TOLERANCES: Required<Tolerances> = {
   energyPct: 5,
   proteinG: 10,
   carbohydrateG: 15,
   fatG: 7,
   waterPct: 10,
   sodiumPct: 15,
+  activityPct: 10,
 };
 
 /** A kind of day in the weekly pattern ("Training day", "Rest day"). */

@@ -6,14 +6,28 @@ import { isoDate, uuid } from './common.js';
  * (api/src/lib/analysis.ts). All weights in kg, fluids in mL, energy in kcal, sodium in mg.
  */
 
-export const DRIFT_STATES = ['on_plan', 'drifting', 'off_plan', 'not_logged'] as const;
+/**
+ * A metric's verdict on a day (rules in shared/src/rules/day-verdicts.ts). `in_progress` is the
+ * athlete's today until their local day ends: figures "so far", never judged, never counted.
+ */
+export const DRIFT_STATES = ['on_plan', 'drifting', 'off_plan', 'not_logged', 'in_progress'] as const;
 export type DriftState = (typeof DRIFT_STATES)[number];
+/** The states of a finished day with a logged value. */
+export type JudgedState = Extract<DriftState, 'on_plan' | 'drifting' | 'off_plan'>;
 export const DRIFT_STATE_LABELS: Record<DriftState, string> = {
   on_plan: 'On plan',
   drifting: 'Drifting',
   off_plan: 'Off plan',
   not_logged: 'Not logged',
+  in_progress: 'So far',
 };
+
+/**
+ * How a target is met: `range` (target ± tolerance), `at_least` (reaching or passing it is on plan),
+ * `at_most` (staying at or under it is on plan).
+ */
+export const TARGET_KINDS = ['range', 'at_least', 'at_most'] as const;
+export type TargetKind = (typeof TARGET_KINDS)[number];
 
 /** Metrics a day can drift on (each only when the day has a target for it). */
 export const DRIFT_METRICS = [
@@ -60,6 +74,10 @@ export const driftEntry = z.object({
   relative: z.number().nullable(),
   /** The tolerance in the metric's own unit (energy ±5 % of 2,400 kcal → 120). */
   tolerance: z.number(),
+  /** How the target is met (a range for energy, macros, water, sodium; at least for steps, cardio). */
+  kind: z.enum(TARGET_KINDS),
+  /** The values that count as on plan (null: no bound on that side). */
+  onPlan: z.object({ min: z.number().nullable(), max: z.number().nullable() }),
   state: z.enum(DRIFT_STATES),
 });
 export type DriftEntry = z.infer<typeof driftEntry>;
@@ -73,6 +91,19 @@ export const cutoffBreach = z.object({
   excessMl: z.number(),
 });
 export type CutoffBreach = z.infer<typeof cutoffBreach>;
+
+/** Fluids after the day's cut-off against its allowance: an at-most target, judged like the others. */
+export const cutoffStatus = z.object({
+  cutoff: z.string(),
+  allowanceMl: z.number(),
+  /** Fluids logged at a clock time later than the cut-off, mL. */
+  afterCutoffMl: z.number(),
+  /** max(0, afterCutoffMl − allowanceMl). */
+  excessMl: z.number(),
+  kind: z.literal('at_most'),
+  state: z.enum(DRIFT_STATES),
+});
+export type CutoffStatus = z.infer<typeof cutoffStatus>;
 
 export const FLAG_KINDS = [
   'acute_drop',

@@ -4,10 +4,17 @@ import type { BadgeTone } from '@/components/ui/badge';
 /**
  * The drift states' visual language, defined once: a colour token and a shape each, so a state never
  * rests on colour alone (charts, tables and badges all read from here). Shapes match the Badge glyphs.
+ * The day in progress ("so far") is drawn open: a hollow dashed bar and a clock glyph, never a verdict.
  */
 export const DRIFT_STATE_STYLE: Record<
   DriftState,
-  { label: string; tone: BadgeTone; color: string; soft: string; shape: 'dot' | 'half' | 'square' | 'ring' }
+  {
+    label: string;
+    tone: BadgeTone;
+    color: string;
+    soft: string;
+    shape: 'dot' | 'half' | 'square' | 'ring' | 'clock';
+  }
 > = {
   on_plan: {
     label: DRIFT_STATE_LABELS.on_plan,
@@ -36,5 +43,12 @@ export const DRIFT_STATE_STYLE: Record<
     color: 'var(--color-not-logged)',
     soft: 'var(--color-not-logged-soft)',
     shape: 'ring',
+  },
+  in_progress: {
+    label: DRIFT_STATE_LABELS.in_progress,
+    tone: 'in-progress',
+    color: 'var(--color-accent)',
+    soft: 'var(--color-accent-soft)',
+    shape: 'clock',
   },
 };

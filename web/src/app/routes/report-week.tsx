@@ -181,9 +181,11 @@ export function ReportWeekRoute() {
                       </td>
                       <td className="py-1">
                         {off.length === 0
-                          ? d.drift.length > 0 && d.drift.every((e) => e.state === 'not_logged')
-                            ? DRIFT_STATE_LABELS.not_logged
-                            : '—'
+                          ? d.drift.some((e) => e.state === 'in_progress')
+                            ? DRIFT_STATE_LABELS.in_progress
+                            : d.drift.length > 0 && d.drift.every((e) => e.state === 'not_logged')
+                              ? DRIFT_STATE_LABELS.not_logged
+                              : '—'
                           : off
                               .map(
                                 (e) =>

@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
 import { cn } from '@/lib/cn';
 
-export type BadgeTone = 'neutral' | 'accent' | 'on-plan' | 'drifting' | 'off-plan' | 'not-logged' | 'caution';
+export type BadgeTone =
+  'neutral' | 'accent' | 'on-plan' | 'drifting' | 'off-plan' | 'not-logged' | 'in-progress' | 'caution';
 
 const tones: Record<BadgeTone, string> = {
   neutral: 'bg-sunken text-ink-muted',
@@ -10,13 +11,14 @@ const tones: Record<BadgeTone, string> = {
   drifting: 'bg-drifting-soft text-drifting',
   'off-plan': 'bg-off-plan-soft text-off-plan',
   'not-logged': 'bg-not-logged-soft text-not-logged',
+  'in-progress': 'bg-surface text-accent-strong ring-1 ring-inset ring-accent/60',
   caution: 'bg-caution-soft text-caution',
 };
 
 /*
  * Each tone also has its own glyph, so the state never rests on colour alone:
  * a filled dot (on plan), a half dot (drifting), a square (off plan), a hollow ring (not logged),
- * a triangle (caution).
+ * a clock (the day in progress, "so far"), a triangle (caution).
  */
 function Glyph({ tone }: { tone: BadgeTone }) {
   const common = { width: 8, height: 8, viewBox: '0 0 8 8', 'aria-hidden': true } as const;
@@ -52,6 +54,13 @@ function Glyph({ tone }: { tone: BadgeTone }) {
             strokeWidth="1.4"
             strokeDasharray="1.6 1.2"
           />
+        </svg>
+      );
+    case 'in-progress':
+      return (
+        <svg {...common}>
+          <circle cx="4" cy="4" r="3.2" fill="none" stroke="currentColor" strokeWidth="1.2" />
+          <path d="M4 2v2.2h1.8" fill="none" stroke="currentColor" strokeWidth="1.1" />
         </svg>
       );
     case 'caution':

@@ -1,4 +1,4 @@
-import type { DriftState, FlagKind, RosterFigures } from '@driftmark/shared';
+import type { FlagKind, JudgedState, RosterFigures } from '@driftmark/shared';
 import { daysBetween, formatNumber } from '../../../lib/format';
 
 /** U+2212, the minus sign typography uses for figures (a hyphen is shorter and sits lower). */
@@ -21,7 +21,7 @@ export function formatSigned(value: number, digits = 1): string {
 export function rateStanding(
   ratePercentPerWeek: number,
   band: NonNullable<RosterFigures['rateBand']>,
-): Exclude<DriftState, 'not_logged'> {
+): JudgedState {
   // Half away from zero, as Intl rounds the figure on screen.
   const rate = (Math.sign(ratePercentPerWeek) * Math.round(Math.abs(ratePercentPerWeek) * 10)) / 10;
   const low = Math.min(band.minPct, band.maxPct);

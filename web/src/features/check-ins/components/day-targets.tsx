@@ -1,8 +1,12 @@
 import {
+  DRIFT_STATE_LABELS,
   VOLUME_UNIT_LABELS,
   volumeFromMl,
   type DayTargetsInForce,
   type DayView,
+  type DriftEntry,
+  type DriftMetric,
+  type DriftState,
   type SupplementEntryRequest,
   type VolumeUnit,
 } from '@driftmark/shared';
@@ -12,21 +16,11 @@ import { Button } from '@/components/ui/button';
 import { TargetIcon } from '@/components/ui/icons';
 import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
+import { DRIFT_STATE_STYLE } from '@/lib/drift-states';
 import { formatNumber, formatVolume, NBSP } from '@/lib/format';
 import { useCreateSupplement } from '../api/create-supplement';
 import { createClientIdKeeper } from '../utils/client-id';
-import {
-  amountProgress,
-  clockMinutes,
-  cutoffProgress,
-  minimumProgress,
-  percentOf,
-  sodiumLogged,
-  supplementSlots,
-  type AmountProgress,
-  type ProgressState,
-  type SupplementSlot,
-} from '../utils/targets';
+import { clockMinutes, sodiumLogged, supplementSlots, type SupplementSlot } from '../utils/targets';
 import { CheckInCard } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 
@@ -52,20 +46,12 @@ function volumeMeasure(unit: VolumeUnit): Measure {
 
 const amount = (m: Measure, n: number) => `${m.figure(n)}${NBSP}${m.unit}`;
 
-const TONES: Record<ProgressState, BadgeTone> = {
-  'on-plan': 'on-plan',
-  'to-go': 'accent',
-  drifting: 'drifting',
-  'off-plan': 'off-plan',
-  'not-logged': 'not-logged',
-};
-
-const FILLS: Record<ProgressState, string> = {
-  'on-plan': 'bg-on-plan',
-  'to-go': 'bg-accent',
+const FILLS: Record<DriftState, string> = {
+  on_plan: 'bg-on-plan',
   drifting: 'bg-drifting',
-  'off-plan': 'bg-off-plan',
-  'not-logged': 'bg-transparent',
+  off_plan: 'bg-off-plan',
+  not_logged: 'bg-transparent',
+  in_progress: 'bg-accent',
 };
 
 /** Where the day's targets come from, in words ("Training day · plan version 3"). */
@@ -76,9 +62,10 @@ function sourceLine(plan: DayTargetsInForce): string {
 }
 
 /**
- * The day's targets from the plan version in force, with progress against each: energy, macros,
- * water with its cut-off, sodium, steps and cardio, the supplements due by clock time and the
- * coach's note. The athlete ticks a scheduled supplement here.
+ * The day's targets from the plan version in force, with the server's verdict on each (day.drift:
+ * energy, macros, water with its cut-off, sodium, steps and cardio), the supplements due by clock
+ * time and the coach's note. The athlete ticks a scheduled supplement here. Nothing is graded here:
+ * the states, tolerances and on-plan bounds are the server's; "to go" is its target − actual.
  */
 export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardProps) {
   const title = day.isToday ? "Today's targets" : 'Targets that day';
@@ -103,29 +90,15 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
   }
 
   const t = plan.targets;
-  const tol = plan.tolerances;
-  const live = day.isToday;
-  const clock = live ? now : null;
-  const anyMeal = day.meals.length > 0;
+  const clock = day.isToday ? now : null;
   const sodium = sodiumLogged(day);
   const basis = t.basis;
+  const entry = (metric: DriftMetric) => day.drift.find((e) => e.metric === metric) ?? null;
 
   const macros = [
-    {
-      key: 'protein',
-      label: 'Protein',
-      target: t.proteinG,
-      actual: day.totals.proteinG,
-      tolerance: tol.proteinG,
-    },
-    {
-      key: 'carbohydrate',
-      label: 'Carbohydrate',
-      target: t.carbohydrateG,
-      actual: day.totals.carbohydrateG,
-      tolerance: tol.carbohydrateG,
-    },
-    { key: 'fat', label: 'Fat', target: t.fatG, actual: day.totals.fatG, tolerance: tol.fatG },
+    { key: 'protein', label: 'Protein', target: t.proteinG },
+    { key: 'carbohydrate', label: 'Carbohydrate', target: t.carbohydrateG },
+    { key: 'fat', label: 'Fat', target: t.fatG },
   ] as const;
 
   const hasAmounts =
@@ -143,15 +116,11 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
         <ul aria-label="Targets and progress" className="divide-y divide-line">
           {t.energyKcal !== null ? (
             <ProgressRow
+              metric="energy"
               label="Energy"
               measure={KCAL}
-              progress={amountProgress({
-                target: t.energyKcal,
-                actual: anyMeal ? day.totals.energyKcal : null,
-                tolerance: percentOf(t.energyKcal, tol.energyPct),
-                inProgress: live,
-              })}
-              live={live}
+              target={t.energyKcal}
+              entry={entry('energy')}
               hint={basis.energy}
             />
           ) : null}
@@ -159,33 +128,25 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
             m.target !== null ? (
               <ProgressRow
                 key={m.key}
+                metric={m.key}
                 label={m.label}
                 measure={GRAMS}
-                progress={amountProgress({
-                  target: m.target,
-                  actual: anyMeal ? m.actual : null,
-                  tolerance: m.tolerance,
-                  inProgress: live,
-                })}
-                live={live}
+                target={m.target}
+                entry={entry(m.key)}
                 hint={basis[m.key]}
               />
             ) : null,
           )}
           {t.waterMl !== null || t.fluidCutoff !== null ? (
-            <WaterRows day={day} unit={units.volume} clock={clock} live={live} basis={basis.water} />
+            <WaterRows day={day} unit={units.volume} clock={clock} basis={basis.water} />
           ) : null}
           {t.sodiumMg !== null ? (
             <ProgressRow
+              metric="sodium"
               label="Sodium"
               measure={MG}
-              progress={amountProgress({
-                target: t.sodiumMg,
-                actual: sodium.mg,
-                tolerance: percentOf(t.sodiumMg, tol.sodiumPct),
-                inProgress: live,
-              })}
-              live={live}
+              target={t.sodiumMg}
+              entry={entry('sodium')}
               hint={
                 sodium.meals === 0
                   ? undefined
@@ -199,29 +160,21 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
           ) : null}
           {t.steps !== null ? (
             <ProgressRow
+              metric="steps"
               label="Steps"
               measure={STEPS}
-              minimum
-              progress={minimumProgress({
-                target: t.steps,
-                actual: day.evening?.steps ?? null,
-                inProgress: live,
-              })}
-              live={live}
+              target={t.steps}
+              entry={entry('steps')}
               hint={day.evening?.steps == null ? 'From the evening check-in.' : undefined}
             />
           ) : null}
           {t.cardioMinutes !== null ? (
             <ProgressRow
+              metric="cardio"
               label="Cardio"
               measure={MINUTES}
-              minimum
-              progress={minimumProgress({
-                target: t.cardioMinutes,
-                actual: day.evening?.cardioMinutes ?? null,
-                inProgress: live,
-              })}
-              live={live}
+              target={t.cardioMinutes}
+              entry={entry('cardio')}
               hint={day.evening?.cardioMinutes == null ? 'From the evening check-in.' : undefined}
             />
           ) : null}
@@ -253,68 +206,84 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
   );
 }
 
-/** What a state says in words, so it never rests on colour. */
-function statusText(p: AmountProgress, measure: Measure, minimum: boolean, live: boolean): string {
-  const gap = amount(measure, Math.abs(p.difference));
-  switch (p.state) {
-    case 'not-logged':
-      return live ? 'Nothing logged yet' : 'Not logged';
-    case 'on-plan':
-      return minimum ? 'Reached' : 'On plan';
-    case 'to-go':
-      return `${gap} to go`;
+/**
+ * The server's state in words, with its figures, so it never rests on colour. A day in progress
+ * shows what is left (target − actual, "to go") or how far past the target it is, never a verdict.
+ */
+function statusText(e: DriftEntry, measure: Measure): string {
+  const diff = e.diff ?? 0;
+  const gap = amount(measure, Math.abs(diff));
+  const minimum = e.kind === 'at_least';
+  switch (e.state) {
+    case 'not_logged':
+      return DRIFT_STATE_LABELS.not_logged;
+    case 'in_progress':
+      if (e.actual === null) return 'Nothing logged yet';
+      if (diff < 0) return `${gap} to go`;
+      if (diff === 0) return 'At the target so far';
+      return minimum ? `Target reached: ${gap} past it` : `${gap} over the target so far`;
+    case 'on_plan':
+      if (minimum) return diff >= 0 ? 'On plan: reached' : `On plan: ${gap} short`;
+      return DRIFT_STATE_LABELS.on_plan;
     case 'drifting':
-      return minimum
-        ? `Drifting: ${gap} short`
-        : `Drifting: ${p.difference > 0 ? 'over' : 'under'} by ${gap}`;
-    case 'off-plan':
-      return minimum
-        ? `Off plan: ${gap} short`
-        : `Off plan: ${p.difference > 0 ? 'over' : 'under'} by ${gap}`;
+    case 'off_plan': {
+      const label = DRIFT_STATE_LABELS[e.state];
+      return minimum ? `${label}: ${gap} short` : `${label}: ${diff > 0 ? 'over' : 'under'} by ${gap}`;
+    }
   }
 }
 
+/** The on-plan values the server sent, in words ("On plan 1,900–2,100 kcal", "On plan from 9,000 steps"). */
+function boundsText(e: DriftEntry, measure: Measure): string | null {
+  const { min, max } = e.onPlan;
+  if (min !== null && max !== null)
+    return max > min ? `On plan ${measure.figure(min)}–${amount(measure, max)}` : null;
+  if (min !== null) return `On plan from ${amount(measure, min)}`;
+  if (max !== null) return `On plan up to ${amount(measure, max)}`;
+  return null;
+}
+
 function ProgressRow({
+  metric,
   label,
-  progress,
   measure,
-  minimum = false,
-  live,
+  target,
+  entry,
   hint,
   children,
 }: {
+  metric: DriftMetric;
   label: string;
-  progress: AmountProgress;
   measure: Measure;
-  /** A target to reach (steps, cardio) rather than one to land on. */
-  minimum?: boolean;
-  live: boolean;
+  target: number;
+  /** The server's verdict; null for a day that has not begun (no verdict yet). */
+  entry: DriftEntry | null;
   /** A quiet line: how a relative target was reached, or what is missing. */
   hint?: string;
   children?: ReactNode;
 }) {
-  const p = progress;
+  const bounds = entry ? boundsText(entry, measure) : null;
   return (
-    <li className="py-3 first:pt-0 last:pb-0">
+    <li className="py-3 first:pt-0 last:pb-0" data-metric={metric} data-state={entry?.state ?? 'none'}>
       <p className="flex items-baseline justify-between gap-3">
         <span className="font-semibold text-ink">{label}</span>
         <span className="text-sm tabular-nums">
           <span className="text-base font-bold text-ink">
-            {p.actual === null ? '—' : amount(measure, p.actual)}
+            {entry?.actual == null ? '—' : amount(measure, entry.actual)}
           </span>
-          <span className="text-ink-muted"> of {amount(measure, p.target)}</span>
+          <span className="text-ink-muted"> of {amount(measure, target)}</span>
         </span>
       </p>
-      <ProgressBar progress={p} minimum={minimum} />
+      <ProgressBar entry={entry} target={target} />
       <div className="mt-1.5 flex flex-wrap items-center justify-between gap-x-3 gap-y-1">
-        <Badge tone={TONES[p.state]}>
-          <span className="tabular-nums">{statusText(p, measure, minimum, live)}</span>
-        </Badge>
-        {!minimum && p.high > p.low ? (
-          <span className="text-xs text-ink-faint tabular-nums">
-            On plan {measure.figure(p.low)}–{amount(measure, p.high)}
-          </span>
-        ) : null}
+        {entry ? (
+          <Badge tone={DRIFT_STATE_STYLE[entry.state].tone}>
+            <span className="tabular-nums">{statusText(entry, measure)}</span>
+          </Badge>
+        ) : (
+          <Badge tone="neutral">Day not begun</Badge>
+        )}
+        {bounds ? <span className="text-xs text-ink-faint tabular-nums">{bounds}</span> : null}
       </div>
       {hint ? <p className="mt-1 text-xs text-ink-faint tabular-nums">{hint}</p> : null}
       {children}
@@ -323,68 +292,88 @@ function ProgressRow({
 }
 
 /**
- * Logged amount as a filled bar over the tolerance band (the tinted stretch with its edges) and a
+ * Logged amount as a filled bar over the on-plan band (the tinted stretch with its edges) and a
  * tick at the target. Decorative: the row says the same in words and figures.
  */
-function ProgressBar({ progress: p, minimum }: { progress: AmountProgress; minimum: boolean }) {
-  const scale = Math.max(p.high, p.actual ?? 0, 1) * 1.1;
+function ProgressBar({ entry, target }: { entry: DriftEntry | null; target: number }) {
+  const actual = entry?.actual ?? null;
+  const min = entry?.onPlan.min ?? null;
+  const max = entry?.onPlan.max ?? null;
+  const scale = Math.max(max ?? target, actual ?? 0, 1) * 1.1;
   const at = (v: number) => `${Math.min(100, Math.max(0, (v / scale) * 100))}%`;
   return (
     <div aria-hidden="true" className="relative mt-2 h-3 rounded-pill bg-sunken">
-      {!minimum && p.high > p.low ? (
+      {min !== null && max !== null && max > min ? (
         <span
           className="absolute inset-y-0 border-x-2 border-on-plan/80 bg-on-plan/25"
-          style={{ left: at(p.low), width: `calc(${at(p.high)} - ${at(p.low)})` }}
+          style={{ left: at(min), width: `calc(${at(max)} - ${at(min)})` }}
         />
       ) : null}
-      {p.actual !== null && p.actual > 0 ? (
+      {entry && actual !== null && actual > 0 ? (
         <span
-          className={cn('absolute inset-y-0.5 left-0 rounded-pill', FILLS[p.state])}
-          style={{ width: at(p.actual) }}
+          className={cn('absolute inset-y-0.5 left-0 rounded-pill', FILLS[entry.state])}
+          style={{ width: at(actual) }}
         />
       ) : null}
-      <span className="absolute -inset-y-1 w-0.5 -translate-x-1/2 bg-ink" style={{ left: at(p.target) }} />
+      <span className="absolute -inset-y-1 w-0.5 -translate-x-1/2 bg-ink" style={{ left: at(target) }} />
     </div>
   );
+}
+
+/** The cut-off's badge from the server's status; before the cut-off time today, how long is left. */
+function cutoffBadge(
+  c: NonNullable<DayView['cutoff']>,
+  clock: string | null,
+  volume: (ml: number) => string,
+) {
+  const over = `Over the allowance by ${volume(c.excessMl)}`;
+  switch (c.state) {
+    case 'in_progress':
+      if (c.excessMl > 0) return <Badge tone="caution">{`${over} so far`}</Badge>;
+      if (clock && clockMinutes(clock) <= clockMinutes(c.cutoff)) {
+        return <Badge tone="neutral">In {untilText(clockMinutes(c.cutoff) - clockMinutes(clock))}</Badge>;
+      }
+      return (
+        <Badge tone={DRIFT_STATE_STYLE.in_progress.tone}>
+          {c.allowanceMl > 0 ? 'Within the allowance so far' : 'Nothing after it so far'}
+        </Badge>
+      );
+    case 'off_plan':
+    case 'drifting':
+      return <Badge tone={DRIFT_STATE_STYLE[c.state].tone}>{over}</Badge>;
+    case 'on_plan':
+      return <Badge tone="on-plan">{c.allowanceMl > 0 ? 'Within the allowance' : 'Nothing after it'}</Badge>;
+    case 'not_logged':
+      return <Badge tone="not-logged">{DRIFT_STATE_LABELS.not_logged}</Badge>;
+  }
 }
 
 function WaterRows({
   day,
   unit,
   clock,
-  live,
   basis,
 }: {
   day: DayView;
   unit: VolumeUnit;
   clock: string | null;
-  live: boolean;
   basis?: string;
 }) {
   const t = day.targets!.targets;
-  const tol = day.targets!.tolerances;
   const volume = (ml: number) => formatVolume(ml, unit);
-  const cutoff = t.fluidCutoff ? cutoffProgress(day.fluids, t.fluidCutoff, clock) : null;
+  const cutoff = day.cutoff;
   const cutoffBlock = cutoff ? (
-    <div className="mt-3 rounded-md bg-paper px-3 py-2.5">
+    <div className="mt-3 rounded-md bg-paper px-3 py-2.5" data-metric="cutoff" data-state={cutoff.state}>
       <p className="text-sm font-semibold text-ink tabular-nums">
-        No fluids after {cutoff.cutoff.time}
-        {cutoff.cutoff.allowanceMl > 0 ? ` beyond ${volume(cutoff.cutoff.allowanceMl)}` : ''}
+        No fluids after {cutoff.cutoff}
+        {cutoff.allowanceMl > 0 ? ` beyond ${volume(cutoff.allowanceMl)}` : ''}
       </p>
       <p className="mt-1 flex flex-wrap items-center justify-between gap-x-3 gap-y-1 text-sm text-ink-muted tabular-nums">
         <span>
-          Logged after {cutoff.cutoff.time}:{' '}
-          <span className="font-semibold text-ink">{volume(cutoff.afterMl)}</span>
+          Logged after {cutoff.cutoff}:{' '}
+          <span className="font-semibold text-ink">{volume(cutoff.afterCutoffMl)}</span>
         </span>
-        {cutoff.state === 'over' ? (
-          <Badge tone="off-plan">Over by {volume(cutoff.afterMl - cutoff.cutoff.allowanceMl)}</Badge>
-        ) : cutoff.state === 'within' ? (
-          <Badge tone="on-plan">
-            {cutoff.cutoff.allowanceMl > 0 ? 'Within the allowance' : 'Nothing after it'}
-          </Badge>
-        ) : clock ? (
-          <Badge tone="neutral">In {untilText(clockMinutes(cutoff.cutoff.time) - clockMinutes(clock))}</Badge>
-        ) : null}
+        {cutoffBadge(cutoff, clock, volume)}
       </p>
     </div>
   ) : null;
@@ -399,15 +388,11 @@ function WaterRows({
   }
   return (
     <ProgressRow
+      metric="water"
       label="Water"
       measure={volumeMeasure(unit)}
-      progress={amountProgress({
-        target: t.waterMl,
-        actual: day.fluids.length > 0 ? day.fluidTotalMl : null,
-        tolerance: percentOf(t.waterMl, tol.waterPct),
-        inProgress: live,
-      })}
-      live={live}
+      target={t.waterMl}
+      entry={day.drift.find((e) => e.metric === 'water') ?? null}
       // The basis is written in mL; it only helps a reader who reads mL.
       hint={unit === 'ml' ? basis : undefined}
     >

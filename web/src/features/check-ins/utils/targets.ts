@@ -1,108 +1,15 @@
-import type { DayView, FluidCutoff, ScheduleItem } from '@driftmark/shared';
+import type { DayView, ScheduleItem } from '@driftmark/shared';
 
 /*
- * Progress of a day against its targets, for the athlete's Today screen and the day pages. The
- * tolerances come from the plan version in force (DEFAULT_TOLERANCES unless the coach changed them);
- * the grading beyond them (drifting up to twice the tolerance, the supplement due window) is a
- * display rule of ours: common practice, no source.
+ * Display helpers for the day's targets card. The day's verdicts (on plan, drifting, off plan, not
+ * logged, so far) are the server's (shared/src/rules/day-verdicts.ts): nothing here grades a day.
+ * The supplement due window is a display rule of ours: common practice, no source.
  */
-
-/**
- * on-plan: within the tolerance. to-go: today and still below the band (the day is not over).
- * drifting: outside the band by at most the tolerance again. off-plan: further out.
- * not-logged: nothing logged for the metric.
- */
-export type ProgressState = 'on-plan' | 'to-go' | 'drifting' | 'off-plan' | 'not-logged';
-
-export interface AmountProgress {
-  target: number;
-  /** Null when nothing is logged for the metric. */
-  actual: number | null;
-  /** The tolerance band, clamped at zero. */
-  low: number;
-  high: number;
-  state: ProgressState;
-  /** actual − target (0 when not logged). */
-  difference: number;
-}
-
-/**
- * A logged amount against a target with a tolerance either side (energy, macros, water, sodium).
- * `inProgress` is true on the athlete's today: being under the band then means "still to go".
- */
-export function amountProgress(input: {
-  target: number;
-  actual: number | null;
-  tolerance: number;
-  inProgress: boolean;
-}): AmountProgress {
-  const tolerance = Math.max(0, input.tolerance);
-  const { target, actual } = input;
-  const low = Math.max(0, target - tolerance);
-  const high = target + tolerance;
-  if (actual === null) return { target, actual, low, high, state: 'not-logged', difference: 0 };
-  const difference = actual - target;
-  const outside = Math.abs(difference) - tolerance;
-  let state: ProgressState;
-  if (outside <= 1e-9) state = 'on-plan';
-  else if (difference < 0 && input.inProgress) state = 'to-go';
-  else state = outside <= tolerance + 1e-9 ? 'drifting' : 'off-plan';
-  return { target, actual, low, high, state, difference };
-}
-
-/** Tolerance given as a share of the target (energy, water, sodium). */
-export function percentOf(target: number, pct: number): number {
-  return (Math.abs(target) * pct) / 100;
-}
-
-/**
- * A target that is a minimum (steps, cardio minutes): reached is on plan; short of it on a finished
- * day is drifting within 10 % and off plan beyond (display rule, common practice, no source).
- */
-export function minimumProgress(input: {
-  target: number;
-  actual: number | null;
-  inProgress: boolean;
-}): AmountProgress {
-  const { target, actual } = input;
-  const base = { target, actual, low: target, high: target };
-  if (actual === null) return { ...base, state: 'not-logged', difference: 0 };
-  const difference = actual - target;
-  if (difference >= 0) return { ...base, state: 'on-plan', difference };
-  if (input.inProgress) return { ...base, state: 'to-go', difference };
-  return { ...base, state: -difference <= target * 0.1 ? 'drifting' : 'off-plan', difference };
-}
 
 /** Minutes since midnight of an "HH:MM" clock time. */
 export function clockMinutes(time: string): number {
   const [h = '0', m = '0'] = time.split(':');
   return Number(h) * 60 + Number(m);
-}
-
-export interface CutoffProgress {
-  cutoff: FluidCutoff;
-  /** mL logged later than the cut-off time. */
-  afterMl: number;
-  /** Whether the cut-off time has passed (always true on a finished day). */
-  started: boolean;
-  /** over: more than the allowance after the cut-off. */
-  state: 'before' | 'within' | 'over';
-}
-
-/**
- * Fluids logged after the cut-off. "No fluids after 18:00" counts drinks later than 18:00; one at
- * 18:00 itself still belongs before it.
- */
-export function cutoffProgress(
-  fluids: readonly Pick<DayView['fluids'][number], 'time' | 'volumeMl'>[],
-  cutoff: FluidCutoff,
-  now: string | null,
-): CutoffProgress {
-  const at = clockMinutes(cutoff.time);
-  const afterMl = fluids.filter((f) => clockMinutes(f.time) > at).reduce((sum, f) => sum + f.volumeMl, 0);
-  const started = now === null || clockMinutes(now) > at;
-  const state = afterMl > cutoff.allowanceMl + 1e-9 ? 'over' : started || afterMl > 0 ? 'within' : 'before';
-  return { cutoff, afterMl, started, state };
 }
 
 /** Minutes before a scheduled time from which a dose counts as due, and after which it is late. */

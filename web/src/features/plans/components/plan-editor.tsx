@@ -77,6 +77,7 @@ const TOLERANCE_FIELDS: Record<keyof Tolerances, { label: string; suffix: string
   fatG: { label: 'Fat', suffix: '± g' },
   waterPct: { label: 'Water', suffix: '± %' },
   sodiumPct: { label: 'Sodium', suffix: '± %' },
+  activityPct: { label: 'Steps and cardio', suffix: '− %' },
 };
 
 interface PlanEditorProps {
@@ -416,7 +417,7 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
             <Card>
               <SectionHeading
                 title="Tolerances"
-                description="How far a logged day may be from a target and still count as on plan."
+                description="How far a logged day may be from a target and still count as on plan. Steps and cardio are minimums: any amount over is on plan, and this much short still is."
               />
               <div className="grid grid-cols-2 gap-3 sm:grid-cols-3">
                 {TOLERANCE_KEYS.map((k) => (
@@ -427,7 +428,7 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
                     suffix={TOLERANCE_FIELDS[k].suffix}
                     inputMode="decimal"
                     inputClassName="tabular-nums"
-                    hint={`Default ${DEFAULT_TOLERANCES[k]} ${TOLERANCE_FIELDS[k].suffix.replace('± ', '')}`}
+                    hint={`Default ${DEFAULT_TOLERANCES[k]} ${TOLERANCE_FIELDS[k].suffix.replace(/^[±−] /, '')}`}
                   />
                 ))}
               </div>

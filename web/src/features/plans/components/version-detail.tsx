@@ -65,7 +65,7 @@ export function VersionDetail({ athleteId, versionId }: { athleteId: string; ver
 export function VersionContent({ version: v }: { version: PlanVersionView }) {
   const { content, baseline } = v;
   const tolerancesChanged = (Object.keys(DEFAULT_TOLERANCES) as Array<keyof typeof DEFAULT_TOLERANCES>).some(
-    (k) => content.tolerances[k] !== DEFAULT_TOLERANCES[k],
+    (k) => (content.tolerances[k] ?? DEFAULT_TOLERANCES[k]) !== DEFAULT_TOLERANCES[k],
   );
   return (
     <div className="space-y-5">
@@ -183,7 +183,8 @@ export function VersionContent({ version: v }: { version: PlanVersionView }) {
         <p className="text-sm text-ink tabular-nums">
           Energy ±{content.tolerances.energyPct} % · Protein ±{content.tolerances.proteinG} g · Carbohydrate ±
           {content.tolerances.carbohydrateG} g · Fat ±{content.tolerances.fatG} g · Water ±
-          {content.tolerances.waterPct} % · Sodium ±{content.tolerances.sodiumPct} %
+          {content.tolerances.waterPct} % · Sodium ±{content.tolerances.sodiumPct} % · Steps and cardio −
+          {content.tolerances.activityPct ?? DEFAULT_TOLERANCES.activityPct} %
         </p>
       </section>
 

@@ -75,7 +75,7 @@ export function planContentFormValues(content: PlanContent): PlanContentFormValu
         targets: dayTargetsFormValues(d.targets),
       })),
     tolerances: Object.fromEntries(
-      TOLERANCE_KEYS.map((k) => [k, toTypedText(content.tolerances[k], 1)]),
+      TOLERANCE_KEYS.map((k) => [k, toTypedText(content.tolerances[k] ?? DEFAULT_TOLERANCES[k], 1)]),
     ) as Record<keyof Tolerances, string>,
     countdown: content.countdown,
   };

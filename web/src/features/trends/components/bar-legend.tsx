@@ -7,19 +7,29 @@ import { ChartGlyph } from './drift-glyph';
 export function BarLegend({ ids, breaches = false }: { ids: ChartPatternIds; breaches?: boolean }) {
   return (
     <>
-      {(['on_plan', 'drifting', 'off_plan'] as const).map((state) => {
+      {(['on_plan', 'drifting', 'off_plan', 'in_progress'] as const).map((state) => {
         const paint = barPaint(state, ids);
         return (
           <LegendItem
             key={state}
             swatch={
               <>
-                <rect x="1" y="3" width="9" height="8" fill={paint.fill} stroke={paint.stroke} />
+                <rect
+                  x="1"
+                  y="3"
+                  width="9"
+                  height="8"
+                  fill={paint.fill}
+                  stroke={paint.stroke}
+                  strokeDasharray={paint.dash ? '2 1.5' : undefined}
+                />
                 <ChartGlyph state={state} cx={14} cy={6} r={3.5} />
               </>
             }
           >
-            {DRIFT_STATE_LABELS[state]}
+            {state === 'in_progress'
+              ? `Today ${DRIFT_STATE_LABELS[state].toLowerCase()}`
+              : DRIFT_STATE_LABELS[state]}
           </LegendItem>
         );
       })}

@@ -60,9 +60,17 @@ export function ChartPatterns({ ids }: { ids: ChartPatternIds }) {
   );
 }
 
-/** A bar's paint for its drift state (no target: a plain neutral bar). */
-export function barPaint(state: DriftState | null, ids: ChartPatternIds): { fill: string; stroke: string } {
+/**
+ * A bar's paint for its drift state (no target: a plain neutral bar). The day in progress is hollow
+ * with a dashed outline: figures so far, not a verdict.
+ */
+export function barPaint(
+  state: DriftState | null,
+  ids: ChartPatternIds,
+): { fill: string; stroke: string; dash?: string } {
   switch (state) {
+    case 'in_progress':
+      return { fill: 'var(--color-surface)', stroke: DRIFT_STATE_STYLE.in_progress.color, dash: '4 3' };
     case 'on_plan':
       return { fill: DRIFT_STATE_STYLE.on_plan.soft, stroke: DRIFT_STATE_STYLE.on_plan.color };
     case 'drifting':

@@ -65,7 +65,11 @@ export function DayTable({ days, units, dayHref, className }: DayTableProps) {
         </thead>
         <tbody className="divide-y divide-line">
           {rows.map((day) => (
-            <tr key={day.date} className={day.countdown ? 'bg-caution-soft/40' : undefined}>
+            <tr
+              key={day.date}
+              data-date={day.date}
+              className={day.countdown ? 'bg-caution-soft/40' : undefined}
+            >
               <th scope="row" className={cn(cell, 'sticky left-0 bg-surface text-left font-semibold')}>
                 <span className="flex items-center gap-2">
                   {dayHref ? (
@@ -93,7 +97,7 @@ export function DayTable({ days, units, dayHref, className }: DayTableProps) {
                   );
                 }
                 return (
-                  <td key={m} className={cell}>
+                  <td key={m} className={cell} data-metric={m} data-state={entry.state}>
                     <span className="flex flex-col items-start gap-1">
                       <DriftStateBadge state={entry.state} />
                       <span className="text-xs text-ink-muted">

@@ -26,7 +26,10 @@ export function DayTooltip({ day, date, units, weight = false, metrics, extra }:
       ? metrics.filter((m) => !day.drift.some((e) => e.metric === m) && untargetedActual(day, m) !== null)
       : [];
   return (
-    <div className="max-w-72 min-w-52 rounded-md border border-line-strong bg-surface px-3 py-2.5 text-sm text-ink shadow-card print:hidden">
+    <div
+      data-day-tooltip={date}
+      className="max-w-72 min-w-52 rounded-md border border-line-strong bg-surface px-3 py-2.5 text-sm text-ink shadow-card print:hidden"
+    >
       <p className="flex flex-wrap items-center justify-between gap-2 font-semibold tabular-nums">
         {formatDate(date)}
         {day?.countdown ? <Badge tone="caution">{day.countdown.dayLabel}</Badge> : null}
@@ -54,7 +57,12 @@ export function DayTooltip({ day, date, units, weight = false, metrics, extra }:
       {drift.length > 0 || untargeted.length > 0 ? (
         <ul className="mt-2 space-y-1 border-t border-line pt-2">
           {drift.map((e) => (
-            <li key={e.metric} className="flex flex-wrap items-center justify-between gap-x-3 gap-y-0.5">
+            <li
+              key={e.metric}
+              data-metric={e.metric}
+              data-state={e.state}
+              className="flex flex-wrap items-center justify-between gap-x-3 gap-y-0.5"
+            >
               <span className="font-medium">{DRIFT_METRIC_LABELS[e.metric]}</span>
               <span className="flex items-center gap-2">
                 <span className="text-ink-muted tabular-nums">

@@ -13,7 +13,7 @@ export function DriftStateBadge({ state, className }: { state: DriftState; class
 
 /**
  * The state's shape drawn inside a chart at (cx, cy): filled dot, half-filled dot, square, dashed
- * ring (the same shapes as the badges), so print and colour-blind readers tell states apart.
+ * ring, clock (the same shapes as the badges), so print and colour-blind readers tell states apart.
  */
 export function ChartGlyph({
   state,
@@ -49,6 +49,18 @@ export function ChartGlyph({
           stroke="var(--color-surface)"
           strokeWidth={1}
         />
+      );
+    case 'clock':
+      return (
+        <g>
+          <circle cx={cx} cy={cy} r={r - 0.5} fill="var(--color-surface)" stroke={color} strokeWidth={1.4} />
+          <path
+            d={`M${cx} ${cy - r * 0.55}V${cy}H${cx + r * 0.45}`}
+            fill="none"
+            stroke={color}
+            strokeWidth={1.2}
+          />
+        </g>
       );
     case 'ring':
       return (

@@ -91,6 +91,7 @@ export function TargetBarPlot({
         fill={paint.fill}
         stroke={paint.stroke}
         strokeWidth={1.2}
+        strokeDasharray={paint.dash}
       />
     );
   };
