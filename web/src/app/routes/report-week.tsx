@@ -97,15 +97,16 @@ export function ReportWeekRoute() {
         </Button>
       </div>
 
-      {athlete.isPending || week.isPending || trend.isPending ? (
+      {/* Errors first: a week that cannot be loaded leaves the trend waiting for its range for good. */}
+      {athlete.isError || week.isError || trend.isError ? (
+        <Alert tone="error" title="The report could not be loaded.">
+          {(athlete.error ?? week.error ?? trend.error)?.message}
+        </Alert>
+      ) : athlete.isPending || week.isPending || trend.isPending ? (
         <div aria-busy="true" aria-label="Loading the report" className="space-y-3">
           <Skeleton className="h-10 max-w-md" />
           <Skeleton className="h-40" />
         </div>
-      ) : athlete.isError || week.isError || trend.isError ? (
-        <Alert tone="error" title="The report could not be loaded.">
-          {(athlete.error ?? week.error ?? trend.error)?.message}
-        </Alert>
       ) : (
         <>
           <header className="mb-5 border-b border-line pb-3">
