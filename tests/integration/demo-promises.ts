@@ -7,9 +7,6 @@ import type { ReviewQueueItem, RosterRow } from '@driftmark/shared';
 import { addDays, localDate } from '../../api/src/seed/calendar.js';
 import { DEMO_ATHLETES, type DemoSituation } from '../../api/src/seed/demo-team.js';
 
-/** Safety flags: what the roster counts as "has a safety flag" and the queue puts first. */
-const SAFETY_FLAGS = ['acute_drop', 'rate_far_beyond', 'symptom'] as const;
-
 export interface DemoView {
   now: Date;
   roster: readonly RosterRow[];
@@ -24,8 +21,8 @@ function byKey(view: DemoView, key: DemoSituation) {
   return { def, row, item, today };
 }
 
-const hasSafety = (row: RosterRow) =>
-  row.figures.flags.some((f) => (SAFETY_FLAGS as readonly string[]).includes(f));
+/** The server's one rule for "has a safety flag" (the roster's count and the queue's safety items). */
+const hasSafety = (row: RosterRow) => row.figures.safetyFlag;
 
 /** Every promise of the README's demo table that does not hold in `view`. */
 export function brokenDemoPromises(view: DemoView): string[] {

@@ -362,6 +362,18 @@ describe('scheduler', () => {
     expect(linkIn(summary?.text ?? '', '/coach')).toBe(`${APP_ORIGIN}/coach`);
   });
 
+  it('sends no weekly check-in due e-mail to an athlete who joined that day (nothing is due before joining)', async () => {
+    const w = await world();
+    // Joined Monday 7 December 2026 at 08:00 UTC; the check-in due that day covers the week before.
+    await t.dataSource.query(`UPDATE athletes SET intake_completed_at = $2 WHERE id = $1`, [
+      w.athlete.athlete.id,
+      new Date('2026-12-07T08:00:00Z'),
+    ]);
+    expect((await runNotifyTick(t.dataSource, new Date('2026-12-07T10:00:00Z'))).weeklyCheckInsDue).toBe(0);
+    // The next Monday it is due as usual.
+    expect((await runNotifyTick(t.dataSource, new Date('2026-12-14T10:00:00Z'))).weeklyCheckInsDue).toBe(1);
+  });
+
   it('loses and doubles nothing when stopped between due times and started again', async () => {
     const coach = await createCoach(t.dataSource);
     const early = await createAthlete(t.dataSource, {

@@ -186,6 +186,21 @@ describe('the review queue', () => {
     expect(items.every((i) => i.lastReviewedAt === null)).toBe(true);
   });
 
+  it('agrees with the roster on who has a safety flag (one rule): a drop and a symptom, not missed weigh-ins', async () => {
+    const roster = await coachAgent.get('/api/roster');
+    expect(roster.status).toBe(200);
+    const rows = roster.body.data as { name: string; figures: { flags: string[]; safetyFlag: boolean } }[];
+    const flagged = rows.filter((r) => r.figures.safetyFlag).map((r) => r.name);
+    const safety = (await queue()).filter((i) => i.priority === 1).map((i) => i.name);
+    expect(flagged.sort()).toEqual(['Gus Drop', 'Sam Symptom']);
+    expect(safety.sort()).toEqual(flagged);
+    // Missed weigh-ins are a flag on the roster but a missed check-in in the queue, not a safety flag.
+    expect(rows.find((r) => r.name === 'Mo Missing')!.figures).toMatchObject({
+      flags: ['missed_weigh_ins'],
+      safetyFlag: false,
+    });
+  });
+
   it('drops a reviewed athlete until something new happens', async () => {
     const res = await reviewed(people.symptom.athlete.id);
     expect(res.status).toBe(200);

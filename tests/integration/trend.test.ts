@@ -175,6 +175,101 @@ describe('trend, rate and projection', () => {
       ['symptom', '2026-11-30'],
     ]);
   });
+
+  it('flags 80 → 79.0 → 78.05 kg: 2.4 % within 48 h though each morning is below 2 % (ACSM 2007)', async () => {
+    // ACSM 2007 position stand (Sawka et al., MSSE 39:377–390; REFERENCES.md §7 rule 2): ≥ 2 % of body
+    // mass within 48 h. 80 → 78.05 kg is −1.95 kg = −2.44 % of 80 kg; the steps are −1.25 % and −1.20 %.
+    await weighIns([
+      ['2026-11-29', 80.0],
+      ['2026-11-30', 79.0],
+      ['2026-12-01', 78.05],
+    ]);
+    const view = await trend('2026-11-29', TODAY);
+    expect(view.flags).toEqual([
+      expect.objectContaining({
+        kind: 'acute_drop',
+        date: TODAY,
+        drop: { fromDate: '2026-11-29', fromKg: 80, toKg: 78.05, percent: expect.closeTo(2.4375, 6) },
+      }),
+    ]);
+    // The review queue reads the flag's own figures.
+    const queue = await coachAgent.get('/api/review-queue');
+    const item = (queue.body.data as { athleteId: string; reasons: { kind: string; text: string }[] }[]).find(
+      (i) => i.athleteId === me.athlete.id,
+    );
+    expect(item?.reasons).toContainEqual({
+      kind: 'safety',
+      text: 'Weight down 2.4 % in 2 days (ACSM 2007 guard)',
+      date: TODAY,
+    });
+  });
+
+  it('gives a zero-spread series an undefined R² and an interval no narrower than the scale allows', async () => {
+    // Seven identical weigh-ins (24–30 Nov), event 100 days after the last: R² is 0/0 (null), and the
+    // 80 % interval uses s ≥ 0.1 kg/√12 (uniform quantisation noise, Widrow & Kollár 2008): with
+    // x̄ = 10, Sxx = 28, x₀ = 113 (14-day window ending today, 1 Dec = x 14), half-width
+    // t(0.9, 5) · 0.028868 · √(1 + 1/7 + 103²/28) with t(0.90, 5) = 1.476 (standard t table, from memory).
+    await weighIns(Array.from({ length: 7 }, (_, i) => [shift('2026-11-24', i), 69.4] as const));
+    await t.dataSource.query(`UPDATE athletes SET event_date = $2 WHERE id = $1`, [
+      me.athlete.id,
+      shift('2026-11-30', 100),
+    ]);
+    const view = await trend('2026-11-24', TODAY);
+    expect(view.rate).toMatchObject({ r2: null, points: 7 });
+    expect(view.rate!.kgPerWeek).toBeCloseTo(0, 9);
+    const p = view.projection!;
+    expect(p.kg).toBeCloseTo(69.4, 6);
+    const half = 1.476 * 0.028868 * Math.sqrt(1 + 1 / 7 + 103 ** 2 / 28);
+    expect(p.highKg - p.kg).toBeCloseTo(half, 2);
+    expect(p.lowKg.toFixed(2)).not.toBe(p.highKg.toFixed(2));
+  });
+});
+
+describe('rate guidance in a countdown', () => {
+  /** A plan from 1 Nov with today (1 Dec) as E-4 of a show week ending 5 Dec. */
+  const countdownPlan = () =>
+    planContent({
+      dates: [{ date: TODAY, label: 'Deplete', countdownOffset: -4, targets: safeTargets() }],
+      countdown: { templateId: null, templateName: 'Show week', eventDate: '2026-12-05', eventType: 'show' },
+    });
+
+  it('withholds the band, says why and raises no rate flag, in the trend and on the roster', async () => {
+    await insertVersion(t.dataSource, {
+      athleteId: me.athlete.id,
+      coachId: coach.id,
+      effectiveFrom: '2026-11-01',
+      content: countdownPlan(),
+    });
+    // −0.2 kg a day from 80 kg: about −1.8 %/week, far beyond 1.4 %/week (Garthe 2011) were it judged.
+    await weighIns(WEIGHTS.map((_, i) => [shift(DAY1, i), Math.round((80 - 0.2 * i) * 10) / 10] as const));
+    const view = await trend(DAY1, TODAY);
+    expect(view.rate!.percentPerWeek).toBeLessThan(-1.4);
+    expect(view.rate).toMatchObject({
+      band: null,
+      paused: true,
+      bandNote: 'Rate guidance paused during the countdown (water and glycogen change on purpose).',
+    });
+    expect(view.flags.filter((f) => f.kind === 'rate_beyond' || f.kind === 'rate_far_beyond')).toEqual([]);
+
+    const roster = await coachAgent.get('/api/roster');
+    const row = (roster.body.data as { athleteId: string; figures: Record<string, unknown> }[]).find(
+      (r) => r.athleteId === me.athlete.id,
+    )!;
+    expect(row.figures).toMatchObject({
+      phase: 'countdown',
+      rateBand: null,
+      rateBandNote: 'Rate guidance paused during the countdown (water and glycogen change on purpose).',
+      flags: [],
+      safetyFlag: false,
+    });
+  });
+
+  it('judges the same loss outside a countdown (Garthe 2011)', async () => {
+    await weighIns(WEIGHTS.map((_, i) => [shift(DAY1, i), Math.round((80 - 0.2 * i) * 10) / 10] as const));
+    const view = await trend(DAY1, TODAY);
+    expect(view.rate).toMatchObject({ paused: false, bandNote: null, band: { minPct: -1, maxPct: -0.5 } });
+    expect(view.flags.map((f) => f.kind)).toEqual(['rate_far_beyond']);
+  });
 });
 
 /** A plan from 1 Nov: the helpers' training/rest week, an 18:00 cut-off on 27 Nov and E-3 on 2 Dec. */
@@ -255,15 +350,28 @@ describe('targets, drift and cut-off breaches', () => {
 
     // Today (1 Dec) is in progress: so far on every metric, whatever is logged, and counted nowhere.
     expect(new Set(byDate.get('2026-12-01')!.drift.map((e) => e.state))).toEqual(new Set(['in_progress']));
-    // The week of 30 Nov: one finished day so far, energy logged and on plan.
+    // The week of 30 Nov: one finished day so far, energy logged and on plan. The range ends on
+    // Thursday 3 Dec, so the week shows as its real span: 30 Nov – 3 Dec, partial.
     expect(view.adherence.find((a) => a.weekStart === '2026-11-30' && a.metric === 'energy')).toEqual({
       weekStart: '2026-11-30',
+      from: '2026-11-30',
+      to: '2026-12-03',
+      days: 4,
+      partial: true,
       metric: 'energy',
       targetDays: 1,
       loggedDays: 1,
       onPlanDays: 1,
       adherence: 1,
       loggedShare: 1,
+    });
+    // And the week before starts with the range on Sunday 29 Nov: one day of it.
+    expect(view.adherence.find((a) => a.weekStart === '2026-11-23' && a.metric === 'energy')).toMatchObject({
+      from: '2026-11-29',
+      to: '2026-11-29',
+      days: 1,
+      partial: true,
+      targetDays: 1,
     });
 
     const res = await coachAgent.get(`${base}/days/2026-11-30`);

@@ -157,14 +157,18 @@ describe('figures of the week', () => {
          VALUES ($1, $2, '07:00', $2::date + time '07:00', $3, $3, 'kg', true)`,
         [id, date, kg],
       );
-    // The week (23–29 Nov) and the one before (16–22 Nov); 15 Nov and 30 Nov are outside both.
+    // The week (23–29 Nov) and the one before (16–22 Nov), 4 weigh-ins each (a 7-day mean needs at
+    // least 4, PRODUCT.md); 15 Nov and 30 Nov are outside both.
     for (const [date, kg] of [
       ['2026-11-15', 90],
+      ['2026-11-16', 80.8],
       ['2026-11-17', 80.6],
       ['2026-11-20', 80.4],
+      ['2026-11-22', 80.2],
       ['2026-11-23', 80],
       ['2026-11-25', 79.8],
-      ['2026-11-29', 79.6],
+      ['2026-11-27', 79.7],
+      ['2026-11-29', 79.5],
       ['2026-11-30', 70],
     ] as const) {
       await weigh(date, kg);
@@ -193,10 +197,10 @@ describe('figures of the week', () => {
     expect(view.figures).toMatchObject({
       weekStart: '2026-11-23',
       weekEnd: '2026-11-29',
-      meanWeightKg: 79.8,
+      meanWeightKg: 79.75,
       previousMeanWeightKg: 80.5,
-      changeKg: -0.7,
-      weighIns: 3,
+      changeKg: -0.75,
+      weighIns: 4,
       stepsMean: 9000,
       sleepHoursMean: 7.5,
       photoIds: [inWeek!.id],
@@ -206,6 +210,9 @@ describe('figures of the week', () => {
     // Adherence comes from the analysis module: the trend's week of 23 Nov (a Monday) is the same week.
     const trend = await coach.get(`/api/athletes/${id}/trend?from=2026-11-23&to=2026-11-29`);
     expect(trend.status).toBe(200);
+    // The 14-day rate of the week (16–29 Nov) is the trend's own 14-day rate for a range ending then.
+    expect(view.figures.rate).toEqual(trend.body.data.rate);
+    expect(view.figures.rate).toMatchObject({ from: '2026-11-16', to: '2026-11-29', points: 8 });
     const week = (
       trend.body.data.adherence as {
         weekStart: string;
@@ -226,6 +233,146 @@ describe('figures of the week', () => {
     // Submitting stores the same figures.
     const stored = await submit(await as(w.athlete.user));
     expect(stored.figures).toEqual(view.figures);
+  });
+});
+
+describe('too few weigh-ins', () => {
+  const weigh = (date: string, kg: number) =>
+    t.dataSource.query(
+      `INSERT INTO weigh_ins (athlete_id, local_date, local_time, logged_at, weight_kg, entered_value,
+                              entered_unit, protocol_confirmed)
+       VALUES ($1, $2, '07:00', $2::date + time '07:00', $3, $3, 'kg', true)`,
+      [w.athlete.athlete.id, date, kg],
+    );
+
+  it('reports no mean and no change from fewer than 4 weigh-ins in a week (PRODUCT.md: the 7-day mean needs 4)', async () => {
+    // 3 in the week (23–29 Nov) and 2 in the week before.
+    for (const [date, kg] of [
+      ['2026-11-17', 80.6],
+      ['2026-11-20', 80.4],
+      ['2026-11-23', 80],
+      ['2026-11-25', 79.8],
+      ['2026-11-29', 79.6],
+    ] as const) {
+      await weigh(date, kg);
+    }
+    const { view } = await current(await as(w.coach));
+    expect(view.figures).toMatchObject({
+      meanWeightKg: null,
+      previousMeanWeightKg: null,
+      changeKg: null,
+      weighIns: 3,
+      // 5 weigh-ins in 14 days: no 14-day rate either (it needs 7).
+      rate: null,
+    });
+
+    // A fourth weigh-in gives the week its mean; the week before still has none, so no change.
+    await weigh('2026-11-28', 79.4);
+    const again = (await current(await as(w.coach))).view.figures;
+    // (80 + 79.8 + 79.4 + 79.6) / 4 = 79.7.
+    expect(again).toMatchObject({
+      meanWeightKg: 79.7,
+      previousMeanWeightKg: null,
+      changeKg: null,
+      weighIns: 4,
+    });
+  });
+});
+
+describe('nothing is due before joining', () => {
+  it('tells a new athlete their first due date instead of a check-in for the week before they joined', async () => {
+    // Joined today (Tuesday 1 Dec) five minutes ago; check-in day Monday, so 30 Nov is the latest one.
+    const joined = new Date(START.getTime() - 5 * 60_000);
+    const fresh = await createAthlete(t.dataSource, {
+      coach: w.coach,
+      user: { name: 'Nia New', timeZone: 'UTC' },
+      athlete: { checkInWeekday: 'mon', intakeCompletedAt: joined },
+    });
+    const me = await as(fresh.user);
+    const { view, abilities } = await current(me, fresh);
+    expect(view).toMatchObject({
+      dueDate: '2026-11-30',
+      status: 'not_due',
+      firstDueDate: '2026-12-07',
+      id: null,
+    });
+    expect(abilities.submit).toBe(false);
+    const refused = await me
+      .post(weeklyPath(fresh))
+      .send({ dueDate: '2026-11-30', answers: [], questionsForCoach: null });
+    expect(refused.status).toBe(400);
+    expect(refused.body.error.fields.dueDate).toMatch(/first check-in is due on 2026-12-07/);
+    expect(await t.dataSource.query('SELECT id FROM weekly_check_ins')).toEqual([]);
+
+    // A check-in due on the day of joining covers the week before it: not due either.
+    await t.dataSource.query(`UPDATE athletes SET check_in_weekday = 'tue' WHERE id = $1`, [
+      fresh.athlete.id,
+    ]);
+    expect((await current(me, fresh)).view).toMatchObject({
+      dueDate: '2026-12-01',
+      status: 'not_due',
+      firstDueDate: '2026-12-08',
+    });
+
+    // The queue does not call it missing the next day, and nothing in it predates joining.
+    now = new Date('2026-12-02T10:00:00Z');
+    const queue = await (await as(w.coach)).get('/api/review-queue');
+    expect(queue.status).toBe(200);
+    const item = (queue.body.data as unknown[])
+      .map((i) => reviewQueueItem.strict().parse(i))
+      .find((i) => i.athleteId === fresh.athlete.id)!;
+    expect(item.reasons.map((r) => r.text)).not.toContainEqual(expect.stringMatching(/^Weekly check-in/));
+    expect(new Date(item.since).getTime()).toBeGreaterThanOrEqual(joined.getTime());
+
+    // A week on, the first one is due as usual.
+    now = new Date('2026-12-08T10:00:00Z');
+    expect((await current(me, fresh)).view).toMatchObject({
+      dueDate: '2026-12-08',
+      status: 'due',
+      firstDueDate: null,
+    });
+  });
+
+  it("dates a new athlete's queue items from when they joined, not the start of their day", async () => {
+    // Joined at 09:55 UTC; "no weigh-in logged yet" arises at the start of the day (00:00) otherwise.
+    const joined = new Date(START.getTime() - 5 * 60_000);
+    const fresh = await createAthlete(t.dataSource, {
+      coach: w.coach,
+      user: { name: 'Nia New', timeZone: 'UTC' },
+      athlete: { intakeCompletedAt: joined },
+    });
+    const queue = await (await as(w.coach)).get('/api/review-queue');
+    const item = (queue.body.data as unknown[])
+      .map((i) => reviewQueueItem.strict().parse(i))
+      .find((i) => i.athleteId === fresh.athlete.id)!;
+    expect(item.reasons.map((r) => r.text)).toContain('No weigh-in logged yet');
+    expect(item.since).toBe(joined.toISOString());
+  });
+});
+
+describe('any week due so far', () => {
+  it('answers the week of a due date with its range and figures: due, missed, stored; a later date is refused', async () => {
+    const coach = await as(w.coach);
+    const week = (dueDate: string, agent = coach) => agent.get(`${weeklyPath()}/week/${dueDate}`);
+    const due = await week('2026-11-30');
+    expect(due.status).toBe(200);
+    expect(weeklyCheckInView.strict().parse(due.body.data)).toMatchObject({
+      status: 'due',
+      figures: { weekStart: '2026-11-23', weekEnd: '2026-11-29' },
+    });
+    expect((await week('2026-11-23')).body.data).toMatchObject({
+      status: 'missed',
+      figures: { weekStart: '2026-11-16', weekEnd: '2026-11-22' },
+    });
+    await submit(await as(w.athlete.user));
+    expect((await week('2026-11-30')).body.data).toMatchObject({ status: 'submitted', firstDueDate: null });
+
+    const later = await week('2026-12-07');
+    expect(later.status).toBe(400);
+    expect(later.body.error.fields).toHaveProperty('dueDate');
+    // Not a date at all: a path that names nothing (404, as every path parameter here).
+    expect((await week('2026-02-30')).status).toBe(404);
+    expect((await week('2026-11-30', await as(w.outsider))).status).toBe(404);
   });
 });
 

@@ -5,7 +5,8 @@
  * - morning reminder: an active athlete whose local hour is at or past their reminder hour and
  *   who has no weigh-in for their local today; once per (user, morning_reminder, local date);
  * - weekly check-in due: on the athlete's check-in weekday at or past the reminder hour, while
- *   nothing is submitted for that due date; once per (user, weekly_check_in_due, due date);
+ *   nothing is submitted for that due date and one is expected (joined before it: checkInExpected);
+ *   once per (user, weekly_check_in_due, due date);
  * - weekly summary: staff with athletes, from Monday SUMMARY_HOUR local time on; once per
  *   (user, weekly_summary, ISO week).
  *
@@ -25,7 +26,7 @@ import type { UserNotificationPrefs } from '../entities/user.entity.js';
 import type { Logger } from '../logger.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
-import { dueDateOn } from '../lib/weekly-dates.js';
+import { checkInExpected, dueDateOn } from '../lib/weekly-dates.js';
 import {
   renderMorningReminderMail,
   renderWeeklyCheckInDueMail,
@@ -76,6 +77,7 @@ interface PersonRow {
 interface AthleteRow extends PersonRow {
   athlete_id: string;
   check_in_weekday: Weekday;
+  intake_completed_at: Date | null;
 }
 
 const asUser = (r: PersonRow) => ({
@@ -106,7 +108,7 @@ async function athleteReminders(
   now: Date,
 ): Promise<Omit<TickResult, 'weeklySummaries'>> {
   const athletes: AthleteRow[] = await dataSource.query(
-    `SELECT a.id AS athlete_id, a.check_in_weekday, u.id AS user_id, u.email, u.name, u.role, u.time_zone,
+    `SELECT a.id AS athlete_id, a.check_in_weekday, a.intake_completed_at, u.id AS user_id, u.email, u.name, u.role, u.time_zone,
             u.notification_prefs
        FROM athletes a JOIN users u ON u.id = a.user_id
       WHERE a.status = 'active' AND u.role = 'athlete'
@@ -142,7 +144,12 @@ async function athleteReminders(
     }
 
     const dueDate = dueDateOn(today, row.check_in_weekday);
-    if (dueDate === today && wants(user, 'weekly_check_in_due')) {
+    // Nothing is due before joining (the same rule as the check-in itself and the review queue).
+    if (
+      dueDate === today &&
+      checkInExpected(dueDate, row.intake_completed_at, row.time_zone) &&
+      wants(user, 'weekly_check_in_due')
+    ) {
       const sent = await dataSource.transaction(async (manager) => {
         const submitted = await exists(
           manager,

@@ -9,7 +9,8 @@ import {
   mondayOf,
   projectTo,
   rate14,
-  rateBand,
+  rateGuidance,
+  RESIDUAL_SD_FLOOR_KG,
   studentTQuantile,
   trendSeries,
   weeklyAdherence,
@@ -121,39 +122,47 @@ describe('mean7 (trailing 7-day mean of the weigh-ins present)', () => {
   });
 });
 
-describe('rateBand (guidance per phase)', () => {
+describe('rateGuidance (guidance per phase)', () => {
   it('dieting: −1 … −0.5 %/week (Helms 2014, JISSN 11:20)', () => {
-    expect(rateBand({ goal: 'lose', countdown: false })).toMatchObject({
-      minPct: -1,
-      maxPct: -0.5,
-      source: expect.stringContaining('JISSN 11:20'),
+    expect(rateGuidance({ goal: 'lose', countdown: false })).toMatchObject({
+      band: { minPct: -1, maxPct: -0.5, source: expect.stringContaining('JISSN 11:20') },
+      note: null,
+      paused: false,
     });
   });
 
   it('maintaining: −0.25 … +0.25 %/week, labelled common practice, no source', () => {
-    expect(rateBand({ goal: 'maintain', countdown: false })).toMatchObject({
-      minPct: -0.25,
-      maxPct: 0.25,
-      source: 'common practice, no source',
+    expect(rateGuidance({ goal: 'maintain', countdown: false })).toMatchObject({
+      band: { minPct: -0.25, maxPct: 0.25, source: 'common practice, no source' },
+      paused: false,
     });
   });
 
-  it('gaining / after a show and no goal: no band (REFERENCES §4: no published numeric limit for regain)', () => {
-    expect(rateBand({ goal: 'gain', countdown: false })).toBeNull();
-    expect(rateBand({ goal: null, countdown: false })).toBeNull();
+  it('gaining / after a show and no goal: no band, saying why (REFERENCES §4: no published numeric limit for regain)', () => {
+    const gain = rateGuidance({ goal: 'gain', countdown: false });
+    expect(gain).toMatchObject({ band: null, paused: false });
+    expect(gain.note).toMatch(/regain/);
+    expect(rateGuidance({ goal: null, countdown: false })).toMatchObject({ band: null, paused: false });
   });
 
-  it('countdown: no band whatever the goal (water manipulation makes a weekly rate meaningless)', () => {
-    expect(rateBand({ goal: 'lose', countdown: true })).toBeNull();
-    expect(rateBand({ goal: 'maintain', countdown: true })).toBeNull();
+  it('countdown: paused whatever the goal, with the reason to show (water manipulation makes a weekly rate meaningless)', () => {
+    for (const goal of ['lose', 'maintain', 'gain', null] as const) {
+      const guidance = rateGuidance({ goal, countdown: true });
+      expect(guidance).toMatchObject({ band: null, paused: true });
+      expect(guidance.note).toBe(
+        'Rate guidance paused during the countdown (water and glycogen change on purpose).',
+      );
+    }
   });
 });
 
 describe('rate14 (least squares over 14 days)', () => {
-  const band = rateBand({ goal: 'lose', countdown: false });
+  const guidance = rateGuidance({ goal: 'lose', countdown: false });
+  const band = guidance.band;
+  const none = rateGuidance({ goal: 'gain', countdown: false });
 
   it('gives the invented dataset’s slope, R² and %/week', () => {
-    const rate = rate14(INVENTED, day(14), band)!;
+    const rate = rate14(INVENTED, day(14), guidance)!;
     // REFERENCES.md §8 (and simple-statistics@7.12.1 linearRegression: m = −0.10879120879120904).
     expect(rate.kgPerWeek / 7).toBeCloseTo(-0.10879121, 8);
     expect(rate.kgPerWeek).toBeCloseTo(-0.761538, 6);
@@ -167,21 +176,46 @@ describe('rate14 (least squares over 14 days)', () => {
 
   it('is null with fewer than 7 weigh-ins in the window (the brief: at least 7)', () => {
     const six = INVENTED.filter((_, i) => i % 2 === 0).slice(0, 6);
-    expect(rate14(six, day(14), band)).toBeNull();
+    expect(rate14(six, day(14), guidance)).toBeNull();
     const seven = INVENTED.filter((_, i) => i % 2 === 0);
-    expect(rate14(seven, day(14), band)?.points).toBe(7);
+    expect(rate14(seven, day(14), guidance)?.points).toBe(7);
   });
 
   it('only uses the 14 calendar days ending on the end date', () => {
     const withOld = [{ date: day(0), kg: 95 }, ...INVENTED];
-    expect(rate14(withOld, day(14), band)!.kgPerWeek).toBeCloseTo(-0.761538, 6);
+    expect(rate14(withOld, day(14), guidance)!.kgPerWeek).toBeCloseTo(-0.761538, 6);
     // Ending on day 15, the window is days 2–15: day 1 drops out, 13 weigh-ins remain.
-    expect(rate14(INVENTED, day(15), band)).toMatchObject({ points: 13, from: day(2), to: day(15) });
+    expect(rate14(INVENTED, day(15), guidance)).toMatchObject({ points: 13, from: day(2), to: day(15) });
   });
 
-  it('gives 0 kg/week and R² 1 for an unchanging weight (the flat line fits exactly)', () => {
-    const flat = Array.from({ length: 8 }, (_, i) => ({ date: day(i + 1), kg: 70 }));
-    expect(rate14(flat, day(8), null)).toMatchObject({ kgPerWeek: 0, percentPerWeek: 0, r2: 1 });
+  it('gives 0 kg/week and R² undefined (null) for an unchanging weight, whatever its rounding noise', () => {
+    // R² = 1 − SSE/SST is 0/0 when every weigh-in is one reading; 69.4 and 70 both sit on binary
+    // fractions that leave SST a tiny non-zero number, which used to read as R² 1 for one and 0 for
+    // the other (simple-statistics' rSquared gives NaN for such a series: undefined too).
+    for (const kg of [70, 69.4, 81.3]) {
+      const flat = Array.from({ length: 8 }, (_, i) => ({ date: day(i + 1), kg }));
+      const rate = rate14(flat, day(8), none)!;
+      expect(rate.kgPerWeek).toBeCloseTo(0, 12);
+      expect(rate.r2, String(kg)).toBeNull();
+    }
+  });
+
+  it('gives R² 1 for perfectly straight weigh-ins a scale step apart (SST well above rounding noise)', () => {
+    // 80.0, 79.9, … 79.4: slope −0.1 kg/day exactly, so SSE = 0 and R² = 1 (any textbook definition).
+    const straight = Array.from({ length: 7 }, (_, i) => ({ date: day(i + 8), kg: 80 - i / 10 }));
+    const rate = rate14(straight, day(14), guidance)!;
+    expect(rate.kgPerWeek).toBeCloseTo(-0.7, 10);
+    expect(rate.r2).toBeCloseTo(1, 10);
+  });
+
+  it('carries the band, the reason when there is none, and whether guidance is paused', () => {
+    expect(rate14(INVENTED, day(14), guidance)).toMatchObject({ band, bandNote: null, paused: false });
+    const paused = rateGuidance({ goal: 'lose', countdown: true });
+    expect(rate14(INVENTED, day(14), paused)).toMatchObject({
+      band: null,
+      bandNote: paused.note,
+      paused: true,
+    });
   });
 });
 
@@ -236,6 +270,31 @@ describe('projectTo (the 14-day line to the event, 80 % prediction interval)', (
     const near = projectTo(INVENTED, day(14), day(16))!;
     const far = projectTo(INVENTED, day(14), day(60))!;
     expect(far.highKg - far.lowKg).toBeGreaterThan(near.highKg - near.lowKg);
+  });
+
+  it('never gives an interval narrower than the scale allows: s is floored at 0.1 kg/√12', () => {
+    // A reading rounded to a 0.1 kg step carries an error uniform over ±0.05 kg, SD = 0.1/√12
+    // = 0.028868 kg (uniform quantisation noise; Widrow & Kollár 2008, Quantization Noise).
+    expect(RESIDUAL_SD_FLOOR_KG).toBeCloseTo(0.028868, 6);
+    // 7 perfectly flat weigh-ins on days 8–14 (x̄ = 11, Sxx = 28), event 100 days after day 14
+    // (x₀ = 114): half-width = t(0.9, 5) · 0.028868 · √(1 + 1/7 + 103²/28); t(0.90, 5) = 1.476 from
+    // a standard t table (from memory) → 0.8306 kg, not 69.40–69.40.
+    const flat = Array.from({ length: 7 }, (_, i) => ({ date: day(i + 8), kg: 69.4 }));
+    const p = projectTo(flat, day(14), day(114))!;
+    expect(p.kg).toBeCloseTo(69.4, 9);
+    const expected = 1.476 * 0.028868 * Math.sqrt(1 + 1 / 7 + 103 ** 2 / 28);
+    expect(p.highKg - p.kg).toBeCloseTo(expected, 2);
+    expect(p.kg - p.lowKg).toBeCloseTo(p.highKg - p.kg, 10);
+    expect(p.lowKg.toFixed(2)).not.toBe(p.highKg.toFixed(2));
+    // Perfectly straight: the same floor.
+    const straight = Array.from({ length: 7 }, (_, i) => ({ date: day(i + 8), kg: 80 - i / 10 }));
+    const q = projectTo(straight, day(14), day(114))!;
+    expect(q.highKg - q.kg).toBeCloseTo(expected, 2);
+  });
+
+  it('leaves an interval from real scatter alone (the floor is below the invented dataset’s s = 0.237)', () => {
+    const p = projectTo(INVENTED, day(14), day(21))!;
+    expect(p.highKg - p.kg).toBeCloseTo(0.44064, 3);
   });
 
   it('is null without an event ahead or with fewer than 7 points', () => {
@@ -567,6 +626,8 @@ describe('flagsFor', () => {
     });
 
   it('flags a drop of 2 % or more to the next weigh-in within 48 h (ACSM 2007, Sawka et al., MSSE 39:377)', () => {
+    // ACSM 2007 position stand (REFERENCES.md §5, §7 rule 2): a water deficit > 2 % of body mass;
+    // 2 % of 80 kg = 1.60 kg (REFERENCES.md §5 check for 80 kg).
     const flags = flagsFor({ ...base, points: everyDay({ 10: 78.4 }) });
     expect(flags).toEqual([
       expect.objectContaining({
@@ -574,6 +635,7 @@ describe('flagsFor', () => {
         date: day(10),
         severity: 'warning',
         source: expect.stringContaining('MSSE 39:377'),
+        drop: { fromDate: day(9), fromKg: 80, toKg: 78.4, percent: expect.closeTo(2, 9) },
       }),
     ]);
   });
@@ -588,9 +650,46 @@ describe('flagsFor', () => {
     expect(slow.map((f) => f.kind)).toEqual(['missed_weigh_ins']);
   });
 
-  it('flags a 14-day rate beyond −1 %/week as a warning (Helms 2014) and beyond −1.4 %/week as strong (Garthe 2011), one of the two', () => {
+  it('flags a drop of 2 % within 48 h whatever lies between: 80 → 79.0 → 78.05 kg (ACSM 2007)', () => {
+    // ACSM 2007 (Sawka et al., MSSE 39:377–390): > 2 % of body mass within 48 h; 80 → 78.05 kg is
+    // −1.95 kg = −2.44 % of 80 kg over two mornings, though each step is below 2 % (−1.25 %, −1.20 %).
+    const flags = flagsFor({ ...base, points: everyDay({ 10: 79.0, 11: 78.05 }) });
+    expect(flags).toEqual([
+      expect.objectContaining({
+        kind: 'acute_drop',
+        date: day(11),
+        drop: { fromDate: day(9), fromKg: 80, toKg: 78.05, percent: expect.closeTo(2.4375, 9) },
+      }),
+    ]);
+    expect(flags[0]!.message).toContain('in 2 days');
+    // The same figures with the middle weigh-in missing give the same flag.
+    const gap = flagsFor({ ...base, points: everyDay({ 10: null, 11: 78.05 }) });
+    expect(gap.map((f) => [f.kind, f.date, f.drop?.fromDate])).toEqual([['acute_drop', day(11), day(9)]]);
+  });
+
+  it('measures from the highest weigh-in of the 48 h before, not the nearest', () => {
+    // 80.0 (day 9), 81.0 (day 10), 79.3 (day 11): −2.1 % from day 10's 81.0, −0.9 % from day 9.
+    const flags = flagsFor({ ...base, points: everyDay({ 9: 80, 10: 81, 11: 79.3 }) });
+    expect(flags.map((f) => f.drop)).toEqual([
+      { fromDate: day(10), fromKg: 81, toKg: 79.3, percent: expect.closeTo((1.7 / 81) * 100, 9) },
+    ]);
+  });
+
+  it('raises one drop once: the next weigh-in at the same low is not a second flag, a further fall is', () => {
+    // 80 (day 9) → 78.4 (day 10, −2 %) → 78.4 (day 11: still −2 % from day 9, same episode).
+    const same = flagsFor({ ...base, points: everyDay({ 10: 78.4, 11: 78.4, 12: 80, 13: 80 }) });
+    expect(same.map((f) => f.date)).toEqual([day(10)]);
+    // … → 78.0 on day 11: −2.5 % from day 9, worse than day 10's: flagged again.
+    const worse = flagsFor({ ...base, points: everyDay({ 10: 78.4, 11: 78.0, 12: 80, 13: 80 }) });
+    expect(worse.map((f) => [f.date, f.drop?.fromDate])).toEqual([
+      [day(10), day(9)],
+      [day(11), day(9)],
+    ]);
+  });
+
+  it('flags a 14-day rate beyond −1 %/week as a warning (Helms 2014) and beyond −1.4 %/week as strong (Garthe 2011), one of the two, none in a countdown', () => {
     const rate = (percentPerWeek: number) => ({
-      ...rate14(INVENTED, day(14), null)!,
+      ...rate14(INVENTED, day(14), rateGuidance({ goal: 'lose', countdown: false }))!,
       percentPerWeek,
     });
     const kinds = (pct: number) =>
@@ -601,6 +700,10 @@ describe('flagsFor', () => {
     expect(kinds(-1.4)).toEqual([['rate_beyond', 'warning', day(14)]]);
     expect(kinds(-1.5)).toEqual([['rate_far_beyond', 'strong', day(14)]]);
     expect(kinds(0.8)).toEqual([]);
+    // Inside a countdown the guidance is paused: no rate flag at any speed (the band is withheld too).
+    const paused = (pct: number) => ({ ...rate(pct), band: null, paused: true });
+    expect(flagsFor({ ...base, points: [], rate: paused(-1.2) })).toEqual([]);
+    expect(flagsFor({ ...base, points: [], rate: paused(-2.5) })).toEqual([]);
     const strong = flagsFor({ ...base, points: [], rate: rate(-1.5) })[0]!;
     expect(strong.source).toContain('IJSNEM 21:97');
     expect(flagsFor({ ...base, points: [], rate: rate(-1.2) })[0]!.source).toContain('JISSN 11:20');

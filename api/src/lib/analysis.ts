@@ -89,27 +89,54 @@ const GARTHE_2011 = 'Garthe et al. 2011, IJSNEM 21:97–104';
 const ACSM_2007 = 'Sawka et al. 2007, ACSM position stand "Exercise and fluid replacement", MSSE 39:377–390';
 const NO_SOURCE = 'common practice, no source';
 
+/** Why the rate band is withheld inside a countdown (shown where the band would be). */
+export const RATE_PAUSED_NOTE =
+  'Rate guidance paused during the countdown (water and glycogen change on purpose).';
+/** Why there is no band while regaining (REFERENCES §4) or before the athlete has a goal. */
+export const RATE_NO_BAND_NOTES = {
+  gain: 'No guidance band for a regain: no published limit to hold it to.',
+  none: 'No guidance band until the athlete has a goal.',
+} as const;
+
+/** The rate guidance for a phase: the band, or why there is none; `paused` inside a countdown. */
+export interface RateGuidance {
+  band: RateView['band'];
+  /** Why `band` is null, in words; null with a band. */
+  note: string | null;
+  /** Inside a countdown: no band and no rate flags. */
+  paused: boolean;
+}
+
 /**
- * Guidance band for a phase, %/week (negative = loss).
+ * Guidance for a phase, %/week (negative = loss).
  * - Dieting (goal lose, outside a countdown): −1 … −0.5 (Helms 2014).
  * - Maintaining: −0.25 … +0.25, common practice, no source.
  * - Gaining, which is also the time after a show: none; REFERENCES §4 found no published numeric
  *   limit for post-show regain, and we do not invent one.
- * - Countdown: none; water and carbohydrate manipulation in the last days moves the scale by kilograms
- *   that are not tissue, so a weekly rate says nothing then.
+ * - Countdown: paused; water and carbohydrate manipulation in the last days moves the scale by
+ *   kilograms that are not tissue, so a weekly rate says nothing then, and no rate flag is raised.
  */
-export function rateBand(phase: {
+export function rateGuidance(phase: {
   goal: (typeof GOALS)[number] | null;
   countdown: boolean;
-}): RateView['band'] {
-  if (phase.countdown) return null;
+}): RateGuidance {
+  if (phase.countdown) return { band: null, note: RATE_PAUSED_NOTE, paused: true };
   if (phase.goal === 'lose') {
-    return { minPct: -1, maxPct: -0.5, label: 'Lose 0.5–1 % of body weight a week', source: HELMS_2014 };
+    return {
+      band: { minPct: -1, maxPct: -0.5, label: 'Lose 0.5–1 % of body weight a week', source: HELMS_2014 },
+      note: null,
+      paused: false,
+    };
   }
   if (phase.goal === 'maintain') {
-    return { minPct: -0.25, maxPct: 0.25, label: 'Hold within ±0.25 % a week', source: NO_SOURCE };
+    return {
+      band: { minPct: -0.25, maxPct: 0.25, label: 'Hold within ±0.25 % a week', source: NO_SOURCE },
+      note: null,
+      paused: false,
+    };
   }
-  return null;
+  const note = phase.goal === 'gain' ? RATE_NO_BAND_NOTES.gain : RATE_NO_BAND_NOTES.none;
+  return { band: null, note, paused: false };
 }
 
 /** An ordinary least-squares line of kg on day number over one window, with what the interval needs. */
@@ -121,15 +148,37 @@ interface LineFit {
   meanX: number;
   meanY: number;
   sxx: number;
-  r2: number;
+  r2: number | null;
   /** Residual sum of squares. */
   sse: number;
 }
 
 /**
+ * The scale's reading step, kg: bathroom scales read to 0.1 kg or 0.2 lb (0.091 kg); the coarser
+ * of the two is taken for everyone (common practice, no source; the steps from memory).
+ */
+export const SCALE_STEP_KG = 0.1;
+
+/**
+ * The smallest residual standard deviation the interval uses: a reading rounded to a step q carries
+ * an error uniform over ±q/2, whose standard deviation is q/√12 (the standard result for uniform
+ * quantisation; Widrow & Kollár 2008, Quantization Noise, Cambridge University Press; the citation
+ * from memory). Below it, a "perfect" fit only
+ * says the scale could not see the noise, not that there is none. We floor at the scale's resolution
+ * rather than at the day-to-day variation of morning body mass (Cheuvront et al. 2004, IJSNEM 14:532,
+ * CV ≈ 0.66 %): that study measured active men under exercise-heat stress, and the athlete's own 14
+ * days already estimate their own variation; the scale's step is what no series can beat.
+ */
+export const RESIDUAL_SD_FLOOR_KG = SCALE_STEP_KG / Math.sqrt(12);
+
+/**
  * The least-squares fit over the 14 calendar days ending `endDate`, x = day number (1 … 14, as in
  * REFERENCES §8). Sums are taken about the means, which keeps them accurate at 80 kg. Null with
  * fewer than 7 weigh-ins, or when they share one date (no spread in x).
+ *
+ * R² is null (undefined) when the weigh-ins are all one reading at the scale's resolution (they
+ * spread by less than half a step): the total sum of squares is then 0 up to rounding noise, and
+ * 1 − SSE/SST would be 0/0 read as 1 or 0 by chance.
  */
 function fitWindow(points: readonly WeighInPoint[], endDate: string): LineFit | null {
   const from = shiftDate(endDate, -(RATE_WINDOW_DAYS - 1));
@@ -152,20 +201,21 @@ function fitWindow(points: readonly WeighInPoint[], endDate: string): LineFit | 
   if (sxx === 0) return null;
   const slope = sxy / sxx;
   const sse = xs.reduce((s, x, i) => s + (ys[i]! - (meanY + slope * (x - meanX))) ** 2, 0);
-  // With every weigh-in equal the flat line fits them exactly; call that R² = 1 rather than 0/0.
-  const r2 = syy === 0 ? 1 : 1 - sse / syy;
+  const oneReading = Math.max(...ys) - Math.min(...ys) < SCALE_STEP_KG / 2;
+  const r2 = oneReading ? null : 1 - sse / syy;
   return { from, to: endDate, n: used.length, slope, meanX, meanY, sxx, r2, sse };
 }
 
 /**
  * Least-squares slope of weight on day over the 14 calendar days ending `endDate` (x = day number),
- * × 7 = kg/week; % of the window's mean weight. Null with fewer than 7 weigh-ins in the window.
+ * × 7 = kg/week; % of the window's mean weight, with the phase's guidance. Null with fewer than 7
+ * weigh-ins in the window.
  * The regression, not the smoothed trend, gives the rate: the trend lags (REFERENCES §8).
  */
 export function rate14(
   points: readonly WeighInPoint[],
   endDate: string,
-  band: RateView['band'],
+  guidance: RateGuidance,
 ): RateView | null {
   const fit = fitWindow(points, endDate);
   if (!fit) return null;
@@ -177,7 +227,9 @@ export function rate14(
     points: fit.n,
     from: fit.from,
     to: fit.to,
-    band,
+    band: guidance.band,
+    bandNote: guidance.note,
+    paused: guidance.paused,
   };
 }
 
@@ -223,7 +275,9 @@ export const PROJECTION_LEVEL = 0.8;
 
 /**
  * The 14-day line carried to `eventDate` with an 80 % prediction interval
- * (ŷ ± t(0.9, n−2)·s·√(1 + 1/n + (x₀ − x̄)²/Sxx)). Null with fewer than 7 points or no future event.
+ * (ŷ ± t(0.9, n−2)·s·√(1 + 1/n + (x₀ − x̄)²/Sxx)), s never below RESIDUAL_SD_FLOOR_KG (the scale's
+ * quantisation, so seven perfectly fitting weigh-ins never give a zero-width interval). Null with
+ * fewer than 7 points or no future event.
  */
 export function projectTo(
   points: readonly WeighInPoint[],
@@ -235,7 +289,7 @@ export function projectTo(
   if (!fit) return null;
   const x0 = daysBetween(fit.from, eventDate) + 1;
   const kg = fit.meanY + fit.slope * (x0 - fit.meanX);
-  const s = Math.sqrt(fit.sse / (fit.n - 2));
+  const s = Math.max(Math.sqrt(fit.sse / (fit.n - 2)), RESIDUAL_SD_FLOOR_KG);
   const t = studentTQuantile(1 - (1 - PROJECTION_LEVEL) / 2, fit.n - 2);
   const half = t * s * Math.sqrt(1 + 1 / fit.n + (x0 - fit.meanX) ** 2 / fit.sxx);
   return { date: eventDate, kg, lowKg: kg - half, highKg: kg + half, level: PROJECTION_LEVEL };
@@ -389,30 +443,49 @@ export const MISSED_WEIGH_INS_IN_A_ROW = 2;
 
 const formatPct = (value: number): string => `${Math.abs(value).toFixed(1)} %`;
 
+/**
+ * Each weigh-in against the highest weigh-in of the 48 h before it (1 or 2 calendar days earlier,
+ * whatever lies between: 80 → 79.0 → 78.05 kg is −2.4 % in 48 h). A drop that was already flagged
+ * from the same earlier weigh-in is raised again only when it has grown (one episode, one flag;
+ * our own convention, no source).
+ */
 function acuteDropFlags(points: readonly WeighInPoint[]): TrendFlag[] {
   const ordered = sortedByDate(points);
-  return ordered.flatMap((cur, i): TrendFlag[] => {
-    const prev = ordered[i - 1];
-    if (!prev) return [];
-    const gap = daysBetween(prev.date, cur.date);
-    const drop = prev.kg - cur.kg;
-    if (gap < 1 || gap > ACUTE_DROP_MAX_DAYS || !atMost(ACUTE_DROP_SHARE * prev.kg, drop)) return [];
-    return [
-      {
-        kind: 'acute_drop',
-        date: cur.date,
-        severity: 'warning',
-        message:
-          `Down ${drop.toFixed(1)} kg (${formatPct((drop / prev.kg) * 100)}) since ${prev.date}: ` +
-          'likely water loss; a water deficit above 2 % of body weight impairs performance.',
-        source: ACSM_2007,
-      },
-    ];
+  const flags: TrendFlag[] = [];
+  let lastFlagged: { fromDate: string; kg: number } | null = null;
+  ordered.forEach((cur, i) => {
+    let high: WeighInPoint | null = null;
+    for (let j = i - 1; j >= 0; j -= 1) {
+      const earlier = ordered[j]!;
+      const gap = daysBetween(earlier.date, cur.date);
+      if (gap > ACUTE_DROP_MAX_DAYS) break;
+      if (gap >= 1 && (high === null || earlier.kg > high.kg)) high = earlier;
+    }
+    if (!high) return;
+    const drop = high.kg - cur.kg;
+    if (!atMost(ACUTE_DROP_SHARE * high.kg, drop)) return;
+    if (lastFlagged && lastFlagged.fromDate === high.date && cur.kg >= lastFlagged.kg) return;
+    lastFlagged = { fromDate: high.date, kg: cur.kg };
+    const gap = daysBetween(high.date, cur.date);
+    const percent = (drop / high.kg) * 100;
+    flags.push({
+      kind: 'acute_drop',
+      date: cur.date,
+      severity: 'warning',
+      message:
+        `Down ${drop.toFixed(1)} kg (${formatPct(percent)}) ` +
+        `${gap === 1 ? 'from the day before' : `in ${gap} days`}, since ${high.date}: ` +
+        'likely water loss; a water deficit above 2 % of body weight impairs performance.',
+      source: ACSM_2007,
+      drop: { fromDate: high.date, fromKg: high.kg, toKg: cur.kg, percent },
+    });
   });
+  return flags;
 }
 
+/** None while the guidance is paused (a countdown): the scale then moves by water on purpose. */
 function rateFlags(rate: RateView | null): TrendFlag[] {
-  if (!rate || rate.percentPerWeek >= -LOSS_RATE_WARNING_PCT_PER_WEEK) return [];
+  if (!rate || rate.paused || rate.percentPerWeek >= -LOSS_RATE_WARNING_PCT_PER_WEEK) return [];
   const losing = `Losing ${formatPct(rate.percentPerWeek)} of body weight a week over ${rate.from} – ${rate.to}`;
   if (rate.percentPerWeek < -LOSS_RATE_STRONG_PCT_PER_WEEK) {
     return [
@@ -482,8 +555,9 @@ function missedWeighInFlags(points: readonly WeighInPoint[], today: string): Tre
 }
 
 /**
- * Flags: a drop of ≥ 2 % of body mass between consecutive weigh-ins ≤ 48 h apart (ACSM 2007,
- * Sawka et al.), a 14-day rate beyond −1 %/week and beyond −1.4 %/week (Helms 2014; Garthe 2011),
+ * Flags: a drop of ≥ 2 % of body mass within 48 h, from the highest weigh-in of the 2 days before
+ * (ACSM 2007, Sawka et al.), a 14-day rate beyond −1 %/week and beyond −1.4 %/week (Helms 2014;
+ * Garthe 2011) except during a countdown,
  * any symptom report, two or more missed weigh-ins in a row (up to `today`, exclusive of today).
  * Only flags dated from `from` to `today` are returned, in date order; `points` must hold every
  * weigh-in up to today (earlier ones too: a drop or a run of missed days may start before `from`).

@@ -1,5 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { currentDueDate, dueDateOn, weekOf } from './weekly-dates.js';
+import {
+  checkInExpected,
+  currentDueDate,
+  dueDateOn,
+  firstExpectedDueDate,
+  weekOf,
+  weekSpanInRange,
+} from './weekly-dates.js';
 
 describe('weekly check-in dates', () => {
   it('is today on the check-in weekday and the latest one before otherwise', () => {
@@ -20,5 +27,41 @@ describe('weekly check-in dates', () => {
 
   it('covers the 7 days before the due date', () => {
     expect(weekOf('2026-12-01')).toEqual({ weekStart: '2026-11-24', weekEnd: '2026-11-30' });
+  });
+
+  it('expects nothing before joining: only a due date after the day the intake was completed', () => {
+    // Joined Tuesday 2026-12-01 at 09:00 in Madrid (08:00 UTC); check-in day Monday.
+    const joined = new Date('2026-12-01T08:00:00Z');
+    expect(checkInExpected('2026-11-30', joined, 'Europe/Madrid')).toBe(false);
+    // A check-in due on the day of joining covers the week before it: not expected either.
+    expect(checkInExpected('2026-12-01', joined, 'Europe/Madrid')).toBe(false);
+    expect(checkInExpected('2026-12-07', joined, 'Europe/Madrid')).toBe(true);
+    expect(checkInExpected('2026-12-07', null, 'Europe/Madrid')).toBe(false);
+    // 2026-12-01 08:00 UTC is still 22:00 on 30 Nov in Honolulu: joined before a due date of the 1st.
+    expect(checkInExpected('2026-12-01', joined, 'Pacific/Honolulu')).toBe(true);
+    expect(firstExpectedDueDate(joined, 'Europe/Madrid', 'mon')).toBe('2026-12-07');
+    expect(firstExpectedDueDate(joined, 'Europe/Madrid', 'tue')).toBe('2026-12-08');
+    expect(firstExpectedDueDate(joined, 'Europe/Madrid', 'wed')).toBe('2026-12-02');
+  });
+
+  it("labels a trend range's weeks with their real span: a range starting on a Wednesday has a partial first week", () => {
+    // 2026-11-30 is a Monday; the range 2026-12-02 (Wed) … 2026-12-16 (Wed).
+    expect(weekSpanInRange('2026-11-30', '2026-12-02', '2026-12-16')).toEqual({
+      from: '2026-12-02',
+      to: '2026-12-06',
+      days: 5,
+      partial: true,
+    });
+    expect(weekSpanInRange('2026-12-07', '2026-12-02', '2026-12-16')).toEqual({
+      from: '2026-12-07',
+      to: '2026-12-13',
+      days: 7,
+      partial: false,
+    });
+    expect(weekSpanInRange('2026-12-14', '2026-12-02', '2026-12-16')).toMatchObject({
+      to: '2026-12-16',
+      days: 3,
+      partial: true,
+    });
   });
 });

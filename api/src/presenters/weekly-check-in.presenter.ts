@@ -17,7 +17,9 @@ export function presentWeeklyCheckIn(row: WeeklyCheckInWithReplier): WeeklyCheck
     athleteId: row.athleteId,
     dueDate: row.dueDate,
     status: reply ? 'answered' : 'submitted',
-    figures: row.figures,
+    firstDueDate: null,
+    // Stored before the 14-day rate was part of the figures: none then.
+    figures: { ...row.figures, rate: row.figures.rate ?? null },
     questions: row.questions,
     answers: row.answers,
     questionsForCoach: row.questionsForCoach,

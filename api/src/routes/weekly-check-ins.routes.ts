@@ -2,6 +2,7 @@ import {
   checkInDayRequest,
   checkInQuestionsRequest,
   replyWeeklyCheckInRequest,
+  isoDate,
   submitWeeklyCheckInRequest,
   uuid,
   type WeeklyCheckInView,
@@ -21,6 +22,7 @@ import { loadAthlete, loadAthleteById } from './athletes.routes.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const checkInParams = z.object({ checkInId: uuid });
+const weekParams = z.object({ athleteId: uuid, dueDate: isoDate });
 
 /**
  * What the actor may do with a check-in: the athlete submits (or edits) it until it is answered and
@@ -74,6 +76,19 @@ export function weeklyCheckInsRouter(): Router {
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const view = await new WeeklyCheckInService(req.ctx).current(athlete);
+      res.json({ data: view, abilities: weeklyAbilities(actor, athlete, target, view) });
+    },
+  );
+
+  // The week due on a date (today's or earlier), stored or computed: the printable report reads its
+  // range and figures here instead of working out the week itself.
+  router.get(
+    '/athletes/:athleteId/weekly-check-ins/week/:dueDate',
+    authenticate(),
+    validate({ params: weekParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      const view = await new WeeklyCheckInService(req.ctx).forDueDate(athlete, req.params.dueDate);
       res.json({ data: view, abilities: weeklyAbilities(actor, athlete, target, view) });
     },
   );

@@ -1,6 +1,7 @@
 import {
   adherenceOf,
   FLAG_KINDS,
+  SAFETY_FLAG_KINDS,
   type CutoffBreach,
   type DriftEntry,
   type FlagKind,
@@ -10,7 +11,7 @@ import {
   type TrendFlag,
 } from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
-import { rate14, rateBand } from '../lib/analysis.js';
+import { rate14, rateGuidance } from '../lib/analysis.js';
 import { plannedDay, type CountdownMark } from '../lib/day-plan.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
@@ -61,6 +62,27 @@ export function adherenceShare(days: readonly { drift: readonly DriftEntry[] }[]
   return adherenceOf(days.flatMap((d) => d.drift.map((e) => e.state))).adherence;
 }
 
+const SAFETY_KINDS: ReadonlySet<FlagKind> = new Set(SAFETY_FLAG_KINDS);
+
+/** Whether a flag is a safety flag (SAFETY_FLAG_KINDS); the others are drift or missed check-ins. */
+export function isSafetyFlag(kind: FlagKind): boolean {
+  return SAFETY_KINDS.has(kind);
+}
+
+/**
+ * Whether an athlete has a safety flag: an active athlete (the review queue's athletes) with a safety
+ * flag dated in the last 7 days, or an athlete_flags row (raised by an urgent symptom report). The
+ * roster's count and the review queue's safety items both come from this one rule.
+ */
+export function hasSafetyFlag(input: {
+  athlete: Pick<AthleteWithPeople, 'status'>;
+  flags: readonly Pick<TrendFlag, 'kind'>[];
+  flagRows: readonly Pick<FlagRow, 'kind'>[];
+}): boolean {
+  if (input.athlete.status !== 'active') return false;
+  return input.flags.some((f) => isSafetyFlag(f.kind)) || input.flagRows.some((f) => isSafetyFlag(f.kind));
+}
+
 /** The figures of one athlete from their loaded history (pure). */
 export function snapshotOf(input: {
   athlete: AthleteWithPeople;
@@ -81,8 +103,9 @@ export function snapshotOf(input: {
       : athlete.goal
         ? PHASE_BY_GOAL[athlete.goal]
         : 'maintaining';
-  const band = rateBand({ goal: athlete.goal, countdown: countdown !== null });
-  const rate = rate14(rawPoints(h), today, band);
+  const guidance = rateGuidance({ goal: athlete.goal, countdown: countdown !== null });
+  const band = guidance.band;
+  const rate = rate14(rawPoints(h), today, guidance);
   const latestWeighIn = h.weighIns.at(-1) ?? h.before?.weighIn ?? null;
   const trend = trendByDate(h);
   const recentFrom = shiftDate(today, -RECENT_DAYS);
@@ -116,9 +139,11 @@ export function snapshotOf(input: {
       trendKg: latestWeighIn ? (trend.get(latestWeighIn.date) ?? null) : null,
       ratePercentPerWeek: rate?.percentPerWeek ?? null,
       rateBand: band ? { minPct: band.minPct, maxPct: band.maxPct } : null,
+      rateBandNote: guidance.note,
       adherence7: adherenceShare(recent),
       lastCheckInDate: input.lastCheckInDate,
       flags: FLAG_KINDS.filter((k) => kinds.has(k)),
+      safetyFlag: hasSafetyFlag({ athlete, flags, flagRows }),
     },
   };
 }

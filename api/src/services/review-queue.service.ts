@@ -16,10 +16,8 @@ import { MarkRepository } from '../repositories/mark.repository.js';
 import { Team } from '../entities/team.entity.js';
 import { teamQuestions } from './weekly-check-in.service.js';
 import { WeeklyCheckInRepository } from '../repositories/weekly-check-in.repository.js';
-import { currentDueDate } from '../lib/weekly-dates.js';
-import { localDateTime } from '../lib/local-time.js';
-import { rawPoints } from './trend.service.js';
-import { loadSnapshots, type AthleteSnapshot } from './athlete-figures.service.js';
+import { checkInExpected, currentDueDate } from '../lib/weekly-dates.js';
+import { isSafetyFlag, loadSnapshots, type AthleteSnapshot } from './athlete-figures.service.js';
 import { visibleAthletes } from './roster.service.js';
 
 /** Days before today whose drift counts as recent ("off plan 2 of the last 3 days"). */
@@ -88,7 +86,8 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
  * - unread replies to marks;
  * - weekly check-ins received and not answered yet (standing until a reply, with the time since
  *   received), and — once the team has a question list — the current one missing after its due
- *   date has passed (arising the day after; only when the intake was completed before the due date).
+ *   date has passed (arising the day after; only when one was expected: checkInExpected).
+ * No reason arises before the athlete completed the intake: earlier instants are clamped to it.
  */
 export function reasonsFor(
   s: AthleteSnapshot,
@@ -99,7 +98,11 @@ export function reasonsFor(
   const startOf = (date: string) => localInstant(date, '00:00', tz);
   const todayStart = startOf(s.today);
   const reasons: Reason[] = [];
-  const add = (r: Omit<Reason, 'priority'>) => reasons.push({ ...r, priority: PRIORITY[r.kind] });
+  // Nothing arises before the athlete joined (completed the intake): a reason from the start of a
+  // day they joined part-way through arose when they joined.
+  const joined = s.athlete.intakeCompletedAt;
+  const add = (r: Omit<Reason, 'priority'>) =>
+    reasons.push({ ...r, at: joined && r.at < joined ? joined : r.at, priority: PRIORITY[r.kind] });
   const h = s.history;
   const weighIns = [...(h.before ? [h.before.weighIn] : []), ...h.weighIns];
   const latestWritten = weighIns.reduce<Date | null>(
@@ -108,35 +111,26 @@ export function reasonsFor(
   );
 
   // Safety -----------------------------------------------------------------------------------
-  const points = rawPoints(h);
+  // One rule decides what is a safety item: isSafetyFlag (the roster counts with the same rule).
   for (const flag of s.flags) {
-    if (flag.kind === 'acute_drop') {
-      const i = points.findIndex((p) => p.date === flag.date);
-      const cur = points[i];
-      const prev = points[i - 1];
-      const written = weighIns.find((w) => w.date === flag.date);
-      if (!cur || !prev || !written) continue;
-      const gap = daysBetween(prev.date, cur.date);
-      const drop = ((prev.kg - cur.kg) / prev.kg) * 100;
+    // Symptom flags are listed from their reports below (with when each was sent).
+    if (flag.kind === 'acute_drop' && flag.drop) {
+      const gap = daysBetween(flag.drop.fromDate, flag.date);
       add({
-        kind: 'safety',
-        text: `Weight down ${pct(drop)} ${gap === 1 ? 'from the day before' : `in ${gap} days`} (ACSM 2007 guard)`,
+        kind: isSafetyFlag(flag.kind) ? 'safety' : 'drift',
+        text: `Weight down ${pct(flag.drop.percent)} ${gap === 1 ? 'from the day before' : `in ${gap} days`} (ACSM 2007 guard)`,
         date: flag.date,
-        at: written.updatedAt,
+        at: weighIns.find((w) => w.date === flag.date)?.updatedAt ?? todayStart,
       });
-    } else if (flag.kind === 'rate_far_beyond' && s.rate && latestWritten) {
+    } else if ((flag.kind === 'rate_far_beyond' || flag.kind === 'rate_beyond') && s.rate) {
+      const far = flag.kind === 'rate_far_beyond';
       add({
-        kind: 'safety',
-        text: `Losing ${pct(s.rate.percentPerWeek)} of body weight a week, beyond 1.4 % (Garthe 2011)`,
+        kind: isSafetyFlag(flag.kind) ? 'safety' : 'drift',
+        text: far
+          ? `Losing ${pct(s.rate.percentPerWeek)} of body weight a week, beyond 1.4 % (Garthe 2011)`
+          : `Losing ${pct(s.rate.percentPerWeek)} of body weight a week, beyond 1 % (Helms 2014)`,
         date: flag.date,
-        at: latestWritten,
-      });
-    } else if (flag.kind === 'rate_beyond' && s.rate && latestWritten) {
-      add({
-        kind: 'drift',
-        text: `Losing ${pct(s.rate.percentPerWeek)} of body weight a week, beyond 1 % (Helms 2014)`,
-        date: flag.date,
-        at: latestWritten,
+        at: latestWritten ?? todayStart,
       });
     }
   }
@@ -145,7 +139,7 @@ export function reasonsFor(
   for (const r of reports) {
     const names = r.symptoms.map((x) => SYMPTOM_LABELS[x]?.toLowerCase() ?? x).join(', ');
     add({
-      kind: 'safety',
+      kind: isSafetyFlag('symptom') ? 'safety' : 'drift',
       text: `Reported ${names}${r.urgent ? ' (urgent: told to stop and seek care)' : ''}`,
       date: r.date,
       at: r.createdAt,
@@ -155,7 +149,7 @@ export function reasonsFor(
   for (const f of s.flagRows) {
     // A flag raised by a report listed above says the same thing once more.
     if (f.symptomReportId && reportIds.has(f.symptomReportId)) continue;
-    add({ kind: 'safety', text: f.message, date: f.date, at: f.createdAt });
+    add({ kind: isSafetyFlag(f.kind) ? 'safety' : 'drift', text: f.message, date: f.date, at: f.createdAt });
   }
 
   // Missed check-ins -------------------------------------------------------------------------
@@ -243,14 +237,11 @@ export function reasonsFor(
         standing: true,
       });
     }
-    const intake = s.athlete.intakeCompletedAt;
-    const intakeDate = intake ? localDateTime(intake, tz).date : null;
     if (
       weekly.expected &&
       !weekly.submitted &&
       weekly.dueDate < s.today &&
-      intakeDate !== null &&
-      intakeDate < weekly.dueDate
+      checkInExpected(weekly.dueDate, s.athlete.intakeCompletedAt, tz)
     ) {
       const late = daysBetween(weekly.dueDate, s.today);
       add({

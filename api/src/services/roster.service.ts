@@ -55,9 +55,11 @@ const EMPTY_FIGURES: RosterFigures = {
   trendKg: null,
   ratePercentPerWeek: null,
   rateBand: null,
+  rateBandNote: null,
   adherence7: null,
   lastCheckInDate: null,
   flags: [],
+  safetyFlag: false,
 };
 
 export class RosterService {

@@ -7,7 +7,7 @@ import {
   mean7,
   projectTo,
   rate14,
-  rateBand,
+  rateGuidance,
   trendSeries,
   weeklyAdherence,
   type WeighInPoint,
@@ -17,6 +17,7 @@ import { dayDrift } from '../lib/day-drift.js';
 import { plannedDay } from '../lib/day-plan.js';
 import { daysBetween, shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
+import { weekSpanInRange } from '../lib/weekly-dates.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { TrendRepository, type AthleteHistory, type FluidRow } from '../repositories/trend.repository.js';
 
@@ -157,7 +158,7 @@ export class TrendService {
     const days = all.filter((d) => d.date >= from);
     const points = rawPoints(h);
     const countdownAtEnd = all.find((d) => d.date === end)?.countdown != null;
-    const rate = rate14(points, end, rateBand({ goal: athlete.goal, countdown: countdownAtEnd }));
+    const rate = rate14(points, end, rateGuidance({ goal: athlete.goal, countdown: countdownAtEnd }));
     const trend = [...trendByDate(h)].map(([date, trendKg]) => ({ date, trendKg }));
 
     return {
@@ -169,7 +170,7 @@ export class TrendService {
       days,
       rate,
       projection: projectTo(points, end, athlete.eventDate),
-      adherence: weeklyAdherence(days),
+      adherence: weeklyAdherence(days).map((w) => ({ ...w, ...weekSpanInRange(w.weekStart, from, to) })),
       maintenance: maintenanceEstimate(
         all
           .filter((d) => d.date <= end)

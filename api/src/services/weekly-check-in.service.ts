@@ -18,10 +18,17 @@ import { Team } from '../entities/team.entity.js';
 import { User } from '../entities/user.entity.js';
 import { WeeklyCheckIn, type WeeklyAnswer } from '../entities/weekly-check-in.entity.js';
 import { conflict, notFound, validationFailed } from '../errors.js';
-import { weeklyAdherence } from '../lib/analysis.js';
+import { MEAN7_MIN_POINTS, rate14, rateGuidance, weeklyAdherence } from '../lib/analysis.js';
+import { plannedDay } from '../lib/day-plan.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
-import { currentDueDate, weekOf, WEEK_DAYS } from '../lib/weekly-dates.js';
+import {
+  checkInExpected,
+  currentDueDate,
+  firstExpectedDueDate,
+  weekOf,
+  WEEK_DAYS,
+} from '../lib/weekly-dates.js';
 import type { Actor } from '../policies/actor.js';
 import { presentWeeklyCheckIn } from '../presenters/weekly-check-in.presenter.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
@@ -32,7 +39,7 @@ import {
   type WeeklyEveningRow,
 } from '../repositories/weekly-check-in.repository.js';
 import { notifyWeeklyCheckInReceived, notifyWeeklyCheckInReplied } from './notify.service.js';
-import { trendDays } from './trend.service.js';
+import { rawPoints, trendDays } from './trend.service.js';
 
 /** How many stored check-ins the list answers at most (about a year). */
 export const WEEKLY_LIST_LIMIT = 53;
@@ -40,6 +47,9 @@ export const WEEKLY_LIST_LIMIT = 53;
 const round = (value: number, digits: number) => Math.round(value * 10 ** digits) / 10 ** digits;
 const meanOf = (values: readonly number[]): number | null =>
   values.length === 0 ? null : values.reduce((s, v) => s + v, 0) / values.length;
+/** A week's mean weigh-in: null with fewer than 4 (the 7-day mean's rule, analysis.ts MEAN7_MIN_POINTS). */
+const weekMean = (kgs: readonly number[]): number | null =>
+  kgs.length < MEAN7_MIN_POINTS ? null : meanOf(kgs);
 
 /** Adherence per metric over the days given, summed across the analysis module's (Monday) weeks. */
 export function adherenceOver(days: Parameters<typeof weeklyAdherence>[0]): WeeklyFigures['adherence'] {
@@ -66,12 +76,14 @@ export function adherenceOver(days: Parameters<typeof weeklyAdherence>[0]): Week
 
 /**
  * The figures of the week before `dueDate` from a history covering the 14 days before it: the mean
- * weigh-in of the week and of the week before, adherence per metric (analysis module), the means of
- * the evening ratings, steps and sleep, and the week's condition photos.
+ * weigh-in of the week and of the week before (each only from 4 weigh-ins or more) and their change,
+ * the 14-day rate ending on the week's last day (analysis module, as the trend), adherence per metric,
+ * the means of the evening ratings, steps and sleep, and the week's condition photos.
  */
 export function weeklyFiguresOf(input: {
   dueDate: string;
   today: string;
+  goal: AthleteWithPeople['goal'];
   history: AthleteHistory;
   evenings: readonly WeeklyEveningRow[];
   photoIds: readonly string[];
@@ -81,8 +93,10 @@ export function weeklyFiguresOf(input: {
   const previousStart = shiftDate(weekStart, -WEEK_DAYS);
   const inWeek = h.weighIns.filter((w) => w.date >= weekStart && w.date <= weekEnd).map((w) => w.kg);
   const inPrevious = h.weighIns.filter((w) => w.date >= previousStart && w.date < weekStart).map((w) => w.kg);
-  const mean = meanOf(inWeek);
-  const previous = meanOf(inPrevious);
+  const mean = weekMean(inWeek);
+  const previous = weekMean(inPrevious);
+  const countdown = plannedDay(h.versions, weekEnd)?.countdown != null;
+  const rate = rate14(rawPoints(h), weekEnd, rateGuidance({ goal: input.goal, countdown }));
   const evenings = input.evenings.filter((e) => e.date >= weekStart && e.date <= weekEnd);
   const meanOfEvenings = (pick: (e: WeeklyEveningRow) => number | null | undefined) =>
     meanOf(evenings.map(pick).filter((v): v is number => typeof v === 'number'));
@@ -101,6 +115,7 @@ export function weeklyFiguresOf(input: {
     previousMeanWeightKg: previous === null ? null : round(previous, 2),
     changeKg: mean === null || previous === null ? null : round(mean - previous, 2),
     weighIns: inWeek.length,
+    rate,
     adherence: adherenceOver(trendDays(h, weekStart, weekEnd, today)),
     ratings,
     stepsMean: steps === null ? null : Math.round(steps),
@@ -180,7 +195,14 @@ export class WeeklyCheckInService {
     ]);
     const history = loaded.get(athlete.id);
     if (!history) throw new Error('weekly history missing for a loaded window');
-    return weeklyFiguresOf({ dueDate, today, history, evenings, photoIds: photos.map((p) => p.id) });
+    return weeklyFiguresOf({
+      dueDate,
+      today,
+      goal: athlete.goal,
+      history,
+      evenings,
+      photoIds: photos.map((p) => p.id),
+    });
   }
 
   async questions(teamId: string): Promise<CheckInQuestion[]> {
@@ -203,20 +225,40 @@ export class WeeklyCheckInService {
     return this.questions(teamId);
   }
 
-  /** The check-in due now: the stored one, or one computed from the logs with the team's questions. */
+  /**
+   * The check-in due now: the stored one, or one computed from the logs with the team's questions.
+   * Nothing is due before joining: while the due date is on or before the day the athlete completed
+   * the intake, it is not_due, naming the first due date.
+   */
   async current(athlete: AthleteWithPeople): Promise<WeeklyCheckInView> {
-    const { dueDate } = this.dates(athlete);
+    return this.forDueDate(athlete, this.dates(athlete).dueDate);
+  }
+
+  /**
+   * The check-in due on `dueDate` (today's or an earlier one): stored, or computed from the logs —
+   * due while it is the current one, missed after, not_due when none was expected then (joined on or
+   * after it). A later date answers 400.
+   */
+  async forDueDate(athlete: AthleteWithPeople, dueDate: string): Promise<WeeklyCheckInView> {
+    const current = this.dates(athlete).dueDate;
+    if (dueDate > current) {
+      throw validationFailed({
+        dueDate: `No check-in is due on ${dueDate} yet (the current one is due on ${current})`,
+      });
+    }
     const stored = await new WeeklyCheckInRepository(this.manager).findByDueDate(athlete.id, dueDate);
     if (stored) return presentWeeklyCheckIn(stored);
     const [figures, questions] = await Promise.all([
       this.figures(this.manager, athlete, dueDate),
       this.questions(athlete.teamId),
     ]);
+    const expected = checkInExpected(dueDate, athlete.intakeCompletedAt, athlete.user.timeZone);
     return {
       id: null,
       athleteId: athlete.id,
       dueDate,
-      status: 'due',
+      status: !expected ? 'not_due' : dueDate === current ? 'due' : 'missed',
+      firstDueDate: expected ? null : this.firstDueDate(athlete),
       figures,
       questions,
       answers: [],
@@ -247,6 +289,11 @@ export class WeeklyCheckInService {
     const { dueDate } = this.dates(athlete);
     if (input.dueDate !== dueDate) {
       throw validationFailed({ dueDate: `Only the check-in due on ${dueDate} is open` });
+    }
+    if (!checkInExpected(dueDate, athlete.intakeCompletedAt, athlete.user.timeZone)) {
+      throw validationFailed({
+        dueDate: `Nothing is due before you joined: your first check-in is due on ${this.firstDueDate(athlete)}`,
+      });
     }
     const now = this.deps.clock();
     // Read before the transaction: the history loads in parallel, which needs the pool.
@@ -335,6 +382,12 @@ export class WeeklyCheckInService {
   async setWeekday(athlete: AthleteWithPeople, weekday: Weekday): Promise<WeeklyCheckInView> {
     await this.manager.update(Athlete, athlete.id, { checkInWeekday: weekday });
     return this.current({ ...athlete, checkInWeekday: weekday });
+  }
+
+  /** The first check-in expected of the athlete (checkInExpected), from their intake. */
+  private firstDueDate(athlete: AthleteWithPeople): string {
+    const joined = athlete.intakeCompletedAt ?? this.deps.clock();
+    return firstExpectedDueDate(joined, athlete.user.timeZone, athlete.checkInWeekday);
   }
 
   private async questionsIn(manager: EntityManager, teamId: string): Promise<CheckInQuestion[]> {

@@ -114,6 +114,18 @@ export const FLAG_KINDS = [
 ] as const;
 export type FlagKind = (typeof FLAG_KINDS)[number];
 
+/**
+ * The flags that count as safety flags (the brief: a drop of 2 % of body mass or more, a weekly
+ * rate far beyond guidance, any symptom report). A rate just beyond guidance is drift and missed
+ * weigh-ins are missed check-ins: flags, but not safety flags. The roster's count and the review
+ * queue's safety items both read this list.
+ */
+export const SAFETY_FLAG_KINDS = [
+  'acute_drop',
+  'rate_far_beyond',
+  'symptom',
+] as const satisfies readonly FlagKind[];
+
 export const trendFlag = z.object({
   kind: z.enum(FLAG_KINDS),
   /** The day it concerns (the later weigh-in, the last missed day, the symptom's day…). */
@@ -121,6 +133,13 @@ export const trendFlag = z.object({
   severity: z.enum(['warning', 'strong']),
   message: z.string(),
   source: z.string(),
+  /**
+   * An acute drop's figures: the highest weigh-in of the 48 h before (date, kg), the flagged one (kg)
+   * and the drop as a percentage of the earlier weight.
+   */
+  drop: z
+    .object({ fromDate: z.string(), fromKg: z.number(), toKg: z.number(), percent: z.number() })
+    .optional(),
 });
 export type TrendFlag = z.infer<typeof trendFlag>;
 
@@ -171,7 +190,8 @@ export const rateView = z.object({
   kgPerWeek: z.number(),
   /** kgPerWeek / mean weight of the window × 100. */
   percentPerWeek: z.number(),
-  r2: z.number(),
+  /** Null when the weigh-ins are all one reading at the scale's resolution (R² undefined). */
+  r2: z.number().nullable(),
   /** Weigh-ins used (≥ 7) and the 14-day window. */
   points: z.number().int(),
   from: z.string(),
@@ -180,6 +200,10 @@ export const rateView = z.object({
   band: z
     .object({ minPct: z.number(), maxPct: z.number(), label: z.string(), source: z.string() })
     .nullable(),
+  /** Why there is no band, in words (paused during a countdown, none for a regain); null with a band. */
+  bandNote: z.string().nullable(),
+  /** During a countdown: no band and no rate flags (water and glycogen change on purpose). */
+  paused: z.boolean(),
 });
 export type RateView = z.infer<typeof rateView>;
 
@@ -209,6 +233,18 @@ export const adherenceWeek = z.object({
 });
 export type AdherenceWeek = z.infer<typeof adherenceWeek>;
 
+/** A week of a trend range: its adherence with the span of it that lies inside the range. */
+export const adherenceWeekInRange = adherenceWeek.extend({
+  /** First and last day of the week inside the range (a range starting on a Wednesday: Wednesday … Sunday). */
+  from: z.string(),
+  to: z.string(),
+  /** Calendar days of the week inside the range (1–7). */
+  days: z.number().int(),
+  /** Fewer than 7 days of the week lie inside the range: judged over those days only. */
+  partial: z.boolean(),
+});
+export type AdherenceWeekInRange = z.infer<typeof adherenceWeekInRange>;
+
 export const maintenanceView = z.object({
   kcalPerDay: z.number(),
   /** Logged days used (countdown days excluded). */
@@ -236,7 +272,8 @@ export const trendView = z.object({
   rate: rateView.nullable(),
   /** To the event date; null without an event ahead or too few points. */
   projection: projectionView.nullable(),
-  adherence: z.array(adherenceWeek),
+  /** Per Monday-start week and metric, each labelled with its real span inside the range. */
+  adherence: z.array(adherenceWeekInRange),
   maintenance: maintenanceView.nullable(),
   flags: z.array(trendFlag),
 });
@@ -265,11 +302,15 @@ export const rosterFigures = z.object({
   /** 14-day rate, %/week; null with too few weigh-ins. */
   ratePercentPerWeek: z.number().nullable(),
   rateBand: z.object({ minPct: z.number(), maxPct: z.number() }).nullable(),
+  /** Why there is no band (e.g. paused during the countdown); null with a band. */
+  rateBandNote: z.string().nullable(),
   /** Share of logged metric-days on plan over the last 7 days; null with nothing to judge. */
   adherence7: z.number().nullable(),
   /** The athlete's last day with anything logged. */
   lastCheckInDate: z.string().nullable(),
-  /** Open safety flags (kinds) over the last 7 days. */
+  /** Open flags (kinds) over the last 7 days. */
   flags: z.array(z.enum(FLAG_KINDS)),
+  /** Whether any of them is a safety flag (SAFETY_FLAG_KINDS; the review queue's safety items). */
+  safetyFlag: z.boolean(),
 });
 export type RosterFigures = z.infer<typeof rosterFigures>;

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { uuid } from './common.js';
 import { WEEKDAYS } from './plans.js';
-import { DRIFT_METRICS } from './trends.js';
+import { DRIFT_METRICS, rateView } from './trends.js';
 
 /**
  * The weekly check-in. Each athlete has a check-in weekday; on that day (their date) the check-in for
@@ -42,11 +42,20 @@ export type CheckInDayRequest = z.infer<typeof checkInDayRequest>;
 export const weeklyFigures = z.object({
   weekStart: z.string(),
   weekEnd: z.string(),
-  /** Mean of the week's weigh-ins, and of the week before; null without weigh-ins. */
+  /**
+   * Mean of the week's weigh-ins, and of the week before; null with fewer than 4 weigh-ins in that
+   * week (a 7-day mean needs at least 4, as the trend's 7-day mean).
+   */
   meanWeightKg: z.number().nullable(),
   previousMeanWeightKg: z.number().nullable(),
+  /** Week-over-week change of the 7-day mean (this week's mean − the week before's); null unless both exist. */
   changeKg: z.number().nullable(),
   weighIns: z.number().int(),
+  /**
+   * The 14-day rate ending on the week's last day (weekEnd − 13 … weekEnd), as the trend computes it;
+   * null with fewer than 7 weigh-ins. Absent from check-ins stored before it was added.
+   */
+  rate: rateView.nullable().optional(),
   adherence: z.array(
     z.object({
       metric: z.enum(DRIFT_METRICS),
@@ -92,7 +101,8 @@ export const replyWeeklyCheckInRequest = z.object({
 });
 export type ReplyWeeklyCheckInRequest = z.infer<typeof replyWeeklyCheckInRequest>;
 
-export const WEEKLY_STATUSES = ['due', 'submitted', 'answered', 'missed'] as const;
+/** not_due: nothing is due yet (the athlete joined on or after the due date; nothing is due before joining). */
+export const WEEKLY_STATUSES = ['due', 'submitted', 'answered', 'missed', 'not_due'] as const;
 export type WeeklyStatus = (typeof WEEKLY_STATUSES)[number];
 
 export const weeklyCheckInView = z.object({
@@ -101,6 +111,8 @@ export const weeklyCheckInView = z.object({
   athleteId: uuid,
   dueDate: z.string(),
   status: z.enum(WEEKLY_STATUSES),
+  /** While not_due: the first due date the athlete is expected to answer. */
+  firstDueDate: z.string().nullable(),
   figures: weeklyFigures,
   /** The questions as asked (snapshot at submission; the team's current list while due). */
   questions: z.array(checkInQuestion),

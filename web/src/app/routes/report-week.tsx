@@ -8,9 +8,8 @@ import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { useMarks } from '@/features/marks/api/list-marks';
 import { useTrend } from '@/features/trends/api/get-trend';
 import { DaysCsvLink } from '@/features/trends/components/days-csv-link';
-import { addDays } from '@/features/trends/utils/dates';
-import { useWeeklyCheckIns } from '@/features/weekly/api/list-weekly-check-ins';
-import { formatDate, formatDateTime, formatEnergy, formatVolume, formatWeight } from '@/lib/format';
+import { useWeeklyWeek } from '@/features/weekly/api/get-weekly-week';
+import { formatDate, formatDateTime, formatEnergy, formatVolume, formatWeight, NBSP } from '@/lib/format';
 import { useCurrentUser } from '../session';
 
 const ISO = /^\d{4}-\d{2}-\d{2}$/;
@@ -47,21 +46,26 @@ function WeekSparkline({ days }: { days: readonly TrendDay[] }) {
 }
 
 /**
- * A printable weekly report for one athlete: the 7 days before the check-in's due date, figures,
+ * A printable weekly report for one athlete: the week of the check-in due on the date, figures,
  * a compact day table with drift, the marks of the week with replies, the weekly check-in's answers
- * and the coach's reply. Print styles hide the controls and keep sections off page breaks.
+ * and the coach's reply. The week's range and figures (mean, change, the 14-day rate) are the
+ * server's (GET …/weekly-check-ins/week/:dueDate), never worked out here. Print styles hide the
+ * controls and keep sections off page breaks.
  */
 export function ReportWeekRoute() {
   const me = useCurrentUser();
   const { athleteId = '', dueDate = '' } = useParams();
   const valid = ISO.test(dueDate);
-  const from = valid ? addDays(dueDate, -7) : '';
-  const to = valid ? addDays(dueDate, -1) : '';
   const athlete = useAthlete(athleteId);
-  const trend = useTrend(athleteId, from, to, { enabled: valid && athlete.isSuccess });
-  const marks = useMarks(athleteId, { from, to });
-  const checkIns = useWeeklyCheckIns(athleteId);
-  const checkIn = checkIns.data?.data.find((c) => c.dueDate === dueDate) ?? null;
+  const week = useWeeklyWeek(athleteId, dueDate, { enabled: valid });
+  const figures = week.data?.data.figures ?? null;
+  const from = figures?.weekStart ?? '';
+  const to = figures?.weekEnd ?? '';
+  const trend = useTrend(athleteId, from, to, { enabled: figures !== null && athlete.isSuccess });
+  const marks = useMarks(athleteId, { from, to }, { enabled: figures !== null });
+  // The check-in stored for the week (id null: nothing was submitted).
+  const checkIn = week.data?.data.id ? week.data.data : null;
+  const rate = figures?.rate ?? null;
   const units = me.units;
 
   if (!valid) {
@@ -93,15 +97,16 @@ export function ReportWeekRoute() {
         </Button>
       </div>
 
-      {athlete.isPending || trend.isPending ? (
+      {/* Errors first: a week that cannot be loaded leaves the trend waiting for its range for good. */}
+      {athlete.isError || week.isError || trend.isError ? (
+        <Alert tone="error" title="The report could not be loaded.">
+          {(athlete.error ?? week.error ?? trend.error)?.message}
+        </Alert>
+      ) : athlete.isPending || week.isPending || trend.isPending ? (
         <div aria-busy="true" aria-label="Loading the report" className="space-y-3">
           <Skeleton className="h-10 max-w-md" />
           <Skeleton className="h-40" />
         </div>
-      ) : athlete.isError || trend.isError ? (
-        <Alert tone="error" title="The report could not be loaded.">
-          {(athlete.error ?? trend.error)?.message}
-        </Alert>
       ) : (
         <>
           <header className="mb-5 border-b border-line pb-3">
@@ -120,22 +125,29 @@ export function ReportWeekRoute() {
             <div className="grid gap-4 sm:grid-cols-[1fr_auto] print:grid-cols-[1fr_auto]">
               <WeekSparkline days={trend.data.days} />
               <dl className="grid grid-cols-[auto_auto] gap-x-4 gap-y-1 text-sm tabular-nums">
-                <dt className="text-ink-faint">Rate</dt>
+                <dt className="text-ink-faint">
+                  14-day rate
+                  {rate ? (
+                    <span className="block text-xs">
+                      {formatDate(rate.from, 'short')} – {formatDate(rate.to, 'short')}
+                    </span>
+                  ) : null}
+                </dt>
                 <dd>
-                  {trend.data.rate
-                    ? `${formatWeight(trend.data.rate.kgPerWeek, units.weight, 2)}/week (${trend.data.rate.percentPerWeek.toFixed(2)} %)`
-                    : '—'}
+                  {rate
+                    ? `${formatWeight(rate.kgPerWeek, units.weight, 2)}/week (${rate.percentPerWeek.toFixed(2)}${NBSP}%)`
+                    : 'Too few weigh-ins'}
                 </dd>
-                {checkIn?.figures.meanWeightKg != null ? (
+                <dt className="text-ink-faint">Week mean</dt>
+                <dd>
+                  {figures?.meanWeightKg != null
+                    ? formatWeight(figures.meanWeightKg, units.weight)
+                    : `Too few weigh-ins (${figures?.weighIns ?? 0} of 7)`}
+                </dd>
+                {figures?.changeKg != null ? (
                   <>
-                    <dt className="text-ink-faint">Week mean</dt>
-                    <dd>{formatWeight(checkIn.figures.meanWeightKg, units.weight)}</dd>
-                  </>
-                ) : null}
-                {checkIn?.figures.changeKg != null ? (
-                  <>
-                    <dt className="text-ink-faint">Change</dt>
-                    <dd>{formatWeight(checkIn.figures.changeKg, units.weight, 2)}</dd>
+                    <dt className="text-ink-faint">Week-over-week change of the mean</dt>
+                    <dd>{formatWeight(figures.changeKg, units.weight, 2)}</dd>
                   </>
                 ) : null}
               </dl>
@@ -236,9 +248,7 @@ export function ReportWeekRoute() {
             <h2 id="check-in-heading" className="mb-2 text-lg font-semibold">
               Weekly check-in
             </h2>
-            {checkIns.isPending ? (
-              <Skeleton className="h-16" />
-            ) : !checkIn ? (
+            {!checkIn ? (
               <p className="text-sm text-ink-muted">No check-in stored for this week.</p>
             ) : (
               <div className="space-y-2 text-sm">

@@ -496,7 +496,7 @@ function WeightCell({ row, unit }: { row: RosterRow; unit: WeightUnit }) {
 }
 
 function RateCell({ row }: { row: RosterRow }) {
-  const { ratePercentPerWeek: rate, rateBand: band } = row.figures;
+  const { ratePercentPerWeek: rate, rateBand: band, rateBandNote } = row.figures;
   if (rate === null) return <Missing label="too few weigh-ins" />;
   const standing = band ? rateStanding(rate, band) : null;
   return (
@@ -511,7 +511,9 @@ function RateCell({ row }: { row: RosterRow }) {
           </span>
         </>
       ) : (
-        <span className="text-xs text-ink-faint">no band for this phase</span>
+        <span className="max-w-40 text-right text-xs text-ink-faint">
+          {rateBandNote ?? 'no band for this phase'}
+        </span>
       )}
     </span>
   );
@@ -568,7 +570,8 @@ function Missing({ label = 'not given' }: { label?: string }) {
 /** Counts a coach reads at a glance above the table. */
 export function RosterSummary({ rows }: { rows: RosterRow[] }) {
   const finalWeek = rows.filter((r) => r.eventType !== 'none' && inFinalWeek(r.daysToEvent)).length;
-  const flagged = rows.filter((r) => r.figures.flags.length > 0).length;
+  // The server's one rule for "has a safety flag" (the review queue counts with the same rule).
+  const flagged = rows.filter((r) => r.figures.safetyFlag).length;
   const pending = rows.filter((r) => r.status === 'intake_pending').length;
   const items = [
     { label: rows.length === 1 ? 'athlete' : 'athletes', value: rows.length },

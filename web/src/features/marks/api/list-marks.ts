@@ -21,8 +21,11 @@ export function marksQueryOptions(athleteId: string, range: MarkRange = {}) {
 }
 
 /** The marks in `data.data`; a chart and the list asking for the same range share one request. */
-export function useMarks(athleteId: string, range: MarkRange = {}) {
-  return useQuery({ ...marksQueryOptions(athleteId, range), enabled: athleteId !== '' });
+export function useMarks(athleteId: string, range: MarkRange = {}, options: { enabled?: boolean } = {}) {
+  return useQuery({
+    ...marksQueryOptions(athleteId, range),
+    enabled: athleteId !== '' && (options.enabled ?? true),
+  });
 }
 
 /** How many of the athlete's marks (all of them) hold something the viewer has not read: for a nav badge. */

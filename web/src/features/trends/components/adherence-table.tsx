@@ -1,4 +1,4 @@
-import { DRIFT_METRIC_LABELS, DRIFT_METRICS, type AdherenceWeek } from '@driftmark/shared';
+import { DRIFT_METRIC_LABELS, DRIFT_METRICS, type AdherenceWeekInRange } from '@driftmark/shared';
 import { cn } from '@/lib/cn';
 import { formatDate, formatNumber, NBSP } from '@/lib/format';
 import { adherenceGrid } from '../utils/figures';
@@ -11,7 +11,7 @@ export function AdherenceTable({
   adherence,
   className,
 }: {
-  adherence: readonly AdherenceWeek[];
+  adherence: readonly AdherenceWeekInRange[];
   className?: string;
 }) {
   const grid = adherenceGrid(adherence, DRIFT_METRICS);
@@ -35,7 +35,7 @@ export function AdherenceTable({
         <thead>
           <tr className="border-b border-line bg-sunken text-xs tracking-wide text-ink-muted uppercase">
             <th scope="col" className={head}>
-              Week of
+              Week
             </th>
             {grid.metrics.map((m) => (
               <th key={m} scope="col" className={head}>
@@ -46,12 +46,17 @@ export function AdherenceTable({
         </thead>
         <tbody className="divide-y divide-line">
           {grid.weeks.map((week) => (
-            <tr key={week}>
+            <tr key={week.weekStart}>
               <th scope="row" className="px-3 py-2 text-left font-semibold whitespace-nowrap tabular-nums">
-                {formatDate(week)}
+                {formatDate(week.from, 'short')} – {formatDate(week.to, 'short')}
+                {week.partial ? (
+                  <span className="block text-xs font-normal text-ink-muted">
+                    partial week: {week.days} {week.days === 1 ? 'day' : 'days'} in range
+                  </span>
+                ) : null}
               </th>
               {grid.metrics.map((m) => {
-                const w = grid.at(week, m);
+                const w = grid.at(week.weekStart, m);
                 if (!w || w.targetDays === 0) {
                   return (
                     <td key={m} className="px-3 py-2 text-ink-faint">

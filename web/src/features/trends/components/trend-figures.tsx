@@ -54,7 +54,7 @@ export function TrendFigures({ view, units }: { view: TrendView; units: ViewerUn
                   {rateLine(rate)}
                 </p>
               ) : (
-                <p>No guidance band for this phase.</p>
+                <p data-testid="rate-band-note">{rate.bandNote}</p>
               )}
               <p className="tabular-nums">
                 {signed(weightFromKg(rate.kgPerWeek, unit), 2)}

@@ -29,6 +29,8 @@ export function rateInWords(rate: RateView | null, units: Pick<ViewerUnits, 'wei
     pct < 0.05
       ? 'Over the last 14 days your trend has held steady.'
       : `Over the last 14 days your trend has gone ${rate.kgPerWeek < 0 ? 'down' : 'up'} by about ${amount} a week (${formatNumber(pct, 1)}${NBSP}% of your body weight).`;
+  // In a countdown the server withholds the band and says why; say it too.
+  if (rate.paused) return `${first} ${rate.bandNote ?? ''}`.trim();
   const pace = bandPace(rate);
   if (!rate.band || pace === null) return first;
   const words = bandWords(rate.band);
@@ -52,15 +54,17 @@ function weekWords(w: WeekSummary): string {
 /** The athlete's figures in plain words: the rate against the plan's pace and the latest week's adherence. */
 export function TrendInWords({ view, units }: { view: TrendView; units: ViewerUnits }) {
   const week = latestWeek(view.adherence);
-  const start = week[0]?.weekStart;
-  const current = start !== undefined && addDays(start, 6) >= view.today;
+  const span = week[0];
+  const current = span !== undefined && addDays(span.weekStart, 6) >= view.today;
   return (
     <div className="space-y-3 text-ink">
       <p data-testid="rate-words">{rateInWords(view.rate, units)}</p>
-      {start !== undefined ? (
+      {span !== undefined ? (
         <div>
           <p className="font-semibold">
-            {current ? 'This week so far' : 'Week of'} ({formatDate(start, 'short')} on)
+            {current ? 'This week so far' : span.partial ? 'Part of a week' : 'Week'} (
+            {formatDate(span.from, 'short')} – {formatDate(span.to, 'short')}
+            {span.partial ? `, ${span.days} ${span.days === 1 ? 'day' : 'days'}` : ''})
           </p>
           <ul className="mt-1 space-y-1 text-sm text-ink-muted">
             {week.map((w) => (

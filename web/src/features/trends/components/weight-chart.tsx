@@ -144,6 +144,10 @@ export function WeightChart({
             >
               Guidance {band.source ? `(${band.source})` : ''}
             </LegendItem>
+          ) : view.rate?.paused ? (
+            <span data-testid="weight-chart-band-note" className="text-ink-muted">
+              {view.rate.bandNote}
+            </span>
           ) : null}
           {projected ? (
             <LegendItem

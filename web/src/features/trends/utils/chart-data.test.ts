@@ -83,6 +83,8 @@ describe('weightPoints', () => {
           from: dates[0]!,
           to: dates[13]!,
           band: { minPct: -1, maxPct: -0.5, label: 'Dieting', source: 'Helms 2014' },
+          bandNote: null,
+          paused: false,
         },
       },
     );

@@ -1,4 +1,4 @@
-import type { AdherenceWeek } from '@driftmark/shared';
+import type { AdherenceWeekInRange } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
 import { adherenceGrid, bandPace, bandRelation, latestWeek, signed } from './figures';
 
@@ -26,8 +26,16 @@ describe('rate against the band', () => {
 });
 
 describe('adherence', () => {
-  const week = (weekStart: string, metric: AdherenceWeek['metric'], onPlanDays: number): AdherenceWeek => ({
+  const week = (
+    weekStart: string,
+    metric: AdherenceWeekInRange['metric'],
+    onPlanDays: number,
+  ): AdherenceWeekInRange => ({
     weekStart,
+    from: weekStart,
+    to: weekStart.replace(/\d\d$/, (d) => String(Number(d) + 6).padStart(2, '0')),
+    days: 7,
+    partial: false,
     metric,
     targetDays: 7,
     loggedDays: 6,
@@ -51,7 +59,10 @@ describe('adherence', () => {
 
   it('lays weeks out newest first with the metrics that had targets', () => {
     const grid = adherenceGrid(rows, ['energy', 'protein', 'water']);
-    expect(grid.weeks).toEqual(['2026-05-11', '2026-05-04']);
+    expect(grid.weeks.map((w) => [w.weekStart, w.from, w.to])).toEqual([
+      ['2026-05-11', '2026-05-11', '2026-05-17'],
+      ['2026-05-04', '2026-05-04', '2026-05-10'],
+    ]);
     expect(grid.metrics).toEqual(['energy', 'water']);
     expect(grid.at('2026-05-04', 'water')).toBeNull();
     expect(grid.at('2026-05-04', 'energy')?.onPlanDays).toBe(5);

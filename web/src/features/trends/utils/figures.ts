@@ -1,4 +1,4 @@
-import type { AdherenceWeek, DriftMetric, RateView } from '@driftmark/shared';
+import type { AdherenceWeekInRange, DriftMetric, RateView } from '@driftmark/shared';
 
 /** A true minus sign (U+2212) and an explicit plus, for rates that read as directions. */
 export function signed(value: number, digits = 1): string {
@@ -39,6 +39,11 @@ export function bandPace(
 
 export interface WeekSummary {
   weekStart: string;
+  /** The week's span inside the range and whether it is partial, as the server gives them. */
+  from: string;
+  to: string;
+  days: number;
+  partial: boolean;
   metric: DriftMetric;
   onPlanDays: number;
   loggedDays: number;
@@ -47,25 +52,51 @@ export interface WeekSummary {
 }
 
 /** The newest week that had targets, metric by metric (for the plain-words summary). */
-export function latestWeek(adherence: readonly AdherenceWeek[]): WeekSummary[] {
+export function latestWeek(adherence: readonly AdherenceWeekInRange[]): WeekSummary[] {
   const withTargets = adherence.filter((w) => w.targetDays > 0);
   if (withTargets.length === 0) return [];
   const newest = withTargets.reduce((a, w) => (w.weekStart > a ? w.weekStart : a), withTargets[0]!.weekStart);
   return withTargets
     .filter((w) => w.weekStart === newest)
-    .map(({ weekStart, metric, onPlanDays, loggedDays, targetDays, adherence: share }) => ({
-      weekStart,
-      metric,
-      onPlanDays,
-      loggedDays,
-      targetDays,
-      adherence: share,
-    }));
+    .map(
+      ({
+        weekStart,
+        from,
+        to,
+        days,
+        partial,
+        metric,
+        onPlanDays,
+        loggedDays,
+        targetDays,
+        adherence: share,
+      }) => ({
+        weekStart,
+        from,
+        to,
+        days,
+        partial,
+        metric,
+        onPlanDays,
+        loggedDays,
+        targetDays,
+        adherence: share,
+      }),
+    );
 }
 
-/** The adherence table's rows: weeks newest first, and the metrics that had a target in any of them. */
-export function adherenceGrid(adherence: readonly AdherenceWeek[], order: readonly DriftMetric[]) {
-  const weeks = [...new Set(adherence.map((w) => w.weekStart))].sort().reverse();
+/**
+ * The adherence table's rows: weeks newest first (each with its span inside the range, as the server
+ * labels it), and the metrics that had a target in any of them.
+ */
+export function adherenceGrid(adherence: readonly AdherenceWeekInRange[], order: readonly DriftMetric[]) {
+  const spans = new Map(
+    adherence.map((w) => [
+      w.weekStart,
+      { weekStart: w.weekStart, from: w.from, to: w.to, days: w.days, partial: w.partial },
+    ]),
+  );
+  const weeks = [...spans.values()].sort((a, b) => b.weekStart.localeCompare(a.weekStart));
   const metrics = order.filter((m) => adherence.some((w) => w.metric === m && w.targetDays > 0));
   const cell = new Map(adherence.map((w) => [`${w.weekStart}|${w.metric}`, w]));
   return {

@@ -6,6 +6,8 @@ export const weeklyKeys = {
   list: (athleteId: string) => [...weeklyKeys.athlete(athleteId), 'list'] as const,
   /** GET /api/athletes/:athleteId/weekly-check-ins/current (the one due now). */
   current: (athleteId: string) => [...weeklyKeys.athlete(athleteId), 'current'] as const,
+  /** GET /api/athletes/:athleteId/weekly-check-ins/week/:dueDate (any week due so far). */
+  week: (athleteId: string, dueDate: string) => [...weeklyKeys.athlete(athleteId), 'week', dueDate] as const,
   /** GET /api/weekly-check-ins/:checkInId. */
   detail: (checkInId: string) => [...weeklyKeys.all, 'detail', checkInId] as const,
 };

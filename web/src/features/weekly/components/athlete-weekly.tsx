@@ -66,6 +66,13 @@ export function AthleteWeekly({
         </Alert>
       ) : null}
       {view.reply ? <WeeklyReply reply={view.reply} timeZone={timeZone} /> : null}
+      {view.status === 'not_due' ? (
+        <Alert tone="info" title="Nothing is due yet" live={false}>
+          {view.firstDueDate
+            ? `Your first weekly check-in is due on ${formatDate(view.firstDueDate)}; it covers the week before it.`
+            : 'Your first weekly check-in opens on your check-in day.'}
+        </Alert>
+      ) : null}
       {view.status === 'missed' ? (
         <Alert tone="caution" title="This check-in was missed">
           The next one opens on your check-in day.
@@ -77,29 +84,31 @@ export function AthleteWeekly({
         <WeeklyFiguresList figures={view.figures} weightUnit={weightUnit} />
       </Card>
 
-      <Card aria-labelledby="weekly-answers-heading">
-        <CardHeader
-          id="weekly-answers-heading"
-          title={showForm ? 'Tell your coach about the week' : 'Your answers'}
-          action={
-            canSubmit && view.status === 'submitted' && !editing ? (
-              <Button variant="secondary" size="sm" onClick={() => setEditing(true)}>
-                Change my answers
-              </Button>
-            ) : undefined
-          }
-        />
-        {showForm ? (
-          <WeeklyCheckInForm
-            key={`${view.dueDate}-${view.submittedAt ?? ''}`}
-            athleteId={athleteId}
-            view={view}
-            onSubmitted={() => setEditing(false)}
+      {view.status === 'not_due' ? null : (
+        <Card aria-labelledby="weekly-answers-heading">
+          <CardHeader
+            id="weekly-answers-heading"
+            title={showForm ? 'Tell your coach about the week' : 'Your answers'}
+            action={
+              canSubmit && view.status === 'submitted' && !editing ? (
+                <Button variant="secondary" size="sm" onClick={() => setEditing(true)}>
+                  Change my answers
+                </Button>
+              ) : undefined
+            }
           />
-        ) : (
-          <WeeklyAnswers view={view} />
-        )}
-      </Card>
+          {showForm ? (
+            <WeeklyCheckInForm
+              key={`${view.dueDate}-${view.submittedAt ?? ''}`}
+              athleteId={athleteId}
+              view={view}
+              onSubmitted={() => setEditing(false)}
+            />
+          ) : (
+            <WeeklyAnswers view={view} />
+          )}
+        </Card>
+      )}
     </div>
   );
 }

@@ -26,6 +26,14 @@ export function WeeklyDueBanner({ athleteId, href }: { athleteId: string; href: 
       </section>
     );
   }
+  if (view.status === 'not_due') {
+    // Nothing is due before joining: a quiet note of when the first one is.
+    return view.firstDueDate ? (
+      <p className="rounded-lg border border-line bg-surface px-4 py-2 text-sm text-ink-muted">
+        Your first weekly check-in is due on {formatDate(view.firstDueDate)}.
+      </p>
+    ) : null;
+  }
   if (view.status === 'answered') {
     return (
       <section

@@ -1,5 +1,5 @@
 import type { WeeklyFigures, WeightUnit } from '@driftmark/shared';
-import { formatDate, formatNumber, formatWeight } from '@/lib/format';
+import { formatDate, formatNumber, formatWeight, NBSP } from '@/lib/format';
 import { metricLabel, percent, ratingLabel } from '../utils/weekly';
 
 function Row({ label, children }: { label: string; children: React.ReactNode }) {
@@ -34,12 +34,24 @@ export function WeeklyFiguresList({
       </p>
       <dl aria-label="Weight">
         <Row label="Mean weight">
-          {figures.meanWeightKg === null ? 'No weigh-ins' : formatWeight(figures.meanWeightKg, weightUnit)}
+          {figures.meanWeightKg !== null
+            ? formatWeight(figures.meanWeightKg, weightUnit)
+            : figures.weighIns === 0
+              ? 'No weigh-ins'
+              : 'Too few weigh-ins for a mean'}
         </Row>
         {figures.changeKg !== null ? (
-          <Row label="Change">{weightChange(figures.changeKg, weightUnit)}</Row>
+          <Row label="Change of the week’s mean">{weightChange(figures.changeKg, weightUnit)}</Row>
         ) : null}
         <Row label="Weigh-ins">{`${figures.weighIns} of 7 days`}</Row>
+        {figures.rate ? (
+          <Row label="14-day rate">
+            {`${figures.rate.percentPerWeek < 0 ? '\u2212' : '+'}${formatNumber(Math.abs(figures.rate.percentPerWeek), 1, 1)}${NBSP}% a week`}
+            <span className="block text-xs font-normal text-ink-faint">
+              {formatDate(figures.rate.from, 'short')} – {formatDate(figures.rate.to, 'short')}
+            </span>
+          </Row>
+        ) : null}
       </dl>
       {adherence.length > 0 ? (
         <div>

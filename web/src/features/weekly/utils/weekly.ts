@@ -15,6 +15,7 @@ export const WEEKLY_STATUS_LABELS: Record<WeeklyStatus, string> = {
   submitted: 'Waiting for a reply',
   answered: 'Answered',
   missed: 'Missed',
+  not_due: 'Not due yet',
 };
 
 export const WEEKLY_STATUS_TONES: Record<WeeklyStatus, BadgeTone> = {
@@ -22,6 +23,7 @@ export const WEEKLY_STATUS_TONES: Record<WeeklyStatus, BadgeTone> = {
   submitted: 'accent',
   answered: 'on-plan',
   missed: 'not-logged',
+  not_due: 'not-logged',
 };
 
 export function metricLabel(metric: string): string {
