@@ -20,6 +20,8 @@ export * from './plans/guardrails.js';
 export * from './plans/countdown.js';
 export * from './plans/diff.js';
 export * from './plans/cautions.js';
+export * from './plans/cutoff.js';
+export * from './plans/event-time.js';
 export * from './schemas/trends.js';
 export * from './schemas/marks.js';
 export * from './schemas/review.js';

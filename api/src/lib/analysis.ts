@@ -8,6 +8,7 @@
  * that morning's weigh-in, so consecutive dates are 24 h apart.
  */
 import {
+  amountAfter,
   DRIFT_METRICS,
   KCAL_PER_KG_LOST,
   LOSS_RATE_STRONG_PCT_PER_WEEK,
@@ -333,25 +334,22 @@ export function driftFor(
 
 // Timing ----------------------------------------------------------------------------------------
 
-/** Seconds since midnight of "HH:MM" or "HH:MM:SS". */
-function clockSeconds(time: string): number {
-  const [h = 0, m = 0, s = 0] = time.split(':').map(Number);
-  return h * 3600 + m * 60 + s;
-}
-
-/** Fluids after the cut-off (strictly later clock time) beyond the allowance; null without a cut-off or a breach. */
+/**
+ * Fluids after the cut-off beyond the allowance; null without a cut-off or a breach. The timing rule
+ * itself (strictly later clock time) is `amountAfter` in shared/, shared with the food cut-off.
+ */
 export function cutoffBreachFor(
   cutoff: ResolvedTargets['fluidCutoff'],
   fluids: readonly { time: string; volumeMl: number }[],
 ): CutoffBreach | null {
   if (!cutoff) return null;
-  const limit = clockSeconds(cutoff.time);
-  const afterCutoffMl = fluids
-    .filter((f) => clockSeconds(f.time) > limit)
-    .reduce((sum, f) => sum + f.volumeMl, 0);
-  const excessMl = afterCutoffMl - cutoff.allowanceMl;
-  if (excessMl <= 0) return null;
-  return { cutoff: cutoff.time, allowanceMl: cutoff.allowanceMl, afterCutoffMl, excessMl };
+  const { logged, excess } = amountAfter(
+    fluids.map((f) => ({ time: f.time, amount: f.volumeMl })),
+    cutoff.time,
+    cutoff.allowanceMl,
+  );
+  if (excess <= 0) return null;
+  return { cutoff: cutoff.time, allowanceMl: cutoff.allowanceMl, afterCutoffMl: logged, excessMl: excess };
 }
 
 // Adherence -------------------------------------------------------------------------------------

@@ -109,7 +109,7 @@ export interface DayParts {
   /** The plan's part, worked out by the day service. */
   plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
   /** Drift against the targets and the cut-off breach, worked out by the day service. */
-  judged: Pick<DayView, 'drift' | 'breach'>;
+  judged: Pick<DayView, 'drift' | 'breach' | 'timingBreaches'>;
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -134,6 +134,7 @@ export function presentDay(p: DayParts): DayView {
     cautions: p.plan.cautions,
     drift: p.judged.drift,
     breach: p.judged.breach,
+    timingBreaches: p.judged.timingBreaches,
   };
 }
 
