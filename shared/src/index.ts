@@ -28,3 +28,4 @@ export * from './schemas/review.js';
 export * from './schemas/weekly.js';
 export * from './schemas/notifications.js';
 export * from './schemas/data.js';
+export * from './reader.js';

@@ -87,6 +87,7 @@ describe('the day view', () => {
       cautions: [],
       drift: [],
       breach: null,
+      timingBreaches: [],
     });
     expect((await day(YESTERDAY)).isToday).toBe(false);
   });

@@ -220,6 +220,17 @@ describe('applying a countdown', () => {
     expect(e1.cautions.map((c) => c.code)).toEqual(['countdown', 'fluid_restriction', 'sodium_low']);
     expect(e1.cautions[0]!.acknowledgedAt).toBeNull();
     expect(e1.cautions[1]!.acknowledgedAt).toBe(v.createdAt);
+    // The athlete (mL) reads "your countdown"; a coach reading in fl oz gets staff wording and fl oz.
+    expect(e1.cautions[0]!.message).toMatch(/^E-1 of your countdown/);
+    expect(e1.cautions[1]!.message).toMatch(/\d mL/);
+    await t.dataSource.query(`UPDATE users SET volume_unit = 'floz', weight_unit = 'lb' WHERE id = $1`, [
+      coach.id,
+    ]);
+    const forCoach = dayView.parse((await coachAgent.get(`${base}/days/2026-12-02`)).body.data);
+    const firstName = me.user.name.split(' ')[0]!;
+    expect(forCoach.cautions[0]!.message).toMatch(new RegExp(`^E-1 of ${firstName}'s? countdown`));
+    expect(forCoach.cautions[1]!.message).toMatch(/\d fl oz/);
+    expect(forCoach.cautions[1]!.message).not.toMatch(/mL/);
 
     // Every countdown day carries the standing caution; the day before the countdown none.
     const e2 = dayView.parse((await athlete.get(`${base}/days/${TODAY}`)).body.data);

@@ -219,10 +219,16 @@ describe('the countdown athlete', () => {
       ...w,
       at: current.createdAt.toISOString(),
     }));
-    const todays = cautionsForDay({ content: current.content, date: today, acknowledgements });
+    const reader = { units: { weight: 'kg', volume: 'ml' }, aboutAthlete: null } as const;
+    const todays = cautionsForDay({ content: current.content, date: today, acknowledgements, reader });
     expect(todays.map((c) => c.code)).toEqual(['countdown']);
     expect(todays[0]!.message).toMatch(/^E-4 of your countdown/);
-    const e3 = cautionsForDay({ content: current.content, date: addDays(eventDate, -3), acknowledgements });
+    const e3 = cautionsForDay({
+      content: current.content,
+      date: addDays(eventDate, -3),
+      acknowledgements,
+      reader,
+    });
     expect(e3.map((c) => c.code)).toEqual(['countdown', 'carb_load']);
   });
 

@@ -6,6 +6,7 @@ import {
   timingBreaches,
   versionInForce,
   type DaySummary,
+  type Reader,
   type DayView,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -62,6 +63,7 @@ export function planForDay(
   acknowledgements: readonly AcknowledgementWithAuthor[],
   date: string,
   place: EventPlace,
+  reader: Reader,
 ): DayPlan {
   if (!version) return { targets: null, countdown: null, cautions: [] };
   const { content } = version;
@@ -106,6 +108,7 @@ export function planForDay(
     cautions: cautionsForDay({
       content,
       date,
+      reader,
       acknowledgements: acknowledgements.map((a) => ({
         code: a.code,
         severity: a.severity,
@@ -123,19 +126,21 @@ async function loadDayPlan(
   manager: EntityManager,
   athlete: AthleteWithPeople,
   date: string,
+  reader: Reader,
 ): Promise<DayPlan> {
   const plans = new PlanRepository(manager);
   const version = versionInForce(await plans.listVersions(athlete.id), date);
   const acks = version ? ((await plans.acknowledgementsByVersion([version.id])).get(version.id) ?? []) : [];
-  return planForDay(version, acks, date, eventPlaceOf(athlete));
+  return planForDay(version, acks, date, eventPlaceOf(athlete), reader);
 }
 
-/** Everything the athlete logged on `date` (their local date), as the day view. */
+/** Everything the athlete logged on `date` (their local date), as the day view, worded for `reader`. */
 export async function loadDayView(
   manager: EntityManager,
   athlete: AthleteWithPeople,
   date: string,
   now: Date,
+  reader: Reader,
 ): Promise<DayView> {
   const timeZone = athlete.user.timeZone;
   const today = localDateTime(now, timeZone).date;
@@ -148,7 +153,7 @@ export async function loadDayView(
     new DayEntryRepository(manager, SymptomReport).listForDay(athlete.id, date),
     new AthleteFlagRepository(manager).listForDay(athlete.id, date),
     dayPhotoSource(manager).forDay(athlete.id, date),
-    loadDayPlan(manager, athlete, date),
+    loadDayPlan(manager, athlete, date, reader),
   ]);
   const fluidMl = fluids.length > 0 ? fluids.reduce((sum, f) => sum + f.volumeMl, 0) : null;
   const judged = dayDrift({
@@ -180,6 +185,7 @@ export async function loadDayView(
     symptoms,
     flags,
     photos,
+    reader,
     plan,
     judged: { ...judged, timingBreaches: timing },
   });
@@ -190,8 +196,8 @@ type DayDeps = { dataSource: DataSource; clock: () => Date };
 export class DayService {
   constructor(private readonly deps: DayDeps) {}
 
-  getDay(athlete: AthleteWithPeople, date: string): Promise<DayView> {
-    return loadDayView(this.deps.dataSource.manager, athlete, date, this.deps.clock());
+  getDay(athlete: AthleteWithPeople, date: string, reader: Reader): Promise<DayView> {
+    return loadDayView(this.deps.dataSource.manager, athlete, date, this.deps.clock(), reader);
   }
 
   /** One summary per day with anything logged between `from` and `to` (inclusive), newest first. */
