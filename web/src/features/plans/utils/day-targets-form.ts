@@ -34,6 +34,8 @@ export interface SupplementFormValues {
   unit: string;
   /** Clock times "HH:MM", separated by commas or spaces. */
   times: string;
+  /** Hours before the event's clock time ("3, 0.5"), countdown days only. */
+  beforeEventHours: string;
 }
 
 export interface DayTargetsFormValues {
@@ -44,6 +46,9 @@ export interface DayTargetsFormValues {
   water: { kind: WaterKind; value: string };
   sodiumMg: string;
   fluidCutoff: { on: boolean; time: string; allowanceMl: string };
+  foodCutoff: { on: boolean; time: string; allowanceKcal: string };
+  /** "Only sips": at most maxMl, over the whole day (after empty) or after a clock time. */
+  fluidCap: { on: boolean; maxMl: string; after: string };
   steps: string;
   cardioMinutes: string;
   supplements: SupplementFormValues[];
@@ -73,7 +78,7 @@ export function toInputText(value: number | null | undefined, digits = 1): strin
 }
 
 export function newSupplementRow(): SupplementFormValues {
-  return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '' };
+  return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '', beforeEventHours: '' };
 }
 
 export function emptyDayTargetsFormValues(): DayTargetsFormValues {
@@ -85,6 +90,8 @@ export function emptyDayTargetsFormValues(): DayTargetsFormValues {
     water: { kind: 'none', value: '' },
     sodiumMg: '',
     fluidCutoff: { on: false, time: '', allowanceMl: '' },
+    foodCutoff: { on: false, time: '', allowanceKcal: '' },
+    fluidCap: { on: false, maxMl: '', after: '' },
     steps: '',
     cardioMinutes: '',
     supplements: [],
@@ -125,6 +132,12 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
     fluidCutoff: t.fluidCutoff
       ? { on: true, time: t.fluidCutoff.time, allowanceMl: toInputText(t.fluidCutoff.allowanceMl, 0) }
       : { on: false, time: '', allowanceMl: '' },
+    foodCutoff: t.foodCutoff
+      ? { on: true, time: t.foodCutoff.time, allowanceKcal: toInputText(t.foodCutoff.allowanceKcal, 0) }
+      : { on: false, time: '', allowanceKcal: '' },
+    fluidCap: t.fluidCap
+      ? { on: true, maxMl: toInputText(t.fluidCap.maxMl, 0), after: t.fluidCap.after ?? '' }
+      : { on: false, maxMl: '', after: '' },
     steps: toInputText(t.steps, 0),
     cardioMinutes: toInputText(t.cardioMinutes, 0),
     supplements: t.supplements.map((s) => ({
@@ -133,6 +146,7 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
       dose: toInputText(s.dose, 3),
       unit: s.unit ?? '',
       times: s.times.join(', '),
+      beforeEventHours: (s.minutesBeforeEvent ?? []).map((m) => toInputText(m / 60, 2)).join(', '),
     })),
     note: t.note ?? '',
   };
@@ -187,13 +201,24 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
         : v.water.kind === 'usual_times'
           ? { kind: 'usual_times', factor: n('water.value', v.water.value) }
           : null;
-  const supplements: ScheduleItem[] = (v.supplements ?? []).map((s, i) => ({
-    id: s.itemId,
-    item: s.item,
-    dose: optional(`supplements.${i}.dose`, s.dose),
-    unit: s.unit.trim() === '' ? null : s.unit.trim(),
-    times: splitTimes(s.times),
-  }));
+  const supplements: ScheduleItem[] = (v.supplements ?? []).map((s, i) => {
+    const hours = (s.beforeEventHours ?? '')
+      .split(/[\s;]+|,(?=\s)|,$/)
+      .map((h) => h.trim())
+      .filter(Boolean);
+    const minutes = hours.map((h) => {
+      const n = read(`supplements.${i}.minutesBeforeEvent`, h);
+      return n === undefined ? Number.NaN : Math.round(n * 60);
+    });
+    return {
+      id: s.itemId,
+      item: s.item,
+      dose: optional(`supplements.${i}.dose`, s.dose),
+      unit: s.unit.trim() === '' ? null : s.unit.trim(),
+      times: splitTimes(s.times),
+      ...(minutes.length > 0 ? { minutesBeforeEvent: minutes } : {}),
+    };
+  });
   const note = v.note.trim();
 
   return {
@@ -208,6 +233,18 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
         ? {
             time: v.fluidCutoff.time,
             allowanceMl: optional('fluidCutoff.allowanceMl', v.fluidCutoff.allowanceMl) ?? 0,
+          }
+        : null,
+      foodCutoff: v.foodCutoff?.on
+        ? {
+            time: v.foodCutoff.time,
+            allowanceKcal: optional('foodCutoff.allowanceKcal', v.foodCutoff.allowanceKcal) ?? 0,
+          }
+        : null,
+      fluidCap: v.fluidCap?.on
+        ? {
+            maxMl: n('fluidCap.maxMl', v.fluidCap.maxMl),
+            after: v.fluidCap.after.trim() === '' ? null : v.fluidCap.after.trim(),
           }
         : null,
       steps: optional('steps', v.steps),
@@ -235,6 +272,10 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
   };
   const w = targets.water;
   const cutoff = targets.fluidCutoff;
+  const food = targets.foodCutoff;
+  const cap = targets.fluidCap;
+  const clock = (t: string | null | undefined) =>
+    typeof t === 'string' && /^([01]\d|2[0-3]):[0-5]\d$/.test(t);
   return {
     ...targets,
     energy: e && usable(e.kind === 'kcal' ? e.kcal : e.factor) ? e : null,
@@ -247,6 +288,14 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
       cutoff && /^([01]\d|2[0-3]):[0-5]\d$/.test(cutoff.time)
         ? { time: cutoff.time, allowanceMl: usable(cutoff.allowanceMl) ? cutoff.allowanceMl : 0 }
         : null,
+    foodCutoff:
+      food && clock(food.time)
+        ? { time: food.time, allowanceKcal: usable(food.allowanceKcal) ? food.allowanceKcal : 0 }
+        : null,
+    fluidCap:
+      cap && usable(cap.maxMl) && (cap.after === null || clock(cap.after))
+        ? { maxMl: cap.maxMl, after: cap.after }
+        : null,
     steps: usable(targets.steps) ? targets.steps : null,
     cardioMinutes: usable(targets.cardioMinutes) ? targets.cardioMinutes : null,
     supplements: targets.supplements
@@ -255,6 +304,9 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
         ...s,
         dose: usable(s.dose) ? s.dose : null,
         times: s.times.filter((t) => /^([01]\d|2[0-3]):[0-5]\d$/.test(t)),
+        ...(s.minutesBeforeEvent
+          ? { minutesBeforeEvent: s.minutesBeforeEvent.filter((m) => usable(m) && m >= 0) }
+          : {}),
       })),
   };
 }
@@ -277,9 +329,17 @@ export function targetsFormPath(path: string): string {
   }
   if (head === 'fluidCutoff')
     return second === 'allowanceMl' ? 'fluidCutoff.allowanceMl' : 'fluidCutoff.time';
+  if (head === 'foodCutoff')
+    return second === 'allowanceKcal' ? 'foodCutoff.allowanceKcal' : 'foodCutoff.time';
+  if (head === 'fluidCap') return second === 'after' ? 'fluidCap.after' : 'fluidCap.maxMl';
   if (head === 'supplements') {
     if (second === undefined) return 'supplements';
-    const field = third === 'id' || third === undefined ? 'item' : third;
+    const field =
+      third === 'id' || third === undefined
+        ? 'item'
+        : third === 'minutesBeforeEvent'
+          ? 'beforeEventHours'
+          : third;
     return `supplements.${second}.${field}`;
   }
   return head ?? path;
