@@ -1,4 +1,4 @@
-import type { DayView, FluidCutoff, ScheduleItem } from '@driftmark/shared';
+import { amountAfter, type DayView, type FluidCutoff, type ScheduleItem } from '@driftmark/shared';
 
 /*
  * Progress of a day against its targets, for the athlete's Today screen and the day pages. The
@@ -99,7 +99,12 @@ export function cutoffProgress(
   now: string | null,
 ): CutoffProgress {
   const at = clockMinutes(cutoff.time);
-  const afterMl = fluids.filter((f) => clockMinutes(f.time) > at).reduce((sum, f) => sum + f.volumeMl, 0);
+  // The server's timing rule (shared `amountAfter`), so "after" means the same on both sides.
+  const afterMl = amountAfter(
+    fluids.map((f) => ({ time: f.time, amount: f.volumeMl })),
+    cutoff.time,
+    cutoff.allowanceMl,
+  ).logged;
   const started = now === null || clockMinutes(now) > at;
   const state = afterMl > cutoff.allowanceMl + 1e-9 ? 'over' : started || afterMl > 0 ? 'within' : 'before';
   return { cutoff, afterMl, started, state };
