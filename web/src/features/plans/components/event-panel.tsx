@@ -79,7 +79,7 @@ export function EventPanel({
   return (
     <div className="space-y-4">
       <Card padding="compact" className="flex flex-wrap items-center gap-x-6 gap-y-3">
-        <div className="min-w-0 flex-1">
+        <div className="min-w-0 flex-1 basis-64">
           <p className="text-xs font-semibold tracking-wide text-ink-faint uppercase">Event</p>
           {hasEvent && event.type && event.date ? (
             <p className="text-lg font-semibold text-ink">
