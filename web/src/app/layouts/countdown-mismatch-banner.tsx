@@ -37,15 +37,14 @@ export function CountdownMismatchBanner({
   className?: string;
 }) {
   const linkedKeys = useCountdownLinkedKeys(athlete.id);
-  if (!athlete.countdownMismatch) return null;
+  // Always mounted: after the move the profile clears the mismatch, and the notice says it is done.
   return (
-    <div className={className}>
-      <CountdownMismatchNotice
-        athleteId={athlete.id}
-        mismatch={athlete.countdownMismatch}
-        canResolve={abilities.plan === true}
-        linkedKeys={linkedKeys}
-      />
-    </div>
+    <CountdownMismatchNotice
+      athleteId={athlete.id}
+      mismatch={athlete.countdownMismatch}
+      canResolve={abilities.plan === true}
+      linkedKeys={linkedKeys}
+      className={className}
+    />
   );
 }

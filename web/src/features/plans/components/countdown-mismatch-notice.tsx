@@ -16,6 +16,7 @@ interface CountdownMismatchNoticeProps {
   /** The server's `plan` ability on the athlete: moving the countdown writes a version. */
   canResolve: boolean;
   linkedKeys: LinkedKeys;
+  className?: string;
 }
 
 type Step =
@@ -33,6 +34,7 @@ export function CountdownMismatchNotice({
   mismatch,
   canResolve,
   linkedKeys,
+  className,
 }: CountdownMismatchNoticeProps) {
   const [step, setStep] = useState<Step>({ kind: 'idle' });
   const [error, setError] = useState<string | null>(null);
@@ -43,6 +45,7 @@ export function CountdownMismatchNotice({
     return (
       <Alert
         tone="success"
+        className={className}
         title={`Countdown moved to ${formatDate(step.version.countdown?.eventDate ?? step.version.effectiveFrom)}: version ${step.version.number}, in force from ${formatDate(step.version.effectiveFrom)}.`}
         action={
           <Button variant="secondary" size="sm" onClick={() => setStep({ kind: 'idle' })}>
@@ -75,7 +78,7 @@ export function CountdownMismatchNotice({
 
   if (step.kind === 'review') {
     return (
-      <Card>
+      <Card className={className}>
         <p className="text-sm font-semibold text-accent">Preview · nothing is saved yet</p>
         <h3 className="mb-4 text-xl font-bold text-ink">
           Move the countdown from {formatDate(mismatch.countdownEventDate)} to {formatDate(to)}
@@ -102,6 +105,7 @@ export function CountdownMismatchNotice({
   return (
     <Alert
       tone="caution"
+      className={className}
       title={`The countdown is aimed at ${formatDate(mismatch.countdownEventDate)}, the event is ${formatDate(to)}.`}
       action={
         canResolve ? (
