@@ -150,4 +150,34 @@ describe('a countdown from a template, with guardrails', () => {
       ]),
     );
   });
+  it('keeps saying the countdown aims at another day after the event moves, until one click moves it', async () => {
+    const { page } = desktop;
+    await page.goto('/coach/roster');
+    await page.getByRole('table').getByRole('link', { name: 'Mateo Castellanos' }).click();
+    await page.getByRole('link', { name: 'Plan', exact: true }).click();
+    await page.getByRole('button', { name: 'Change event date' }).click();
+    const box = page.getByLabel('New event date');
+    const current = await box.inputValue();
+    const later = new Date(Date.parse(`${current}T00:00:00Z`) + 86_400_000).toISOString().slice(0, 10);
+    await box.fill(later);
+    await page.getByRole('button', { name: 'Save the date' }).click();
+    const notice = page.getByText(/The countdown is aimed at .*, the event is /);
+    await notice.waitFor();
+    // The server says so after a reload too, and on the athlete's other coach pages.
+    await page.reload();
+    await notice.waitFor();
+    await page.getByRole('link', { name: 'Trends', exact: true }).click();
+    await notice.waitFor();
+    await screenshot(page, 'countdown-mismatch-1280');
+    await page.getByRole('button', { name: /Move the countdown to/ }).click();
+    const confirm = page.getByRole('button', { name: /move countdown$/i });
+    await confirm.waitFor();
+    const boxes = page.getByRole('group', { name: /Acknowledge each warning/ }).getByRole('checkbox');
+    for (let i = 0; i < (await boxes.count()); i += 1) await boxes.nth(i).check();
+    await confirm.click();
+    await page.getByText(/Countdown moved to/).waitFor();
+    await page.reload();
+    await page.getByRole('heading', { name: 'Trends' }).waitFor();
+    await expect(notice.count()).resolves.toBe(0);
+  });
 });

@@ -107,6 +107,7 @@ describe('within the team', () => {
       share: false,
       log: false,
       endCoaching: false,
+      plan: true,
     });
 
     const before = await snapshot(w.athlete.athlete.id);
@@ -145,6 +146,7 @@ describe('within the team', () => {
       share: true,
       log: false,
       endCoaching: true,
+      plan: true,
     });
   });
 
@@ -169,6 +171,7 @@ describe('within the team', () => {
       share: false,
       log: true,
       endCoaching: false,
+      plan: false,
     });
     const done = await agent.put(`/api/athletes/${w.athlete.athlete.id}/intake`).send(intake);
     expect(done.status).toBe(200);

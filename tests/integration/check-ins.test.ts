@@ -68,7 +68,15 @@ describe('the day view', () => {
       fluids: [],
       fluidTotalMl: 0,
       meals: [],
-      totals: { energyKcal: 0, proteinG: 0, carbohydrateG: 0, fatG: 0, fibreG: 0, alcoholG: 0, sodiumMg: 0 },
+      totals: {
+        energyKcal: 0,
+        proteinG: 0,
+        carbohydrateG: 0,
+        fatG: 0,
+        fibreG: 0,
+        alcoholG: 0,
+        sodiumMg: null,
+      },
       supplements: [],
       evening: null,
       symptoms: [],
@@ -80,6 +88,7 @@ describe('the day view', () => {
       drift: [],
       cutoff: null,
       breach: null,
+      timingBreaches: [],
     });
     expect((await day(YESTERDAY)).isToday).toBe(false);
   });

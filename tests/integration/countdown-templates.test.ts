@@ -220,6 +220,17 @@ describe('applying a countdown', () => {
     expect(e1.cautions.map((c) => c.code)).toEqual(['countdown', 'fluid_restriction', 'sodium_low']);
     expect(e1.cautions[0]!.acknowledgedAt).toBeNull();
     expect(e1.cautions[1]!.acknowledgedAt).toBe(v.createdAt);
+    // The athlete (mL) reads "your countdown"; a coach reading in fl oz gets staff wording and fl oz.
+    expect(e1.cautions[0]!.message).toMatch(/^E-1 of your countdown/);
+    expect(e1.cautions[1]!.message).toMatch(/\d mL/);
+    await t.dataSource.query(`UPDATE users SET volume_unit = 'floz', weight_unit = 'lb' WHERE id = $1`, [
+      coach.id,
+    ]);
+    const forCoach = dayView.parse((await coachAgent.get(`${base}/days/2026-12-02`)).body.data);
+    const firstName = me.user.name.split(' ')[0]!;
+    expect(forCoach.cautions[0]!.message).toMatch(new RegExp(`^E-1 of ${firstName}'s? countdown`));
+    expect(forCoach.cautions[1]!.message).toMatch(/\d fl oz/);
+    expect(forCoach.cautions[1]!.message).not.toMatch(/mL/);
 
     // Every countdown day carries the standing caution; the day before the countdown none.
     const e2 = dayView.parse((await athlete.get(`${base}/days/${TODAY}`)).body.data);
@@ -274,12 +285,15 @@ describe('moving a countdown after the event date changes', () => {
     return athlete;
   }
 
-  it('offers the move on PATCH event, previews it, and saves it as a new version', async () => {
+  it('names the mismatch on PATCH event, previews the move, and saves it as a new version', async () => {
     const athlete = await applied();
     const patched = await coachAgent.patch(`${base}/event`).send({ eventDate: '2026-12-05' });
     expect(patched.status).toBe(200);
     expect(patched.body.data.athlete.eventDate).toBe('2026-12-05');
-    expect(patched.body.data.countdownOffer).toEqual({ fromEventDate: EVENT, toEventDate: '2026-12-05' });
+    expect(patched.body.data.athlete.countdownMismatch).toEqual({
+      countdownEventDate: EVENT,
+      eventDate: '2026-12-05',
+    });
 
     const before = await planRows(t.dataSource);
     const preview = await coachAgent
@@ -317,9 +331,64 @@ describe('moving a countdown after the event date changes', () => {
     const newE1 = dayView.parse((await athlete.get(`${base}/days/2026-12-04`)).body.data);
     expect(newE1.countdown).toMatchObject({ eventDate: '2026-12-05', dayLabel: 'E-1', label: 'Taper' });
 
-    // The same date again: nothing to offer.
+    // The same date again: nothing left to resolve.
     const same = await coachAgent.patch(`${base}/event`).send({ eventDate: '2026-12-05' });
-    expect(same.body.data.countdownOffer).toBeNull();
+    expect(same.body.data.athlete.countdownMismatch).toBeNull();
+  });
+
+  it('keeps saying the countdown aims elsewhere after a reload, until the countdown moves', async () => {
+    const athlete = await applied();
+    await coachAgent.patch(`${base}/event`).send({ eventDate: '2026-12-05' });
+    // A fresh read (the page reloaded), for the coach and for the athlete alike.
+    for (const agent of [coachAgent, athlete]) {
+      const profile = await agent.get(base);
+      expect(profile.body.data.countdownMismatch).toEqual({
+        countdownEventDate: EVENT,
+        eventDate: '2026-12-05',
+      });
+    }
+    const keys = ['fluid_restriction:date:2026-12-04', 'sodium_low:date:2026-12-04'];
+    const moved = await coachAgent
+      .post(`${base}/plan/countdown/move`)
+      .send({ eventDate: '2026-12-05', acknowledgedKeys: keys });
+    expect(moved.status).toBe(201);
+    expect((await coachAgent.get(base)).body.data.countdownMismatch).toBeNull();
+  });
+
+  it('moves the event date with the countdown, in one transaction with the version', async () => {
+    await applied();
+    const keys = ['fluid_restriction:date:2026-12-04', 'sodium_low:date:2026-12-04'];
+    const moved = await coachAgent
+      .post(`${base}/plan/countdown/move`)
+      .send({ eventDate: '2026-12-05', acknowledgedKeys: keys });
+    expect(moved.status).toBe(201);
+    const profile = (await coachAgent.get(base)).body.data;
+    expect(profile).toMatchObject({ eventDate: '2026-12-05', countdownMismatch: null });
+    // The projection aims at the event the countdown now counts back from.
+    const trend = await coachAgent.get(`${base}/trend?from=2026-11-20&to=${TODAY}`);
+    expect(trend.status).toBe(200);
+    expect(trend.body.data.eventDate).toBe('2026-12-05');
+
+    // A move refused by the guardrails changes neither the plan nor the event.
+    const before = await planRows(t.dataSource);
+    const refused = await coachAgent.post(`${base}/plan/countdown/move`).send({ eventDate: '2026-12-06' });
+    expect(refused.status).toBe(409);
+    expect(await planRows(t.dataSource)).toEqual(before);
+    expect((await coachAgent.get(base)).body.data.eventDate).toBe('2026-12-05');
+  });
+
+  it('sets the event date when a countdown is applied for another day', async () => {
+    await weighIns();
+    const template = await createTemplate();
+    const keys = ['fluid_restriction:date:2026-12-03', 'sodium_low:date:2026-12-03'];
+    const res = await coachAgent
+      .post(`${base}/plan/countdown`)
+      .send({ templateId: template.id, eventDate: '2026-12-04', acknowledgedKeys: keys });
+    expect(res.status).toBe(201);
+    expect((await coachAgent.get(base)).body.data).toMatchObject({
+      eventDate: '2026-12-04',
+      countdownMismatch: null,
+    });
   });
 
   it('answers 409 when the latest version has no countdown', async () => {

@@ -55,7 +55,7 @@ async function view() {
   const deps = { dataSource: t.dataSource, clock: () => now };
   const [roster, queue] = await Promise.all([
     new RosterService(deps).list(actor),
-    new ReviewQueueService(deps).list(actor),
+    new ReviewQueueService(deps).list(actor, { weight: owner.weightUnit, volume: owner.volumeUnit }),
   ]);
   return { now, roster, queue };
 }

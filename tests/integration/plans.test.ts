@@ -551,7 +551,7 @@ describe('PATCH event', () => {
       eventTime: '10:30',
       eventName: 'Spring Classic',
     });
-    expect(res.body.data.countdownOffer).toBeNull();
+    expect(res.body.data.athlete.countdownMismatch).toBeNull();
     const bad = await coachAgent.patch(`${base}/event`).send({ eventDate: '2027-02-30' });
     expect(bad.status).toBe(400);
     expect(Object.keys(bad.body.error.fields)).toEqual(['eventDate']);

@@ -9,9 +9,9 @@
  */
 import {
   adherenceOf,
+  amountAfter,
   dayVerdicts,
   DRIFT_METRICS,
-  fluidsAfterCutoff,
   isCounted,
   KCAL_PER_KG_LOST,
   LOSS_RATE_STRONG_PCT_PER_WEEK,
@@ -317,16 +317,22 @@ export function driftFor(
 
 // Timing ----------------------------------------------------------------------------------------
 
-/** Fluids after the cut-off (strictly later clock time) beyond the allowance; null without a cut-off or a breach. */
+/**
+ * Fluids after the cut-off beyond the allowance; null without a cut-off or a breach. The timing rule
+ * itself (strictly later clock time) is `amountAfter` in shared/, shared with the food cut-off.
+ */
 export function cutoffBreachFor(
   cutoff: ResolvedTargets['fluidCutoff'],
   fluids: readonly { time: string; volumeMl: number }[],
 ): CutoffBreach | null {
   if (!cutoff) return null;
-  const afterCutoffMl = fluidsAfterCutoff(cutoff.time, fluids);
-  const excessMl = afterCutoffMl - cutoff.allowanceMl;
-  if (excessMl <= 0) return null;
-  return { cutoff: cutoff.time, allowanceMl: cutoff.allowanceMl, afterCutoffMl, excessMl };
+  const { logged, excess } = amountAfter(
+    fluids.map((f) => ({ time: f.time, amount: f.volumeMl })),
+    cutoff.time,
+    cutoff.allowanceMl,
+  );
+  if (excess <= 0) return null;
+  return { cutoff: cutoff.time, allowanceMl: cutoff.allowanceMl, afterCutoffMl: logged, excessMl: excess };
 }
 
 // Adherence -------------------------------------------------------------------------------------

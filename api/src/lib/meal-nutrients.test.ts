@@ -72,7 +72,7 @@ describe('food meals (per 100 g × quantity / 100)', () => {
 });
 
 describe('day totals', () => {
-  it('adds meals, missing fibre, alcohol and sodium as zero', () => {
+  it('adds meals, missing fibre and alcohol as zero, sodium only from meals that carry it', () => {
     const total = sumNutrients([
       macroMealNutrients({ proteinG: 150, carbohydrateG: 250, fatG: 70, alcoholG: 10, sodiumMg: 900 }),
       macroMealNutrients({ proteinG: 10, carbohydrateG: 10, fatG: 0, fibreG: 8 }),
@@ -86,5 +86,9 @@ describe('day totals', () => {
       alcoholG: 10,
       sodiumMg: 900,
     });
+    // No meal carries sodium: unknown, not 0.
+    expect(
+      sumNutrients([macroMealNutrients({ proteinG: 10, carbohydrateG: 10, fatG: 0 })]).sodiumMg,
+    ).toBeNull();
   });
 });

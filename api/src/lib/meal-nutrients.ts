@@ -68,7 +68,7 @@ export function sumNutrients(meals: readonly MealNutrients[]) {
     fatG: 0,
     fibreG: 0,
     alcoholG: 0,
-    sodiumMg: 0,
+    sodiumMg: null as number | null,
   };
   for (const m of meals) {
     total.energyKcal += m.energyKcal;
@@ -77,7 +77,8 @@ export function sumNutrients(meals: readonly MealNutrients[]) {
     total.fatG += m.fatG;
     total.fibreG += m.fibreG ?? 0;
     total.alcoholG += m.alcoholG ?? 0;
-    total.sodiumMg += m.sodiumMg ?? 0;
+    // Unknown stays unknown: a total only from meals that carry a figure, null when none does.
+    if (m.sodiumMg !== null) total.sodiumMg = (total.sodiumMg ?? 0) + m.sodiumMg;
   }
   return total;
 }

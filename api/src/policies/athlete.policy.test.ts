@@ -86,6 +86,7 @@ describe('athlete policy', () => {
       share: false,
       log: false,
       endCoaching: false,
+      plan: true,
     });
     expect(athleteAbilities(actors.self, athlete)).toEqual({
       update: true,
@@ -93,6 +94,7 @@ describe('athlete policy', () => {
       share: false,
       log: true,
       endCoaching: false,
+      plan: false,
     });
   });
 });

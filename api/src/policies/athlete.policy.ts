@@ -77,5 +77,6 @@ export function athleteAbilities(actor: Actor, target: AthleteTarget) {
     share: canOnAthlete(actor, 'share', target),
     log: canOnAthlete(actor, 'log', target),
     endCoaching: canOnAthlete(actor, 'endCoaching', target),
+    plan: canOnAthlete(actor, 'plan', target),
   };
 }

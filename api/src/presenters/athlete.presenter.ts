@@ -1,8 +1,12 @@
-import type { AthleteProfile, RosterFigures, RosterRow } from '@driftmark/shared';
+import type { AthleteProfile, CountdownMismatch, RosterFigures, RosterRow } from '@driftmark/shared';
 import { daysToEvent } from '../lib/dates.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 
-export function presentAthleteProfile(a: AthleteWithPeople): AthleteProfile {
+/** `countdownMismatch` comes from the athlete's latest plan version (see `athleteProfileView`). */
+export function presentAthleteProfile(
+  a: AthleteWithPeople,
+  countdownMismatch: CountdownMismatch | null,
+): AthleteProfile {
   return {
     id: a.id,
     userId: a.userId,
@@ -27,6 +31,7 @@ export function presentAthleteProfile(a: AthleteWithPeople): AthleteProfile {
     units: { weight: a.user.weightUnit, volume: a.user.volumeUnit },
     photoConsent: a.photoConsent,
     intakeCompletedAt: a.intakeCompletedAt ? a.intakeCompletedAt.toISOString() : null,
+    countdownMismatch,
   };
 }
 

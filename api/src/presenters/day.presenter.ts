@@ -1,4 +1,4 @@
-import { RATING_KEYS, type DaySummary, type DayView } from '@driftmark/shared';
+import { inReaderUnits, RATING_KEYS, type DaySummary, type DayView, type Reader } from '@driftmark/shared';
 import type { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import type { EveningLog } from '../entities/evening-log.entity.js';
 import type { FluidEntry } from '../entities/fluid-entry.entity.js';
@@ -89,8 +89,14 @@ export function presentSymptom(s: SymptomReport): Of<'symptoms'>[number] {
   };
 }
 
-export function presentFlag(f: AthleteFlag): Of<'flags'>[number] {
-  return { id: f.id, kind: f.kind, message: f.message, createdAt: f.createdAt.toISOString() };
+/** A stored flag, its text in the reader's units. */
+export function presentFlag(f: AthleteFlag, reader: Reader): Of<'flags'>[number] {
+  return {
+    id: f.id,
+    kind: f.kind,
+    message: inReaderUnits(f.message, reader.units),
+    createdAt: f.createdAt.toISOString(),
+  };
 }
 
 export interface DayParts {
@@ -106,10 +112,12 @@ export interface DayParts {
   symptoms: SymptomReport[];
   flags: AthleteFlag[];
   photos: DayView['photos'];
+  /** Who reads it: stored texts (flags) come out in their units. */
+  reader: Reader;
   /** The plan's part, worked out by the day service. */
   plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
   /** Drift against the targets and the cut-off breach, worked out by the day service. */
-  judged: Pick<DayView, 'drift' | 'cutoff' | 'breach'>;
+  judged: Pick<DayView, 'drift' | 'cutoff' | 'breach' | 'timingBreaches'>;
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -127,7 +135,7 @@ export function presentDay(p: DayParts): DayView {
     supplements: p.supplements.map(presentSupplement),
     evening: p.evening ? presentEvening(p.evening) : null,
     symptoms: p.symptoms.map(presentSymptom),
-    flags: p.flags.map(presentFlag),
+    flags: p.flags.map((f) => presentFlag(f, p.reader)),
     photos: p.photos,
     targets: p.plan.targets,
     countdown: p.plan.countdown,
@@ -135,6 +143,7 @@ export function presentDay(p: DayParts): DayView {
     drift: p.judged.drift,
     cutoff: p.judged.cutoff,
     breach: p.judged.breach,
+    timingBreaches: p.judged.timingBreaches,
   };
 }
 

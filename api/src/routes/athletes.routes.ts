@@ -10,12 +10,11 @@ import {
   type AthleteAction,
   type AthleteTarget,
 } from '../policies/athlete.policy.js';
-import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { todayIn } from '../lib/dates.js';
 import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
 import { AthleteService } from '../services/athlete.service.js';
-import { PlanService } from '../services/plan.service.js';
+import { athleteProfileView, PlanService } from '../services/plan.service.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const shareParams = z.object({ athleteId: uuid, userId: uuid });
@@ -54,7 +53,10 @@ export function athletesRouter(): Router {
     const abilities = athleteAbilities(actor, target);
     // After the coaching ended nobody logs new days and there is nothing left to end.
     if (athlete.status === 'ended') Object.assign(abilities, { log: false, endCoaching: false });
-    res.json({ data: presentAthleteProfile(athlete), abilities });
+    res.json({
+      data: await athleteProfileView(req.ctx.dataSource.manager, athlete, req.ctx.clock()),
+      abilities,
+    });
   });
 
   router.put(
@@ -68,7 +70,7 @@ export function athletesRouter(): Router {
     },
   );
 
-  // The coach moves the event; the answer offers to move the plan's countdown with it.
+  // The coach moves the event; the profile in the answer says when the countdown now aims elsewhere.
   router.patch(
     '/:athleteId/event',
     authenticate(),

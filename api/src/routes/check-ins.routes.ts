@@ -9,8 +9,9 @@ import {
 import { Router } from 'express';
 import { z } from 'zod';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
-import { authenticate } from '../middleware/authenticate.js';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
+import { readerOf } from '../lib/reader.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { CheckInService } from '../services/check-in.service.js';
 import {
@@ -97,7 +98,8 @@ export function checkInsRouter(): Router {
 
   router.get('/:athleteId/days/:date', authenticate(), validate({ params: dayParams }), async (req, res) => {
     const { actor, athlete, target } = await loadAthlete(req, 'read');
-    const day = await new DayService(req.ctx).getDay(athlete, req.params.date);
+    const reader = readerOf(requireAuth(req).user, athlete);
+    const day = await new DayService(req.ctx).getDay(athlete, req.params.date, reader);
     res.json({
       data: day,
       abilities: { log: athlete.status !== 'ended' && canOnAthlete(actor, 'log', target) },

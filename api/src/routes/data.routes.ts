@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
-import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
+import { athleteProfileView } from '../services/plan.service.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { DaysExportService, daysCsvFileName } from '../services/days-export.service.js';
 import { loadAthlete } from './athletes.routes.js';
@@ -45,7 +45,7 @@ export function dataRouter(): Router {
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'endCoaching');
       const ended = await new AthleteService(req.ctx).endCoaching(athlete);
-      res.json({ data: presentAthleteProfile(ended) });
+      res.json({ data: await athleteProfileView(req.ctx.dataSource.manager, ended, req.ctx.clock()) });
     },
   );
 

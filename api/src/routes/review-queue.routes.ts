@@ -14,9 +14,10 @@ export function reviewQueueRouter(): Router {
   const router = Router();
 
   router.get('/', authenticate(), async (req, res) => {
-    const { actor } = requireAuth(req);
+    const { actor, user } = requireAuth(req);
     authorizeTeam(actor, { kind: 'viewRoster' }, { id: actor.teamId });
-    res.json({ data: await new ReviewQueueService(req.ctx).list(actor) });
+    const units = { weight: user.weightUnit, volume: user.volumeUnit };
+    res.json({ data: await new ReviewQueueService(req.ctx).list(actor, units) });
   });
 
   // Reviewing is staff work on an athlete they can read, like pinning a mark: the athlete policy's

@@ -1,7 +1,8 @@
-import { trendQuery, uuid } from '@driftmark/shared';
+import { inReaderUnits, trendQuery, uuid } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
-import { authenticate } from '../middleware/authenticate.js';
+import { readerOf } from '../lib/reader.js';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { TrendService } from '../services/trend.service.js';
@@ -20,7 +21,13 @@ export function trendsRouter(): Router {
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const view = await new TrendService(req.ctx).getTrend(athlete, req.query.from, req.query.to);
-      res.json({ data: view, abilities: { annotate: canOnAthlete(actor, 'annotate', target) } });
+      // Flag texts are written in kg; each reader reads their own units.
+      const { units } = readerOf(requireAuth(req).user, athlete);
+      const flags = view.flags.map((f) => ({ ...f, message: inReaderUnits(f.message, units) }));
+      res.json({
+        data: { ...view, flags },
+        abilities: { annotate: canOnAthlete(actor, 'annotate', target) },
+      });
     },
   );
 

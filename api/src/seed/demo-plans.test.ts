@@ -185,10 +185,13 @@ describe('demo plans', () => {
         weighInLimitKg: null,
       }),
     ).toEqual(countdown.acknowledgements);
-    // The carbohydrate-up days and the top-up day are carbohydrate loads (de Moraes 2019; thresholds common practice).
-    expect(countdown.acknowledgements.map((w) => w.key)).toEqual(
-      [-3, -2, -1].map((o) => `carb_load:date:${addDays(countdown.content.countdown!.eventDate, o)}`),
-    );
+    // The carbohydrate-up days and the top-up day are carbohydrate loads (de Moraes 2019; thresholds
+    // common practice); the show day's "only sips after 15:00" is a fluid restriction.
+    const eventDate = countdown.content.countdown!.eventDate;
+    expect(countdown.acknowledgements.map((w) => w.key)).toEqual([
+      ...[-3, -2, -1].map((o) => `carb_load:date:${addDays(eventDate, o)}`),
+      `fluid_restriction:date:${eventDate}`,
+    ]);
   });
 });
 
@@ -219,10 +222,16 @@ describe('the countdown athlete', () => {
       ...w,
       at: current.createdAt.toISOString(),
     }));
-    const todays = cautionsForDay({ content: current.content, date: today, acknowledgements });
+    const reader = { units: { weight: 'kg', volume: 'ml' }, aboutAthlete: null } as const;
+    const todays = cautionsForDay({ content: current.content, date: today, acknowledgements, reader });
     expect(todays.map((c) => c.code)).toEqual(['countdown']);
     expect(todays[0]!.message).toMatch(/^E-4 of your countdown/);
-    const e3 = cautionsForDay({ content: current.content, date: addDays(eventDate, -3), acknowledgements });
+    const e3 = cautionsForDay({
+      content: current.content,
+      date: addDays(eventDate, -3),
+      acknowledgements,
+      reader,
+    });
     expect(e3.map((c) => c.code)).toEqual(['countdown', 'carb_load']);
   });
 

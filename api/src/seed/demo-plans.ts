@@ -154,7 +154,16 @@ function showDays(): TemplateDay[] {
         ...shares(0.9, 25, 50, 25),
         water: { kind: 'usual_times', factor: 0.9 },
         sodiumMg: 2300,
-        note: 'Small, familiar meals every 2–3 hours and keep sipping water. Tell someone at once if you feel dizzy.',
+        // Food early and only sips late in the day, timed to the show's start (common practice, no source).
+        foodCutoff: { time: '15:00', allowanceKcal: 200 },
+        fluidCap: { maxMl: 300, after: '15:00' },
+        supplements: [
+          {
+            ...item(DEMO_SEED, 'template-show', 'Rice cakes with honey', 2, 'pieces', []),
+            minutesBeforeEvent: [180],
+          },
+        ],
+        note: 'Small, familiar meals every 2–3 hours until 15:00, then a snack if needed and only sips. Tell someone at once if you feel dizzy.',
       }),
     },
     {

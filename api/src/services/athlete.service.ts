@@ -2,13 +2,13 @@ import { CONSENTS, type AthleteProfile, type IntakeRequest } from '@driftmark/sh
 import type { DataSource } from 'typeorm';
 import { conflict, notFound, validationFailed } from '../errors.js';
 import type { Actor } from '../policies/actor.js';
-import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
 import { ConsentRepository } from '../repositories/consent.repository.js';
 import { UserRepository } from '../repositories/user.repository.js';
+import { athleteProfileView } from './plan.service.js';
 
-type AthleteDeps = { dataSource: DataSource };
+type AthleteDeps = { dataSource: DataSource; clock: () => Date };
 
 export class AthleteService {
   constructor(private readonly deps: AthleteDeps) {}
@@ -64,7 +64,7 @@ export class AthleteService {
     });
     const updated = await new AthleteRepository(this.deps.dataSource.manager).findWithPeople(athlete.id);
     if (!updated) throw notFound();
-    return presentAthleteProfile(updated);
+    return athleteProfileView(this.deps.dataSource.manager, updated, this.deps.clock());
   }
 
   /** Shares the athlete with another coach or assistant of the team; sharing twice is a no-op. */

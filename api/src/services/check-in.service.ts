@@ -16,6 +16,7 @@ import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { EveningLogRepository } from '../repositories/evening-log.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import type { EntryContext, EntryKind } from './day-entry-kinds.js';
+import { readerOf } from '../lib/reader.js';
 import { loadDayView } from './day.service.js';
 
 export interface EntryResult {
@@ -40,7 +41,8 @@ export class CheckInService {
   }
 
   private day(athlete: AthleteWithPeople, date: string, now: Date): Promise<DayView> {
-    return loadDayView(this.deps.dataSource.manager, athlete, date, now);
+    // Only the athlete logs their own days, so the athlete reads the answer.
+    return loadDayView(this.deps.dataSource.manager, athlete, date, now, readerOf(athlete.user, athlete));
   }
 
   /** Replaces the day's weigh-in (kg stored, the typed value and unit kept). */

@@ -4,7 +4,7 @@ import { ZipFile } from 'yazl';
 import { createStorage, type StorageAdapter } from '../adapters/storage.js';
 import type { Config } from '../config.js';
 import type { Logger } from '../logger.js';
-import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
+import { athleteProfileView } from './plan.service.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 
 /** The athlete's own tables, each read whole (`athlete_id = $1`), grouped into the archive's files. */
@@ -71,7 +71,7 @@ export class DataArchiveService {
       json({
         exportedAt: mtime.toISOString(),
         consents,
-        profile: presentAthleteProfile(athlete),
+        profile: await athleteProfileView(manager, athlete, mtime),
         user: {
           name: athlete.user.name,
           email: athlete.user.email,

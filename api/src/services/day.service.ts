@@ -3,8 +3,10 @@ import {
   countdownDayLabel,
   dayEntryFor,
   resolveTargets,
+  timingBreaches,
   versionInForce,
   type DaySummary,
+  type Reader,
   type DayView,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -33,6 +35,24 @@ export const HISTORY_MAX_DAYS = 400;
 
 type DayPlan = Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
 
+/** Where the event happens on the clock, for supplement times set before it. */
+export interface EventPlace {
+  /** HH:MM in the event's zone; null while the coach has not set it. */
+  eventTime: string | null;
+  /** The event's IANA zone; the athlete's own when none is stored. */
+  eventTimeZone: string | null;
+  athleteTimeZone: string;
+}
+
+/** The event place of an athlete's profile. */
+export function eventPlaceOf(athlete: AthleteWithPeople): EventPlace {
+  return {
+    eventTime: athlete.eventTime,
+    eventTimeZone: athlete.eventTimeZone,
+    athleteTimeZone: athlete.user.timeZone,
+  };
+}
+
 /**
  * What the plan says about `date`: the targets of the version in force that day, resolved with
  * that version's own baseline snapshot (so a later version or a new weigh-in never changes a past
@@ -42,12 +62,24 @@ export function planForDay(
   version: PlanVersion | null,
   acknowledgements: readonly AcknowledgementWithAuthor[],
   date: string,
+  place: EventPlace,
+  reader: Reader,
 ): DayPlan {
   if (!version) return { targets: null, countdown: null, cautions: [] };
   const { content } = version;
   const entry = dayEntryFor(content, date);
   const targets = entry.kind === 'date' ? entry.override.targets : entry.dayType.targets;
   const offset = entry.kind === 'date' ? entry.override.countdownOffset : null;
+  // Times before the event count back from the event this countdown day belongs to.
+  const eventDate = offset !== null ? (content.countdown?.eventDate ?? null) : null;
+  const event =
+    eventDate && place.eventTime
+      ? {
+          date: eventDate,
+          time: place.eventTime.slice(0, 5),
+          timeZone: place.eventTimeZone ?? place.athleteTimeZone,
+        }
+      : null;
   return {
     targets: {
       versionId: version.id,
@@ -57,7 +89,10 @@ export function planForDay(
         entry.kind === 'date'
           ? { kind: 'date', label: entry.override.label }
           : { kind: 'pattern', dayTypeKey: entry.dayType.key, dayTypeName: entry.dayType.name },
-      targets: resolveTargets(targets, version.baseline),
+      targets: resolveTargets(targets, version.baseline, {
+        event,
+        athleteTimeZone: place.athleteTimeZone,
+      }),
       tolerances: content.tolerances,
     },
     countdown:
@@ -73,6 +108,7 @@ export function planForDay(
     cautions: cautionsForDay({
       content,
       date,
+      reader,
       acknowledgements: acknowledgements.map((a) => ({
         code: a.code,
         severity: a.severity,
@@ -86,19 +122,25 @@ export function planForDay(
 }
 
 /** The version in force on `date` with its acknowledgements (two queries). */
-async function loadDayPlan(manager: EntityManager, athleteId: string, date: string): Promise<DayPlan> {
+async function loadDayPlan(
+  manager: EntityManager,
+  athlete: AthleteWithPeople,
+  date: string,
+  reader: Reader,
+): Promise<DayPlan> {
   const plans = new PlanRepository(manager);
-  const version = versionInForce(await plans.listVersions(athleteId), date);
+  const version = versionInForce(await plans.listVersions(athlete.id), date);
   const acks = version ? ((await plans.acknowledgementsByVersion([version.id])).get(version.id) ?? []) : [];
-  return planForDay(version, acks, date);
+  return planForDay(version, acks, date, eventPlaceOf(athlete), reader);
 }
 
-/** Everything the athlete logged on `date` (their local date), as the day view. */
+/** Everything the athlete logged on `date` (their local date), as the day view, worded for `reader`. */
 export async function loadDayView(
   manager: EntityManager,
   athlete: AthleteWithPeople,
   date: string,
   now: Date,
+  reader: Reader,
 ): Promise<DayView> {
   const timeZone = athlete.user.timeZone;
   const today = localDateTime(now, timeZone).date;
@@ -111,7 +153,7 @@ export async function loadDayView(
     new DayEntryRepository(manager, SymptomReport).listForDay(athlete.id, date),
     new AthleteFlagRepository(manager).listForDay(athlete.id, date),
     dayPhotoSource(manager).forDay(athlete.id, date),
-    loadDayPlan(manager, athlete.id, date),
+    loadDayPlan(manager, athlete, date, reader),
   ]);
   const fluidMl = fluids.length > 0 ? fluids.reduce((sum, f) => sum + f.volumeMl, 0) : null;
   const judged = dayDrift({
@@ -121,6 +163,15 @@ export async function loadDayView(
     date,
     today,
   });
+  const inForce = plan.targets?.targets;
+  const timing =
+    inForce && date <= today
+      ? timingBreaches(
+          inForce,
+          fluids.map((f) => ({ time: f.localTime, volumeMl: f.volumeMl })),
+          meals.map((m) => ({ time: m.localTime, energyKcal: m.energyKcal })),
+        )
+      : [];
   return presentDay({
     athleteId: athlete.id,
     date,
@@ -134,8 +185,9 @@ export async function loadDayView(
     symptoms,
     flags,
     photos,
+    reader,
     plan,
-    judged,
+    judged: { ...judged, timingBreaches: timing },
   });
 }
 
@@ -144,8 +196,8 @@ type DayDeps = { dataSource: DataSource; clock: () => Date };
 export class DayService {
   constructor(private readonly deps: DayDeps) {}
 
-  getDay(athlete: AthleteWithPeople, date: string): Promise<DayView> {
-    return loadDayView(this.deps.dataSource.manager, athlete, date, this.deps.clock());
+  getDay(athlete: AthleteWithPeople, date: string, reader: Reader): Promise<DayView> {
+    return loadDayView(this.deps.dataSource.manager, athlete, date, this.deps.clock(), reader);
   }
 
   /** One summary per day with anything logged between `from` and `to` (inclusive), newest first. */

@@ -8,6 +8,7 @@
  * kind and due key): a second claim finds the row and sends nothing.
  */
 import {
+  inReaderUnits,
   ATHLETE_NOTIFICATION_KINDS,
   NOTIFICATION_KINDS,
   STAFF_NOTIFICATION_KINDS,
@@ -170,7 +171,8 @@ export async function notifySafetyFlag(
       ...mailBase(staff, 'safety_flag', coachDayPath(athlete.id, flag.localDate)),
       athleteName: athlete.user.name,
       date: flag.localDate,
-      message: flag.message,
+      // Flags are written in kg; each staff member reads their own units.
+      message: inReaderUnits(flag.message, { weight: staff.weightUnit, volume: staff.volumeUnit }),
     });
     await sendNotification(manager, staff, 'safety_flag', mail, { dueKey: `flag:${flag.id}` });
   }

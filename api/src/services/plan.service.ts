@@ -1,6 +1,8 @@
 import {
   applyTemplate,
   checkGuardrails,
+  countdownMismatch,
+  type AthleteProfile,
   moveCountdown,
   unacknowledged,
   validatePlanContent,
@@ -18,6 +20,7 @@ import {
   type PlanVersionView,
   type PlanView,
   type UpdateEventRequest,
+  type EVENT_TYPES,
   type applyCountdownRequest,
   type moveCountdownRequest,
 } from '@driftmark/shared';
@@ -74,6 +77,20 @@ export async function currentBaseline(
   };
 }
 
+/**
+ * The athlete's profile as the API shows it, with the countdown mismatch worked out from the latest
+ * plan version (the one in force from its start on) against the event date, as of the athlete's today.
+ */
+export async function athleteProfileView(
+  manager: EntityManager,
+  athlete: AthleteWithPeople,
+  now: Date,
+): Promise<AthleteProfile> {
+  const latest = await new PlanRepository(manager).findLatest(athlete.id);
+  const today = localDateTime(now, athlete.user.timeZone).date;
+  return presentAthleteProfile(athlete, countdownMismatch(latest?.content ?? null, athlete.eventDate, today));
+}
+
 /** Content errors keyed by the request path (`content.dayTypes.0.targets.protein`). */
 function contentErrors(content: PlanContent, baseline: PlanBaseline): Record<string, string> {
   return Object.fromEntries(
@@ -101,14 +118,6 @@ function assertAcknowledged(
       : `${missing.length} guardrail warnings need your acknowledgement before this can be saved.`,
     Object.fromEntries(missing.map((w) => [w.key, w.message])),
   );
-}
-
-/** Dates of a content's countdown days (dated days with an offset), earliest first. */
-function countdownDates(content: PlanContent): string[] {
-  return content.dates
-    .filter((d) => d.countdownOffset !== null)
-    .map((d) => d.date)
-    .sort();
 }
 
 export class PlanService {
@@ -225,23 +234,43 @@ export class PlanService {
     });
   }
 
+  /**
+   * Stores a version (and its acknowledgements). With `event`, the athlete's event date moves with
+   * it in the same transaction: a countdown and the event it counts back from never part.
+   */
   private async save(
     actor: Actor,
     athlete: AthleteWithPeople,
     s: Situation,
-    v: { effectiveFrom: string; reason: string; content: PlanContent; warnings: readonly GuardrailWarning[] },
+    v: {
+      effectiveFrom: string;
+      reason: string;
+      content: PlanContent;
+      warnings: readonly GuardrailWarning[];
+      event?: { date: string; type: (typeof EVENT_TYPES)[number] };
+    },
   ): Promise<PlanVersionView> {
-    const plans = new PlanRepository(this.manager);
-    const saved = await plans.insertVersion({
-      athleteId: athlete.id,
-      effectiveFrom: v.effectiveFrom,
-      reason: v.reason,
-      content: v.content,
-      baseline: s.baseline,
-      createdById: actor.userId,
-      acknowledgements: v.warnings,
+    const saved = await this.deps.dataSource.transaction(async (manager) => {
+      const version = await new PlanRepository(manager).insertVersion({
+        athleteId: athlete.id,
+        effectiveFrom: v.effectiveFrom,
+        reason: v.reason,
+        content: v.content,
+        baseline: s.baseline,
+        createdById: actor.userId,
+        acknowledgements: v.warnings,
+      });
+      if (v.event && v.event.date !== athlete.eventDate) {
+        // An athlete without an event gets the countdown's kind of event with its date.
+        const typeless = athlete.eventType === null || athlete.eventType === 'none';
+        await new AthleteRepository(manager).update(athlete.id, {
+          eventDate: v.event.date,
+          ...(typeless ? { eventType: v.event.type } : {}),
+        });
+      }
+      return version;
     });
-    const version = await plans.findForAthlete(athlete.id, saved.id);
+    const version = await new PlanRepository(this.manager).findForAthlete(athlete.id, saved.id);
     if (!version) throw notFound();
     return this.view(athlete.id, version);
   }
@@ -345,18 +374,21 @@ export class PlanService {
       };
     }
     assertAcknowledged(warnings, input.acknowledgedKeys);
+    const countdown = applied.content.countdown;
     const version = await this.save(actor, athlete, s, {
       effectiveFrom: applied.effectiveFrom,
       reason: input.reason ?? defaultReason,
       content: applied.content,
       warnings,
+      ...(countdown ? { event: { date: countdown.eventDate, type: countdown.eventType } } : {}),
     });
     return { kind: 'saved', version };
   }
 
   /**
-   * Changes the athlete's event date (and time and name when given) and offers to move the
-   * countdown of the latest version when it is for another date and not over yet.
+   * Changes the athlete's event date (and time and name when given). The countdown stays where it
+   * is: while it aims at another day, the profile's `countdownMismatch` says so until the coach
+   * moves it (`moveCountdown`, which moves the event date with it).
    */
   async updateEvent(athlete: AthleteWithPeople, input: UpdateEventRequest) {
     const athletes = new AthleteRepository(this.manager);
@@ -365,18 +397,8 @@ export class PlanService {
       ...(input.eventTime !== undefined ? { eventTime: input.eventTime } : {}),
       ...(input.eventName !== undefined ? { eventName: input.eventName || null } : {}),
     });
-    const [updated, latest] = await Promise.all([
-      athletes.findWithPeople(athlete.id),
-      new PlanRepository(this.manager).findLatest(athlete.id),
-    ]);
+    const updated = await athletes.findWithPeople(athlete.id);
     if (!updated) throw notFound();
-    const countdown = latest?.content.countdown ?? null;
-    const today = localDateTime(this.deps.clock(), athlete.user.timeZone).date;
-    const lastDay = latest ? countdownDates(latest.content).at(-1) : undefined;
-    const offer =
-      countdown && countdown.eventDate !== input.eventDate && (lastDay ?? countdown.eventDate) >= today
-        ? { fromEventDate: countdown.eventDate, toEventDate: input.eventDate }
-        : null;
-    return { athlete: presentAthleteProfile(updated), countdownOffer: offer };
+    return { athlete: await athleteProfileView(this.manager, updated, this.deps.clock()) };
   }
 }

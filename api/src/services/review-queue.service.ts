@@ -2,7 +2,9 @@ import {
   DRIFT_METRICS,
   DRIFT_METRIC_LABELS,
   EVENT_TYPE_LABELS,
+  inReaderUnits,
   SYMPTOM_LABELS,
+  type Reader,
   type ReviewQueueItem,
   type ReviewReasonKind,
 } from '@driftmark/shared';
@@ -305,7 +307,7 @@ export class ReviewQueueService {
    * unread replies, one for the actor's last reviews, one for the weekly check-ins and one for the
    * team's question list.
    */
-  async list(actor: Actor): Promise<ReviewQueueItem[]> {
+  async list(actor: Actor, units: Reader['units']): Promise<ReviewQueueItem[]> {
     const manager = this.deps.dataSource.manager;
     const now = this.deps.clock();
     // Athletes still doing their intake, or whose coaching ended, have nothing to review.
@@ -341,7 +343,10 @@ export class ReviewQueueService {
         };
         const reasons = reasonsFor(s, unread.get(a.id), weekly);
         const item = queueItemFor(s, reasons, reviewed.get(a.id) ?? null, now);
-        return item ? [item] : [];
+        // Reasons are written in kg and mL (flags stored so); the coach reads their own units.
+        return item
+          ? [{ ...item, reasons: item.reasons.map((r) => ({ ...r, text: inReaderUnits(r.text, units) })) }]
+          : [];
       })
       .sort(compareItems);
   }

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { AcknowledgementView, DayTargets, GuardrailContext, PlanContent } from '../schemas/plans.js';
+import type { Reader } from '../reader.js';
 import { cautionsForDay } from './cautions.js';
 import { checkGuardrails, GUARDRAIL_DEFAULTS } from './guardrails.js';
 import { emptyDayTargets, starterPlanContent } from './resolve.js';
@@ -40,6 +41,8 @@ function acknowledged(
   return checkGuardrails(c, ctx).map((w) => ({ ...w, at: AT }));
 }
 
+const ATHLETE: Reader = { units: { weight: 'kg', volume: 'ml' }, aboutAthlete: null };
+
 describe('cautionsForDay', () => {
   it('the acknowledged warnings: rest-day sodium, the plan-wide loss rate, the water-cut day', () => {
     const c = content();
@@ -52,7 +55,12 @@ describe('cautionsForDay', () => {
 
   it('a countdown day: the standing countdown caution (with the day label and the stop signs) leads', () => {
     const c = content();
-    const cautions = cautionsForDay({ content: c, date: '2026-12-03', acknowledgements: acknowledged(c) });
+    const cautions = cautionsForDay({
+      content: c,
+      date: '2026-12-03',
+      acknowledgements: acknowledged(c),
+      reader: ATHLETE,
+    });
     expect(cautions.map((x) => x.code)).toEqual(['countdown', 'fluid_restriction', 'loss_rate']);
     expect(cautions[0]).toEqual({
       code: 'countdown',
@@ -66,7 +74,12 @@ describe('cautionsForDay', () => {
 
   it('E-0 carries the countdown caution even without a warning of its own', () => {
     const c = content();
-    const cautions = cautionsForDay({ content: c, date: '2026-12-05', acknowledgements: [] });
+    const cautions = cautionsForDay({
+      content: c,
+      date: '2026-12-05',
+      acknowledgements: [],
+      reader: ATHLETE,
+    });
     expect(cautions.map((x) => x.message)).toEqual([
       `E-0 of your countdown: water, sodium and energy change day by day.`,
     ]);
@@ -77,11 +90,15 @@ describe('cautionsForDay', () => {
     const acks = acknowledged(c);
     // Sunday 6 Dec follows the rest day.
     expect(
-      cautionsForDay({ content: c, date: '2026-12-06', acknowledgements: acks }).map((x) => x.code),
+      cautionsForDay({ content: c, date: '2026-12-06', acknowledgements: acks, reader: ATHLETE }).map(
+        (x) => x.code,
+      ),
     ).toEqual(['sodium_low', 'loss_rate']);
     // Monday 7 Dec, a training day: only the plan-wide warning.
     expect(
-      cautionsForDay({ content: c, date: '2026-12-07', acknowledgements: acks }).map((x) => x.code),
+      cautionsForDay({ content: c, date: '2026-12-07', acknowledgements: acks, reader: ATHLETE }).map(
+        (x) => x.code,
+      ),
     ).toEqual(['loss_rate']);
     // A dated day on a Sunday is not the rest day type.
     const sunday = {
@@ -92,13 +109,38 @@ describe('cautionsForDay', () => {
       ],
     };
     expect(
-      cautionsForDay({ content: sunday, date: '2026-12-13', acknowledgements: acks }).map((x) => x.code),
+      cautionsForDay({ content: sunday, date: '2026-12-13', acknowledgements: acks, reader: ATHLETE }).map(
+        (x) => x.code,
+      ),
     ).toEqual(['loss_rate']);
+  });
+
+  it('worded for staff and in the reader’s units', () => {
+    const c = content();
+    const coach: Reader = { units: { weight: 'lb', volume: 'floz' }, aboutAthlete: 'Mateo Ruiz' };
+    const cautions = cautionsForDay({
+      content: c,
+      date: '2026-12-03',
+      acknowledgements: acknowledged(c),
+      reader: coach,
+    });
+    expect(cautions[0]!.message).toBe(
+      "E-2 of Mateo's countdown: water, sodium and energy change day by day.",
+    );
+    // The stored warning says mL; a reader in fl oz reads fl oz (1 US fl oz = 29.5735295625 mL).
+    const fluid = cautions.find((x) => x.code === 'fluid_restriction')!;
+    expect(fluid.message).toMatch(/fl oz/);
+    expect(fluid.message).not.toMatch(/mL/);
   });
 
   it('no plan-wide or day warnings and no countdown: no cautions', () => {
     expect(
-      cautionsForDay({ content: starterPlanContent(), date: '2026-12-07', acknowledgements: [] }),
+      cautionsForDay({
+        content: starterPlanContent(),
+        date: '2026-12-07',
+        acknowledgements: [],
+        reader: ATHLETE,
+      }),
     ).toEqual([]);
   });
 });

@@ -1,4 +1,5 @@
 import type { AcknowledgementView, DayCaution, PlanContent } from '../schemas/plans.js';
+import { inReaderUnits, possessive, type Reader } from '../reader.js';
 import { countdownDayLabel, dayEntryFor } from './resolve.js';
 
 /** Peak-week practices rest on little evidence; water and electrolyte manipulation may do harm. */
@@ -9,7 +10,8 @@ const COUNTDOWN_SOURCE =
 /**
  * The cautions the athlete sees on `date` under a version: the standing countdown caution on a
  * countdown day, and every acknowledged warning whose scope covers the day (plan-wide; the day's
- * day type when the day follows the pattern; the date itself).
+ * day type when the day follows the pattern; the date itself), worded for `reader` ("your
+ * countdown" to the athlete, "Mateo's countdown" to staff) and in the reader's units.
  */
 export function cautionsForDay(input: {
   content: PlanContent;
@@ -18,6 +20,7 @@ export function cautionsForDay(input: {
     AcknowledgementView,
     'code' | 'severity' | 'scope' | 'message' | 'source' | 'at'
   >[];
+  reader: Reader;
 }): DayCaution[] {
   const { content, date } = input;
   const entry = dayEntryFor(content, date);
@@ -28,7 +31,8 @@ export function cautionsForDay(input: {
       code: 'countdown',
       severity: 'strong',
       message:
-        `${countdownDayLabel(entry.override.countdownOffset)} of your countdown: water, sodium and energy ` +
+        `${countdownDayLabel(entry.override.countdownOffset)} of ${possessive(input.reader)} countdown: ` +
+        'water, sodium and energy ' +
         'change day by day.',
       source: COUNTDOWN_SOURCE,
       acknowledgedAt: null,
@@ -44,7 +48,7 @@ export function cautionsForDay(input: {
       cautions.push({
         code: a.code,
         severity: a.severity,
-        message: a.message,
+        message: inReaderUnits(a.message, input.reader.units),
         source: a.source,
         acknowledgedAt: a.at,
       });

@@ -6,7 +6,7 @@ import type {
   TemplateDay,
   TemplateView,
 } from '../schemas/plans.js';
-import type { EVENT_TYPES } from '../schemas/athletes.js';
+import type { CountdownMismatch, EVENT_TYPES } from '../schemas/athletes.js';
 import { addDays, cloneJson } from './format.js';
 import { countdownDayLabel, resolveTargets, starterPlanContent } from './resolve.js';
 
@@ -129,4 +129,24 @@ function place(input: {
     effectiveFrom,
     days: preview,
   };
+}
+
+/**
+ * When the plan's countdown counts back from another day than the athlete's event: the countdown
+ * of `content` (the athlete's latest version, the one in force from its start on) against
+ * `eventDate`. Null when they agree, without a countdown or an event date, or once the countdown's
+ * last day is before `today` (an old countdown no longer aims at anything).
+ */
+export function countdownMismatch(
+  content: PlanContent | null,
+  eventDate: string | null,
+  today: string,
+): CountdownMismatch | null {
+  const countdown = content?.countdown;
+  if (!content || !countdown || eventDate === null || countdown.eventDate === eventDate) return null;
+  const offsets = content.dates.flatMap((d) => (d.countdownOffset == null ? [] : [d.countdownOffset]));
+  const lastDay =
+    offsets.length > 0 ? addDays(countdown.eventDate, Math.max(...offsets)) : countdown.eventDate;
+  if (lastDay < today) return null;
+  return { countdownEventDate: countdown.eventDate, eventDate };
 }

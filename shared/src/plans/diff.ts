@@ -9,6 +9,7 @@ import type {
   WaterTarget,
 } from '../schemas/plans.js';
 import { DEFAULT_TOLERANCES, WEEKDAYS, WEEKDAY_LABELS } from '../schemas/plans.js';
+import { minutesBeforeLabel } from './event-time.js';
 import { fmt, fmtDate } from './format.js';
 import { countdownDayLabel } from './resolve.js';
 
@@ -159,6 +160,12 @@ function change(what: string, a: Figure | null, b: Figure | null): string | null
 function targetChanges(a: DayTargets, b: DayTargets): string[] {
   const cutoff = (t: DayTargets): Figure | null =>
     t.fluidCutoff ? [`${t.fluidCutoff.time} with ${fmt(t.fluidCutoff.allowanceMl)} mL after`, ''] : null;
+  const foodCutoff = (t: DayTargets): Figure | null =>
+    t.foodCutoff ? [`${t.foodCutoff.time} with ${fmt(t.foodCutoff.allowanceKcal)} kcal after`, ''] : null;
+  const cap = (t: DayTargets): Figure | null =>
+    t.fluidCap
+      ? [`${fmt(t.fluidCap.maxMl)} mL ${t.fluidCap.after ? `after ${t.fluidCap.after}` : 'all day'}`, '']
+      : null;
   const lines = [
     change('energy', energyFigure(a.energy), energyFigure(b.energy)),
     change('protein', macroFigure(a.protein), macroFigure(b.protein)),
@@ -167,6 +174,8 @@ function targetChanges(a: DayTargets, b: DayTargets): string[] {
     change('water', waterFigure(a.water), waterFigure(b.water)),
     change('sodium', numberFigure(a.sodiumMg, 'mg'), numberFigure(b.sodiumMg, 'mg')),
     change('fluid cut-off', cutoff(a), cutoff(b)),
+    change('food cut-off', foodCutoff(a), foodCutoff(b)),
+    change('fluid cap', cap(a), cap(b)),
     change('steps', numberFigure(a.steps, 'steps'), numberFigure(b.steps, 'steps')),
     change('cardio', numberFigure(a.cardioMinutes, 'min'), numberFigure(b.cardioMinutes, 'min')),
   ].filter((l): l is string => l !== null);
@@ -179,7 +188,11 @@ function targetChanges(a: DayTargets, b: DayTargets): string[] {
 
 function dose(s: ScheduleItem): string {
   const amount = s.dose != null ? `${fmt(s.dose, 2)}${s.unit ? ` ${s.unit}` : ''} ` : '';
-  return `${amount}at ${s.times.join(', ')}`;
+  const times = [
+    ...s.times,
+    ...(s.minutesBeforeEvent ?? []).map((m) => `${minutesBeforeLabel(m)} the event`),
+  ];
+  return `${amount}at ${times.join(', ')}`;
 }
 
 function supplementChanges(a: readonly ScheduleItem[], b: readonly ScheduleItem[]): string[] {

@@ -226,6 +226,12 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
         `fluids stop at ${r.fluidCutoff.time} with ${fmt(r.fluidCutoff.allowanceMl)} mL allowed after`,
       );
     }
+    const cap = e.targets.fluidCap;
+    if (cap) {
+      restriction.push(
+        `fluids capped at ${fmt(cap.maxMl)} mL ${cap.after ? `after ${cap.after}` : 'for the whole day'}`,
+      );
+    }
     const usualWater = baseline.usualWaterMl;
     if (
       r.waterMl != null &&
@@ -239,7 +245,7 @@ export function checkGuardrails(content: PlanContent, ctx: GuardrailContext): Gu
         'fluid_restriction',
         'strong',
         restriction.join(', and '),
-        r.fluidCutoff ? `${e.prefix}.fluidCutoff` : `${e.prefix}.water`,
+        r.fluidCutoff ? `${e.prefix}.fluidCutoff` : cap ? `${e.prefix}.fluidCap` : `${e.prefix}.water`,
       );
     }
 

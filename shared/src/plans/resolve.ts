@@ -9,6 +9,7 @@ import type {
   Weekday,
 } from '../schemas/plans.js';
 import { atwaterKcal } from '../nutrition.js';
+import { eventTimedItems, type EventClock } from './event-time.js';
 import { fmt, weekdayIndex } from './format.js';
 import { gramsFromShare, shareFromGrams, type MacroName } from './macros.js';
 
@@ -60,8 +61,16 @@ export function versionInForce<V extends { effectiveFrom: string; number: number
 
 const MACROS: readonly MacroName[] = ['protein', 'carbohydrate', 'fat'];
 
-/** Concrete numbers for one day's targets, resolved against the baseline; `basis` explains relative ones. */
-export function resolveTargets(targets: DayTargets, baseline: PlanBaseline): ResolvedTargets {
+/**
+ * Concrete numbers for one day's targets, resolved against the baseline; `basis` explains relative
+ * ones. With `clock` (the event's wall clock and the athlete's zone), supplement times set before
+ * the event are placed on the athlete's clock; without it they stay unplaced (`at: null`).
+ */
+export function resolveTargets(
+  targets: DayTargets,
+  baseline: PlanBaseline,
+  clock?: { event: EventClock | null; athleteTimeZone: string },
+): ResolvedTargets {
   const basis: Record<string, string> = {};
 
   let energyKcal: number | null = null;
@@ -135,9 +144,12 @@ export function resolveTargets(targets: DayTargets, baseline: PlanBaseline): Res
     waterMl,
     sodiumMg: targets.sodiumMg,
     fluidCutoff: targets.fluidCutoff,
+    foodCutoff: targets.foodCutoff ?? null,
+    fluidCap: targets.fluidCap ?? null,
     steps: targets.steps,
     cardioMinutes: targets.cardioMinutes,
     supplements: targets.supplements,
+    eventTimed: eventTimedItems(targets.supplements, clock?.event ?? null, clock?.athleteTimeZone ?? null),
     note: targets.note,
     basis,
   };
@@ -153,6 +165,8 @@ export function emptyDayTargets(): DayTargets {
     water: null,
     sodiumMg: null,
     fluidCutoff: null,
+    foodCutoff: null,
+    fluidCap: null,
     steps: null,
     cardioMinutes: null,
     supplements: [],

@@ -312,3 +312,42 @@ describe('validateTemplate', () => {
     expect(validateTemplate(t)).toEqual({});
   });
 });
+
+describe('validatePlanContent: times before the event', () => {
+  const caffeine = {
+    id: '00000000-0000-4000-8000-0000000000c1',
+    item: 'Caffeine',
+    dose: 200,
+    unit: 'mg',
+    times: [],
+    minutesBeforeEvent: [180],
+  };
+
+  it('are refused on a day type of the weekly pattern and a plain dated day, naming the field', () => {
+    const c = withTraining(day({ supplements: [caffeine] }));
+    c.dates = [
+      { date: '2026-12-04', label: null, countdownOffset: null, targets: day({ supplements: [caffeine] }) },
+    ];
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.supplements.0.minutesBeforeEvent':
+        'Times before the event only work on countdown days; use clock times here',
+      'dates.0.targets.supplements.0.minutesBeforeEvent':
+        'Times before the event only work on countdown days; use clock times here',
+    });
+  });
+
+  it('are fine on a countdown day and in a template', () => {
+    const c = starterPlanContent();
+    c.dates = [
+      { date: '2026-12-05', label: 'Show', countdownOffset: 0, targets: day({ supplements: [caffeine] }) },
+    ];
+    expect(validatePlanContent(c, baseline)).toEqual({});
+    const template: TemplateRequest = {
+      name: 'T',
+      eventType: 'show',
+      description: null,
+      days: [{ offset: 0, label: null, targets: day({ supplements: [caffeine] }) }],
+    };
+    expect(validateTemplate(template)).toEqual({});
+  });
+});

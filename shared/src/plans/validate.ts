@@ -37,6 +37,7 @@ export function validatePlanContent(
     if (keys.has(t.key)) add(`dayTypes.${i}.key`, `Another day type already uses the key "${t.key}"`);
     keys.add(t.key);
     dayTargetErrors(t.targets, `dayTypes.${i}.targets`, baseline, add);
+    eventTimeErrors(t.targets, `dayTypes.${i}.targets`, false, add);
   });
 
   for (const day of WEEKDAYS) {
@@ -51,6 +52,7 @@ export function validatePlanContent(
     if (dates.has(d.date)) add(`dates.${i}.date`, `${d.date} is listed twice`);
     dates.add(d.date);
     dayTargetErrors(d.targets, `dates.${i}.targets`, baseline, add);
+    eventTimeErrors(d.targets, `dates.${i}.targets`, d.countdownOffset !== null, add);
   });
 
   return errors;
@@ -69,6 +71,27 @@ export function validateTemplate(template: TemplateRequest): Record<string, stri
     dayTargetErrors(d.targets, `days.${i}.targets`, null, add);
   });
   return errors;
+}
+
+/**
+ * Times before the event belong to countdown days only: a weekday pattern or a plain dated day has
+ * no event of its own to count back from.
+ */
+function eventTimeErrors(
+  targets: DayTargets,
+  prefix: string,
+  countdownDay: boolean,
+  add: (path: string, message: string) => void,
+): void {
+  if (countdownDay) return;
+  targets.supplements.forEach((s, i) => {
+    if ((s.minutesBeforeEvent?.length ?? 0) > 0) {
+      add(
+        `${prefix}.supplements.${i}.minutesBeforeEvent`,
+        'Times before the event only work on countdown days; use clock times here',
+      );
+    }
+  });
 }
 
 /** The per-day rules, on the paths of one DayTargets. Without a baseline, relative figures are not judged. */

@@ -1,4 +1,5 @@
 import { DEFAULT_TOLERANCES, type ResolvedTargets, type Tolerances } from '../schemas/plans.js';
+import { amountAfter } from '../plans/cutoff.js';
 import {
   DRIFT_METRICS,
   type CutoffStatus,
@@ -222,22 +223,19 @@ export function dayVerdicts(input: {
   });
 }
 
-/** Seconds since midnight of "HH:MM" or "HH:MM:SS". */
-function clockSeconds(time: string): number {
-  const [h = 0, m = 0, s = 0] = time.split(':').map(Number);
-  return h * 3600 + m * 60 + s;
-}
-
 /**
  * Fluids logged at a clock time strictly later than the cut-off: "no fluids after 18:00" leaves a
- * drink at 18:00 itself before it.
+ * drink at 18:00 itself before it (the one timing rule, `amountAfter` in plans/cutoff.ts).
  */
 export function fluidsAfterCutoff(
   cutoffTime: string,
   fluids: readonly { time: string; volumeMl: number }[],
 ): number {
-  const limit = clockSeconds(cutoffTime);
-  return fluids.filter((f) => clockSeconds(f.time) > limit).reduce((sum, f) => sum + f.volumeMl, 0);
+  return amountAfter(
+    fluids.map((f) => ({ time: f.time, amount: f.volumeMl })),
+    cutoffTime,
+    0,
+  ).logged;
 }
 
 /**

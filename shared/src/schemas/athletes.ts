@@ -117,6 +117,15 @@ export const intakeRequestOn = (today: string) =>
 export type IntakeRequest = z.infer<ReturnType<typeof intakeRequestOn>>;
 
 /** An athlete's profile as the API returns it. */
+/** The plan's countdown counts back from another day than the event (until the coach resolves it). */
+export const countdownMismatchView = z.object({
+  /** The event day the latest plan version's countdown counts back from. */
+  countdownEventDate: z.string(),
+  /** The athlete's event date. */
+  eventDate: z.string(),
+});
+export type CountdownMismatch = z.infer<typeof countdownMismatchView>;
+
 export const athleteProfile = z.object({
   id: z.uuid(),
   userId: z.uuid(),
@@ -142,6 +151,8 @@ export const athleteProfile = z.object({
   units: z.object({ weight: z.enum(WEIGHT_UNITS), volume: z.enum(VOLUME_UNITS) }),
   photoConsent: z.boolean(),
   intakeCompletedAt: z.string().nullable(),
+  /** Set while the plan's countdown aims at another day than `eventDate`; computed by the server. */
+  countdownMismatch: countdownMismatchView.nullable(),
 });
 export type AthleteProfile = z.infer<typeof athleteProfile>;
 

@@ -103,8 +103,8 @@ export const dayView = z.object({
     fatG: z.number(),
     fibreG: z.number(),
     alcoholG: z.number(),
-    /** Sodium from meals that carry it, mg. */
-    sodiumMg: z.number(),
+    /** Sodium from meals that carry it, mg; null when no meal of the day carries a figure (unknown, not 0). */
+    sodiumMg: z.number().nullable(),
   }),
   supplements: z.array(supplementView),
   evening: eveningView.nullable(),
@@ -124,6 +124,21 @@ export const dayView = z.object({
   cutoff: cutoffStatus.nullable(),
   /** Fluids after the cut-off beyond the allowance, if any. */
   breach: cutoffBreach.nullable(),
+  /**
+   * Every timing target the day's log went beyond: the fluid cut-off, the food cut-off, the fluid
+   * cap (one rule, `amountAfter`); empty for a day after the athlete's today.
+   */
+  timingBreaches: z.array(
+    z.object({
+      kind: z.enum(['fluid_cutoff', 'food_cutoff', 'fluid_cap']),
+      /** The athlete's clock time it counts after; null for a cap over the whole day. */
+      after: z.string().nullable(),
+      unit: z.enum(['ml', 'kcal']),
+      allowance: z.number(),
+      logged: z.number(),
+      excess: z.number(),
+    }),
+  ),
 });
 export type DayView = z.infer<typeof dayView>;
 

@@ -33,6 +33,12 @@ export const PLAN_LIMITS = {
   waterFactor: { min: 0, max: 4 },
   sodiumMg: { min: 0, max: 20000 },
   allowanceMl: { min: 0, max: 3000 },
+  /** kcal still allowed after a food cut-off. */
+  allowanceKcal: { min: 0, max: 2000 },
+  /** The most a fluid cap ("only sips") may allow, mL. */
+  fluidCapMl: { min: 0, max: 3000 },
+  /** How long before the event's clock time an item may be timed, minutes (48 h). */
+  minutesBeforeEvent: { min: 0, max: 2880 },
   steps: { min: 0, max: 100000 },
   cardioMinutes: { min: 0, max: 600 },
   supplementsPerDay: 30,
@@ -85,26 +91,45 @@ export const waterTarget = z.discriminatedUnion('kind', [
 ]);
 export type WaterTarget = z.infer<typeof waterTarget>;
 
-/** A supplement the athlete is to take, at one or more clock times. */
-export const scheduleItem = z.object({
-  /** Stable id; a supplement entry ticks it via `scheduleItemId`. */
-  id: uuid,
-  /** What to take ("Creatine monohydrate"). */
-  item: z
-    .string({ error: 'Item is required' })
-    .trim()
-    .min(1, 'Item is required')
-    .max(80, 'At most 80 characters'),
-  /** Dose amount, optional. */
-  dose: num(0, 100000, 'Dose').nullable(),
-  /** Dose unit ("g", "mg", "capsule"), optional. */
-  unit: z.string().trim().max(16, 'At most 16 characters').nullable(),
-  /** Clock times, HH:MM in the athlete's time zone. */
-  times: z
-    .array(clockTime)
-    .min(1, 'Add at least one time')
-    .max(PLAN_LIMITS.timesPerSupplement, `At most ${PLAN_LIMITS.timesPerSupplement} times`),
-});
+/** A supplement the athlete is to take, at clock times and/or at times before the event. */
+export const scheduleItem = z
+  .object({
+    /** Stable id; a supplement entry ticks it via `scheduleItemId`. */
+    id: uuid,
+    /** What to take ("Creatine monohydrate"). */
+    item: z
+      .string({ error: 'Item is required' })
+      .trim()
+      .min(1, 'Item is required')
+      .max(80, 'At most 80 characters'),
+    /** Dose amount, optional. */
+    dose: num(0, 100000, 'Dose').nullable(),
+    /** Dose unit ("g", "mg", "capsule"), optional. */
+    unit: z.string().trim().max(16, 'At most 16 characters').nullable(),
+    /** Clock times, HH:MM in the athlete's time zone. */
+    times: z
+      .array(clockTime)
+      .max(PLAN_LIMITS.timesPerSupplement, `At most ${PLAN_LIMITS.timesPerSupplement} times`),
+    /**
+     * Times before the event's clock time, in minutes (180 = "3 h before"); only on countdown days.
+     * The event's time zone places them; the athlete sees them on their own clock. Absent in
+     * versions saved before these existed.
+     */
+    minutesBeforeEvent: z
+      .array(
+        z
+          .number({ error: 'Time before the event must be a number' })
+          .int('Whole minutes before the event')
+          .min(PLAN_LIMITS.minutesBeforeEvent.min, 'Time before the event cannot be negative')
+          .max(PLAN_LIMITS.minutesBeforeEvent.max, 'At most 48 h before the event'),
+      )
+      .max(PLAN_LIMITS.timesPerSupplement, `At most ${PLAN_LIMITS.timesPerSupplement} times`)
+      .optional(),
+  })
+  .refine((s) => s.times.length + (s.minutesBeforeEvent?.length ?? 0) > 0, {
+    message: 'Add a clock time or a time before the event',
+    path: ['times'],
+  });
 export type ScheduleItem = z.infer<typeof scheduleItem>;
 
 /** No fluids after this clock time beyond the allowance. */
@@ -116,6 +141,23 @@ export const fluidCutoff = z.object({
 });
 export type FluidCutoff = z.infer<typeof fluidCutoff>;
 
+/** No food after this clock time beyond the allowance ("all food before 13:00"). */
+export const foodCutoff = z.object({
+  /** HH:MM in the athlete's time zone. */
+  time: clockTime,
+  /** kcal still allowed after the cut-off. */
+  allowanceKcal: num(0, PLAN_LIMITS.allowanceKcal.max, 'Food allowance', ' kcal'),
+});
+export type FoodCutoff = z.infer<typeof foodCutoff>;
+
+/** "Only sips": at most `maxMl` of fluids over the whole day, or after `after` when set. */
+export const fluidCap = z.object({
+  maxMl: num(0, PLAN_LIMITS.fluidCapMl.max, 'Fluid cap', ' mL'),
+  /** HH:MM in the athlete's time zone; null: the cap is for the whole day. */
+  after: clockTime.nullable(),
+});
+export type FluidCap = z.infer<typeof fluidCap>;
+
 /** A day's targets as written by the coach (each metric optional: null = no target). */
 export const dayTargets = z.object({
   energy: energyTarget.nullable(),
@@ -126,6 +168,10 @@ export const dayTargets = z.object({
   /** Sodium, mg. */
   sodiumMg: num(0, PLAN_LIMITS.sodiumMg.max, 'Sodium', ' mg').nullable(),
   fluidCutoff: fluidCutoff.nullable(),
+  /** Absent in versions saved before it existed (read as null). */
+  foodCutoff: foodCutoff.nullable().optional(),
+  /** Absent in versions saved before it existed (read as null). */
+  fluidCap: fluidCap.nullable().optional(),
   steps: num(0, PLAN_LIMITS.steps.max, 'Steps').int('Steps must be a whole number').nullable(),
   cardioMinutes: num(0, PLAN_LIMITS.cardioMinutes.max, 'Cardio', ' min').nullable(),
   supplements: z
@@ -237,9 +283,26 @@ export const resolvedTargets = z.object({
   waterMl: z.number().nullable(),
   sodiumMg: z.number().nullable(),
   fluidCutoff: fluidCutoff.nullable(),
+  foodCutoff: foodCutoff.nullable(),
+  fluidCap: fluidCap.nullable(),
   steps: z.number().nullable(),
   cardioMinutes: z.number().nullable(),
   supplements: z.array(scheduleItem),
+  /** One row per supplement time set before the event, placed on the athlete's clock. */
+  eventTimed: z.array(
+    z.object({
+      itemId: uuid,
+      item: z.string(),
+      dose: z.number().nullable(),
+      unit: z.string().nullable(),
+      minutesBefore: z.number().int(),
+      /**
+       * The athlete's local date and clock time it falls on (the IANA tz database via Intl); null
+       * when the event has no clock time or the day is not resolved against an event.
+       */
+      at: z.object({ date: z.string(), time: z.string() }).nullable(),
+    }),
+  ),
   note: z.string().nullable(),
   /** How each relative figure was reached, by metric ("usual water 3000 mL + 1000 mL"). */
   basis: z.record(z.string(), z.string()),

@@ -9,6 +9,7 @@ import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { CoachAthleteTabs } from './coach-athlete-tabs';
+import { CountdownMismatchBanner } from './countdown-mismatch-banner';
 
 type AthleteResponse = NonNullable<ReturnType<typeof useAthlete>['data']>;
 
@@ -70,7 +71,14 @@ export function CoachAthleteFrame({
           {athlete.error.message}
         </Alert>
       ) : (
-        children(athlete.data)
+        <>
+          <CountdownMismatchBanner
+            athlete={athlete.data.data}
+            abilities={athlete.data.abilities}
+            className="mb-5"
+          />
+          {children(athlete.data)}
+        </>
       )}
     </>
   );

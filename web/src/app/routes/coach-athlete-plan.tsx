@@ -1,5 +1,5 @@
 import type { AthleteProfile, PlanVersionView, PlanView } from '@driftmark/shared';
-import { useMemo, useState } from 'react';
+import { useState } from 'react';
 import { Link, Outlet, useOutletContext, useParams } from 'react-router';
 import { SafetyNote } from '@/components/safety-note';
 import { Alert } from '@/components/ui/alert';
@@ -10,10 +10,9 @@ import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/spinner';
 import { TabNav, TabNavLink } from '@/components/ui/tab-nav';
 import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
+import { useCountdownLinkedKeys } from '../layouts/countdown-mismatch-banner';
 import { paths } from '@/config/paths';
 import { useAthlete, type AthleteAbilities } from '@/features/athletes/api/get-athlete';
-import { athleteKeys, rosterKeys } from '@/features/athletes/api/keys';
-import { checkInKeys } from '@/features/check-ins/api/keys';
 import { usePlan } from '@/features/plans/api/get-plan';
 import type { LinkedKeys } from '@/features/plans/api/plan-cache';
 import { ApplyCountdown } from '@/features/plans/components/apply-countdown';
@@ -51,11 +50,7 @@ export function CoachAthletePlanLayout() {
   const athlete = useAthlete(athleteId);
   const plan = usePlan(athleteId);
   const name = athlete.data?.data.name;
-  // Days and history carry the targets in force and cautions; the profile and roster carry the event.
-  const linkedKeys = useMemo<LinkedKeys>(
-    () => [checkInKeys.athlete(athleteId), athleteKeys.detail(athleteId), rosterKeys.all],
-    [athleteId],
-  );
+  const linkedKeys = useCountdownLinkedKeys(athleteId);
   const failed = athlete.isError ? athlete.error : plan.isError ? plan.error : null;
 
   return (
@@ -106,6 +101,7 @@ export function CoachAthletePlanLayout() {
                 date: athlete.data.data.eventDate,
               }}
               today={plan.data.data.today}
+              mismatch={athlete.data.data.countdownMismatch}
               canChange={athlete.data.abilities.update === true}
               canEditPlan={plan.data.abilities.edit === true}
               linkedKeys={linkedKeys}

@@ -6,6 +6,7 @@ import { Button, ButtonLink } from '@/components/ui/button';
 import { ArrowLeftIcon, CameraIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
 import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
+import { CountdownMismatchBanner } from '../layouts/countdown-mismatch-banner';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { useToday } from '@/features/check-ins/components/use-clock';
@@ -122,6 +123,11 @@ export function CoachAthleteTrendsRoute() {
         <>
           <AthleteHeader profile={athlete.data.data} today={today} />
           <CoachAthleteTabs athleteId={athleteId} className="mb-5" />
+          <CountdownMismatchBanner
+            athlete={athlete.data.data}
+            abilities={athlete.data.abilities}
+            className="mb-5"
+          />
 
           <div className="mb-4 flex flex-wrap items-end justify-between gap-3">
             <div>

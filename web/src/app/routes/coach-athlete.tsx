@@ -13,6 +13,7 @@ import { Button } from '@/components/ui/button';
 import { ArrowLeftIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
 import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
+import { CountdownMismatchBanner } from '../layouts/countdown-mismatch-banner';
 import { paths } from '@/config/paths';
 import { EndCoachingPanel } from '@/features/athletes/components/end-coaching-panel';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
@@ -154,6 +155,11 @@ export function CoachAthleteRoute() {
         <>
           <AthleteHeader profile={athlete.data.data} today={today} />
           <CoachAthleteTabs athleteId={athleteId} className="mb-5" />
+          <CountdownMismatchBanner
+            athlete={athlete.data.data}
+            abilities={athlete.data.abilities}
+            className="mb-5"
+          />
           <section aria-labelledby="day-heading" className="mb-8">
             <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
               <h2 id="day-heading" className="text-xl font-bold text-ink tabular-nums">

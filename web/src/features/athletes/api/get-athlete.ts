@@ -3,7 +3,14 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, type WithAbilities } from '@/lib/api-client';
 import { athleteKeys } from './keys';
 
-export type AthleteAbilities = { update: boolean; delete: boolean; share: boolean; log: boolean };
+export type AthleteAbilities = {
+  update: boolean;
+  delete: boolean;
+  share: boolean;
+  log: boolean;
+  /** Write the athlete's plan (versions, countdowns). */
+  plan: boolean;
+};
 
 /** GET /api/athletes/:athleteId: the profile and what the signed-in user may do with it. */
 export async function getAthlete(

@@ -174,6 +174,7 @@ describe('initialIntakeValues', () => {
     units: { weight: 'kg', volume: 'ml' },
     photoConsent: true,
     intakeCompletedAt: '2026-11-01T10:00:00Z',
+    countdownMismatch: null,
   };
 
   it('starts a first intake from the device time zone and the user units', () => {

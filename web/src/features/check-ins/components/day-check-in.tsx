@@ -6,7 +6,6 @@ import { Button } from '@/components/ui/button';
 import { CameraIcon, CautionIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
 import { cn } from '@/lib/cn';
-import { formatDateTime } from '@/lib/format';
 import { useDay } from '../api/get-day';
 import { addDays } from '../utils/dates';
 import { dayHasUrgentSymptom } from '../utils/symptoms';
@@ -20,6 +19,7 @@ import { SymptomsCard } from './symptoms-card';
 import { UrgentSymptomAlert } from './urgent-symptom-alert';
 import { useClock } from './use-clock';
 import { WeighInCard } from './weigh-in-card';
+import { clockCaption, formatInstant } from '@/lib/clock';
 
 interface DayCheckInProps {
   athleteId: string;
@@ -120,6 +120,9 @@ export function DayCheckIn({
           seek medical care.
         </Alert>
       ) : null}
+      <p className="text-xs text-ink-faint">
+        {clockCaption({ whose: 'athlete', timeZone: day.timeZone }, canEdit)}
+      </p>
       {!canEdit ? <StaffFlags day={day} /> : null}
       <DayCautionCard day={day} />
       {before}
@@ -160,7 +163,9 @@ function StaffFlags({ day }: { day: DayView }) {
         {day.flags.map((f) => (
           <li key={f.id}>
             {f.message}{' '}
-            <span className="text-ink-muted tabular-nums">· {formatDateTime(f.createdAt, day.timeZone)}</span>
+            <span className="text-ink-muted tabular-nums">
+              · {formatInstant(f.createdAt, { whose: 'athlete', timeZone: day.timeZone })}
+            </span>
           </li>
         ))}
       </ul>

@@ -21,7 +21,9 @@ import { formatNumber, formatVolume, NBSP } from '@/lib/format';
 import { useCreateSupplement } from '../api/create-supplement';
 import { createClientIdKeeper } from '../utils/client-id';
 import { clockMinutes, sodiumLogged, supplementSlots, type SupplementSlot } from '../utils/targets';
+import { formatClock } from '@/lib/clock';
 import { CheckInCard } from './check-in-card';
+import { TimingTargets } from './timing-targets';
 import type { DayCardProps } from './day-card-props';
 
 /** How a metric's figures read: the number (in the reader's unit) and the unit after it. */
@@ -106,6 +108,8 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
     macros.some((m) => m.target !== null) ||
     t.waterMl !== null ||
     t.fluidCutoff !== null ||
+    t.foodCutoff !== null ||
+    t.fluidCap !== null ||
     t.sodiumMg !== null ||
     t.steps !== null ||
     t.cardioMinutes !== null;
@@ -181,7 +185,9 @@ export function DayTargetsCard({ athleteId, day, units, canEdit, now }: DayCardP
         </ul>
       ) : null}
 
-      {t.supplements.length > 0 ? (
+      <TimingTargets day={day} volumeUnit={units.volume} />
+
+      {t.supplements.some((x) => x.times.length > 0) ? (
         <SupplementsDue athleteId={athleteId} day={day} clock={clock} now={now} canEdit={canEdit} />
       ) : null}
 
@@ -365,7 +371,7 @@ function WaterRows({
   const cutoffBlock = cutoff ? (
     <div className="mt-3 rounded-md bg-paper px-3 py-2.5" data-metric="cutoff" data-state={cutoff.state}>
       <p className="text-sm font-semibold text-ink tabular-nums">
-        No fluids after {cutoff.cutoff}
+        No fluids after {formatClock(cutoff.cutoff, { whose: 'athlete', timeZone: day.timeZone })}
         {cutoff.allowanceMl > 0 ? ` beyond ${volume(cutoff.allowanceMl)}` : ''}
       </p>
       <p className="mt-1 flex flex-wrap items-center justify-between gap-x-3 gap-y-1 text-sm text-ink-muted tabular-nums">

@@ -55,9 +55,9 @@ describe('supplementSlots', () => {
 });
 
 describe('sodiumLogged', () => {
-  it('is unknown until a meal carries sodium', () => {
+  it("reads the server's total: unknown (null) until a meal carries sodium", () => {
     const meal = (sodiumMg: number | null) => ({ sodiumMg }) as never;
-    expect(sodiumLogged({ meals: [meal(null)], totals: { sodiumMg: 0 } as never })).toEqual({
+    expect(sodiumLogged({ meals: [meal(null)], totals: { sodiumMg: null } as never })).toEqual({
       mg: null,
       known: 0,
       meals: 1,

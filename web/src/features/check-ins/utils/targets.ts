@@ -90,5 +90,5 @@ export function sodiumLogged(day: Pick<DayView, 'meals' | 'totals'>): {
   meals: number;
 } {
   const known = day.meals.filter((m) => m.sodiumMg !== null).length;
-  return { mg: known > 0 ? day.totals.sodiumMg : null, known, meals: day.meals.length };
+  return { mg: day.totals.sodiumMg, known, meals: day.meals.length };
 }

@@ -40,6 +40,7 @@ import {
 } from '../utils/marks';
 import { MarkMetricBadge, NewMarker } from './mark-badges';
 import { useReadOnView } from './use-read-on-view';
+import { viewerClock, zonePlace } from '@/lib/clock';
 
 export interface MarkListProps {
   athleteId: string;
@@ -244,7 +245,9 @@ function MarkItem({
 
   const days = markRangeDays(mark.fromDate, mark.toDate);
   const thread = visibleReplies(mark.replies, expanded);
-  const when = (iso: string) => formatMarkTime(iso, now, timeZone);
+  // Marks are read on the viewer's clock (or the one the page names), with its place.
+  const when = (iso: string) =>
+    `${formatMarkTime(iso, now, timeZone)} ${zonePlace(timeZone ?? viewerClock().timeZone)} time`;
   const nameOf = (person: MarkView['author']) => (person.id === viewerUserId ? 'You' : person.name);
 
   return (

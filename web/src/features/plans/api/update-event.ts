@@ -4,9 +4,8 @@ import { api } from '@/lib/api-client';
 import { afterPlanWrite, type PlanWriteOptions } from './plan-cache';
 
 export interface UpdateEventResult {
+  /** The profile after the change; `countdownMismatch` says when the countdown now aims elsewhere. */
   athlete: AthleteProfile;
-  /** Set when the latest plan version has a countdown for another date: offer to move it. */
-  countdownOffer: { fromEventDate: string; toEventDate: string } | null;
 }
 
 /** PATCH /api/athletes/:athleteId/event: the coach changes the event date (and time, name). */

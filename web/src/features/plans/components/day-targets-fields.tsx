@@ -46,6 +46,8 @@ export interface DayTargetsFieldsProps<V extends FieldValues, TContext = unknown
   disabled?: boolean;
   /** Names the group for assistive technology ("Targets for Training day"). */
   label: string;
+  /** A countdown day (or template day): supplements may be timed before the event. */
+  eventTimes?: boolean;
 }
 
 const ENERGY_KINDS = [
@@ -101,6 +103,7 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
   warnings = [],
   disabled = false,
   label,
+  eventTimes = false,
 }: DayTargetsFieldsProps<V, TContext, TTransformed>) {
   const c = control as unknown as Control<FieldValues>;
   const { register, setValue } = useFormContext();
@@ -119,6 +122,8 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
     'water',
     'sodiumMg',
     'fluidCutoff',
+    'foodCutoff',
+    'fluidCap',
     'steps',
     'cardioMinutes',
     'supplements',
@@ -279,6 +284,62 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
       />
 
       <MetricRow
+        label="Fluid cap"
+        control={
+          <label className="flex min-h-10 items-center gap-2 text-sm text-ink">
+            <input type="checkbox" className="size-5 accent-accent" {...register(`${name}.fluidCap.on`)} />
+            Only sips…
+          </label>
+        }
+        input={
+          values.fluidCap?.on ? (
+            <div className="grid grid-cols-2 gap-2">
+              <NumberBox name={`${name}.fluidCap.maxMl`} label="At most, mL" suffix="mL" />
+              <TimeBox name={`${name}.fluidCap.after`} label="After (empty: the whole day)" />
+            </div>
+          ) : null
+        }
+        live={
+          values.fluidCap?.on
+            ? values.fluidCap.after
+              ? `At most this much after ${values.fluidCap.after} (athlete's clock).`
+              : 'At most this much over the whole day; set a time to cap only the hours after it.'
+            : null
+        }
+        issue={issues.fluidCap}
+        warnings={warningsFor('fluidCap')}
+        wideInput
+      />
+
+      <MetricRow
+        label="Food cut-off"
+        control={
+          <label className="flex min-h-10 items-center gap-2 text-sm text-ink">
+            <input type="checkbox" className="size-5 accent-accent" {...register(`${name}.foodCutoff.on`)} />
+            All food before…
+          </label>
+        }
+        input={
+          values.foodCutoff?.on ? (
+            <div className="grid grid-cols-2 gap-2">
+              <TimeBox name={`${name}.foodCutoff.time`} label="Food cut-off time" />
+              <NumberBox
+                name={`${name}.foodCutoff.allowanceKcal`}
+                label="Allowance after the cut-off, kcal"
+                suffix="kcal"
+              />
+            </div>
+          ) : null
+        }
+        live={
+          values.foodCutoff?.on ? "Allowance: a snack after the cut-off (0 for none), athlete's clock." : null
+        }
+        issue={issues.foodCutoff}
+        warnings={warningsFor('foodCutoff')}
+        wideInput
+      />
+
+      <MetricRow
         label="Steps"
         input={<NumberBox name={`${name}.steps`} label="Steps" suffix="steps" />}
         issue={issues.steps}
@@ -291,7 +352,7 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
         warnings={warningsFor('cardioMinutes')}
       />
 
-      <SupplementRows name={name} control={c} disabled={disabled} issues={issues} />
+      <SupplementRows name={name} control={c} disabled={disabled} issues={issues} eventTimes={eventTimes} />
       {warningsFor('supplements').length > 0 ? <WarningLines warnings={warningsFor('supplements')} /> : null}
 
       <NoteBox name={`${name}.note`} />
@@ -635,11 +696,13 @@ function SupplementRows({
   control,
   disabled,
   issues,
+  eventTimes,
 }: {
   name: string;
   control: Control<FieldValues>;
   disabled: boolean;
   issues: Readonly<Record<string, string>>;
+  eventTimes: boolean;
 }) {
   const { fields, append, remove } = useFieldArray({ control, name: `${name}.supplements` });
   const listId = `${useFieldIds(name).inputId}-units`;
@@ -649,7 +712,10 @@ function SupplementRows({
         <p className="text-sm font-semibold text-ink" id={`${listId}-heading`}>
           Supplement schedule
         </p>
-        <p className="text-xs text-ink-faint">Times as HH:MM, separated by commas (athlete&apos;s clock).</p>
+        <p className="text-xs text-ink-faint">
+          Times as HH:MM, separated by commas (athlete&apos;s clock)
+          {eventTimes ? '; or hours before the event (event’s clock, shown on the athlete’s)' : ''}.
+        </p>
       </div>
       <datalist id={listId}>
         {DOSE_UNITS.map((u) => (
@@ -661,7 +727,12 @@ function SupplementRows({
           {fields.map((f, i) => (
             <li
               key={f.id}
-              className="grid grid-cols-2 items-start gap-2 rounded-md bg-paper p-2 sm:grid-cols-[minmax(0,2fr)_5.5rem_6rem_minmax(0,1.6fr)_auto]"
+              className={cn(
+                'grid grid-cols-2 items-start gap-2 rounded-md bg-paper p-2',
+                eventTimes
+                  ? 'sm:grid-cols-[minmax(0,2fr)_5.5rem_6rem_minmax(0,1.4fr)_minmax(0,1.2fr)_auto]'
+                  : 'sm:grid-cols-[minmax(0,2fr)_5.5rem_6rem_minmax(0,1.6fr)_auto]',
+              )}
             >
               <TextBox
                 name={`${name}.supplements.${i}.item`}
@@ -681,6 +752,13 @@ function SupplementRows({
                 label={`Supplement ${i + 1}: times`}
                 placeholder="08:00, 20:00"
               />
+              {eventTimes ? (
+                <TextBox
+                  name={`${name}.supplements.${i}.beforeEventHours`}
+                  label={`Supplement ${i + 1}: hours before the event`}
+                  placeholder="h before event, e.g. 3"
+                />
+              ) : null}
               <Button
                 variant="ghost"
                 size="sm"

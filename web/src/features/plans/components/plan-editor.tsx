@@ -399,6 +399,7 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
                           issues={issuesFor(checks.issues, 'dates', i)}
                           warnings={warningsFor(checks.warnings, 'dates', i, d.date)}
                           label={`Targets for ${d.date}`}
+                          eventTimes={d.countdownOffset !== null}
                         />
                       </Disclosure>
                     );

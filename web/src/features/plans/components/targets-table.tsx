@@ -138,11 +138,17 @@ export function TargetsTable({
                   )}
                 </td>
                 <td className="min-w-56 px-3 py-2 align-top text-xs">
-                  {r && (r.supplements.length > 0 || other.length > 0 || r.note) ? (
+                  {r &&
+                  (r.supplements.length > 0 || other.length > 0 || r.note || r.foodCutoff || r.fluidCap) ? (
                     <ul className="space-y-0.5">
                       {r.supplements.map((s) => (
                         <li key={s.id} className="tabular-nums">
                           {fig.supplementText(s)}
+                        </li>
+                      ))}
+                      {fig.timingLines(r).map((l) => (
+                        <li key={l} className="tabular-nums">
+                          {l}
                         </li>
                       ))}
                       {other.length > 0 ? <li>{other.join(' · ')}</li> : null}

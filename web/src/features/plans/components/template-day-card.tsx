@@ -144,6 +144,7 @@ export function TemplateDayCard({
             issues={issues}
             disabled={readOnly}
             label={`Targets for ${title}`}
+            eventTimes
           />
         ) : null}
       </div>

@@ -15,11 +15,12 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/spinner';
-import { formatDate, formatDateTime } from '@/lib/format';
+import { formatDate } from '@/lib/format';
 import { usePlanVersion } from '../api/get-plan-version';
 import * as fig from '../utils/figures';
 import { scopeLabel } from '../utils/scope-label';
 import { TargetsTable } from './targets-table';
+import { formatInstant, viewerClock } from '@/lib/clock';
 
 function resolve(t: DayTargets, b: PlanBaseline): ResolvedTargets | null {
   try {
@@ -80,7 +81,7 @@ export function VersionContent({ version: v }: { version: PlanVersionView }) {
             </h3>
             <p className="text-sm text-ink-muted">
               Saved by {v.createdBy.name} on{' '}
-              <span className="tabular-nums">{formatDateTime(v.createdAt)}</span>
+              <span className="tabular-nums">{formatInstant(v.createdAt, viewerClock())}</span>
             </p>
             <p className="mt-2 text-ink">“{v.reason}”</p>
           </div>
@@ -209,7 +210,8 @@ export function VersionContent({ version: v }: { version: PlanVersionView }) {
                   <span>{scopeLabel(a, content)}</span>
                   <span>Source: {a.source}</span>
                   <span>
-                    Acknowledged by {a.by.name}, <span className="tabular-nums">{formatDateTime(a.at)}</span>
+                    Acknowledged by {a.by.name},{' '}
+                    <span className="tabular-nums">{formatInstant(a.at, viewerClock())}</span>
                   </span>
                 </p>
               </li>

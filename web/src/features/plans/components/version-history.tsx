@@ -4,7 +4,8 @@ import { Badge } from '@/components/ui/badge';
 import { EmptyState } from '@/components/ui/empty-state';
 import { HistoryIcon } from '@/components/ui/icons';
 import { cn } from '@/lib/cn';
-import { formatDate, formatDateTime } from '@/lib/format';
+import { formatDate } from '@/lib/format';
+import { formatInstant, viewerClock } from '@/lib/clock';
 
 interface VersionHistoryProps {
   plan: PlanView;
@@ -48,7 +49,8 @@ export function VersionHistory({ plan, versionHref, selectedId }: VersionHistory
                     </span>
                   </h3>
                   <p className="text-sm text-ink-muted">
-                    {v.createdBy.name} · <span className="tabular-nums">{formatDateTime(v.createdAt)}</span>
+                    {v.createdBy.name} ·{' '}
+                    <span className="tabular-nums">{formatInstant(v.createdAt, viewerClock())}</span>
                   </p>
                 </div>
                 <div className="flex flex-wrap gap-1.5">

@@ -38,6 +38,7 @@ export function KeyFigures({ r, className }: { r: ResolvedTargets | null; classN
     r.waterMl !== null ? fig.ml(r.waterMl) : null,
     r.sodiumMg !== null ? `Na ${fig.mg(r.sodiumMg)}` : null,
     r.fluidCutoff ? `Cut-off ${r.fluidCutoff.time}` : null,
+    ...fig.timingLines(r),
   ].filter(Boolean);
   if (lines.length === 0) return <p className={cn('text-xs text-ink-faint', className)}>No targets</p>;
   return (

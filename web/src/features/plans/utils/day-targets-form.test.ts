@@ -18,10 +18,20 @@ const full: DayTargets = {
   water: { kind: 'usual_plus', ml: 1000 },
   sodiumMg: 2300,
   fluidCutoff: { time: '19:00', allowanceMl: 150 },
+  foodCutoff: { time: '13:00', allowanceKcal: 200 },
+  fluidCap: { maxMl: 300, after: '15:00' },
   steps: 10000,
   cardioMinutes: 30,
   supplements: [
     { id: '5b0e1c8e-3f41-4c59-9d7e-1d7c2a6f0b11', item: 'Creatine', dose: 5, unit: 'g', times: ['08:00'] },
+    {
+      id: '5b0e1c8e-3f41-4c59-9d7e-1d7c2a6f0b12',
+      item: 'Rice cakes',
+      dose: 2,
+      unit: 'pieces',
+      times: [],
+      minutesBeforeEvent: [180],
+    },
   ],
   note: 'Salt your meals as usual.',
 };
@@ -56,11 +66,11 @@ describe('day targets form', () => {
     const v = dayTargetsFormValues(full);
     v.fat = { kind: 'g', value: '6x' };
     v.fluidCutoff.time = '';
-    v.supplements.push({ itemId: 'x', item: '', dose: '', unit: '', times: '' });
+    v.supplements.push({ itemId: 'x', item: '', dose: '', unit: '', times: '', beforeEventHours: '' });
     const live = liveDayTargets(v);
     expect(live.fat).toBeNull();
     expect(live.fluidCutoff).toBeNull();
-    expect(live.supplements).toHaveLength(1);
+    expect(live.supplements).toHaveLength(2);
     expect(live.protein).toEqual({ kind: 'g_per_kg', perKg: 2.2 });
   });
 
@@ -69,11 +79,33 @@ describe('day targets form', () => {
     v.sodiumMg = '1,500';
     v.steps = '12,000';
     v.cardioMinutes = '22,5';
-    v.supplements = [{ itemId: 'i', item: 'Caffeine', dose: '0,125', unit: 'g', times: '07:00' }];
+    v.supplements = [
+      { itemId: 'i', item: 'Caffeine', dose: '0,125', unit: 'g', times: '07:00', beforeEventHours: '' },
+    ];
     const { targets } = toDayTargets(v);
     expect([targets.sodiumMg, targets.steps, targets.cardioMinutes, targets.supplements[0]?.dose]).toEqual([
       1500, 12000, 22.5, 0.125,
     ]);
+  });
+
+  it('reads the food cut-off, the fluid cap and hours before the event (as minutes)', () => {
+    const v = emptyDayTargetsFormValues();
+    v.foodCutoff = { on: true, time: '13:00', allowanceKcal: '150' };
+    v.fluidCap = { on: true, maxMl: '250', after: '' };
+    v.supplements = [
+      { itemId: 'i', item: 'Caffeine', dose: '200', unit: 'mg', times: '', beforeEventHours: '3, 0,5' },
+    ];
+    const { targets, numberErrors } = toDayTargets(v);
+    expect(numberErrors).toEqual({});
+    expect(targets.foodCutoff).toEqual({ time: '13:00', allowanceKcal: 150 });
+    expect(targets.fluidCap).toEqual({ maxMl: 250, after: null });
+    expect(targets.supplements[0]!.minutesBeforeEvent).toEqual([180, 30]);
+    expect(targets.supplements[0]!.times).toEqual([]);
+    // Back into the form as hours.
+    expect(dayTargetsFormValues(targets).supplements[0]!.beforeEventHours).toBe('3, 0.5');
+    expect(targetsFormPath('supplements.0.minutesBeforeEvent.1')).toBe('supplements.0.beforeEventHours');
+    expect(targetsFormPath('foodCutoff.allowanceKcal')).toBe('foodCutoff.allowanceKcal');
+    expect(targetsFormPath('fluidCap.maxMl')).toBe('fluidCap.maxMl');
   });
 
   it('reads clock times separated by commas or spaces, padding 7:30', () => {

@@ -35,6 +35,8 @@ export interface SupplementFormValues {
   unit: string;
   /** Clock times "HH:MM", separated by commas or spaces. */
   times: string;
+  /** Hours before the event's clock time ("3, 0.5"), countdown days only. */
+  beforeEventHours: string;
 }
 
 export interface DayTargetsFormValues {
@@ -45,6 +47,9 @@ export interface DayTargetsFormValues {
   water: { kind: WaterKind; value: string };
   sodiumMg: string;
   fluidCutoff: { on: boolean; time: string; allowanceMl: string };
+  foodCutoff: { on: boolean; time: string; allowanceKcal: string };
+  /** "Only sips": at most maxMl, over the whole day (after empty) or after a clock time. */
+  fluidCap: { on: boolean; maxMl: string; after: string };
   steps: string;
   cardioMinutes: string;
   supplements: SupplementFormValues[];
@@ -54,7 +59,7 @@ export interface DayTargetsFormValues {
 export const NOT_A_NUMBER = 'Enter a number, e.g. 2400';
 
 export function newSupplementRow(): SupplementFormValues {
-  return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '' };
+  return { itemId: crypto.randomUUID(), item: '', dose: '', unit: '', times: '', beforeEventHours: '' };
 }
 
 export function emptyDayTargetsFormValues(): DayTargetsFormValues {
@@ -66,6 +71,8 @@ export function emptyDayTargetsFormValues(): DayTargetsFormValues {
     water: { kind: 'none', value: '' },
     sodiumMg: '',
     fluidCutoff: { on: false, time: '', allowanceMl: '' },
+    foodCutoff: { on: false, time: '', allowanceKcal: '' },
+    fluidCap: { on: false, maxMl: '', after: '' },
     steps: '',
     cardioMinutes: '',
     supplements: [],
@@ -106,6 +113,12 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
     fluidCutoff: t.fluidCutoff
       ? { on: true, time: t.fluidCutoff.time, allowanceMl: toTypedText(t.fluidCutoff.allowanceMl, 0) }
       : { on: false, time: '', allowanceMl: '' },
+    foodCutoff: t.foodCutoff
+      ? { on: true, time: t.foodCutoff.time, allowanceKcal: toTypedText(t.foodCutoff.allowanceKcal, 0) }
+      : { on: false, time: '', allowanceKcal: '' },
+    fluidCap: t.fluidCap
+      ? { on: true, maxMl: toTypedText(t.fluidCap.maxMl, 0), after: t.fluidCap.after ?? '' }
+      : { on: false, maxMl: '', after: '' },
     steps: toTypedText(t.steps, 0),
     cardioMinutes: toTypedText(t.cardioMinutes, 0),
     supplements: t.supplements.map((s) => ({
@@ -114,6 +127,7 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
       dose: toTypedText(s.dose, 3),
       unit: s.unit ?? '',
       times: s.times.join(', '),
+      beforeEventHours: (s.minutesBeforeEvent ?? []).map((m) => toTypedText(m / 60, 2)).join(', '),
     })),
     note: t.note ?? '',
   };
@@ -168,13 +182,24 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
         : v.water.kind === 'usual_times'
           ? { kind: 'usual_times', factor: n('water.value', v.water.value) }
           : null;
-  const supplements: ScheduleItem[] = (v.supplements ?? []).map((s, i) => ({
-    id: s.itemId,
-    item: s.item,
-    dose: optional(`supplements.${i}.dose`, s.dose),
-    unit: s.unit.trim() === '' ? null : s.unit.trim(),
-    times: splitTimes(s.times),
-  }));
+  const supplements: ScheduleItem[] = (v.supplements ?? []).map((s, i) => {
+    const hours = (s.beforeEventHours ?? '')
+      .split(/[\s;]+|,(?=\s)|,$/)
+      .map((h) => h.trim())
+      .filter(Boolean);
+    const minutes = hours.map((h) => {
+      const n = read(`supplements.${i}.minutesBeforeEvent`, h);
+      return n === undefined ? Number.NaN : Math.round(n * 60);
+    });
+    return {
+      id: s.itemId,
+      item: s.item,
+      dose: optional(`supplements.${i}.dose`, s.dose),
+      unit: s.unit.trim() === '' ? null : s.unit.trim(),
+      times: splitTimes(s.times),
+      ...(minutes.length > 0 ? { minutesBeforeEvent: minutes } : {}),
+    };
+  });
   const note = v.note.trim();
 
   return {
@@ -189,6 +214,18 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
         ? {
             time: v.fluidCutoff.time,
             allowanceMl: optional('fluidCutoff.allowanceMl', v.fluidCutoff.allowanceMl) ?? 0,
+          }
+        : null,
+      foodCutoff: v.foodCutoff?.on
+        ? {
+            time: v.foodCutoff.time,
+            allowanceKcal: optional('foodCutoff.allowanceKcal', v.foodCutoff.allowanceKcal) ?? 0,
+          }
+        : null,
+      fluidCap: v.fluidCap?.on
+        ? {
+            maxMl: n('fluidCap.maxMl', v.fluidCap.maxMl),
+            after: v.fluidCap.after.trim() === '' ? null : v.fluidCap.after.trim(),
           }
         : null,
       steps: optional('steps', v.steps),
@@ -216,6 +253,10 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
   };
   const w = targets.water;
   const cutoff = targets.fluidCutoff;
+  const food = targets.foodCutoff;
+  const cap = targets.fluidCap;
+  const clock = (t: string | null | undefined) =>
+    typeof t === 'string' && /^([01]\d|2[0-3]):[0-5]\d$/.test(t);
   return {
     ...targets,
     energy: e && usable(e.kind === 'kcal' ? e.kcal : e.factor) ? e : null,
@@ -228,6 +269,14 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
       cutoff && /^([01]\d|2[0-3]):[0-5]\d$/.test(cutoff.time)
         ? { time: cutoff.time, allowanceMl: usable(cutoff.allowanceMl) ? cutoff.allowanceMl : 0 }
         : null,
+    foodCutoff:
+      food && clock(food.time)
+        ? { time: food.time, allowanceKcal: usable(food.allowanceKcal) ? food.allowanceKcal : 0 }
+        : null,
+    fluidCap:
+      cap && usable(cap.maxMl) && (cap.after === null || clock(cap.after))
+        ? { maxMl: cap.maxMl, after: cap.after }
+        : null,
     steps: usable(targets.steps) ? targets.steps : null,
     cardioMinutes: usable(targets.cardioMinutes) ? targets.cardioMinutes : null,
     supplements: targets.supplements
@@ -236,6 +285,9 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
         ...s,
         dose: usable(s.dose) ? s.dose : null,
         times: s.times.filter((t) => /^([01]\d|2[0-3]):[0-5]\d$/.test(t)),
+        ...(s.minutesBeforeEvent
+          ? { minutesBeforeEvent: s.minutesBeforeEvent.filter((m) => usable(m) && m >= 0) }
+          : {}),
       })),
   };
 }
@@ -258,9 +310,17 @@ export function targetsFormPath(path: string): string {
   }
   if (head === 'fluidCutoff')
     return second === 'allowanceMl' ? 'fluidCutoff.allowanceMl' : 'fluidCutoff.time';
+  if (head === 'foodCutoff')
+    return second === 'allowanceKcal' ? 'foodCutoff.allowanceKcal' : 'foodCutoff.time';
+  if (head === 'fluidCap') return second === 'after' ? 'fluidCap.after' : 'fluidCap.maxMl';
   if (head === 'supplements') {
     if (second === undefined) return 'supplements';
-    const field = third === 'id' || third === undefined ? 'item' : third;
+    const field =
+      third === 'id' || third === undefined
+        ? 'item'
+        : third === 'minutesBeforeEvent'
+          ? 'beforeEventHours'
+          : third;
     return `supplements.${second}.${field}`;
   }
   return head ?? path;

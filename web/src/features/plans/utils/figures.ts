@@ -1,4 +1,4 @@
-import type { ResolvedTargets, ScheduleItem } from '@driftmark/shared';
+import { minutesBeforeLabel, type ResolvedTargets, type ScheduleItem } from '@driftmark/shared';
 import { formatNumber, NBSP } from '@/lib/format';
 
 /*
@@ -24,8 +24,24 @@ export function macroLine(t: Pick<ResolvedTargets, 'proteinG' | 'carbohydrateG' 
   return parts.length ? `${parts.join(' · ')}${NBSP}g` : null;
 }
 
-/** "Creatine 5 g at 08:00, 20:00". */
+/** "Creatine 5 g at 08:00, 20:00", "Caffeine 200 mg at 3 h before the event" (clock times: the athlete's). */
 export function supplementText(s: ScheduleItem): string {
   const dose = s.dose !== null ? ` ${formatNumber(s.dose, 3)}${s.unit ? `${NBSP}${s.unit}` : ''}` : '';
-  return `${s.item}${dose} at ${s.times.join(', ')}`;
+  const times = [
+    ...s.times,
+    ...(s.minutesBeforeEvent ?? []).map((m) => `${minutesBeforeLabel(m)} the event`),
+  ];
+  return `${s.item}${dose} at ${times.join(', ')}`;
+}
+
+/** "All food before 13:00 (+150 kcal)", "Sips: ≤ 300 mL after 15:00", or null. */
+export function timingLines(t: Pick<ResolvedTargets, 'foodCutoff' | 'fluidCap'>): string[] {
+  return [
+    t.foodCutoff
+      ? `All food before ${t.foodCutoff.time}${t.foodCutoff.allowanceKcal > 0 ? ` (+${kcal(t.foodCutoff.allowanceKcal)})` : ''}`
+      : null,
+    t.fluidCap
+      ? `Sips: at most ${ml(t.fluidCap.maxMl)} ${t.fluidCap.after ? `after ${t.fluidCap.after}` : 'all day'}`
+      : null,
+  ].filter((l): l is string => l !== null);
 }

@@ -249,6 +249,16 @@ export function describeTargets(t: DayTargets): string[] {
       `No fluids after ${t.fluidCutoff.time}${t.fluidCutoff.allowanceMl > 0 ? ` beyond ${ml(t.fluidCutoff.allowanceMl)}` : ''}`,
     );
   }
+  if (t.foodCutoff) {
+    out.push(
+      `All food before ${t.foodCutoff.time}${t.foodCutoff.allowanceKcal > 0 ? ` (+${formatNumber(t.foodCutoff.allowanceKcal, 0)}${NBSP}kcal)` : ''}`,
+    );
+  }
+  if (t.fluidCap) {
+    out.push(
+      `Sips: at most ${ml(t.fluidCap.maxMl)} ${t.fluidCap.after ? `after ${t.fluidCap.after}` : 'all day'}`,
+    );
+  }
   if (t.steps !== null) out.push(`${formatNumber(t.steps, 0)}${NBSP}steps`);
   if (t.cardioMinutes !== null) out.push(`Cardio ${formatNumber(t.cardioMinutes, 0)}${NBSP}min`);
   if (t.supplements.length > 0) {

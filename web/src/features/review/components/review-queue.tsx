@@ -9,11 +9,12 @@ import { CheckIcon, CircleCheckIcon, RosterIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { cn } from '@/lib/cn';
-import { formatDateTime, formatDaysToEvent, formatNumber } from '@/lib/format';
+import { formatDaysToEvent, formatNumber } from '@/lib/format';
 import { useReviewQueue } from '../api/get-review-queue';
 import { useMarkReviewed, type MarkReviewedResponse } from '../api/mark-reviewed';
 import { formatTimeSince } from '../utils/time-since';
 import { ReviewReason } from './review-reason';
+import { formatInstant, viewerClock } from '@/lib/clock';
 
 /** The current time, refreshed every minute so "12 min ago" keeps counting while the page is open. */
 function useNow(intervalMs = 60_000): number {
@@ -200,7 +201,7 @@ function ReviewQueueRow({ item, now, onMark }: { item: ReviewQueueItem; now: num
             <span className="text-ink-faint">Oldest item </span>
             <time
               dateTime={item.since}
-              title={formatDateTime(item.since)}
+              title={formatInstant(item.since, viewerClock())}
               className="font-semibold text-ink tabular-nums"
             >
               {formatTimeSince(item.since, now)}
@@ -210,7 +211,10 @@ function ReviewQueueRow({ item, now, onMark }: { item: ReviewQueueItem; now: num
             {item.lastReviewedAt ? (
               <>
                 Last reviewed{' '}
-                <time dateTime={item.lastReviewedAt} title={formatDateTime(item.lastReviewedAt)}>
+                <time
+                  dateTime={item.lastReviewedAt}
+                  title={formatInstant(item.lastReviewedAt, viewerClock())}
+                >
                   {formatTimeSince(item.lastReviewedAt, now)}
                 </time>
               </>
