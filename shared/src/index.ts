@@ -33,3 +33,4 @@ export * from './typed-numbers.js';
 export * from './calendar.js';
 export * from './rules/day-verdicts.js';
 export * from './reader.js';
+export * from './rules/rate-verdict.js';

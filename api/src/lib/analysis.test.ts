@@ -172,6 +172,9 @@ describe('rate14 (least squares over 14 days)', () => {
     expect(rate.percentPerWeek).toBeCloseTo(-0.9592, 4);
     expect(rate.percentPerWeek).toBeCloseTo((-0.761538 / 79.392857) * 100, 5);
     expect(rate).toMatchObject({ points: 14, from: day(1), to: day(14), band });
+    // −0.96 %/week shows as −1.0: inside Helms 2014's −1 … −0.5 band.
+    expect(rate.verdict).toEqual({ pace: 'inside', state: 'on_plan' });
+    expect(rate14(INVENTED, day(14), none)!.verdict).toBeNull();
   });
 
   it('is null with fewer than 7 weigh-ins in the window (the brief: at least 7)', () => {

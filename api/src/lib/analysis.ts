@@ -12,6 +12,7 @@ import {
   amountAfter,
   dayVerdicts,
   DRIFT_METRICS,
+  rateVerdict,
   isCounted,
   KCAL_PER_KG_LOST,
   LOSS_RATE_STRONG_PCT_PER_WEEK,
@@ -230,6 +231,7 @@ export function rate14(
     band: guidance.band,
     bandNote: guidance.note,
     paused: guidance.paused,
+    verdict: guidance.band ? rateVerdict((kgPerWeek / fit.meanY) * 100, guidance.band) : null,
   };
 }
 

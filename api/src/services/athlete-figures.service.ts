@@ -140,6 +140,7 @@ export function snapshotOf(input: {
       ratePercentPerWeek: rate?.percentPerWeek ?? null,
       rateBand: band ? { minPct: band.minPct, maxPct: band.maxPct } : null,
       rateBandNote: guidance.note,
+      rateVerdict: rate?.verdict ?? null,
       adherence7: adherenceShare(recent),
       lastCheckInDate: input.lastCheckInDate,
       flags: FLAG_KINDS.filter((k) => kinds.has(k)),

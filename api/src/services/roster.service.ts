@@ -56,6 +56,7 @@ const EMPTY_FIGURES: RosterFigures = {
   ratePercentPerWeek: null,
   rateBand: null,
   rateBandNote: null,
+  rateVerdict: null,
   adherence7: null,
   lastCheckInDate: null,
   flags: [],

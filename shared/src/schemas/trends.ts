@@ -204,6 +204,13 @@ export const rateView = z.object({
   bandNote: z.string().nullable(),
   /** During a countdown: no band and no rate flags (water and glycogen change on purpose). */
   paused: z.boolean(),
+  /** The rate against the band (rules/rate-verdict.ts); null without a band. */
+  verdict: z
+    .object({
+      pace: z.enum(['inside', 'faster', 'slower', 'outside']),
+      state: z.enum(['on_plan', 'drifting', 'off_plan']),
+    })
+    .nullable(),
 });
 export type RateView = z.infer<typeof rateView>;
 
@@ -304,6 +311,8 @@ export const rosterFigures = z.object({
   rateBand: z.object({ minPct: z.number(), maxPct: z.number() }).nullable(),
   /** Why there is no band (e.g. paused during the countdown); null with a band. */
   rateBandNote: z.string().nullable(),
+  /** The rate against the band, judged by the server (rules/rate-verdict.ts); null without rate or band. */
+  rateVerdict: rateView.shape.verdict,
   /** Share of logged metric-days on plan over the last 7 days; null with nothing to judge. */
   adherence7: z.number().nullable(),
   /** The athlete's last day with anything logged. */

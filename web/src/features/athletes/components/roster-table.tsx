@@ -34,7 +34,7 @@ import { paths } from '@/config/paths';
 import { cn } from '@/lib/cn';
 import { DRIFT_STATE_STYLE } from '@/lib/drift-states';
 import { DISPLAY_LOCALE, formatDate, formatNumber, formatWeight, NBSP } from '@/lib/format';
-import { FLAG_LABELS, formatDaysAgo, formatSigned, rateStanding } from '../utils/roster-figures';
+import { FLAG_LABELS, formatDaysAgo, formatSigned } from '../utils/roster-figures';
 
 const STATUS: Record<RosterRow['status'], { label: string; tone: BadgeTone }> = {
   intake_pending: { label: 'Intake pending', tone: 'not-logged' },
@@ -496,9 +496,10 @@ function WeightCell({ row, unit }: { row: RosterRow; unit: WeightUnit }) {
 }
 
 function RateCell({ row }: { row: RosterRow }) {
-  const { ratePercentPerWeek: rate, rateBand: band, rateBandNote } = row.figures;
+  const { ratePercentPerWeek: rate, rateBand: band, rateBandNote, rateVerdict } = row.figures;
   if (rate === null) return <Missing label="too few weigh-ins" />;
-  const standing = band ? rateStanding(rate, band) : null;
+  // The server's verdict on the rate against its band.
+  const standing = rateVerdict?.state ?? null;
   return (
     <span className="inline-flex flex-col items-end gap-1">
       <span className="font-semibold whitespace-nowrap text-ink">{`${formatSigned(rate)}${NBSP}%/wk`}</span>

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { formatDaysAgo, formatSigned, MINUS, rateStanding } from './roster-figures';
+import { formatDaysAgo, formatSigned, MINUS } from './roster-figures';
 
 describe('formatSigned', () => {
   it('always shows the sign, with a true minus sign', () => {
@@ -11,33 +11,6 @@ describe('formatSigned', () => {
   it('prints a value that rounds to zero without a sign', () => {
     expect(formatSigned(-0.04)).toBe('0.0');
     expect(formatSigned(0)).toBe('0.0');
-  });
-});
-
-describe('rateStanding against the dieting band −1 … −0.5 %/week (Helms 2014)', () => {
-  const band = { minPct: -1, maxPct: -0.5 };
-
-  it('is on plan inside the band, edges included, judged at the one decimal shown', () => {
-    expect(rateStanding(-0.8, band)).toBe('on_plan');
-    expect(rateStanding(-1, band)).toBe('on_plan');
-    expect(rateStanding(-0.5, band)).toBe('on_plan');
-    expect(rateStanding(-0.46, band)).toBe('on_plan');
-  });
-
-  it('drifts when outside by up to half the band width (0.25 %/week here)', () => {
-    expect(rateStanding(-1.2, band)).toBe('drifting');
-    expect(rateStanding(-0.3, band)).toBe('drifting');
-    expect(rateStanding(-0.25, band)).toBe('drifting');
-  });
-
-  it('is off plan further out, on either side', () => {
-    expect(rateStanding(-1.4, band)).toBe('off_plan');
-    expect(rateStanding(0, band)).toBe('off_plan');
-    expect(rateStanding(0.4, band)).toBe('off_plan');
-  });
-
-  it('accepts a band given high to low', () => {
-    expect(rateStanding(-0.8, { minPct: -0.5, maxPct: -1 })).toBe('on_plan');
   });
 });
 

@@ -3,7 +3,7 @@ import type { ReactNode } from 'react';
 import { Alert } from '@/components/ui/alert';
 import { Badge, type BadgeTone } from '@/components/ui/badge';
 import { formatDate, formatEnergy, formatNumber, formatWeight, NBSP } from '@/lib/format';
-import { bandPace, signed } from '../utils/figures';
+import { signed } from '../utils/figures';
 import type { ViewerUnits } from './metric-values';
 
 /** "−0.8 %/week · guidance −1.0 to −0.5 %/week (Helms 2014)": the rate against its band in one line. */
@@ -38,7 +38,8 @@ function Figure({ label, value, children }: { label: string; value: ReactNode; c
 /** The coach's figures over the range: 14-day rate against the band, projection, maintenance, flags. */
 export function TrendFigures({ view, units }: { view: TrendView; units: ViewerUnits }) {
   const { rate, projection, maintenance } = view;
-  const pace = rate ? bandPace(rate) : null;
+  // The server's verdict on the rate against its band (null without a band).
+  const pace = rate?.verdict?.pace ?? null;
   const unit = units.weight;
   return (
     <div className="space-y-3">

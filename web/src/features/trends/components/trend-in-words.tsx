@@ -7,7 +7,7 @@ import {
 } from '@driftmark/shared';
 import { formatDate, formatNumber, NBSP } from '@/lib/format';
 import { addDays } from '../utils/dates';
-import { bandPace, latestWeek, signed, type WeekSummary } from '../utils/figures';
+import { latestWeek, signed, type WeekSummary } from '../utils/figures';
 import type { ViewerUnits } from './metric-values';
 
 function bandWords(band: NonNullable<RateView['band']>): string {
@@ -31,7 +31,7 @@ export function rateInWords(rate: RateView | null, units: Pick<ViewerUnits, 'wei
       : `Over the last 14 days your trend has gone ${rate.kgPerWeek < 0 ? 'down' : 'up'} by about ${amount} a week (${formatNumber(pct, 1)}${NBSP}% of your body weight).`;
   // In a countdown the server withholds the band and says why; say it too.
   if (rate.paused) return `${first} ${rate.bandNote ?? ''}`.trim();
-  const pace = bandPace(rate);
+  const pace = rate.verdict?.pace ?? null;
   if (!rate.band || pace === null) return first;
   const words = bandWords(rate.band);
   const second = {

@@ -85,6 +85,7 @@ describe('weightPoints', () => {
           band: { minPct: -1, maxPct: -0.5, label: 'Dieting', source: 'Helms 2014' },
           bandNote: null,
           paused: false,
+          verdict: { pace: 'inside', state: 'on_plan' },
         },
       },
     );

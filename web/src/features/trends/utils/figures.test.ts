@@ -1,27 +1,12 @@
 import type { AdherenceWeekInRange } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
-import { adherenceGrid, bandPace, bandRelation, latestWeek, signed } from './figures';
-
-const band = (minPct: number, maxPct: number) => ({ minPct, maxPct, label: '', source: 'Helms 2014' });
+import { adherenceGrid, latestWeek, signed } from './figures';
 
 describe('signed', () => {
   it('uses a true minus and never prints −0.0', () => {
     expect(signed(-0.84)).toBe('\u22120.8');
     expect(signed(0.25, 2)).toBe('+0.25');
     expect(signed(-0.01)).toBe('0.0');
-  });
-});
-
-describe('rate against the band', () => {
-  it('reads a loss band (Helms 2014: 0.5–1 %/week while dieting)', () => {
-    expect(bandRelation({ percentPerWeek: -0.8, band: band(-1, -0.5) })).toBe('inside');
-    expect(bandPace({ percentPerWeek: -1.3, band: band(-1, -0.5) })).toBe('faster');
-    expect(bandPace({ percentPerWeek: -0.2, band: band(-1, -0.5) })).toBe('slower');
-  });
-  it('reads gain and steady bands', () => {
-    expect(bandPace({ percentPerWeek: 0.6, band: band(0.25, 0.5) })).toBe('faster');
-    expect(bandPace({ percentPerWeek: 0.4, band: band(-0.25, 0.25) })).toBe('outside');
-    expect(bandPace({ percentPerWeek: 0.4, band: null })).toBeNull();
   });
 });
 

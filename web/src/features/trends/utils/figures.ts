@@ -1,40 +1,10 @@
-import type { AdherenceWeekInRange, DriftMetric, RateView } from '@driftmark/shared';
+import type { AdherenceWeekInRange, DriftMetric } from '@driftmark/shared';
 
 /** A true minus sign (U+2212) and an explicit plus, for rates that read as directions. */
 export function signed(value: number, digits = 1): string {
   const text = Math.abs(value).toFixed(digits);
   if (Number(text) === 0) return (0).toFixed(digits);
   return `${value < 0 ? '\u2212' : '+'}${text}`;
-}
-
-export type BandRelation = 'inside' | 'below' | 'above';
-
-/** Where the rate sits against its band (below = more negative than the band's lower end). */
-export function bandRelation(rate: Pick<RateView, 'percentPerWeek' | 'band'>): BandRelation | null {
-  if (!rate.band) return null;
-  const lo = Math.min(rate.band.minPct, rate.band.maxPct);
-  const hi = Math.max(rate.band.minPct, rate.band.maxPct);
-  if (rate.percentPerWeek < lo) return 'below';
-  if (rate.percentPerWeek > hi) return 'above';
-  return 'inside';
-}
-
-/**
- * The rate against its band in plain words: "faster" when the change runs beyond the band's far end
- * (losing faster than a loss band allows, gaining faster than a gain band), "slower" short of it,
- * "outside" for a band around zero.
- */
-export function bandPace(
-  rate: Pick<RateView, 'percentPerWeek' | 'band'>,
-): 'inside' | 'faster' | 'slower' | 'outside' | null {
-  const relation = bandRelation(rate);
-  if (relation === null || !rate.band) return null;
-  if (relation === 'inside') return 'inside';
-  const lo = Math.min(rate.band.minPct, rate.band.maxPct);
-  const hi = Math.max(rate.band.minPct, rate.band.maxPct);
-  if (hi <= 0) return relation === 'below' ? 'faster' : 'slower';
-  if (lo >= 0) return relation === 'above' ? 'faster' : 'slower';
-  return 'outside';
 }
 
 export interface WeekSummary {
