@@ -35,7 +35,6 @@ import type {
   TrendFlag,
 } from '@driftmark/shared';
 import { daysBetween, shiftDate } from './dates.js';
-import { TREND_ALPHA } from './trend.js';
 
 export interface WeighInPoint {
   date: string;
@@ -57,6 +56,9 @@ const atMost = (value: number, limit: number): boolean =>
 
 // Trend -----------------------------------------------------------------------------------------
 
+/** Smoothing of the exponentially smoothed moving average: 10 % (Walker, The Hacker's Diet). */
+export const TREND_ALPHA = 0.1;
+
 /**
  * Tᵢ per weigh-in (T₁ = W₁, Tᵢ = Tᵢ₋₁ + 0.1·(Wᵢ − Tᵢ₋₁); Walker, The Hacker's Diet). Input any order;
  * output date order. One step per weigh-in: a day without one adds no step (never invented); the
@@ -68,6 +70,11 @@ export function trendSeries(points: readonly WeighInPoint[]): { date: string; tr
     trend = trend === null ? kg : trend + TREND_ALPHA * (kg - trend);
     return { date, trendKg: trend };
   });
+}
+
+/** The trend weight after the last weigh-in (the last of trendSeries); null without weigh-ins. */
+export function trendWeightKg(points: readonly WeighInPoint[]): number | null {
+  return trendSeries(points).at(-1)?.trendKg ?? null;
 }
 
 /** Weigh-ins a 7-day window needs before its mean is shown (the brief: at least 4). */

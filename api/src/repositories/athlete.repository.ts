@@ -26,6 +26,7 @@ export type AthleteChanges = Partial<
     | 'weighInLimitKg'
     | 'photoConsent'
     | 'intakeCompletedAt'
+    | 'checkInWeekday'
   >
 >;
 
@@ -41,6 +42,11 @@ export class AthleteRepository {
       where: { id },
       relations: { user: true, coach: true },
     }) as Promise<AthleteWithPeople | null>;
+  }
+
+  /** Locks the athlete row inside the caller's transaction (serialises writes about one athlete). */
+  async lockForUpdate(id: string): Promise<void> {
+    await this.manager.findOne(Athlete, { where: { id }, lock: { mode: 'pessimistic_write' } });
   }
 
   findByUserId(userId: string): Promise<Athlete | null> {

@@ -102,12 +102,14 @@ export class MarkRepository {
    * forward, never back (two requests racing keep the later instant).
    */
   async upsertRead(markId: string, userId: string, at: Date): Promise<void> {
+    // The row's own timestamps come from the caller's clock too (the app's pinned clock in tests,
+    // the seed's now in the demo), not from the database's.
     await this.manager.query(
-      `INSERT INTO "mark_reads" ("mark_id", "user_id", "read_at")
-       VALUES ($1, $2, $3)
+      `INSERT INTO "mark_reads" ("mark_id", "user_id", "read_at", "created_at", "updated_at")
+       VALUES ($1, $2, $3, $3, $3)
        ON CONFLICT ("mark_id", "user_id") DO UPDATE
          SET "read_at" = GREATEST("mark_reads"."read_at", EXCLUDED."read_at"),
-             "updated_at" = now()`,
+             "updated_at" = EXCLUDED."updated_at"`,
       [markId, userId, at],
     );
   }

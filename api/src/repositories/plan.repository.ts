@@ -108,6 +108,11 @@ export class PlanRepository {
   }
 
   /** The athlete's version with this number, without its author (for comparing contents). */
+  /** Whether `id` names one of the athlete's plan versions. */
+  versionExists(athleteId: string, id: string): Promise<boolean> {
+    return this.manager.exists(PlanVersion, { where: { id, athleteId } });
+  }
+
   findByNumber(athleteId: string, number: number): Promise<PlanVersion | null> {
     return this.manager.findOneBy(PlanVersion, { athleteId, number });
   }

@@ -30,4 +30,17 @@ export class TeamRepository {
       [teamId, JSON.stringify(floors)],
     );
   }
+
+  /** The team's id and settings only (what the weekly check-in and the queue read). */
+  findSettings(teamId: string): Promise<Pick<Team, 'id' | 'settings'> | null> {
+    return this.manager.findOne(Team, { where: { id: teamId }, select: { id: true, settings: true } });
+  }
+
+  /** Replaces the weekly check-in questions in one statement, leaving the other settings as they are. */
+  async replaceCheckInQuestions(teamId: string, questions: unknown): Promise<void> {
+    await this.manager.query(
+      `UPDATE "teams" SET "settings" = "settings" || jsonb_build_object('checkInQuestions', $2::jsonb), "updated_at" = now() WHERE "id" = $1`,
+      [teamId, JSON.stringify(questions)],
+    );
+  }
 }

@@ -3,7 +3,7 @@ import type { EntityManager } from 'typeorm';
 import type { FlagKind } from '../entities/athlete-flag.entity.js';
 import type { EveningFigures, MealTotals } from '../lib/day-actuals.js';
 import type { PlanVersionLike } from '../lib/day-plan.js';
-import { TREND_ALPHA } from '../lib/trend.js';
+import { TREND_ALPHA } from '../lib/analysis.js';
 
 /** One athlete's window of local dates (inclusive) to load. */
 export interface HistoryWindow {

@@ -32,6 +32,11 @@ export class WeeklyCheckInRepository {
     }) as Promise<WeeklyCheckInWithReplier | null>;
   }
 
+  /** The row locked for update inside the caller's transaction (two replies at once: one wins). */
+  findByIdForUpdate(id: string): Promise<WeeklyCheckIn | null> {
+    return this.manager.findOne(WeeklyCheckIn, { where: { id }, lock: { mode: 'pessimistic_write' } });
+  }
+
   findByDueDate(athleteId: string, dueDate: string): Promise<WeeklyCheckInWithReplier | null> {
     return this.manager.findOne(WeeklyCheckIn, {
       where: { athleteId, dueDate },

@@ -12,7 +12,7 @@ import {
   versionInForce,
 } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
-import { trendWeightKg } from '../lib/trend.js';
+import { trendWeightKg } from '../lib/analysis.js';
 import { addDays, localDate } from './calendar.js';
 import {
   BASELINE_TREND_DAYS,

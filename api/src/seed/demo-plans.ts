@@ -26,7 +26,7 @@ import {
   type Weekday,
 } from '@driftmark/shared';
 import { localInstant } from '../lib/local-time.js';
-import { trendWeightKg } from '../lib/trend.js';
+import { trendWeightKg } from '../lib/analysis.js';
 import { addDays, localDate } from './calendar.js';
 import { DEMO_SEED, type DemoAthleteDefinition } from './demo-team.js';
 import { demoUuid, type AthleteHistory } from './history.js';

@@ -1,8 +1,5 @@
 import {
   cautionsForDay,
-  countdownDayLabel,
-  dayEntryFor,
-  resolveTargets,
   timingBreaches,
   versionInForce,
   type DaySummary,
@@ -18,6 +15,7 @@ import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
 import { dayActuals, mealTotals } from '../lib/day-actuals.js';
 import { dayDrift } from '../lib/day-drift.js';
+import { versionDay, type EventPlace } from '../lib/day-plan.js';
 import { daysBetween } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
 import { emptyDaySummary, presentDay } from '../presenters/day.presenter.js';
@@ -34,15 +32,6 @@ import { dayPhotoSource } from './day-photos.service.js';
 export const HISTORY_MAX_DAYS = 400;
 
 type DayPlan = Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
-
-/** Where the event happens on the clock, for supplement times set before it. */
-export interface EventPlace {
-  /** HH:MM in the event's zone; null while the coach has not set it. */
-  eventTime: string | null;
-  /** The event's IANA zone; the athlete's own when none is stored. */
-  eventTimeZone: string | null;
-  athleteTimeZone: string;
-}
 
 /** The event place of an athlete's profile. */
 export function eventPlaceOf(athlete: AthleteWithPeople): EventPlace {
@@ -67,19 +56,8 @@ export function planForDay(
 ): DayPlan {
   if (!version) return { targets: null, countdown: null, cautions: [] };
   const { content } = version;
-  const entry = dayEntryFor(content, date);
-  const targets = entry.kind === 'date' ? entry.override.targets : entry.dayType.targets;
-  const offset = entry.kind === 'date' ? entry.override.countdownOffset : null;
-  // Times before the event count back from the event this countdown day belongs to.
-  const eventDate = offset !== null ? (content.countdown?.eventDate ?? null) : null;
-  const event =
-    eventDate && place.eventTime
-      ? {
-          date: eventDate,
-          time: place.eventTime.slice(0, 5),
-          timeZone: place.eventTimeZone ?? place.athleteTimeZone,
-        }
-      : null;
+  const day = versionDay(version, date, place);
+  const { entry } = day;
   return {
     targets: {
       versionId: version.id,
@@ -89,22 +67,18 @@ export function planForDay(
         entry.kind === 'date'
           ? { kind: 'date', label: entry.override.label }
           : { kind: 'pattern', dayTypeKey: entry.dayType.key, dayTypeName: entry.dayType.name },
-      targets: resolveTargets(targets, version.baseline, {
-        event,
-        athleteTimeZone: place.athleteTimeZone,
-      }),
-      tolerances: content.tolerances,
+      targets: day.targets,
+      tolerances: day.tolerances,
     },
-    countdown:
-      offset !== null && entry.kind === 'date' && content.countdown
-        ? {
-            eventDate: content.countdown.eventDate,
-            eventType: content.countdown.eventType,
-            offset,
-            dayLabel: countdownDayLabel(offset),
-            label: entry.override.label,
-          }
-        : null,
+    countdown: day.countdown
+      ? {
+          eventDate: day.countdown.eventDate,
+          eventType: day.countdown.eventType,
+          offset: day.countdown.offset,
+          dayLabel: day.countdown.dayLabel,
+          label: day.countdown.label,
+        }
+      : null,
     cautions: cautionsForDay({
       content,
       date,

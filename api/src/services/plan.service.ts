@@ -29,7 +29,7 @@ import type { z } from 'zod';
 import { AppError, conflict, notFound, validationFailed } from '../errors.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
-import { trendWeightKg } from '../lib/trend.js';
+import { trendWeightKg } from '../lib/analysis.js';
 import type { Actor } from '../policies/actor.js';
 import { presentAthleteProfile } from '../presenters/athlete.presenter.js';
 import { presentVersion, presentVersionSummary } from '../presenters/plan.presenter.js';

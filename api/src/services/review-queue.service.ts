@@ -15,7 +15,7 @@ import type { Actor } from '../policies/actor.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteReviewRepository } from '../repositories/athlete-review.repository.js';
 import { MarkRepository } from '../repositories/mark.repository.js';
-import { Team } from '../entities/team.entity.js';
+import { TeamRepository } from '../repositories/team.repository.js';
 import { teamQuestions } from './weekly-check-in.service.js';
 import { WeeklyCheckInRepository } from '../repositories/weekly-check-in.repository.js';
 import { checkInExpected, currentDueDate } from '../lib/weekly-dates.js';
@@ -321,9 +321,7 @@ export class ReviewQueueService {
       new MarkRepository(manager).unreadRepliesByAthlete(actor.userId, ids),
       new AthleteReviewRepository(manager).lastReviewedByAthlete(actor.userId, ids),
       new WeeklyCheckInRepository(manager).forQueue(dueDates),
-      ids.length > 0
-        ? manager.findOne(Team, { where: { id: actor.teamId }, select: { id: true, settings: true } })
-        : null,
+      ids.length > 0 ? new TeamRepository(manager).findSettings(actor.teamId) : null,
     ]);
     const expected = teamQuestions(team).length > 0;
     const checkInsOf = new Map<string, typeof checkIns>();

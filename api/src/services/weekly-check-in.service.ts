@@ -12,10 +12,7 @@ import {
 } from '@driftmark/shared';
 import { z } from 'zod';
 import type { DataSource, EntityManager } from 'typeorm';
-import { Athlete } from '../entities/athlete.entity.js';
-import { PlanVersion } from '../entities/plan-version.entity.js';
-import { Team } from '../entities/team.entity.js';
-import { User } from '../entities/user.entity.js';
+import type { Team } from '../entities/team.entity.js';
 import { WeeklyCheckIn, type WeeklyAnswer } from '../entities/weekly-check-in.entity.js';
 import { conflict, notFound, validationFailed } from '../errors.js';
 import { MEAN7_MIN_POINTS, rate14, rateGuidance, weeklyAdherence } from '../lib/analysis.js';
@@ -31,7 +28,10 @@ import {
 } from '../lib/weekly-dates.js';
 import type { Actor } from '../policies/actor.js';
 import { presentWeeklyCheckIn } from '../presenters/weekly-check-in.presenter.js';
-import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
+import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
+import { PlanRepository } from '../repositories/plan.repository.js';
+import { TeamRepository } from '../repositories/team.repository.js';
+import { UserRepository } from '../repositories/user.repository.js';
 import { TrendRepository, type AthleteHistory } from '../repositories/trend.repository.js';
 import {
   WeeklyCheckInRepository,
@@ -218,10 +218,7 @@ export class WeeklyCheckInService {
       ids.add(q.id);
     });
     if (Object.keys(problems).length > 0) throw validationFailed(problems);
-    await this.manager.query(
-      `UPDATE "teams" SET "settings" = "settings" || jsonb_build_object('checkInQuestions', $2::jsonb), "updated_at" = now() WHERE "id" = $1`,
-      [teamId, JSON.stringify(questions)],
-    );
+    await new TeamRepository(this.manager).replaceCheckInQuestions(teamId, questions);
     return this.questions(teamId);
   }
 
@@ -301,7 +298,7 @@ export class WeeklyCheckInService {
     await this.deps.dataSource.transaction(async (manager) => {
       const repo = new WeeklyCheckInRepository(manager);
       // Lock the athlete row: two submissions at once must not both insert.
-      await manager.findOne(Athlete, { where: { id: athlete.id }, lock: { mode: 'pessimistic_write' } });
+      await new AthleteRepository(manager).lockForUpdate(athlete.id);
       const existing = await repo.findByDueDate(athlete.id, dueDate);
       if (existing?.repliedAt) {
         throw conflict('Your coach has already answered this check-in; it can no longer be changed.');
@@ -343,19 +340,13 @@ export class WeeklyCheckInService {
     const now = this.deps.clock();
     await this.deps.dataSource.transaction(async (manager) => {
       const repo = new WeeklyCheckInRepository(manager);
-      const locked = await manager.findOne(WeeklyCheckIn, {
-        where: { id: checkIn.id },
-        lock: { mode: 'pessimistic_write' },
-      });
+      const locked = await repo.findByIdForUpdate(checkIn.id);
       if (!locked) throw notFound();
       if (locked.repliedAt) throw conflict('This check-in has already been answered.');
       const planVersionId = input.planVersionId ?? null;
       if (planVersionId) {
-        const version = await manager.findOne(PlanVersion, {
-          where: { id: planVersionId, athleteId: athlete.id },
-          select: { id: true },
-        });
-        if (!version) throw validationFailed({ planVersionId: 'Not a plan version of this athlete' });
+        const exists = await new PlanRepository(manager).versionExists(athlete.id, planVersionId);
+        if (!exists) throw validationFailed({ planVersionId: 'Not a plan version of this athlete' });
       }
       await repo.save({
         ...locked,
@@ -365,7 +356,8 @@ export class WeeklyCheckInService {
         planVersionId,
         updatedAt: now,
       });
-      const replier = await manager.findOneOrFail(User, { where: { id: actor.userId } });
+      const replier = await new UserRepository(manager).findById(actor.userId);
+      if (!replier) throw notFound();
       await notifyWeeklyCheckInReplied(
         manager,
         athlete,
@@ -380,7 +372,7 @@ export class WeeklyCheckInService {
 
   /** Moves the athlete's check-in weekday; answers the check-in due now under the new day. */
   async setWeekday(athlete: AthleteWithPeople, weekday: Weekday): Promise<WeeklyCheckInView> {
-    await this.manager.update(Athlete, athlete.id, { checkInWeekday: weekday });
+    await new AthleteRepository(this.manager).update(athlete.id, { checkInWeekday: weekday });
     return this.current({ ...athlete, checkInWeekday: weekday });
   }
 
@@ -391,8 +383,6 @@ export class WeeklyCheckInService {
   }
 
   private async questionsIn(manager: EntityManager, teamId: string): Promise<CheckInQuestion[]> {
-    return teamQuestions(
-      await manager.findOne(Team, { where: { id: teamId }, select: { id: true, settings: true } }),
-    );
+    return teamQuestions(await new TeamRepository(manager).findSettings(teamId));
   }
 }

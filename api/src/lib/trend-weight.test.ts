@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { trendWeightKg } from './trend.js';
+import { trendWeightKg } from './analysis.js';
 
 const day = (n: number) => `2026-03-${String(n).padStart(2, '0')}`;
 
