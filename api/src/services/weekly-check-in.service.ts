@@ -13,7 +13,7 @@ import {
 import { z } from 'zod';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { Team } from '../entities/team.entity.js';
-import { WeeklyCheckIn, type WeeklyAnswer } from '../entities/weekly-check-in.entity.js';
+import type { WeeklyAnswer } from '../entities/weekly-check-in.entity.js';
 import { conflict, notFound, validationFailed } from '../errors.js';
 import { MEAN7_MIN_POINTS, rate14, rateGuidance, weeklyAdherence } from '../lib/analysis.js';
 import { plannedDay } from '../lib/day-plan.js';
