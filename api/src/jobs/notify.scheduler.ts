@@ -40,6 +40,8 @@ import {
   sendNotification,
   wants,
 } from '../services/notify.service.js';
+import { AthleteRepository } from '../repositories/athlete.repository.js';
+import { isSafetyFlag, loadSnapshots, type AthleteSnapshot } from '../services/athlete-figures.service.js';
 import { createQueue } from './queue.js';
 
 export const NOTIFY_TICK_QUEUE = 'notify-tick';
@@ -172,9 +174,15 @@ async function athleteReminders(
   return { morningReminders, weeklyCheckInsDue };
 }
 
+/** Safety flags of the athlete's last 7 days: at least one whenever hasSafetyFlag says so. */
+function safetyFlagCount(s: AthleteSnapshot | undefined): number {
+  if (!s?.figures.safetyFlag) return 0;
+  return Math.max(1, s.flags.filter((f) => isSafetyFlag(f.kind)).length);
+}
+
 async function staffSummaries(dataSource: DataSource, now: Date): Promise<number> {
-  const staff: PersonRow[] = await dataSource.query(
-    `SELECT u.id AS user_id, u.email, u.name, u.role, u.time_zone, u.notification_prefs
+  const staff: (PersonRow & { team_id: string })[] = await dataSource.query(
+    `SELECT u.id AS user_id, u.team_id, u.email, u.name, u.role, u.time_zone, u.notification_prefs
        FROM users u
       WHERE u.role = ANY($1)
         AND EXISTS (SELECT 1 FROM athletes a
@@ -196,27 +204,32 @@ async function staffSummaries(dataSource: DataSource, now: Date): Promise<number
     const today = localDateTime(now, row.time_zone).date;
     const from = shiftDate(today, -7);
     const to = shiftDate(today, -1);
+    // Safety flags by the one rule the roster and the review queue use (hasSafetyFlag), over each
+    // athlete's own last 7 days.
+    const athletes = (
+      await new AthleteRepository(dataSource.manager).listForRoster(row.team_id, {
+        kind: 'coachOrShared',
+        userId: row.user_id,
+      })
+    ).filter((a) => a.status === 'active');
+    const snapshots = await loadSnapshots(dataSource.manager, athletes, now);
     const sent = await dataSource.transaction(async (manager) => {
       const lines: (SummaryLine & { sort: string })[] = (
         await manager.query(
-          `SELECT au.name AS athlete_name,
+          `SELECT a.id AS athlete_id, au.name AS athlete_name,
                   (SELECT count(*) FROM weigh_ins w
                     WHERE w.athlete_id = a.id AND w.local_date BETWEEN $2 AND $3)::int AS weigh_ins,
-                  (SELECT count(*) FROM athlete_flags f
-                    WHERE f.athlete_id = a.id AND f.local_date BETWEEN $2 AND $3)::int AS flags,
                   EXISTS (SELECT 1 FROM weekly_check_ins c
                            WHERE c.athlete_id = a.id AND c.due_date BETWEEN $2 AND $4) AS submitted
              FROM athletes a JOIN users au ON au.id = a.user_id
-            WHERE a.status = 'active'
-              AND (a.coach_id = $1
-                   OR EXISTS (SELECT 1 FROM athlete_shares s WHERE s.athlete_id = a.id AND s.user_id = $1))
+            WHERE a.id = ANY($1::uuid[])
             ORDER BY au.name`,
-          [row.user_id, from, to, today],
+          [athletes.map((a) => a.id), from, to, today],
         )
-      ).map((r: { athlete_name: string; weigh_ins: number; flags: number; submitted: boolean }) => ({
+      ).map((r: { athlete_id: string; athlete_name: string; weigh_ins: number; submitted: boolean }) => ({
         athleteName: r.athlete_name,
         weighIns: r.weigh_ins,
-        flags: r.flags,
+        flags: safetyFlagCount(snapshots.get(r.athlete_id)),
         checkIn: r.submitted ? 'submitted' : 'missing',
         sort: r.athlete_name,
       }));
