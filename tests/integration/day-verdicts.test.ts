@@ -229,9 +229,10 @@ describe('one judgement per metric and day, for every demo athlete over the last
       } else {
         expect(low, v.name).toBeUndefined();
       }
-      // Nothing about today: it is not over yet.
+      // Nothing about today's day verdicts: it is not over yet. (The 14-day rate ends today by
+      // definition: a weigh-in is a morning reading, complete once logged; it is not a day verdict.)
       expect(
-        reasons.filter((r) => r.kind === 'drift' && r.date === v.today),
+        reasons.filter((r) => r.kind === 'drift' && r.date === v.today && !/^(Losing|Gaining) /.test(r.text)),
         v.name,
       ).toEqual([]);
     }
