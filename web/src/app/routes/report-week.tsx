@@ -1,4 +1,10 @@
-import { DRIFT_METRIC_LABELS, DRIFT_STATE_LABELS, type TrendDay } from '@driftmark/shared';
+import {
+  DRIFT_METRIC_LABELS,
+  DRIFT_STATE_LABELS,
+  weightFromKg,
+  WEIGHT_UNIT_LABELS,
+  type TrendDay,
+} from '@driftmark/shared';
 import { Link, useParams } from 'react-router';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
@@ -9,7 +15,9 @@ import { useMarks } from '@/features/marks/api/list-marks';
 import { useTrend } from '@/features/trends/api/get-trend';
 import { DaysCsvLink } from '@/features/trends/components/days-csv-link';
 import { useWeeklyWeek } from '@/features/weekly/api/get-weekly-week';
-import { formatDate, formatDateTime, formatEnergy, formatVolume, formatWeight, NBSP } from '@/lib/format';
+import { signed } from '@/features/trends/utils/figures';
+import { formatInstant } from '@/lib/clock';
+import { formatDate, formatEnergy, formatVolume, formatWeight, NBSP } from '@/lib/format';
 import { useCurrentUser } from '../session';
 
 const ISO = /^\d{4}-\d{2}-\d{2}$/;
@@ -135,7 +143,7 @@ export function ReportWeekRoute() {
                 </dt>
                 <dd>
                   {rate
-                    ? `${formatWeight(rate.kgPerWeek, units.weight, 2)}/week (${rate.percentPerWeek.toFixed(2)}${NBSP}%)`
+                    ? `${signed(weightFromKg(rate.kgPerWeek, units.weight), 2)}${NBSP}${WEIGHT_UNIT_LABELS[units.weight]}/week (${signed(rate.percentPerWeek, 2)}${NBSP}%)`
                     : 'Too few weigh-ins'}
                 </dd>
                 <dt className="text-ink-faint">Week mean</dt>
@@ -281,7 +289,8 @@ export function ReportWeekRoute() {
                 {checkIn.reply ? (
                   <div className="border-l-2 border-accent pl-3">
                     <p className="font-medium">
-                      Reply from {checkIn.reply.by.name} · {formatDateTime(checkIn.reply.at, me.timeZone)}
+                      Reply from {checkIn.reply.by.name} ·{' '}
+                      {formatInstant(checkIn.reply.at, { whose: 'viewer', timeZone: me.timeZone })}
                     </p>
                     <p className="whitespace-pre-wrap">{checkIn.reply.body}</p>
                   </div>

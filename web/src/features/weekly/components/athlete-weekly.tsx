@@ -5,7 +5,8 @@ import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Card, CardHeader } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/spinner';
-import { formatDate, formatDateTime } from '@/lib/format';
+import { formatInstant, viewerClock } from '@/lib/clock';
+import { formatDate } from '@/lib/format';
 import { useCurrentWeeklyCheckIn } from '../api/get-current-weekly-check-in';
 import { WEEKLY_STATUS_LABELS, WEEKLY_STATUS_TONES } from '../utils/weekly';
 import { WeeklyCheckInForm } from './weekly-check-in-form';
@@ -62,7 +63,9 @@ export function AthleteWeekly({
 
       {view.status === 'submitted' || view.status === 'answered' ? (
         <Alert tone="success" title="Sent — your coach will reply here" live={false}>
-          {view.submittedAt ? `Sent ${formatDateTime(view.submittedAt, timeZone)}.` : null}
+          {view.submittedAt
+            ? `Sent ${formatInstant(view.submittedAt, timeZone ? { whose: 'viewer', timeZone } : viewerClock())}.`
+            : null}
         </Alert>
       ) : null}
       {view.reply ? <WeeklyReply reply={view.reply} timeZone={timeZone} /> : null}

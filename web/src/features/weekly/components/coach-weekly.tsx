@@ -9,7 +9,8 @@ import { EmptyState } from '@/components/ui/empty-state';
 import type { SelectOption } from '@/components/ui/select';
 import { Skeleton } from '@/components/ui/spinner';
 import { cn } from '@/lib/cn';
-import { formatDate, formatDateTime } from '@/lib/format';
+import { formatInstant, viewerClock } from '@/lib/clock';
+import { formatDate } from '@/lib/format';
 import { useCurrentWeeklyCheckIn } from '../api/get-current-weekly-check-in';
 import { useWeeklyCheckIn } from '../api/get-weekly-check-in';
 import { useWeeklyCheckIns } from '../api/list-weekly-check-ins';
@@ -172,7 +173,11 @@ function CoachWeeklyDetail({
       <Card aria-labelledby="weekly-detail-heading">
         <CardHeader
           id="weekly-detail-heading"
-          eyebrow={view.submittedAt ? `Sent ${formatDateTime(view.submittedAt, timeZone)}` : undefined}
+          eyebrow={
+            view.submittedAt
+              ? `Sent ${formatInstant(view.submittedAt, timeZone ? { whose: 'viewer', timeZone } : viewerClock())}`
+              : undefined
+          }
           title={`Week to ${formatDate(view.dueDate)}`}
           action={<Badge tone={WEEKLY_STATUS_TONES[view.status]}>{WEEKLY_STATUS_LABELS[view.status]}</Badge>}
         />

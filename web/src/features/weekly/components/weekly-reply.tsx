@@ -1,5 +1,5 @@
 import type { CheckInQuestion, WeeklyCheckInView } from '@driftmark/shared';
-import { formatDateTime } from '@/lib/format';
+import { formatInstant, viewerClock } from '@/lib/clock';
 import { answerText } from '../utils/weekly';
 
 /** The coach's reply to a check-in, as the athlete and staff read it. */
@@ -18,7 +18,9 @@ export function WeeklyReply({
       <h3 id="weekly-reply-heading" className="text-sm font-semibold text-accent-strong">
         Reply from {reply.by.name}
       </h3>
-      <p className="mt-0.5 text-xs text-ink-muted tabular-nums">{formatDateTime(reply.at, timeZone)}</p>
+      <p className="mt-0.5 text-xs text-ink-muted tabular-nums">
+        {formatInstant(reply.at, timeZone ? { whose: 'viewer', timeZone } : viewerClock())}
+      </p>
       <p className="mt-2 whitespace-pre-wrap text-ink">{reply.body}</p>
       {reply.planVersionId ? (
         <p className="mt-2 text-sm text-ink-muted">Your plan was changed with this reply.</p>
