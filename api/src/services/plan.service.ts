@@ -330,11 +330,16 @@ export class PlanService {
     );
     if (offsets.length > 0 && shiftDate(input.eventDate, Math.max(...offsets)) < s.today)
       throw validationFailed({ eventDate: 'Every day of this countdown would be in the past' });
+    const earlier = (await new PlanRepository(this.manager).listForAthlete(athlete.id))
+      .filter((v) => v.id !== latest.id)
+      .sort((a, b) => b.number - a.number)
+      .map((v) => v.content);
     const applied = moveCountdown({
       content: latest.content,
       eventDate: input.eventDate,
       today: s.today,
       baseline: s.baseline,
+      earlier,
     });
     return this.finishCountdown(
       actor,

@@ -208,6 +208,43 @@ describe('moveCountdown', () => {
     expect(moved.effectiveFrom).toBe('2026-12-01');
   });
 
+  it('moved later: a day dropped as past by a later version comes back from an earlier one', () => {
+    const v1 = applyTemplate({
+      base: null,
+      template,
+      eventDate,
+      eventType: 'show',
+      today: '2026-11-20',
+      baseline,
+    });
+    // Saved again on 6 Dec: E-7 (5 Dec) had passed, so this version no longer carries it.
+    const v2 = moveCountdown({ content: v1.content, eventDate, today: '2026-12-06', baseline });
+    expect(v2.content.dates.some((d) => d.countdownOffset === -7)).toBe(false);
+    // On 7 Dec the show moves to 14 Dec: today is E-7 again.
+    const without = moveCountdown({
+      content: v2.content,
+      eventDate: '2026-12-14',
+      today: '2026-12-07',
+      baseline,
+    });
+    expect(without.content.dates.find((d) => d.date === '2026-12-07')).toBeUndefined();
+    const moved = moveCountdown({
+      content: v2.content,
+      eventDate: '2026-12-14',
+      today: '2026-12-07',
+      baseline,
+      earlier: [v1.content],
+    });
+    expect(moved.content.dates.map((d) => [d.date, d.countdownOffset, d.label])).toEqual([
+      ['2026-12-07', -7, 'Steady'],
+      ['2026-12-09', -5, 'Water load'],
+      ['2026-12-12', -2, 'Carb up'],
+      ['2026-12-14', 0, 'Show day'],
+      ['2026-12-15', 1, 'Day after'],
+    ]);
+    expect(moved.effectiveFrom).toBe('2026-12-07');
+  });
+
   it('refuses a content without a countdown', () => {
     expect(() =>
       moveCountdown({ content: starterPlanContent(), eventDate, today: '2026-12-01', baseline }),

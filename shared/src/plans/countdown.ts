@@ -54,12 +54,30 @@ export function moveCountdown(input: {
   eventDate: string;
   today: string;
   baseline: PlanBaseline;
+  /**
+   * Earlier versions of the plan, newest first: countdown days of the same countdown that the
+   * latest version no longer carries (they had passed when it was saved) come back from there, so
+   * a countdown moved later covers today again instead of leaving a gap.
+   */
+  earlier?: readonly PlanContent[];
 }): AppliedCountdown {
   const base = cloneJson(input.content);
   if (!base.countdown) throw new Error('This plan has no countdown to move');
   const days: TemplateDay[] = base.dates.flatMap((d) =>
     d.countdownOffset == null ? [] : [{ offset: d.countdownOffset, label: d.label, targets: d.targets }],
   );
+  const same = (c: PlanContent['countdown']) =>
+    c !== null &&
+    c.templateName === base.countdown!.templateName &&
+    c.templateId === base.countdown!.templateId &&
+    c.eventType === base.countdown!.eventType;
+  for (const content of input.earlier ?? []) {
+    if (!same(content.countdown)) continue;
+    for (const d of content.dates) {
+      if (d.countdownOffset == null || days.some((x) => x.offset === d.countdownOffset)) continue;
+      days.push({ offset: d.countdownOffset, label: d.label, targets: cloneJson(d.targets) });
+    }
+  }
   return place({
     base,
     days,
