@@ -26,33 +26,8 @@ export function latestWeek(adherence: readonly AdherenceWeekInRange[]): WeekSumm
   const withTargets = adherence.filter((w) => w.targetDays > 0);
   if (withTargets.length === 0) return [];
   const newest = withTargets.reduce((a, w) => (w.weekStart > a ? w.weekStart : a), withTargets[0]!.weekStart);
-  return withTargets
-    .filter((w) => w.weekStart === newest)
-    .map(
-      ({
-        weekStart,
-        from,
-        to,
-        days,
-        partial,
-        metric,
-        onPlanDays,
-        loggedDays,
-        targetDays,
-        adherence: share,
-      }) => ({
-        weekStart,
-        from,
-        to,
-        days,
-        partial,
-        metric,
-        onPlanDays,
-        loggedDays,
-        targetDays,
-        adherence: share,
-      }),
-    );
+  // The server's rows carry every field a summary needs (and a few more the summary ignores).
+  return withTargets.filter((w) => w.weekStart === newest);
 }
 
 /**
