@@ -29,11 +29,18 @@ export default defineConfig({
     sourcemap: true,
     rolldownOptions: {
       output: {
-        // Libraries change less often than the app: a separate chunk stays cached across releases.
+        // Libraries change less often than the app: separate chunks stay cached across releases. No
+        // catch-all vendor chunk: the charting and table libraries load only with the screens that
+        // draw a chart or a table (each route is its own chunk, see app/router.tsx).
         codeSplitting: {
           groups: [
             { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router)[\\/]/ },
-            { name: 'vendor', test: /node_modules[\\/]/ },
+            {
+              name: 'charts',
+              test: /node_modules[\\/](recharts|d3-[a-z-]+|victory-vendor|internmap|decimal\.js-light|es-toolkit|redux|@reduxjs|immer|reselect|react-redux|use-sync-external-store)[\\/]/,
+            },
+            { name: 'table', test: /node_modules[\\/]@tanstack[\\/](react-table|table-core)[\\/]/ },
+            { name: 'data', test: /node_modules[\\/](@tanstack[\\/](react-query|query-core)|zod)[\\/]/ },
           ],
         },
       },

@@ -1,20 +1,26 @@
 import { utcMidnight } from '../calendar.js';
 import type { Weekday } from '../schemas/plans.js';
 
+/** One Intl.NumberFormat per digit setting: building one costs far more than formatting with it. */
+const formatters = new Map<string, Intl.NumberFormat>();
+function numberFormat(min: number, max: number): Intl.NumberFormat {
+  const key = `${min}:${max}`;
+  let f = formatters.get(key);
+  if (!f) {
+    f = new Intl.NumberFormat('en-US', { maximumFractionDigits: max, minimumFractionDigits: min });
+    formatters.set(key, f);
+  }
+  return f;
+}
+
 /** Plain-words number formatting for messages: thousands separated by commas ("3,000"). */
 export function fmt(n: number, maxFractionDigits = 0): string {
-  return new Intl.NumberFormat('en-US', {
-    maximumFractionDigits: maxFractionDigits,
-    minimumFractionDigits: 0,
-  }).format(n);
+  return numberFormat(0, maxFractionDigits).format(n);
 }
 
 /** The same with a fixed number of decimals ("1.10"). */
 export function fmtFixed(n: number, digits: number): string {
-  return new Intl.NumberFormat('en-US', {
-    maximumFractionDigits: digits,
-    minimumFractionDigits: digits,
-  }).format(n);
+  return numberFormat(digits, digits).format(n);
 }
 
 const WEEKDAY_INDEX: Weekday[] = ['sun', 'mon', 'tue', 'wed', 'thu', 'fri', 'sat'];

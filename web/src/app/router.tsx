@@ -1,4 +1,5 @@
 import { isStaffRole, type Me } from '@driftmark/shared';
+import type { ComponentType } from 'react';
 import { createBrowserRouter, Outlet, ScrollRestoration } from 'react-router';
 import { athleteQueryOptions } from '@/features/athletes/api/get-athlete';
 import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
@@ -16,40 +17,18 @@ import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
 import { AthleteShell } from './layouts/athlete-shell';
 import { ShellForRole } from './layouts/shell-for-role';
 import { StaffShell } from './layouts/staff-shell';
-import { AcceptInvitationRoute } from './routes/accept-invitation';
-import { AthleteDayRoute } from './routes/athlete-day';
-import { AthleteHistoryRoute } from './routes/athlete-history';
-import { AthleteHomeRoute } from './routes/athlete-home';
-import { AthletePhotosRoute } from './routes/athlete-photos';
-import { AthleteTrendsRoute } from './routes/athlete-trends';
-import { AthleteWeeklyRoute } from './routes/athlete-weekly';
-import { CoachAthleteRoute } from './routes/coach-athlete';
-import { CoachAthletePhotosRoute } from './routes/coach-athlete-photos';
-import { CoachAthleteTrendsRoute } from './routes/coach-athlete-trends';
-import { CoachAthleteWeeklyRoute } from './routes/coach-athlete-weekly';
-import {
-  CoachAthletePlanCountdownRoute,
-  CoachAthletePlanEditorRoute,
-  CoachAthletePlanHistoryRoute,
-  CoachAthletePlanLayout,
-} from './routes/coach-athlete-plan';
-import { CoachInvitationsRoute } from './routes/coach-invitations';
-import { CoachReviewQueueRoute } from './routes/coach-review-queue';
-import { CoachRosterRoute } from './routes/coach-roster';
-import { CoachTemplateNewRoute, CoachTemplateRoute } from './routes/coach-template';
-import { CoachTemplatesRoute } from './routes/coach-templates';
-import { DevInboxRoute } from './routes/dev-inbox';
-import { ForgotPasswordRoute } from './routes/forgot-password';
-import { IntakeRoute } from './routes/intake';
 import { NotFoundRoute } from './routes/not-found';
-import { ResetPasswordRoute } from './routes/reset-password';
 import { RootRedirect } from './routes/root-redirect';
 import { RouteError } from './routes/route-error';
-import { SettingsRoute } from './routes/settings';
-import { SignInRoute } from './routes/sign-in';
-import { UnsubscribeRoute } from './routes/unsubscribe';
-import { ReportWeekRoute } from './routes/report-week';
-import { AccountDeleteRoute } from './routes/account-delete';
+
+/**
+ * A route's screen as its own chunk, loaded when the route is first visited: the sign-in page
+ * never loads the charts, the tables or the plan editor. Loaders stay static, so data starts
+ * loading together with the code.
+ */
+function page<K extends string>(load: () => Promise<Record<K, ComponentType>>, name: K) {
+  return async () => ({ Component: (await load())[name] });
+}
 
 /**
  * Loaders only start fetches (the same query options the screens use) so data and the session
@@ -105,31 +84,66 @@ export const router = createBrowserRouter([
     errorElement: <RouteError />,
     children: [
       { index: true, element: <RootRedirect /> },
-      { path: 'sign-in', element: <SignInRoute /> },
-      { path: 'forgot-password', element: <ForgotPasswordRoute /> },
-      { path: 'reset-password', element: <ResetPasswordRoute /> },
-      { path: 'invite/:token', element: <AcceptInvitationRoute /> },
-      { path: 'dev/inbox', element: <DevInboxRoute /> },
-      { path: 'unsubscribe', element: <UnsubscribeRoute /> },
-      { path: 'account/delete', element: <AccountDeleteRoute /> },
+      { path: 'sign-in', lazy: page(() => import('./routes/sign-in'), 'SignInRoute') },
+      {
+        path: 'forgot-password',
+        lazy: page(() => import('./routes/forgot-password'), 'ForgotPasswordRoute'),
+      },
+      { path: 'reset-password', lazy: page(() => import('./routes/reset-password'), 'ResetPasswordRoute') },
+      {
+        path: 'invite/:token',
+        lazy: page(() => import('./routes/accept-invitation'), 'AcceptInvitationRoute'),
+      },
+      { path: 'dev/inbox', lazy: page(() => import('./routes/dev-inbox'), 'DevInboxRoute') },
+      { path: 'unsubscribe', lazy: page(() => import('./routes/unsubscribe'), 'UnsubscribeRoute') },
+      { path: 'account/delete', lazy: page(() => import('./routes/account-delete'), 'AccountDeleteRoute') },
       {
         element: <RequireSignedIn />,
         children: [
           // Printable, outside the shells: the week before a check-in's due date.
-          { path: 'report/athletes/:athleteId/weeks/:dueDate', element: <ReportWeekRoute /> },
+          {
+            path: 'report/athletes/:athleteId/weeks/:dueDate',
+            lazy: page(() => import('./routes/report-week'), 'ReportWeekRoute'),
+          },
           {
             element: <RequireAthlete />,
             children: [
               {
                 element: <AthleteShell />,
                 children: [
-                  { path: 'athlete', element: <AthleteHomeRoute />, loader: prefetchToday },
-                  { path: 'athlete/history', element: <AthleteHistoryRoute /> },
-                  { path: 'athlete/days/:date', element: <AthleteDayRoute />, loader: prefetchOwnProfile },
-                  { path: 'athlete/photos', element: <AthletePhotosRoute />, loader: prefetchOwnProfile },
-                  { path: 'athlete/trends', element: <AthleteTrendsRoute />, loader: prefetchOwnTrends },
-                  { path: 'athlete/weekly', element: <AthleteWeeklyRoute /> },
-                  { path: 'intake', element: <IntakeRoute />, loader: prefetchOwnProfile },
+                  {
+                    path: 'athlete',
+                    lazy: page(() => import('./routes/athlete-home'), 'AthleteHomeRoute'),
+                    loader: prefetchToday,
+                  },
+                  {
+                    path: 'athlete/history',
+                    lazy: page(() => import('./routes/athlete-history'), 'AthleteHistoryRoute'),
+                  },
+                  {
+                    path: 'athlete/days/:date',
+                    lazy: page(() => import('./routes/athlete-day'), 'AthleteDayRoute'),
+                    loader: prefetchOwnProfile,
+                  },
+                  {
+                    path: 'athlete/photos',
+                    lazy: page(() => import('./routes/athlete-photos'), 'AthletePhotosRoute'),
+                    loader: prefetchOwnProfile,
+                  },
+                  {
+                    path: 'athlete/trends',
+                    lazy: page(() => import('./routes/athlete-trends'), 'AthleteTrendsRoute'),
+                    loader: prefetchOwnTrends,
+                  },
+                  {
+                    path: 'athlete/weekly',
+                    lazy: page(() => import('./routes/athlete-weekly'), 'AthleteWeeklyRoute'),
+                  },
+                  {
+                    path: 'intake',
+                    lazy: page(() => import('./routes/intake'), 'IntakeRoute'),
+                    loader: prefetchOwnProfile,
+                  },
                 ],
               },
             ],
@@ -143,7 +157,7 @@ export const router = createBrowserRouter([
                 children: [
                   {
                     index: true,
-                    element: <CoachReviewQueueRoute />,
+                    lazy: page(() => import('./routes/coach-review-queue'), 'CoachReviewQueueRoute'),
                     loader: prefetchWhen(
                       (me) => isStaffRole(me.role),
                       () => void queryClient.prefetchQuery(reviewQueueQueryOptions()),
@@ -151,7 +165,7 @@ export const router = createBrowserRouter([
                   },
                   {
                     path: 'roster',
-                    element: <CoachRosterRoute />,
+                    lazy: page(() => import('./routes/coach-roster'), 'CoachRosterRoute'),
                     loader: prefetchWhen(
                       (me) => isStaffRole(me.role),
                       () => void queryClient.prefetchQuery(rosterQueryOptions()),
@@ -159,7 +173,7 @@ export const router = createBrowserRouter([
                   },
                   {
                     path: 'invitations',
-                    element: <CoachInvitationsRoute />,
+                    lazy: page(() => import('./routes/coach-invitations'), 'CoachInvitationsRoute'),
                     loader: prefetchWhen(
                       (me) => me.role === 'owner' || me.role === 'coach',
                       () => void queryClient.prefetchQuery(invitationsQueryOptions()),
@@ -167,19 +181,28 @@ export const router = createBrowserRouter([
                   },
                   {
                     path: 'athletes/:athleteId',
-                    element: <CoachAthleteRoute />,
+                    lazy: page(() => import('./routes/coach-athlete'), 'CoachAthleteRoute'),
                     loader: ({ params }) =>
                       prefetchWhen(
                         (me) => isStaffRole(me.role),
                         () => void queryClient.prefetchQuery(athleteQueryOptions(params.athleteId ?? '')),
                       )(),
                   },
-                  { path: 'athletes/:athleteId/photos', element: <CoachAthletePhotosRoute /> },
-                  { path: 'athletes/:athleteId/weekly', element: <CoachAthleteWeeklyRoute /> },
-                  { path: 'athletes/:athleteId/weekly/:checkInId', element: <CoachAthleteWeeklyRoute /> },
+                  {
+                    path: 'athletes/:athleteId/photos',
+                    lazy: page(() => import('./routes/coach-athlete-photos'), 'CoachAthletePhotosRoute'),
+                  },
+                  {
+                    path: 'athletes/:athleteId/weekly',
+                    lazy: page(() => import('./routes/coach-athlete-weekly'), 'CoachAthleteWeeklyRoute'),
+                  },
+                  {
+                    path: 'athletes/:athleteId/weekly/:checkInId',
+                    lazy: page(() => import('./routes/coach-athlete-weekly'), 'CoachAthleteWeeklyRoute'),
+                  },
                   {
                     path: 'athletes/:athleteId/trends',
-                    element: <CoachAthleteTrendsRoute />,
+                    lazy: page(() => import('./routes/coach-athlete-trends'), 'CoachAthleteTrendsRoute'),
                     loader: ({ params }) =>
                       prefetchWhen(
                         (me) => isStaffRole(me.role),
@@ -191,7 +214,7 @@ export const router = createBrowserRouter([
                   },
                   {
                     path: 'athletes/:athleteId/plan',
-                    element: <CoachAthletePlanLayout />,
+                    lazy: page(() => import('./routes/coach-athlete-plan'), 'CoachAthletePlanLayout'),
                     loader: ({ params }) =>
                       prefetchWhen(
                         (me) => isStaffRole(me.role),
@@ -201,24 +224,51 @@ export const router = createBrowserRouter([
                         },
                       )(),
                     children: [
-                      { index: true, element: <CoachAthletePlanEditorRoute /> },
-                      { path: 'countdown', element: <CoachAthletePlanCountdownRoute /> },
-                      { path: 'history', element: <CoachAthletePlanHistoryRoute /> },
-                      { path: 'history/:versionId', element: <CoachAthletePlanHistoryRoute /> },
+                      {
+                        index: true,
+                        lazy: page(
+                          () => import('./routes/coach-athlete-plan'),
+                          'CoachAthletePlanEditorRoute',
+                        ),
+                      },
+                      {
+                        path: 'countdown',
+                        lazy: page(
+                          () => import('./routes/coach-athlete-plan'),
+                          'CoachAthletePlanCountdownRoute',
+                        ),
+                      },
+                      {
+                        path: 'history',
+                        lazy: page(
+                          () => import('./routes/coach-athlete-plan'),
+                          'CoachAthletePlanHistoryRoute',
+                        ),
+                      },
+                      {
+                        path: 'history/:versionId',
+                        lazy: page(
+                          () => import('./routes/coach-athlete-plan'),
+                          'CoachAthletePlanHistoryRoute',
+                        ),
+                      },
                     ],
                   },
                   {
                     path: 'templates',
-                    element: <CoachTemplatesRoute />,
+                    lazy: page(() => import('./routes/coach-templates'), 'CoachTemplatesRoute'),
                     loader: prefetchWhen(
                       (me) => isStaffRole(me.role),
                       () => void queryClient.prefetchQuery(templatesQueryOptions()),
                     ),
                   },
-                  { path: 'templates/new', element: <CoachTemplateNewRoute /> },
+                  {
+                    path: 'templates/new',
+                    lazy: page(() => import('./routes/coach-template'), 'CoachTemplateNewRoute'),
+                  },
                   {
                     path: 'templates/:templateId',
-                    element: <CoachTemplateRoute />,
+                    lazy: page(() => import('./routes/coach-template'), 'CoachTemplateRoute'),
                     loader: ({ params }) =>
                       prefetchWhen(
                         (me) => isStaffRole(me.role),
@@ -232,7 +282,7 @@ export const router = createBrowserRouter([
           },
           {
             element: <ShellForRole />,
-            children: [{ path: 'settings', element: <SettingsRoute /> }],
+            children: [{ path: 'settings', lazy: page(() => import('./routes/settings'), 'SettingsRoute') }],
           },
         ],
       },
