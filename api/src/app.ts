@@ -1,3 +1,4 @@
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import express from 'express';
 import type { DataSource } from 'typeorm';
@@ -60,6 +61,9 @@ export function createApp(deps: {
     next();
   });
   app.use(securityHeaders(config));
+  // JSON, CSV and the app's HTML go out compressed when the client accepts it (gzip or deflate;
+  // compressible types only, so photos and zips pass through). Built assets are precompressed.
+  app.use(compression());
   app.use(express.json({ limit: JSON_LIMIT }));
   app.use(cookieParser());
   app.use(originCheck(config));

@@ -1,22 +1,25 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Router } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
 /**
- * Serves the built web app from `webDist` when it exists: hashed assets cached for a year,
+ * Serves the built web app from `webDist` when it exists: hashed assets cached for a year and sent
+ * precompressed,
  * `index.html` for every other non-/api GET (client-side routes), never cached.
  */
 export function webAppRouter(webDist: string): Router | null {
   const indexHtml = path.join(webDist, 'index.html');
   if (!existsSync(indexHtml)) return null;
   const router = express.Router();
+  // The build writes .br and .gz beside each asset (web/vite.config.ts): the best one the client
+  // accepts is sent with its Content-Encoding and `Vary: Accept-Encoding`.
   router.use(
     '/assets',
-    express.static(path.join(webDist, 'assets'), {
-      immutable: true,
-      maxAge: '365d',
-      index: false,
-      fallthrough: false,
+    expressStaticGzip(path.join(webDist, 'assets'), {
+      enableBrotli: true,
+      orderPreference: ['br', 'gz'],
+      serveStatic: { immutable: true, maxAge: '365d', index: false, fallthrough: false },
     }),
   );
   router.use(express.static(webDist, { index: false, maxAge: '1h' }));
