@@ -217,9 +217,11 @@ describe('mail worker restarts', () => {
       (rows) => rows.length === 2 && rows.every((r) => r.status === 'sent'),
     );
 
-    // The sweep gave the orphan one job and left the queued one alone.
-    expect(await jobStates(queued.id)).toEqual(['completed']);
-    expect(await jobStates(orphaned.id)).toEqual(['completed']);
+    // The sweep gave the orphan one job and left the queued one alone. The queue completes a job
+    // after its handler has marked the row sent, so wait for that state rather than read it once.
+    const done = (states: string[]) => states.length === 1 && states[0] === 'completed';
+    expect(await eventually(() => jobStates(queued.id), done)).toEqual(['completed']);
+    expect(await eventually(() => jobStates(orphaned.id), done)).toEqual(['completed']);
     expect(await worker.sweep()).toBe(0);
     await sleep(1_500);
     expect(await mailsTo(withJob)).toHaveLength(1);
