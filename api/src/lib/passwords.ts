@@ -1,13 +1,22 @@
+import { passwordFitsHash } from '@driftmark/shared';
 import bcrypt from 'bcryptjs';
 
 /** bcrypt cost factor for new hashes (2^12 rounds, roughly 250 ms on one core). */
 export const BCRYPT_COST = 12;
 
+/** Hashes a new password; the schemas have refused anything bcrypt would cut (over 72 bytes). */
 export function hashPassword(password: string): Promise<string> {
+  if (!passwordFitsHash(password)) throw new Error('Password longer than bcrypt reads (72 bytes)');
   return bcrypt.hash(password, BCRYPT_COST);
 }
 
-export function verifyPassword(password: string, hash: string): Promise<boolean> {
+/**
+ * True when the password matches the hash. A password over 72 bytes never matches: bcrypt would
+ * compare only its first 72 bytes, so a different tail would sign in. It still costs one compare,
+ * like any wrong password.
+ */
+export async function verifyPassword(password: string, hash: string): Promise<boolean> {
+  if (!passwordFitsHash(password)) return verifyAgainstDummy(password.slice(0, 8));
   return bcrypt.compare(password, hash);
 }
 
