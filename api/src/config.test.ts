@@ -16,6 +16,7 @@ describe('loadConfig', () => {
       logLevel: 'info',
       signInRateLimit: 10,
       resetRateLimit: 5,
+      addressRateLimit: 30,
       sessionTtlMinutes: 15,
       sessionMaxDays: 30,
     });

@@ -76,6 +76,7 @@ export const configSchema = z.object({
   LOG_LEVEL: z.preprocess((v) => (v === '' ? undefined : v), z.enum(LOG_LEVELS).default('info')),
   SIGN_IN_RATE_LIMIT: positiveInt(10),
   RESET_RATE_LIMIT: positiveInt(5),
+  ADDRESS_RATE_LIMIT: positiveInt(30),
   SESSION_TTL_MINUTES: positiveInt(15),
   SESSION_MAX_DAYS: positiveInt(30),
 });
@@ -100,6 +101,11 @@ export interface Config {
   signInRateLimit: number;
   /** Forgot/reset requests per 15 minutes per IP. */
   resetRateLimit: number;
+  /**
+   * Failed attempts per 15 minutes per client address across all accounts, on each of sign-in,
+   * password reset, invitation acceptance and deletion confirmation.
+   */
+  addressRateLimit: number;
   /** JWT lifetime in minutes (the cookie slides while the session is in use). */
   sessionTtlMinutes: number;
   /** Absolute session lifetime in days. */
@@ -136,6 +142,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     logLevel: e.LOG_LEVEL,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
     resetRateLimit: e.RESET_RATE_LIMIT,
+    addressRateLimit: e.ADDRESS_RATE_LIMIT,
     sessionTtlMinutes: e.SESSION_TTL_MINUTES,
     sessionMaxDays: e.SESSION_MAX_DAYS,
   };

@@ -130,6 +130,12 @@ export class InvitationService {
    */
   async accept(input: AcceptInvitationRequest, client: ClientInfo): Promise<SignedIn> {
     const { dataSource, config } = this.deps;
+    // Cheap checks first: a bogus or spent link costs one indexed read, never a bcrypt hash. The
+    // transaction below checks again under a row lock.
+    const pending = await new InvitationRepository(dataSource.manager).findByHash(hashToken(input.token));
+    if (!pending || !isOpen(pending, new Date())) throw tokenInvalid(INVITATION_INVALID);
+    if (await new UserRepository(dataSource.manager).existsByEmail(pending.email))
+      throw conflict(`${EMAIL_TAKEN} Sign in instead.`);
     const passwordHash = await hashPassword(input.password);
     const sessions = new SessionService(dataSource.manager, config);
     try {
