@@ -20,7 +20,8 @@ function passwordPool(): Piscina<PasswordTask, string | boolean> {
   pool ??= new Piscina<PasswordTask, string | boolean>({
     filename: new URL('../../workers/password-worker.mjs', import.meta.url).href,
     minThreads: 0,
-    maxThreads: Math.min(4, Math.max(1, os.availableParallelism())),
+    // One core stays with the event loop, so a burst of sign-ins queues here instead of slowing every request.
+    maxThreads: Math.min(4, Math.max(1, os.availableParallelism() - 1)),
     idleTimeout: 60_000,
   });
   return pool;
