@@ -103,7 +103,8 @@ export function createApp(deps: {
   api.use(weeklyCheckInsRouter());
   // E-mail preferences (/me/notifications) and unsubscribe links (/unsubscribe).
   api.use(notificationsRouter());
-  if (config.appMode !== 'production' && config.mailCaptureDir) {
+  // The demo inbox: only in demo mode (our own scripts set it), only to clients on this machine.
+  if (config.appMode === 'demo' && config.mailCaptureDir) {
     api.use('/dev/mail', devMailRouter(config));
   }
   api.use(apiNotFound());
