@@ -67,6 +67,8 @@ export class PgRateLimitStore implements Store {
   }
 
   async decrement(key: string): Promise<void> {
+    // Runs after the response has gone; a pool closed meanwhile (shutdown) only loses one decrement.
+    if (!this.dataSource.isInitialized) return;
     await this.dataSource.query(
       `UPDATE rate_limit_counters SET hits = GREATEST(hits - 1, 0), updated_at = now()
        WHERE key = $1 AND reset_at > now()`,
