@@ -8,6 +8,7 @@ import { configureNotifications } from './services/notify.service.js';
 import { createLogger, type Logger } from './logger.js';
 import { originCheck } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/errors.js';
+import { RateLimits } from './middleware/rate-limit.js';
 import { requestLogging } from './middleware/request-logging.js';
 import { securityHeaders } from './middleware/security.js';
 import { webAppRouter } from './middleware/web-app.js';
@@ -68,6 +69,8 @@ export function createApp(deps: {
   app.use(cookieParser());
   app.use(originCheck(config));
 
+  // Counters live in PostgreSQL: they survive a restart and hold across instances.
+  const limits = new RateLimits(config, dataSource);
   const api = express.Router();
   api.use((_req, res, next) => {
     // API answers are per user; never let a shared cache keep them.
@@ -75,11 +78,11 @@ export function createApp(deps: {
     next();
   });
   api.use('/health', healthRouter());
-  api.use('/auth', authRouter(config));
+  api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
   // The athlete's data archive (/me/export) and account deletion.
-  api.use('/me', meDataRouter());
-  api.use('/invitations', invitationsRouter());
+  api.use('/me', meDataRouter(limits));
+  api.use('/invitations', invitationsRouter(limits));
   api.use('/roster', rosterRouter());
   api.use('/review-queue', reviewQueueRouter());
   api.use('/team/poses', posesRouter());
@@ -104,7 +107,8 @@ export function createApp(deps: {
   api.use(weeklyCheckInsRouter());
   // E-mail preferences (/me/notifications) and unsubscribe links (/unsubscribe).
   api.use(notificationsRouter());
-  if (config.appMode !== 'production' && config.mailCaptureDir) {
+  // The demo inbox: only in demo mode (our own scripts set it), only to clients on this machine.
+  if (config.appMode === 'demo' && config.mailCaptureDir) {
     api.use('/dev/mail', devMailRouter(config));
   }
   api.use(apiNotFound());

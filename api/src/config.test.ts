@@ -1,7 +1,23 @@
 import { describe, expect, it } from 'vitest';
 import { loadConfig } from './config.js';
 
-const base = { DATABASE_URL: 'postgres://u:p@127.0.0.1:5432/db', JWT_SECRET: 'x'.repeat(32) };
+const base = {
+  APP_MODE: 'development',
+  DATABASE_URL: 'postgres://u:p@127.0.0.1:5432/db',
+  JWT_SECRET: 'x'.repeat(32),
+};
+/** A secret as the scripts generate it (48 random bytes, base64url), fixed here. */
+const strongSecret = 'q3Vx9LrT0mZbK2wYpHc7NaJf5GdS1eUoRi8Bk4Xt6lQvWnCyEsPjMh-_Az0gIuFD';
+const production = { ...base, APP_MODE: 'production', JWT_SECRET: strongSecret };
+
+function problemsOf(env: Record<string, string>): string {
+  try {
+    loadConfig(env);
+    return '';
+  } catch (err) {
+    return (err as Error).message;
+  }
+}
 
 describe('loadConfig', () => {
   it('fills the documented defaults', () => {
@@ -16,6 +32,7 @@ describe('loadConfig', () => {
       logLevel: 'info',
       signInRateLimit: 10,
       resetRateLimit: 5,
+      addressRateLimit: 30,
       sessionTtlMinutes: 15,
       sessionMaxDays: 30,
     });
@@ -36,9 +53,8 @@ describe('loadConfig', () => {
   });
 
   it('treats empty variables as unset', () => {
-    const c = loadConfig({ ...base, PORT: '', APP_MODE: '', SMTP_URL: '', MAIL_CAPTURE_DIR: '' });
+    const c = loadConfig({ ...base, PORT: '', SMTP_URL: '', MAIL_CAPTURE_DIR: '' });
     expect(c.port).toBe(3000);
-    expect(c.appMode).toBe('development');
     expect(c.smtpUrl).toBeUndefined();
   });
 
@@ -66,5 +82,52 @@ describe('loadConfig', () => {
       expect(message).toContain(`- ${name}:`);
     }
     expect(message).toContain('at least 32 characters');
+  });
+
+  it('refuses to start without an explicit APP_MODE, empty counting as missing', () => {
+    const { APP_MODE: _mode, ...noMode } = base;
+    expect(problemsOf(noMode)).toContain(
+      '- APP_MODE: is required: one of demo, development, test, production',
+    );
+    expect(problemsOf({ ...base, APP_MODE: '' })).toContain('- APP_MODE: is required');
+  });
+
+  it('accepts a production start with a generated secret and an https origin', () => {
+    const c = loadConfig({ ...production, APP_ORIGIN: 'https://app.example.org' });
+    expect(c.appMode).toBe('production');
+    expect(c.appOrigin).toBe('https://app.example.org');
+  });
+
+  it.each([
+    ['x'.repeat(40), 'repeated character'],
+    ['abcabcabcabcabcabcabcabcabcabcabcabc', 'few distinct characters'],
+    ['changeme-changeme-changeme-0123456789', 'placeholder word'],
+    ['my-driftmark-jwt-secret-for-production-1234', 'placeholder word'],
+  ])('refuses a weak JWT_SECRET in production (%s: %s)', (secret) => {
+    const message = problemsOf({ ...production, JWT_SECRET: secret, APP_ORIGIN: 'https://app.example.org' });
+    expect(message).toContain('- JWT_SECRET: too weak for production');
+  });
+
+  it('refuses a missing JWT_SECRET in production', () => {
+    const { JWT_SECRET: _secret, ...noSecret } = production;
+    expect(problemsOf({ ...noSecret, APP_ORIGIN: 'https://app.example.org' })).toContain('- JWT_SECRET:');
+  });
+
+  it('refuses a missing or http APP_ORIGIN in production unless ALLOW_HTTP_ORIGIN=1 says it is a local run', () => {
+    expect(problemsOf(production)).toContain('- APP_ORIGIN: is required in production');
+    expect(problemsOf({ ...production, APP_ORIGIN: 'http://app.example.org' })).toContain(
+      '- APP_ORIGIN: must be https in production',
+    );
+    expect(
+      problemsOf({ ...production, APP_ORIGIN: 'http://127.0.0.1:3000', ALLOW_HTTP_ORIGIN: '0' }),
+    ).toContain('- APP_ORIGIN: must be https in production');
+    expect(loadConfig({ ...production, ALLOW_HTTP_ORIGIN: '1' }).appOrigin).toBe('http://127.0.0.1:3000');
+    expect(
+      loadConfig({ ...production, APP_ORIGIN: 'http://127.0.0.1:4000', ALLOW_HTTP_ORIGIN: '1' }).appOrigin,
+    ).toBe('http://127.0.0.1:4000');
+  });
+
+  it('keeps weak secrets and http origins working outside production (the scripts generate secrets anyway)', () => {
+    expect(loadConfig({ ...base, APP_MODE: 'demo' }).appOrigin).toBe('http://127.0.0.1:3000');
   });
 });

@@ -36,7 +36,11 @@ const positiveInt = (fallback: number) =>
 
 /** The environment variables the API reads, keyed by their names. */
 export const configSchema = z.object({
-  APP_MODE: z.preprocess((v) => (v === '' ? undefined : v), z.enum(APP_MODES).default('development')),
+  // No default: the built server must be told what it is (the scripts set it; see README).
+  APP_MODE: z.preprocess(
+    (v) => (v === '' ? undefined : v),
+    z.enum(APP_MODES, { error: `is required: one of ${APP_MODES.join(', ')}` }),
+  ),
   HOST: optionalString.transform((v) => v ?? '127.0.0.1'),
   PORT: z.preprocess(
     (v) => (v === undefined || v === '' ? 3000 : v),
@@ -76,9 +80,42 @@ export const configSchema = z.object({
   LOG_LEVEL: z.preprocess((v) => (v === '' ? undefined : v), z.enum(LOG_LEVELS).default('info')),
   SIGN_IN_RATE_LIMIT: positiveInt(10),
   RESET_RATE_LIMIT: positiveInt(5),
+  ADDRESS_RATE_LIMIT: positiveInt(30),
   SESSION_TTL_MINUTES: positiveInt(15),
   SESSION_MAX_DAYS: positiveInt(30),
+  /** `1` lets a production start use an http APP_ORIGIN (a local run, never a public server). */
+  ALLOW_HTTP_ORIGIN: optionalString.pipe(z.enum(['0', '1'], { error: 'must be 1 (allow) or 0' }).optional()),
 });
+
+/**
+ * Placeholder words that mark a secret someone typed rather than generated (common practice, no
+ * source); together with the variety check they refuse "changeme…", "aaaa…" and the like.
+ */
+const PLACEHOLDER_SECRET = /change.?me|secret|password|example|driftmark|placeholder/i;
+/** A generated secret of 32+ characters (base64url, hex) has many more distinct characters. */
+const MIN_DISTINCT_SECRET_CHARS = 10;
+
+/**
+ * What a production start refuses beyond the schema: a weak session key, and an APP_ORIGIN that is
+ * missing or not https unless ALLOW_HTTP_ORIGIN=1 says it is a local run. One line per problem.
+ */
+export function productionProblems(e: z.infer<typeof configSchema>): string[] {
+  if (e.APP_MODE !== 'production') return [];
+  const problems: string[] = [];
+  const secret = e.JWT_SECRET;
+  if (new Set(secret).size < MIN_DISTINCT_SECRET_CHARS || PLACEHOLDER_SECRET.test(secret)) {
+    problems.push('JWT_SECRET: too weak for production; use a random value, e.g. `openssl rand -base64 48`');
+  }
+  const allowHttp = e.ALLOW_HTTP_ORIGIN === '1';
+  if (!e.APP_ORIGIN && !allowHttp) {
+    problems.push('APP_ORIGIN: is required in production (the https origin people open)');
+  } else if (e.APP_ORIGIN && !e.APP_ORIGIN.startsWith('https://') && !allowHttp) {
+    problems.push(
+      'APP_ORIGIN: must be https in production (set ALLOW_HTTP_ORIGIN=1 for a local run over http)',
+    );
+  }
+  return problems;
+}
 
 export interface Config {
   appMode: AppMode;
@@ -100,6 +137,11 @@ export interface Config {
   signInRateLimit: number;
   /** Forgot/reset requests per 15 minutes per IP. */
   resetRateLimit: number;
+  /**
+   * Failed attempts per 15 minutes per client address across all accounts, on each of sign-in,
+   * password reset, invitation acceptance and deletion confirmation.
+   */
+  addressRateLimit: number;
   /** JWT lifetime in minutes (the cookie slides while the session is in use). */
   sessionTtlMinutes: number;
   /** Absolute session lifetime in days. */
@@ -120,6 +162,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
   }
   const e = parsed.data;
+  const problems = productionProblems(e);
+  if (problems.length > 0) {
+    throw new Error(`Invalid configuration:\n${problems.map((p) => `  - ${p}`).join('\n')}`);
+  }
   return {
     appMode: e.APP_MODE,
     host: e.HOST,
@@ -136,6 +182,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     logLevel: e.LOG_LEVEL,
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
     resetRateLimit: e.RESET_RATE_LIMIT,
+    addressRateLimit: e.ADDRESS_RATE_LIMIT,
     sessionTtlMinutes: e.SESSION_TTL_MINUTES,
     sessionMaxDays: e.SESSION_MAX_DAYS,
   };

@@ -5,6 +5,7 @@ import { loadConfig, type Config } from './config.js';
 import { createDataSource } from './db/data-source.js';
 import { startMailWorker } from './jobs/mail.worker.js';
 import { startNotifyScheduler } from './jobs/notify.scheduler.js';
+import { closePasswordPool } from './lib/passwords.js';
 import { createLogger } from './logger.js';
 import { uploadsSettled } from './middleware/upload.js';
 import { installProcessErrorHandlers } from './process-errors.js';
@@ -70,6 +71,12 @@ async function main(): Promise<void> {
         } catch (err) {
           code = 1;
           logger.error({ err }, 'mail worker stop failed');
+        }
+        try {
+          await closePasswordPool();
+        } catch (err) {
+          code = 1;
+          logger.error({ err }, 'password pool close failed');
         }
         try {
           await dataSource.destroy();

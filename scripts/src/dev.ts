@@ -53,7 +53,7 @@ async function main(): Promise<void> {
   await buildShared();
   const webOrigin = `http://127.0.0.1:${WEB_PORT}`;
   const env = {
-    APP_MODE: 'development',
+    APP_MODE: 'demo',
     HOST: '127.0.0.1',
     PORT: String(API_PORT),
     // E-mail links open the Vite UI; requests through the Vite proxy carry that origin.

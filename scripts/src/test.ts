@@ -142,6 +142,7 @@ async function e2eStage(e2eUrl: string): Promise<void> {
         // Browser journeys sign in many times from one address; keep the limiter out of their way.
         SIGN_IN_RATE_LIMIT: '200',
         RESET_RATE_LIMIT: '200',
+        ADDRESS_RATE_LIMIT: '200',
       }),
       serverLog,
     );

@@ -5,7 +5,12 @@
 export const LIMITS = {
   email: { max: 254 },
   name: { min: 1, max: 100 },
-  password: { min: 10, max: 200 },
+  /**
+   * Characters for the form; `maxBytes` is the bcrypt input limit in UTF-8 bytes: "The maximum
+   * input length is 72 bytes" (bcryptjs 3 README; bcrypt's key schedule, Provos & Mazières 1999).
+   * bcrypt ignores the rest, so a longer password is refused rather than silently cut.
+   */
+  password: { min: 10, max: 200, maxBytes: 72 },
   teamName: { min: 2, max: 100 },
   /** Adult standing height, cm. */
   heightCm: { min: 120, max: 230 },

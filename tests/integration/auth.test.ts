@@ -1,3 +1,4 @@
+import bcrypt from 'bcryptjs';
 import jwt from 'jsonwebtoken';
 import request from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
@@ -253,6 +254,53 @@ describe('change password', () => {
       .post('/api/auth/change-password')
       .send({ currentPassword: 'x', newPassword: 'another-long-password' });
     expect(res.status).toBe(401);
+  });
+});
+
+describe('passwords over 72 bytes (bcrypt reads no further)', () => {
+  const exact = 'k'.repeat(72);
+
+  it('sign-in with a longer password fails like a wrong one, even when its first 72 bytes are right', async () => {
+    const owner = await createOwner(t.dataSource, { passwordHash: await bcrypt.hash(exact, 4) });
+    const ok = await browser(t.app).post('/api/auth/sign-in').send({ email: owner.email, password: exact });
+    expect(ok.status).toBe(200);
+    const res = await browser(t.app)
+      .post('/api/auth/sign-in')
+      .send({ email: owner.email, password: `${exact}-another-tail` });
+    expect(res.status).toBe(401);
+    expect(res.body.error).toMatchObject({
+      code: 'invalid_credentials',
+      message: 'E-mail or password is incorrect.',
+    });
+  });
+
+  it('a new password over 72 bytes answers 400 naming newPassword and changes nothing', async () => {
+    const owner = await createOwner(t.dataSource);
+    const agent = await signedIn(t.app, owner.email, FACTORY_PASSWORD);
+    const before = await t.dataSource.getRepository(User).findOneByOrFail({ id: owner.id });
+    // 40 characters, 80 bytes in UTF-8 ('ö' takes 2, RFC 3629).
+    const res = await agent
+      .post('/api/auth/change-password')
+      .send({ currentPassword: FACTORY_PASSWORD, newPassword: 'ö'.repeat(40) });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+    expect(res.body.error.fields.newPassword).toMatch(/At most 72 bytes/);
+    const after = await t.dataSource.getRepository(User).findOneByOrFail({ id: owner.id });
+    expect(after.passwordHash).toBe(before.passwordHash);
+  });
+
+  it('reset and invitation acceptance refuse it on the password field', async () => {
+    const token = 't'.repeat(43);
+    const reset = await browser(t.app)
+      .post('/api/auth/reset-password')
+      .send({ token, password: 'k'.repeat(73) });
+    expect(reset.status).toBe(400);
+    expect(reset.body.error.fields.password).toMatch(/At most 72 bytes/);
+    const accept = await browser(t.app)
+      .post('/api/invitations/accept')
+      .send({ token, name: 'Ana Ruiz', password: 'k'.repeat(73) });
+    expect(accept.status).toBe(400);
+    expect(accept.body.error.fields.password).toMatch(/At most 72 bytes/);
   });
 });
 

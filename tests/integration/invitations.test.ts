@@ -258,14 +258,41 @@ describe('who may invite whom', () => {
     expect(await outboxFor(t.dataSource, 'c1@example.test')).toHaveLength(0);
   });
 
-  it('answers 409 with fields.email when the address already has an account', async () => {
+  it('answers the same whether or not the address has an account, and mails the owner of it what to do', async () => {
     const owner = await createOwner(t.dataSource);
-    const coach = await createCoach(t.dataSource, { teamId: owner.teamId });
+    const elsewhere = await createCoach(t.dataSource, { email: 'taken@example.test' });
+    expect(elsewhere.teamId).not.toBe(owner.teamId);
     const agent = await signedIn(t.app, owner.email, FACTORY_PASSWORD);
-    const res = await invite(agent, { email: coach.email, name: 'Dup', role: 'athlete' });
-    expect(res.status).toBe(409);
-    expect(res.body.error.code).toBe('conflict');
-    expect(res.body.error.fields.email).toBeDefined();
+
+    const fresh = await invite(agent, { email: 'fresh@example.test', name: 'Fresh', role: 'athlete' });
+    const taken = await invite(agent, { email: 'taken@example.test', name: 'Taken', role: 'athlete' });
+    expect(taken.status).toBe(fresh.status);
+    expect(taken.status).toBe(201);
+    // Same shape, same values but for the ids, names, addresses and times that differ anyway.
+    const shape = (body: { data: Record<string, unknown> }) =>
+      Object.fromEntries(Object.entries(body.data).map(([k, v]) => [k, typeof v]));
+    expect(shape(taken.body)).toEqual(shape(fresh.body));
+    expect(taken.body.data.role).toBe(fresh.body.data.role);
+    const listed = (await agent.get('/api/invitations')).body.data as { email: string }[];
+    expect(listed.map((i) => i.email).sort()).toEqual(['fresh@example.test', 'taken@example.test']);
+
+    // The account's owner learns what to do; the mail carries no accept link, and nothing joins
+    // their account to a second team.
+    const [mail] = await outboxFor(t.dataSource, 'taken@example.test');
+    expect(mail).toBeDefined();
+    expect(mail!.textBody).toContain('already has a Driftmark account');
+    expect(mail!.textBody).toContain(`${t.config.appOrigin}/sign-in`);
+    expect(mail!.textBody).not.toContain('/invite/');
+    const [freshMail] = await outboxFor(t.dataSource, 'fresh@example.test');
+    expect(freshMail!.subject).toBe(mail!.subject);
+    const account = await t.dataSource.getRepository(User).findOneByOrFail({ email: 'taken@example.test' });
+    expect(account.teamId).toBe(elsewhere.teamId);
+
+    // Resending keeps it that way.
+    expect((await agent.post(`/api/invitations/${taken.body.data.id}/resend`)).status).toBe(200);
+    const mails = await outboxFor(t.dataSource, 'taken@example.test');
+    expect(mails).toHaveLength(2);
+    expect(mails[1]!.textBody).not.toContain('/invite/');
   });
 
   it('refuses a coachId that is not a coach of the team', async () => {

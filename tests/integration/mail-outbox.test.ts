@@ -2,7 +2,9 @@
  * The mail outbox end to end: queueMail inside a transaction, the pg-boss worker, a real SMTP
  * fake writing captured JSON files, and the dev inbox routes reading them.
  */
+import { once } from 'node:events';
 import { mkdtemp, rm } from 'node:fs/promises';
+import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import request from 'supertest';
@@ -39,7 +41,12 @@ let seq = 0;
 beforeAll(async () => {
   captureDir = await mkdtemp(path.join(os.tmpdir(), 'dm-mail-outbox-'));
   smtp = await startSmtpFake({ port: 0, captureDir });
-  t = await buildTestApp({ smtpUrl: `smtp://127.0.0.1:${smtp.port}`, mailCaptureDir: captureDir });
+  // Demo mode: the dev inbox routes below exist only there.
+  t = await buildTestApp({
+    appMode: 'demo',
+    smtpUrl: `smtp://127.0.0.1:${smtp.port}`,
+    mailCaptureDir: captureDir,
+  });
 });
 afterAll(async () => {
   await t?.close();
@@ -321,13 +328,38 @@ describe('dev inbox routes', () => {
     }
   });
 
-  it('does not exist in production', async () => {
-    const prod = await buildTestApp({ appMode: 'production', mailCaptureDir: captureDir });
+  it('does not exist outside demo mode', async () => {
+    for (const appMode of ['production', 'test', 'development'] as const) {
+      const other = await buildTestApp({ appMode, mailCaptureDir: captureDir });
+      try {
+        for (const path of ['/api/dev/mail', '/api/dev/mail/1700000000000-abc']) {
+          const res = await request(other.app).get(path);
+          expect(res.status, `${appMode} ${path}`).toBe(404);
+          expect(res.body.error.code).toBe('not_found');
+        }
+      } finally {
+        await other.close();
+      }
+    }
+  });
+
+  // A real connection from another address of this machine (not 127/8 or ::1), when it has one.
+  const outside = Object.values(os.networkInterfaces())
+    .flat()
+    .find((i) => i && i.family === 'IPv4' && !i.internal)?.address;
+  it.skipIf(!outside)('answers 404 to a client that is not on loopback, even in demo mode', async () => {
+    const server = t.app.listen(0, '0.0.0.0');
+    await once(server, 'listening');
     try {
-      const res = await request(prod.app).get('/api/dev/mail');
-      expect(res.status).toBe(404);
+      const { port } = server.address() as AddressInfo;
+      const remote = await fetch(`http://${outside}:${port}/api/dev/mail`);
+      expect(remote.status).toBe(404);
+      expect(((await remote.json()) as { error: { code: string } }).error.code).toBe('not_found');
+      const local = await fetch(`http://127.0.0.1:${port}/api/dev/mail`);
+      expect(local.status).toBe(200);
     } finally {
-      await prod.close();
+      server.closeAllConnections();
+      server.close();
     }
   });
 });

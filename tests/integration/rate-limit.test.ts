@@ -1,4 +1,5 @@
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import { RateLimitCounter } from '../../api/src/entities/rate-limit-counter.entity.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createOwner } from '../factories/users.js';
 import { browser, buildTestApp, type TestApp } from './setup/app.js';
@@ -63,5 +64,85 @@ describe('rate limits', () => {
     const blocked = await browser(t.app).post('/api/auth/forgot-password').send({ email: 'x9@example.test' });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('rate_limited');
+  });
+});
+
+describe('limits per client address, across accounts, kept in PostgreSQL', () => {
+  const LIMIT = 4;
+  let a: TestApp;
+  beforeAll(async () => {
+    a = await buildTestApp({ addressRateLimit: LIMIT });
+  });
+  afterAll(() => a.close());
+  beforeEach(() => a.reset());
+
+  function expectThrottled(res: {
+    status: number;
+    body: { error?: unknown };
+    headers: Record<string, string>;
+  }) {
+    expect(res.status).toBe(429);
+    expect(res.body.error).toMatchObject({ code: 'rate_limited', message: expect.any(String) });
+    expect(res.body.error).toHaveProperty('requestId');
+    expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
+  }
+
+  it('throttles one address spraying sign-ins over many e-mails, known or not', async () => {
+    const owner = await createOwner(a.dataSource);
+    for (let i = 0; i < LIMIT; i += 1) {
+      const res = await browser(a.app)
+        .post('/api/auth/sign-in')
+        .send({ email: `spray${i}@example.test`, password: 'spring-2026-password' });
+      expect(res.status).toBe(401);
+    }
+    // A fresh e-mail, and even the right password of a real account, now waits out the window.
+    expectThrottled(
+      await browser(a.app)
+        .post('/api/auth/sign-in')
+        .send({ email: 'spray-next@example.test', password: 'spring-2026-password' }),
+    );
+    expectThrottled(
+      await browser(a.app).post('/api/auth/sign-in').send({ email: owner.email, password: FACTORY_PASSWORD }),
+    );
+  });
+
+  it('keeps its counts across a rebuilt app on the same database (a restart, another instance)', async () => {
+    for (let i = 0; i < LIMIT; i += 1) {
+      await browser(a.app)
+        .post('/api/auth/sign-in')
+        .send({ email: `before${i}@example.test`, password: 'spring-2026-password' });
+    }
+    const counters = await a.dataSource.getRepository(RateLimitCounter).find();
+    expect(counters.map((c) => c.key)).toEqual(
+      expect.arrayContaining([expect.stringMatching(/^address:sign-in:/)]),
+    );
+
+    const rebuilt = await buildTestApp({ addressRateLimit: LIMIT });
+    try {
+      expectThrottled(
+        await browser(rebuilt.app)
+          .post('/api/auth/sign-in')
+          .send({ email: 'after@example.test', password: 'spring-2026-password' }),
+      );
+    } finally {
+      await rebuilt.close();
+    }
+  });
+
+  it('throttles bogus invitation accepts, reset links and deletion confirmations per address', async () => {
+    const token = 'not-a-real-token-'.padEnd(43, 'x');
+    const routes: [string, Record<string, unknown>][] = [
+      ['/api/invitations/accept', { token, name: 'Ana Ruiz', password: 'my-own-passphrase' }],
+      ['/api/auth/reset-password', { token, password: 'my-own-passphrase' }],
+      ['/api/me/deletion/confirm', { token }],
+    ];
+    for (const [path, body] of routes) {
+      for (let i = 0; i < LIMIT; i += 1) {
+        const res = await browser(a.app).post(path).send(body);
+        expect(res.status, path).toBeGreaterThanOrEqual(400);
+        expect(res.status, path).not.toBe(429);
+      }
+      expectThrottled(await browser(a.app).post(path).send(body));
+    }
   });
 });

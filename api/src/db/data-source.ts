@@ -20,6 +20,7 @@ import { MealEntry } from '../entities/meal-entry.entity.js';
 import { OutboxMessage } from '../entities/outbox-message.entity.js';
 import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
 import { PlanVersion } from '../entities/plan-version.entity.js';
+import { RateLimitCounter } from '../entities/rate-limit-counter.entity.js';
 import { Session } from '../entities/session.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
@@ -37,6 +38,7 @@ export const ENTITIES = [
   User,
   Session,
   PasswordResetToken,
+  RateLimitCounter,
   Invitation,
   Athlete,
   AthleteShare,

@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { escapeHtml } from './layout.js';
-import { renderInvitationMail, renderPasswordResetMail } from './templates.js';
+import {
+  renderInvitationMail,
+  renderInvitationToExistingAccountMail,
+  renderPasswordResetMail,
+} from './templates.js';
 
 const link = 'http://127.0.0.1:3000/invite/abcDEF123_-tokenvalue?x=1&y=2';
 const expiresAt = new Date('2026-12-10T14:32:00Z');
@@ -109,5 +113,28 @@ describe('renderPasswordResetMail', () => {
     // 14:32 UTC is 03:32 the next day in Auckland (NZDT, UTC+13).
     expect(mail.text).toContain('11 December 2026 at 03:32');
     expect(mail.subject).toBe('Reset your Driftmark password');
+  });
+});
+
+describe('renderInvitationToExistingAccountMail', () => {
+  const mail = renderInvitationToExistingAccountMail({
+    inviteeName: hostile,
+    inviterName: 'Mara <b>Okafor</b>',
+    teamName: 'Team "Line" & Co',
+    role: 'athlete',
+    signInLink: 'http://127.0.0.1:3000/sign-in',
+  });
+
+  it('escapes every interpolated value in the HTML part', () => {
+    expect(mail.html).not.toContain('<script>');
+    expect(mail.html).not.toContain('<b>Okafor</b>');
+    expect(mail.html).toContain('Team &quot;Line&quot; &amp; Co');
+  });
+
+  it('says the address has an account, what to do, and links to sign-in, not to an accept page', () => {
+    expect(mail.text).toContain('already has a Driftmark account');
+    expect(mail.text).toContain('ask Mara <b>Okafor</b> to invite another e-mail address');
+    expect(mail.text).toContain('http://127.0.0.1:3000/sign-in');
+    expect(mail.text).not.toContain('/invite/');
   });
 });

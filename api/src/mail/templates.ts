@@ -23,6 +23,64 @@ export interface InvitationMailInput {
   timeZone?: string;
 }
 
+export interface InvitationToExistingAccountMailInput {
+  inviteeName: string;
+  inviterName: string;
+  teamName: string;
+  role: Role;
+  /** The app's sign-in page. */
+  signInLink: string;
+}
+
+/**
+ * The invitation sent instead of the usual one when the address already has an account: an
+ * account belongs to one team, so it carries no accept link and says what the recipient can do.
+ * The inviter gets the same answer either way, so inviting never reveals who has an account.
+ */
+export function renderInvitationToExistingAccountMail(
+  input: InvitationToExistingAccountMailInput,
+): RenderedMail {
+  const role = ROLE_LABELS[input.role];
+  const title = `Your invitation to ${input.teamName}`;
+  const reason =
+    `You received it because ${input.inviterName} invited this address to ${input.teamName}. ` +
+    'Nothing changes on your account unless you act.';
+  const subject = oneLine(`${input.inviterName} invited you to ${input.teamName} on Driftmark`);
+  const lines = {
+    invited: `${input.inviterName} invited you to join ${input.teamName} on Driftmark. Your role: ${role}.`,
+    taken:
+      'This e-mail address already has a Driftmark account, and an account belongs to one team, so the ' +
+      'invitation cannot be accepted with it.',
+    same: `If your account is already with ${input.teamName}, there is nothing to do: sign in as usual.`,
+    other:
+      `If your account is with another team, ask ${input.inviterName} to invite another e-mail address ` +
+      'of yours; or, as an athlete, delete your account in Settings there first (download your data ' +
+      `before you do) and ask ${input.inviterName} for a new invitation.`,
+  };
+  const text = renderTextLayout({
+    title,
+    intro: [`Hello ${input.inviteeName},`, lines.invited, lines.taken, lines.same, lines.other],
+    action: { label: 'Sign in', url: input.signInLink },
+    after: [],
+    reason,
+  });
+  const htmlBody = renderHtmlLayout({
+    title,
+    preheader: `${input.inviterName} invited you to join ${input.teamName} (${role}).`,
+    intro: [
+      html`Hello ${input.inviteeName},`,
+      html`${lines.invited}`,
+      html`${lines.taken}`,
+      html`${lines.same}`,
+      html`${lines.other}`,
+    ],
+    action: { label: 'Sign in', url: input.signInLink },
+    after: [],
+    reason,
+  });
+  return { subject, text, html: htmlBody };
+}
+
 export function renderInvitationMail(input: InvitationMailInput): RenderedMail {
   const role = ROLE_LABELS[input.role];
   const expires = formatDateTime(input.expiresAt, input.timeZone);

@@ -8,6 +8,11 @@ export class PasswordResetTokenRepository {
     return this.manager.save(this.manager.create(PasswordResetToken, { ...input, usedAt: null }));
   }
 
+  /** The token's row without a lock (a cheap check before hashing). */
+  findByHash(tokenHash: string): Promise<PasswordResetToken | null> {
+    return this.manager.findOneBy(PasswordResetToken, { tokenHash });
+  }
+
   /** Locks the row until the transaction ends, so two concurrent uses cannot both succeed. */
   findByHashForUpdate(tokenHash: string): Promise<PasswordResetToken | null> {
     return this.manager

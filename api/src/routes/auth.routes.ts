@@ -5,9 +5,8 @@ import {
   signInRequest,
 } from '@driftmark/shared';
 import { Router } from 'express';
-import type { Config } from '../config.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
-import { resetRateLimit, signInRateLimit } from '../middleware/rate-limit.js';
+import type { RateLimits } from '../middleware/rate-limit.js';
 import { validate } from '../middleware/validate.js';
 import { clearSessionCookie, setSessionCookie } from '../lib/session-cookie.js';
 import { SESSION_COOKIE } from '../lib/session-token.js';
@@ -15,16 +14,22 @@ import { AuthService } from '../services/auth.service.js';
 import { SessionService } from '../services/session.service.js';
 import { clientInfo } from '../lib/client-info.js';
 
-export function authRouter(config: Config): Router {
+export function authRouter(limits: RateLimits): Router {
   const router = Router();
-  const forgotLimit = resetRateLimit(config);
-  const resetLimit = resetRateLimit(config);
+  const forgotLimit = limits.reset('forgot');
+  const resetLimit = limits.reset('reset');
 
-  router.post('/sign-in', signInRateLimit(config), validate({ body: signInRequest }), async (req, res) => {
-    const { me, token } = await new AuthService(req.ctx).signIn(req.body, clientInfo(req));
-    setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
-    res.json({ data: me });
-  });
+  router.post(
+    '/sign-in',
+    limits.perAddress('sign-in'),
+    limits.signIn(),
+    validate({ body: signInRequest }),
+    async (req, res) => {
+      const { me, token } = await new AuthService(req.ctx).signIn(req.body, clientInfo(req));
+      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      res.json({ data: me });
+    },
+  );
 
   // Works with or without a live session, so a stale tab can always sign out.
   router.post('/sign-out', async (req, res) => {
@@ -48,10 +53,16 @@ export function authRouter(config: Config): Router {
     },
   );
 
-  router.post('/reset-password', resetLimit, validate({ body: resetPasswordRequest }), async (req, res) => {
-    await new AuthService(req.ctx).resetPassword(req.body.token, req.body.password);
-    res.json({ data: { ok: true } });
-  });
+  router.post(
+    '/reset-password',
+    limits.perAddress('reset-password'),
+    resetLimit,
+    validate({ body: resetPasswordRequest }),
+    async (req, res) => {
+      await new AuthService(req.ctx).resetPassword(req.body.token, req.body.password);
+      res.json({ data: { ok: true } });
+    },
+  );
 
   router.post(
     '/change-password',

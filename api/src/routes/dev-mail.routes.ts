@@ -1,66 +1,27 @@
 /**
- * The dev inbox: reads the messages the local SMTP fake captured (one JSON file per message in
- * MAIL_CAPTURE_DIR). Not authenticated on purpose; app.ts mounts it only outside production and
- * only when MAIL_CAPTURE_DIR is set.
+ * The demo inbox: reads the messages the local SMTP fake captured (one JSON file per message in
+ * MAIL_CAPTURE_DIR). Not authenticated on purpose, so it is fenced twice: app.ts mounts it only in
+ * demo mode (set by `npm start` / `npm run dev`) with MAIL_CAPTURE_DIR set, and it answers only
+ * clients on this machine (the socket's own address; no header can claim it).
  */
-import { readdir, readFile } from 'node:fs/promises';
-import path from 'node:path';
 import { Router, type Response } from 'express';
+import { listCapturedIds, readCapturedMail, type CapturedMail } from '../adapters/mail-capture.js';
 import type { Config } from '../config.js';
 import { notFound } from '../errors.js';
 
-interface CapturedMail {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-}
-
-/** File base names the fake writes: `<ms>-<random>`; nothing that could leave the folder. */
-const ID_PATTERN = /^[A-Za-z0-9-]{1,100}$/;
 const LIST_LIMIT = 200;
 
-function stampOf(id: string): number {
-  const stamp = Number(id.split('-')[0]);
-  return Number.isFinite(stamp) ? stamp : 0;
-}
-
-async function listIds(dir: string): Promise<string[]> {
-  let names: string[];
-  try {
-    names = await readdir(dir);
-  } catch (err) {
-    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return [];
-    throw err;
-  }
-  return names
-    .filter((n) => n.endsWith('.json'))
-    .map((n) => n.slice(0, -'.json'.length))
-    .filter((id) => ID_PATTERN.test(id))
-    .sort((a, b) => stampOf(b) - stampOf(a) || (a < b ? 1 : a > b ? -1 : 0));
-}
-
-async function readMail(dir: string, id: string): Promise<CapturedMail | null> {
-  if (!ID_PATTERN.test(id)) return null;
-  try {
-    const parsed = JSON.parse(await readFile(path.join(dir, `${id}.json`), 'utf8')) as Partial<CapturedMail>;
-    return {
-      id,
-      receivedAt: String(parsed.receivedAt ?? ''),
-      from: String(parsed.from ?? ''),
-      to: Array.isArray(parsed.to) ? parsed.to.map(String) : [],
-      subject: String(parsed.subject ?? ''),
-      text: String(parsed.text ?? ''),
-      html: typeof parsed.html === 'string' ? parsed.html : null,
-    };
-  } catch (err) {
-    const code = (err as NodeJS.ErrnoException).code;
-    if (code === 'ENOENT' || err instanceof SyntaxError) return null;
-    throw err;
-  }
+/**
+ * True for a loopback peer address: 127.0.0.0/8, ::1, or either written as an IPv4-mapped IPv6
+ * address (RFC 4291 §2.4: ::1 is loopback; RFC 1122 §3.2.1.3: 127/8 is loopback; RFC 4291
+ * §2.5.5.2: ::ffff:a.b.c.d maps an IPv4 address).
+ */
+export function isLoopbackAddress(address: string | undefined): boolean {
+  if (!address) return false;
+  const a = address.toLowerCase();
+  if (a === '::1' || a === '0:0:0:0:0:0:0:1') return true;
+  const v4 = a.startsWith('::ffff:') ? a.slice('::ffff:'.length) : a;
+  return /^127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(v4);
 }
 
 function noStore(res: Response): void {
@@ -71,9 +32,14 @@ export function devMailRouter(config: Config): Router {
   const router = Router();
   const dir = config.mailCaptureDir;
 
+  // Anyone else gets the same 404 as a route that does not exist.
+  router.use((req, _res, next) => {
+    next(isLoopbackAddress(req.socket.remoteAddress) ? undefined : notFound('No such API route.'));
+  });
+
   router.get('/', async (_req, res) => {
-    const ids = dir ? (await listIds(dir)).slice(0, LIST_LIMIT) : [];
-    const mails = await Promise.all(ids.map((id) => readMail(dir as string, id)));
+    const ids = dir ? (await listCapturedIds(dir)).slice(0, LIST_LIMIT) : [];
+    const mails = await Promise.all(ids.map((id) => readCapturedMail(dir as string, id)));
     noStore(res);
     res.json({
       data: mails
@@ -83,7 +49,7 @@ export function devMailRouter(config: Config): Router {
   });
 
   router.get('/:id', async (req, res) => {
-    const mail = dir ? await readMail(dir, req.params.id) : null;
+    const mail = dir ? await readCapturedMail(dir, req.params.id) : null;
     if (!mail) throw notFound('No such message.');
     noStore(res);
     res.json({ data: mail });

@@ -4,6 +4,7 @@ import { z } from 'zod';
 import { notFound } from '../errors.js';
 import { setSessionCookie } from '../lib/session-cookie.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import type { RateLimits } from '../middleware/rate-limit.js';
 import { requireRole } from '../middleware/require-role.js';
 import { validate } from '../middleware/validate.js';
 import { authorizeInvitation, type InvitationAction } from '../policies/invitation.policy.js';
@@ -28,21 +29,27 @@ async function loadInvitation(req: Request<{ id: string }>, action: InvitationAc
   return invitation;
 }
 
-export function invitationsRouter(): Router {
+export function invitationsRouter(limits: RateLimits): Router {
   const router = Router();
 
   // Public: what the invitee sees, and accepting (which signs them in). The 256-bit token is
-  // the credential; it cannot be guessed, so these are not rate limited.
+  // the credential and cannot be guessed; accepting is still limited per address, because each
+  // attempt with a valid-looking body may cost a bcrypt hash.
   router.get('/lookup/:token', validate({ params: tokenParams }), async (req, res) => {
     res.setHeader('Cache-Control', 'no-store');
     res.json({ data: await new InvitationService(req.ctx).lookup(req.params.token) });
   });
 
-  router.post('/accept', validate({ body: acceptInvitationRequest }), async (req, res) => {
-    const { me, token } = await new InvitationService(req.ctx).accept(req.body, clientInfo(req));
-    setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
-    res.status(201).json({ data: me });
-  });
+  router.post(
+    '/accept',
+    limits.perAddress('invitation-accept'),
+    validate({ body: acceptInvitationRequest }),
+    async (req, res) => {
+      const { me, token } = await new InvitationService(req.ctx).accept(req.body, clientInfo(req));
+      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      res.status(201).json({ data: me });
+    },
+  );
 
   router.post('/', authenticate(), staff, validate({ body: createInvitationRequest }), async (req, res) => {
     const { actor, user } = requireAuth(req);

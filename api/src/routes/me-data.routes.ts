@@ -5,6 +5,7 @@ import { notFound } from '../errors.js';
 import { DELETION_TOKEN_TTL_SECONDS } from '../lib/deletion-token.js';
 import { clearSessionCookie } from '../lib/session-cookie.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import type { RateLimits } from '../middleware/rate-limit.js';
 import { validate } from '../middleware/validate.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { AccountDeletionService } from '../services/account-deletion.service.js';
@@ -12,7 +13,7 @@ import { DataArchiveService } from '../services/data-archive.service.js';
 import { loadAthleteById } from './athletes.routes.js';
 
 /** The signed-in athlete's own data rights under /api/me: the archive of everything they logged. */
-export function meDataRouter(): Router {
+export function meDataRouter(limits: RateLimits): Router {
   const router = Router();
 
   // Only an athlete has an archive; it stays available after the coaching ended.
@@ -41,11 +42,16 @@ export function meDataRouter(): Router {
   });
 
   // Step two: the link's token alone deletes the account (it may open in another browser).
-  router.post('/deletion/confirm', validate({ body: confirmDeletionRequest }), async (req, res) => {
-    await new AccountDeletionService(req.ctx).confirm(req.body.token);
-    clearSessionCookie(res, req.ctx.config);
-    res.status(204).end();
-  });
+  router.post(
+    '/deletion/confirm',
+    limits.perAddress('deletion-confirm'),
+    validate({ body: confirmDeletionRequest }),
+    async (req, res) => {
+      await new AccountDeletionService(req.ctx).confirm(req.body.token);
+      clearSessionCookie(res, req.ctx.config);
+      res.status(204).end();
+    },
+  );
 
   return router;
 }

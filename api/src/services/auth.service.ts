@@ -14,6 +14,7 @@ import { MeService } from './me.service.js';
 import { SessionService, type ClientInfo, type IssuedToken } from './session.service.js';
 
 const INVALID_CREDENTIALS = 'E-mail or password is incorrect.';
+const RESET_INVALID = 'This reset link is no longer valid. Ask for a new one.';
 
 export interface SignedIn {
   me: Me;
@@ -31,7 +32,8 @@ export class AuthService {
 
   /**
    * Checks the password and opens a session. An unknown e-mail costs the same bcrypt work as a
-   * wrong password and gets the same answer, so neither timing nor wording reveals accounts.
+   * wrong password and gets the same answer, so neither timing nor wording reveals accounts; the
+   * work runs in the password pool, off the event loop (lib/passwords.ts).
    */
   async signIn(input: SignInRequest, client: ClientInfo): Promise<SignedIn> {
     const user = await new UserRepository(this.deps.dataSource.manager).findByEmail(input.email);
@@ -95,13 +97,18 @@ export class AuthService {
 
   /** Redeems a reset token once: sets the password and signs out every session of the user. */
   async resetPassword(token: string, password: string): Promise<void> {
+    // Cheap check first: a bogus or spent link costs one indexed read, never a bcrypt hash. The
+    // transaction below checks again under a row lock.
+    const pending = await new PasswordResetTokenRepository(this.deps.dataSource.manager).findByHash(
+      hashToken(token),
+    );
+    if (!pending || pending.usedAt || pending.expiresAt <= new Date()) throw tokenInvalid(RESET_INVALID);
     const passwordHash = await hashPassword(password);
     await this.deps.dataSource.transaction(async (manager) => {
       const tokens = new PasswordResetTokenRepository(manager);
       const row = await tokens.findByHashForUpdate(hashToken(token));
       const now = new Date();
-      if (!row || row.usedAt || row.expiresAt <= now)
-        throw tokenInvalid('This reset link is no longer valid. Ask for a new one.');
+      if (!row || row.usedAt || row.expiresAt <= now) throw tokenInvalid(RESET_INVALID);
       await new UserRepository(manager).update(row.userId, { passwordHash, passwordChangedAt: now });
       await tokens.useAllForUser(row.userId, now);
       await new SessionRepository(manager).revokeAllForUser(row.userId, { at: now });

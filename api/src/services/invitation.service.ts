@@ -13,7 +13,7 @@ import { conflict, forbidden, tokenInvalid, validationFailed } from '../errors.j
 import { addDays } from '../lib/dates.js';
 import { hashPassword } from '../lib/passwords.js';
 import { generateToken, hashToken } from '../lib/tokens.js';
-import { renderInvitationMail } from '../mail/templates.js';
+import { renderInvitationMail, renderInvitationToExistingAccountMail } from '../mail/templates.js';
 import type { Actor } from '../policies/actor.js';
 import { canAssignCoach } from '../policies/invitation.policy.js';
 import { presentInvitationPreview, presentInvitationSummary } from '../presenters/invitation.presenter.js';
@@ -61,7 +61,9 @@ export class InvitationService {
       }
       coachId = coach.id;
     }
-    if (await users.existsByEmail(input.email)) throw conflict(EMAIL_TAKEN, { email: EMAIL_TAKEN });
+    // An address that already has an account (in this team or another) gets the same answer and an
+    // invitation row like any other, so inviting never reveals who uses the product; its mail says
+    // what to do instead of carrying an accept link (queueInvitationMail).
 
     const team = await new TeamRepository(dataSource.manager).findById(actor.teamId);
     if (!team) throw new Error(`Team ${actor.teamId} not found`);
@@ -128,6 +130,12 @@ export class InvitationService {
    */
   async accept(input: AcceptInvitationRequest, client: ClientInfo): Promise<SignedIn> {
     const { dataSource, config } = this.deps;
+    // Cheap checks first: a bogus or spent link costs one indexed read, never a bcrypt hash. The
+    // transaction below checks again under a row lock.
+    const pending = await new InvitationRepository(dataSource.manager).findByHash(hashToken(input.token));
+    if (!pending || !isOpen(pending, new Date())) throw tokenInvalid(INVITATION_INVALID);
+    if (await new UserRepository(dataSource.manager).existsByEmail(pending.email))
+      throw conflict(`${EMAIL_TAKEN} Sign in instead.`);
     const passwordHash = await hashPassword(input.password);
     const sessions = new SessionService(dataSource.manager, config);
     try {
@@ -174,6 +182,17 @@ export class InvitationService {
     inviter: Pick<User, 'name' | 'timeZone'>,
     teamName: string,
   ): Promise<void> {
+    if (await new UserRepository(manager).existsByEmail(invitation.email)) {
+      const mail = renderInvitationToExistingAccountMail({
+        inviteeName: invitation.name,
+        inviterName: inviter.name,
+        teamName,
+        role: invitation.role,
+        signInLink: `${this.deps.config.appOrigin}/sign-in`,
+      });
+      await queueMail(manager, { kind: 'invitation', to: invitation.email, ...mail });
+      return;
+    }
     const link = `${this.deps.config.appOrigin}/invite/${encodeURIComponent(token)}`;
     const mail = renderInvitationMail({
       inviteeName: invitation.name,

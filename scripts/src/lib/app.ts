@@ -95,7 +95,7 @@ export async function apiCli(
     : [repoPath('api', 'dist', 'cli.js'), command];
   const childEnv = options.source ? { ...env, TSX_TSCONFIG_PATH: repoPath('api', 'tsconfig.json') } : env;
   await timed(
-    `api ${command} (${env.APP_MODE ?? 'development'}, ${databaseName(env.DATABASE_URL)})`,
+    `api ${command} (${env.APP_MODE ?? 'no APP_MODE'}, ${databaseName(env.DATABASE_URL)})`,
     async () => {
       await runChecked(node, args, { env: childEnv });
     },

@@ -11,11 +11,35 @@ export const email = z
   .max(LIMITS.email.max, `At most ${LIMITS.email.max} characters`)
   .pipe(z.email({ error: 'Enter a valid e-mail address' }));
 
-/** A new password: length only, long passphrases welcome. */
+/** Bytes of a string in UTF-8 (what bcrypt reads), in the browser and on the server alike. */
+export function utf8Bytes(s: string): number {
+  let bytes = 0;
+  // Code points (a surrogate pair is one): 1 byte up to U+007F, 2 up to U+07FF, 3 up to U+FFFF,
+  // 4 beyond (RFC 3629 §3). A lone surrogate becomes U+FFFD when encoded: 3 bytes.
+  for (const ch of s) {
+    const cp = ch.codePointAt(0) ?? 0;
+    bytes += cp <= 0x7f ? 1 : cp <= 0x7ff ? 2 : cp <= 0xffff ? 3 : 4;
+  }
+  return bytes;
+}
+
+/** True when bcrypt would read the whole password (at most `LIMITS.password.maxBytes` UTF-8 bytes). */
+export function passwordFitsHash(password: string): boolean {
+  return utf8Bytes(password) <= LIMITS.password.maxBytes;
+}
+
+/**
+ * A new password: length only, passphrases welcome up to 72 bytes (bcrypt ignores anything
+ * beyond, so a longer one is refused instead of silently cut).
+ */
 export const newPassword = z
   .string({ error: 'Password is required' })
   .min(LIMITS.password.min, `At least ${LIMITS.password.min} characters`)
-  .max(LIMITS.password.max, `At most ${LIMITS.password.max} characters`);
+  .max(LIMITS.password.max, `At most ${LIMITS.password.max} characters`)
+  .refine(
+    passwordFitsHash,
+    `At most ${LIMITS.password.maxBytes} bytes: ${LIMITS.password.maxBytes} plain letters and digits, fewer with accented letters or emoji`,
+  );
 
 /** A person's display name. */
 export const personName = z

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { intakeRequestOn, ageOn } from './athletes.js';
 import { LIMITS } from '../limits.js';
-import { signInRequest, changePasswordRequest } from './auth.js';
-import { createInvitationRequest } from './invitations.js';
+import { signInRequest, changePasswordRequest, resetPasswordRequest } from './auth.js';
+import { acceptInvitationRequest, createInvitationRequest } from './invitations.js';
 import { isoDate } from './common.js';
 
 /** The pinned day the intakes below are checked on. */
@@ -137,5 +137,25 @@ describe('weighInRequest', () => {
     const ok = { weight: 176.4, unit: 'lb', time: '07:10', protocolConfirmed: true };
     expect(weighInRequest.safeParse(ok).success).toBe(true);
     expect(fieldsOf(weighInRequest.safeParse({ ...ok, weight: 0, unit: 'kg' }))).toEqual(['weight']);
+  });
+});
+
+describe('passwords over 72 bytes', () => {
+  // 'ü' is 2 bytes in UTF-8 (RFC 3629, table in §3): 40 of them are 40 characters and 80 bytes.
+  const long = 'ü'.repeat(40);
+  const token = 't'.repeat(43);
+
+  it('are refused on the field that carries them, in every form that sets a password', () => {
+    expect(fieldsOf(resetPasswordRequest.safeParse({ token, password: long }))).toEqual(['password']);
+    expect(
+      fieldsOf(acceptInvitationRequest.safeParse({ token, name: 'Ana Ruiz', password: long })),
+    ).toContain('password');
+    expect(
+      fieldsOf(changePasswordRequest.safeParse({ currentPassword: 'old-password-1', newPassword: long })),
+    ).toEqual(['newPassword']);
+  });
+
+  it('still reach sign-in, where they simply do not match', () => {
+    expect(signInRequest.safeParse({ email: 'a@example.test', password: long }).success).toBe(true);
   });
 });

@@ -1,4 +1,11 @@
-import { baseUrl } from './browser.js';
+import { listCapturedIds, readCapturedMail } from '../../../api/src/adapters/mail-capture.js';
+
+/** The SMTP fake's capture folder, set by scripts/src/test.ts (the e2e server runs in test mode, without the demo inbox). */
+function captureDir(): string {
+  const dir = process.env.MAIL_CAPTURE_DIR;
+  if (!dir) throw new Error('MAIL_CAPTURE_DIR is not set: run the browser tests through npm run test:e2e');
+  return dir;
+}
 
 interface MailSummary {
   id: string;
@@ -34,21 +41,17 @@ function matches(m: MailSummary, query: MailQuery): boolean {
 }
 
 /**
- * Waits for the newest captured message matching `query` (read through the demo inbox API, newest
+ * Waits for the newest captured message matching `query` (read from the capture folder, newest
  * first) and returns it with its text and HTML parts.
  */
 export async function waitForMail(query: MailQuery): Promise<MailMessage> {
   const timeoutMs = query.timeoutMs ?? 20_000;
   const deadline = Date.now() + timeoutMs;
   while (Date.now() < deadline) {
-    const res = await fetch(`${baseUrl}/api/dev/mail`);
-    if (res.ok) {
-      const { data } = (await res.json()) as { data: MailSummary[] };
-      const hit = data.find((m) => matches(m, query));
-      if (hit) {
-        const full = await fetch(`${baseUrl}/api/dev/mail/${hit.id}`);
-        return ((await full.json()) as { data: MailMessage }).data;
-      }
+    const dir = captureDir();
+    for (const id of await listCapturedIds(dir)) {
+      const message = await readCapturedMail(dir, id);
+      if (message && matches(message, query)) return message;
     }
     await new Promise((r) => setTimeout(r, 250));
   }
@@ -56,7 +59,7 @@ export async function waitForMail(query: MailQuery): Promise<MailMessage> {
   throw new Error(`No e-mail to ${what.join(', ')} within ${timeoutMs} ms`);
 }
 
-/** Waits for a captured message to `to` (read through the demo inbox API) and returns it. */
+/** Waits for a captured message to `to` (read from the capture folder) and returns it. */
 export async function waitForMailTo(to: string, timeoutMs = 20_000): Promise<MailMessage> {
   return waitForMail({ to, timeoutMs });
 }

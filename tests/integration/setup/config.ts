@@ -17,6 +17,7 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
     // Most files sign in many times from one address; the rate-limit file sets low limits itself.
     signInRateLimit: 1000,
     resetRateLimit: 1000,
+    addressRateLimit: 1000,
     smtpUrl: undefined,
     mailCaptureDir: undefined,
     webDist: '/nonexistent/driftmark-web-dist',

@@ -39,7 +39,7 @@ export function MailList({ selectedId, onSelect }: MailListProps) {
         }
       >
         {off
-          ? 'E-mails are captured only in demo and development modes; in production they are really sent.'
+          ? 'The inbox opens only in demo mode (npm start) and only in a browser on the same machine as the server.'
           : list.error.message}
       </Alert>
     );
