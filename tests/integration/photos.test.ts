@@ -211,12 +211,16 @@ describe('uploading', () => {
     const display = await fetchBytes(agent, big.urls.display);
     expect(display.status).toBe(200);
     expect(display.headers['content-type']).toBe('image/jpeg');
-    expect(display.headers['cache-control']).toMatch(/^private, max-age=\d+$/);
+    // Private images: no browser or proxy keeps them (issue 12, item 7).
+    expect(display.headers['cache-control']).toBe('no-store');
+    expect(display.headers.pragma).toBe('no-cache');
     expect(display.headers['x-content-type-options']).toBe('nosniff');
     const meta = await sharp(display.body as Buffer).metadata();
     expect([meta.format, meta.width, meta.height]).toEqual(['jpeg', 1600, 1200]);
 
     const thumb = await fetchBytes(agent, big.urls.thumb);
+    expect(thumb.headers['cache-control']).toBe('no-store');
+    expect(thumb.headers.pragma).toBe('no-cache');
     const thumbMeta = await sharp(thumb.body as Buffer).metadata();
     expect([thumbMeta.width, thumbMeta.height]).toEqual([320, 240]);
 
