@@ -7,10 +7,16 @@ import { startMailWorker } from './jobs/mail.worker.js';
 import { startNotifyScheduler } from './jobs/notify.scheduler.js';
 import { createLogger } from './logger.js';
 import { uploadsSettled } from './middleware/upload.js';
+import { trackHttpServer } from './lib/http-drain.js';
 import { installProcessErrorHandlers } from './process-errors.js';
 
-/** How long a shutdown may take before the process exits anyway. */
-const FORCED_EXIT_MS = 10_000;
+/** How long requests in flight may run on after a SIGTERM/SIGINT before their connections are cut. */
+const REQUEST_DRAIN_MS = 5_000;
+/**
+ * How long a whole shutdown may take before the process exits anyway (exit 1): above the request
+ * cap plus the mail worker's stop timeout, below the 15 s the start scripts wait before SIGKILL.
+ */
+const FORCED_EXIT_MS = 14_000;
 
 async function main(): Promise<void> {
   let config: Config;
@@ -30,6 +36,7 @@ async function main(): Promise<void> {
   const app = createApp({ config, dataSource, logger });
 
   const server = app.listen(config.port, config.host);
+  const http = trackHttpServer(server);
   server.on('listening', () => {
     const { port } = server.address() as AddressInfo;
     logger.info(
@@ -46,43 +53,42 @@ async function main(): Promise<void> {
   const shutdown = (signal: NodeJS.Signals) => {
     if (shuttingDown) return;
     shuttingDown = true;
-    logger.info({ signal }, 'shutting down');
+    logger.info({ signal, inFlight: http.inFlight }, 'shutting down');
     setTimeout(() => {
       logger.error('shutdown took too long; exiting');
+      logger.flush();
       process.exit(1);
     }, FORCED_EXIT_MS).unref();
 
-    // Stop accepting connections; in-flight requests finish, then idle keep-alive sockets close.
-    server.close((closeErr) => {
-      void (async () => {
-        let code = closeErr ? 1 : 0;
-        if (closeErr) logger.error({ err: closeErr }, 'HTTP server close failed');
-        // Requests are over; uploads cut off by the close may still be removing their temp files.
-        await uploadsSettled();
-        try {
-          await scheduler.stop();
-        } catch (err) {
-          code = 1;
-          logger.error({ err }, 'notification scheduler stop failed');
-        }
-        try {
-          await worker.stop();
-        } catch (err) {
-          code = 1;
-          logger.error({ err }, 'mail worker stop failed');
-        }
-        try {
-          await dataSource.destroy();
-        } catch (err) {
-          code = 1;
-          logger.error({ err }, 'closing the database pool failed');
-        }
-        logger.info('stopped');
-        logger.flush();
-        process.exit(code);
-      })();
-    });
-    server.closeIdleConnections();
+    void (async () => {
+      let code = 0;
+      // New connections are refused from here on; requests in flight finish (up to the cap).
+      const { forced } = await http.drain(REQUEST_DRAIN_MS);
+      if (forced) logger.warn({ capMs: REQUEST_DRAIN_MS }, 'requests still running at the cap were cut');
+      // Requests are over; uploads cut off by the close may still be removing their temp files.
+      await uploadsSettled();
+      try {
+        await scheduler.stop();
+      } catch (err) {
+        code = 1;
+        logger.error({ err }, 'notification scheduler stop failed');
+      }
+      try {
+        await worker.stop();
+      } catch (err) {
+        code = 1;
+        logger.error({ err }, 'mail worker stop failed');
+      }
+      try {
+        await dataSource.destroy();
+      } catch (err) {
+        code = 1;
+        logger.error({ err }, 'closing the database pool failed');
+      }
+      logger.info({ exitCode: code }, 'stopped');
+      logger.flush();
+      process.exit(code);
+    })();
   };
   process.on('SIGINT', shutdown);
   process.on('SIGTERM', shutdown);
