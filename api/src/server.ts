@@ -6,10 +6,14 @@ import { createDataSource } from './db/data-source.js';
 import { startMailWorker } from './jobs/mail.worker.js';
 import { startNotifyScheduler } from './jobs/notify.scheduler.js';
 import { createLogger } from './logger.js';
-import { uploadsSettled } from './middleware/upload.js';
+import { sweepUploadTemp, uploadsSettled } from './middleware/upload.js';
+import { sweepPhotoStorage } from './services/photo-sweep.service.js';
+import { LocalFolderStorage } from './adapters/storage.js';
 import { trackHttpServer } from './lib/http-drain.js';
 import { installProcessErrorHandlers } from './process-errors.js';
 
+/** How often the photo folder is swept while running (and how old a pending file must be). */
+const PHOTO_SWEEP_EVERY_MS = 15 * 60_000;
 /** How long requests in flight may run on after a SIGTERM/SIGINT before their connections are cut. */
 const REQUEST_DRAIN_MS = 5_000;
 /**
@@ -29,8 +33,22 @@ async function main(): Promise<void> {
   const logger = createLogger(config.logLevel);
   installProcessErrorHandlers(logger);
 
+  const startedAt = new Date();
   const dataSource = createDataSource(config);
   await dataSource.initialize();
+  // Files and rows agree before the first request: whatever a kill left behind is settled now.
+  const storage = new LocalFolderStorage(config.uploadsDir);
+  await sweepPhotoStorage({ dataSource, storage, before: startedAt, logger });
+  const tempFolders = await sweepUploadTemp();
+  if (tempFolders > 0) logger.info({ tempFolders }, 'upload temp folders of ended processes removed');
+  // Later, files staged by a process that died without a restart here: any upload is long over.
+  const sweeps = setInterval(() => {
+    const before = new Date(Date.now() - PHOTO_SWEEP_EVERY_MS);
+    sweepPhotoStorage({ dataSource, storage, before, logger }).catch((err: unknown) =>
+      logger.error({ err }, 'photo storage sweep failed'),
+    );
+  }, PHOTO_SWEEP_EVERY_MS);
+  sweeps.unref();
   const worker = await startMailWorker({ config, dataSource, logger });
   const scheduler = await startNotifyScheduler({ config, dataSource, logger });
   const app = createApp({ config, dataSource, logger });
@@ -63,6 +81,7 @@ async function main(): Promise<void> {
     void (async () => {
       let code = 0;
       // New connections are refused from here on; requests in flight finish (up to the cap).
+      clearInterval(sweeps);
       const { forced } = await http.drain(REQUEST_DRAIN_MS);
       if (forced) logger.warn({ capMs: REQUEST_DRAIN_MS }, 'requests still running at the cap were cut');
       // Requests are over; uploads cut off by the close may still be removing their temp files.
