@@ -12,6 +12,10 @@ import { LocalFolderStorage } from './adapters/storage.js';
 import { trackHttpServer } from './lib/http-drain.js';
 import { installProcessErrorHandlers } from './process-errors.js';
 
+/** How long a client may take to send the request line and headers. */
+const HEADERS_TIMEOUT_MS = 20_000;
+/** How long a whole request may take to arrive (above the longest body timer, 120 s). */
+const REQUEST_TIMEOUT_MS = 150_000;
 /** How often the photo folder is swept while running (and how old a pending file must be). */
 const PHOTO_SWEEP_EVERY_MS = 15 * 60_000;
 /** How long requests in flight may run on after a SIGTERM/SIGINT before their connections are cut. */
@@ -55,6 +59,9 @@ async function main(): Promise<void> {
 
   const server = app.listen(config.port, config.host);
   const http = trackHttpServer(server);
+  // Whole-request caps under the per-body timers of middleware/body.ts (node's default is 300 s).
+  server.headersTimeout = HEADERS_TIMEOUT_MS;
+  server.requestTimeout = REQUEST_TIMEOUT_MS;
   server.on('listening', () => {
     const { port } = server.address() as AddressInfo;
     logger.info(

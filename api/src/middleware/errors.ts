@@ -1,4 +1,4 @@
-import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ErrorRequestHandler, Request, RequestHandler, Response } from 'express';
 import { ZodError } from 'zod';
 import type { ErrorBody } from '@driftmark/shared';
 import { AppError, notFound } from '../errors.js';
@@ -118,28 +118,37 @@ function toAppError(err: unknown): AppError | null {
   return null;
 }
 
+/** Sends `err` as the error shape (what `errorHandler` does; for answers made outside the chain). */
+export function sendError(req: Request, res: Response, err: unknown): void {
+  const requestId = typeof req.id === 'string' ? req.id : undefined;
+  const known = toAppError(err);
+  if (!known) req.log.error({ err, requestId }, 'unhandled error');
+  else if (known.code === 'db_unavailable') {
+    req.log.warn({ err, requestId }, 'database unavailable');
+    res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
+  }
+  const appError =
+    known ?? new AppError('internal_error', 'Something went wrong on our side. Please try again.');
+  const body: ErrorBody = {
+    error: {
+      code: appError.code,
+      message: appError.message,
+      ...(appError.fields && Object.keys(appError.fields).length > 0 ? { fields: appError.fields } : {}),
+      ...(requestId ? { requestId } : {}),
+    },
+  };
+  res.status(appError.status).json(body);
+}
+
 /** The one place errors become responses: `{ error: { code, message, fields?, requestId } }`. */
 export function errorHandler(): ErrorRequestHandler {
   return (err: unknown, req, res, next) => {
-    if (res.headersSent) return next(err);
-    const requestId = typeof req.id === 'string' ? req.id : undefined;
-    const known = toAppError(err);
-    if (!known) req.log.error({ err, requestId }, 'unhandled error');
-    else if (known.code === 'db_unavailable') {
-      req.log.warn({ err, requestId }, 'database unavailable');
-      res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
+    if (res.headersSent) {
+      // A body refused mid-read was answered already; what the reader reports afterwards is moot.
+      if (res.locals.bodyRefused === true) return;
+      return next(err);
     }
-    const appError =
-      known ?? new AppError('internal_error', 'Something went wrong on our side. Please try again.');
-    const body: ErrorBody = {
-      error: {
-        code: appError.code,
-        message: appError.message,
-        ...(appError.fields && Object.keys(appError.fields).length > 0 ? { fields: appError.fields } : {}),
-        ...(requestId ? { requestId } : {}),
-      },
-    };
-    res.status(appError.status).json(body);
+    sendError(req, res, err);
   };
 }
 

@@ -81,8 +81,10 @@ export interface UploadedFile {
 export const FILES_FIELD = 'files';
 
 const MB = 1024 * 1024;
-/** The largest body a refused upload is read to the end for (a full upload plus its fields). */
-const MAX_DRAIN_BYTES = LIMITS.photosPerUpload * LIMITS.photoMaxBytes + MB;
+/** The largest multipart body: a full upload plus its fields. A larger Content-Length is refused unread. */
+export const MAX_UPLOAD_BYTES = LIMITS.photosPerUpload * LIMITS.photoMaxBytes + MB;
+/** The largest body a refused upload is read to the end for. */
+const MAX_DRAIN_BYTES = MAX_UPLOAD_BYTES;
 
 const uploader = multer({
   storage: multer.diskStorage({
