@@ -5,6 +5,7 @@ import { AddConditionPhotos1796165060504 } from './1796165060504-AddConditionPho
 import { AddPlans1796173077550 } from './1796173077550-AddPlans.js';
 import { AddMarksAndReviews1796175671267 } from './1796175671267-AddMarksAndReviews.js';
 import { AddWeeklyCheckInsAndNotifications1796178387090 } from './1796178387090-AddWeeklyCheckInsAndNotifications.js';
+import { OutboxSendingLease1796190000000 } from './1796190000000-OutboxSendingLease.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -14,4 +15,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddPlans1796173077550,
   AddMarksAndReviews1796175671267,
   AddWeeklyCheckInsAndNotifications1796178387090,
+  OutboxSendingLease1796190000000,
 ];
