@@ -7,7 +7,7 @@ import { startMailWorker } from './jobs/mail.worker.js';
 import { startNotifyScheduler } from './jobs/notify.scheduler.js';
 import { createLogger } from './logger.js';
 import { sweepUploadTemp, uploadsSettled } from './middleware/upload.js';
-import { sweepPhotoStorage } from './services/photo-sweep.service.js';
+import { databaseIdentity, sweepPhotoStorage } from './services/photo-sweep.service.js';
 import { LocalFolderStorage } from './adapters/storage.js';
 import { trackHttpServer } from './lib/http-drain.js';
 import { installProcessErrorHandlers } from './process-errors.js';
@@ -42,13 +42,14 @@ async function main(): Promise<void> {
   await dataSource.initialize();
   // Files and rows agree before the first request: whatever a kill left behind is settled now.
   const storage = new LocalFolderStorage(config.uploadsDir);
-  await sweepPhotoStorage({ dataSource, storage, before: startedAt, logger });
+  const database = databaseIdentity(config.databaseUrl);
+  await sweepPhotoStorage({ dataSource, storage, database, before: startedAt, logger });
   const tempFolders = await sweepUploadTemp();
   if (tempFolders > 0) logger.info({ tempFolders }, 'upload temp folders of ended processes removed');
   // Later, files staged by a process that died without a restart here: any upload is long over.
   const sweeps = setInterval(() => {
     const before = new Date(Date.now() - PHOTO_SWEEP_EVERY_MS);
-    sweepPhotoStorage({ dataSource, storage, before, logger }).catch((err: unknown) =>
+    sweepPhotoStorage({ dataSource, storage, database, before, logger }).catch((err: unknown) =>
       logger.error({ err }, 'photo storage sweep failed'),
     );
   }, PHOTO_SWEEP_EVERY_MS);

@@ -1,4 +1,12 @@
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import {
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  writeFileSync,
+} from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import zlib from 'node:zlib';
@@ -14,7 +22,11 @@ import { createLogger } from '../../api/src/logger.js';
 import { sweepUploadTemp, uploadTempDir } from '../../api/src/middleware/upload.js';
 import { AthleteRepository, type AthleteWithPeople } from '../../api/src/repositories/athlete.repository.js';
 import { PhotoRepository } from '../../api/src/repositories/photo.repository.js';
-import { sweepPhotoStorage } from '../../api/src/services/photo-sweep.service.js';
+import {
+  databaseIdentity,
+  OWNER_MARK,
+  sweepPhotoStorage,
+} from '../../api/src/services/photo-sweep.service.js';
 import { PhotoService } from '../../api/src/services/photo.service.js';
 import { createAthlete, shareAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
@@ -657,8 +669,15 @@ describe('files and rows after a kill', () => {
   it('publishes the files a committed row claims and removes every file no row claims', async () => {
     const athleteId = w.athlete.athlete.id;
     const storage = new LocalFolderStorage(uploadsDir);
-    const sweep = (before: Date) =>
-      sweepPhotoStorage({ dataSource: t.dataSource, storage, before, logger: createLogger('silent') });
+    const database = databaseIdentity(t.config.databaseUrl);
+    const sweep = (before: Date, db = database) =>
+      sweepPhotoStorage({
+        dataSource: t.dataSource,
+        storage,
+        database: db,
+        before,
+        logger: createLogger('silent'),
+      });
 
     // A finished upload: row and published files.
     const agent = await as(w.athlete.user);
@@ -703,7 +722,15 @@ describe('files and rows after a kill', () => {
 
     // Files changed after the cut-off (an upload still running elsewhere) are left alone.
     expect(await sweep(new Date(0))).toEqual({ published: 0, orphans: 0, pending: 0, strays: 0 });
-    expect(storedFiles()).toHaveLength(8);
+    // The first sweep marked the folder for this database; a server on another database leaves it.
+    expect(readFileSync(path.join(uploadsDir, OWNER_MARK), 'utf8').trim()).toBe(database);
+    expect(await sweep(AFTER_EVERYTHING, '127.0.0.1:1/another')).toEqual({
+      published: 0,
+      orphans: 0,
+      pending: 0,
+      strays: 0,
+    });
+    expect(storedFiles().filter((f) => !f.endsWith(OWNER_MARK))).toHaveLength(8);
 
     expect(await sweep(AFTER_EVERYTHING)).toEqual({ published: 2, orphans: 1, pending: 2, strays: 1 });
     const claimed = (await t.dataSource.getRepository(ConditionPhoto).find()).flatMap((p) => [
@@ -714,6 +741,7 @@ describe('files and rows after a kill', () => {
     expect(
       storedFiles()
         .map((f) => path.relative(uploadsDir, f))
+        .filter((f) => f !== OWNER_MARK)
         .sort(),
     ).toEqual(claimed.sort());
 

@@ -1,3 +1,5 @@
+import { mkdir, readFile, writeFile } from 'node:fs/promises';
+import path from 'node:path';
 import type { DataSource } from 'typeorm';
 import type { LocalFolderStorage } from '../adapters/storage.js';
 import type { Logger } from '../logger.js';
@@ -16,6 +18,31 @@ export interface PhotoSweepReport {
 
 const BATCH = 500;
 
+/** The file in the photo folder naming the database whose rows the files belong to. */
+export const OWNER_MARK = '.driftmark-database';
+
+/** A database named by host, port and name (no credentials): what the folder's mark holds. */
+export function databaseIdentity(databaseUrl: string): string {
+  const url = new URL(databaseUrl);
+  return `${url.hostname}:${url.port || '5432'}${url.pathname}`;
+}
+
+/**
+ * Whether the folder belongs to this database: a folder without a mark is marked now; a folder
+ * marked for another database (a server pointed at the wrong folder) is never swept.
+ */
+async function ownsFolder(root: string, identity: string): Promise<boolean> {
+  const mark = path.join(root, OWNER_MARK);
+  try {
+    return (await readFile(mark, 'utf8')).trim() === identity;
+  } catch (error) {
+    if ((error as NodeJS.ErrnoException).code !== 'ENOENT') throw error;
+    await mkdir(root, { recursive: true });
+    await writeFile(mark, `${identity}\n`, { flag: 'wx' }).catch(() => undefined);
+    return (await readFile(mark, 'utf8')).trim() === identity;
+  }
+}
+
 /**
  * Makes the photo folder agree with the rows: every file a row claims is published, every file
  * no row claims goes. Only files last changed before `before` are touched: at start that is the
@@ -25,11 +52,20 @@ const BATCH = 500;
 export async function sweepPhotoStorage(deps: {
   dataSource: DataSource;
   storage: LocalFolderStorage;
+  /** `databaseIdentity(DATABASE_URL)`: the folder is swept only when it is marked for it. */
+  database: string;
   before: Date;
   logger: Logger;
 }): Promise<PhotoSweepReport> {
   const { storage, before } = deps;
   const report: PhotoSweepReport = { published: 0, orphans: 0, pending: 0, strays: 0 };
+  if (!(await ownsFolder(storage.root, deps.database))) {
+    deps.logger.warn(
+      { uploadsDir: storage.root, database: deps.database },
+      `the photo folder is marked for another database (${OWNER_MARK}); not swept`,
+    );
+    return report;
+  }
   const repo = new PhotoRepository(deps.dataSource.manager);
 
   let batch: { key: string; pending: boolean }[] = [];

@@ -1,4 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import net from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
@@ -20,6 +22,8 @@ export interface SpawnedServer {
  * port, with the test configuration; resolves once it logs that it is listening.
  */
 export async function spawnServer(env: Record<string, string> = {}): Promise<SpawnedServer> {
+  // Its own photo folder: the start sweep must never judge the repo's uploads-dev by the test database.
+  const uploadsDir = mkdtempSync(path.join(os.tmpdir(), 'driftmark-spawned-uploads-'));
   const child = spawn(process.execPath, ['--import', 'tsx', path.join(repoRoot, 'api', 'src', 'server.ts')], {
     cwd: repoRoot,
     env: {
@@ -32,6 +36,7 @@ export async function spawnServer(env: Record<string, string> = {}): Promise<Spa
       LOG_LEVEL: 'info',
       SMTP_URL: '',
       MAIL_CAPTURE_DIR: '',
+      UPLOADS_DIR: uploadsDir,
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
@@ -40,7 +45,10 @@ export async function spawnServer(env: Record<string, string> = {}): Promise<Spa
   child.stdout!.on('data', (chunk: Buffer) => (out += chunk.toString('utf8')));
   child.stderr!.on('data', (chunk: Buffer) => (out += chunk.toString('utf8')));
   const exited = new Promise<number | string>((resolve) =>
-    child.on('exit', (code, signal) => resolve(code ?? signal ?? 'unknown')),
+    child.on('exit', (code, signal) => {
+      rmSync(uploadsDir, { recursive: true, force: true });
+      resolve(code ?? signal ?? 'unknown');
+    }),
   );
   const port = await new Promise<number>((resolve, reject) => {
     const check = () => {
