@@ -21,7 +21,7 @@ beforeAll(async () => {
     config: t.config,
     dataSource: t.dataSource,
     logger: createLogger('silent'),
-    bodyLimits: { jsonBytes: JSON_BYTES, anonymousMs: 300, signedInMs: 5_000 },
+    bodyLimits: { jsonBytes: JSON_BYTES, anonymousMs: 1_000, signedInMs: 5_000 },
   });
   server = http.createServer(app);
   await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
