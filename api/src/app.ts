@@ -6,6 +6,7 @@ import type { Config } from './config.js';
 import type { AppContext } from './context.js';
 import { configureNotifications } from './services/notify.service.js';
 import { createLogger, type Logger } from './logger.js';
+import { bodyLimits, DEFAULT_BODY_LIMITS, jsonBody, type BodyLimits } from './middleware/body.js';
 import { originCheck } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/errors.js';
 import { RateLimits } from './middleware/rate-limit.js';
@@ -34,9 +35,6 @@ import { teamRouter } from './routes/team.routes.js';
 import { trendsRouter } from './routes/trends.routes.js';
 import { weeklyCheckInsRouter } from './routes/weekly-check-ins.routes.js';
 
-/** Largest JSON body accepted (photos go through multipart uploads, not JSON). */
-const JSON_LIMIT = '100kb';
-
 /** Builds the Express app (no listen): the API under /api and, when built, the web app. */
 export function createApp(deps: {
   config: Config;
@@ -44,6 +42,8 @@ export function createApp(deps: {
   logger?: Logger;
   /** Where "now" comes from (default: the system clock); tests pass a fixed one. */
   clock?: () => Date;
+  /** Body size and time limits (default `DEFAULT_BODY_LIMITS`; tests shorten the times). */
+  bodyLimits?: BodyLimits;
 }): express.Express {
   const { config, dataSource } = deps;
   const logger = deps.logger ?? createLogger(config.logLevel);
@@ -65,7 +65,11 @@ export function createApp(deps: {
   // JSON, CSV and the app's HTML go out compressed when the client accepts it (gzip or deflate;
   // compressible types only, so photos and zips pass through). Built assets are precompressed.
   app.use(compression());
-  app.use(express.json({ limit: JSON_LIMIT }));
+  // Size and time limits before and while reading; JSON (at most 100 kB) read by our own reader so a
+  // body over the limit is cut off, not read to its end. Photos go through multipart uploads.
+  const bodyLimitsSet = deps.bodyLimits ?? DEFAULT_BODY_LIMITS;
+  app.use(bodyLimits(bodyLimitsSet));
+  app.use(jsonBody(bodyLimitsSet));
   app.use(cookieParser());
   app.use(originCheck(config));
 

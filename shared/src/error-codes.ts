@@ -12,6 +12,8 @@ export const ERROR_CODES = {
   conflict: 409,
   /** A save met guardrail warnings the coach has not acknowledged; `fields` lists them by key. */
   guardrails_unacknowledged: 409,
+  /** The request body did not arrive in time (a stalled or trickling client). */
+  request_timeout: 408,
   token_invalid: 410,
   payload_too_large: 413,
   unsupported_media_type: 415,

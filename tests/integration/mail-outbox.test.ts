@@ -238,6 +238,55 @@ describe('mail worker restarts', () => {
   });
 });
 
+describe('a send cut off by a kill', () => {
+  /** What a worker killed mid-send leaves: the row claimed (attempt counted), its lease `lease` from now. */
+  async function claimedBy(outboxId: string, lease: string): Promise<void> {
+    await t.dataSource.query(
+      `UPDATE outbox_messages SET status = 'sending', attempts = attempts + 1,
+              sending_until = now() + $2::interval WHERE id = $1`,
+      [outboxId, lease],
+    );
+  }
+
+  it('is not sent again while the claiming worker’s lease runs', async () => {
+    // A slow poller (next fetch in 30 s) lets the mail get its job without being sent.
+    const sleepy = await startWorker({ pollingIntervalSeconds: 30 });
+    await sleep(500);
+    const to = newAddress();
+    const row = await t.dataSource.transaction((manager) => queueMail(manager, invitation(to).mail));
+    expect(await jobStates(row.id)).toEqual(['created']);
+    await claimedBy(row.id, '1 hour');
+    await sleepy.stop();
+    const worker = await startWorker();
+    // Its job ran and found the row claimed; the sweep finds nothing to enqueue.
+    await eventually(
+      () => jobStates(row.id),
+      (states) => states.length === 1 && states[0] === 'completed',
+    );
+    expect(await worker.sweep()).toBe(0);
+    expect(await mailsTo(to)).toHaveLength(0);
+    expect(await outboxRows(to)).toMatchObject([{ status: 'sending', attempts: 1 }]);
+  });
+
+  it('goes out once more after the lease, the cut-off attempt counted, with the SMTP answer recorded', async () => {
+    const to = newAddress();
+    const row = await t.dataSource.transaction((manager) => queueMail(manager, invitation(to).mail));
+    await claimedBy(row.id, '-1 second');
+    await startWorker();
+    await waitForMail(captureDir, (m) => m.to.includes(to), 15_000);
+    const [sent] = await eventually(
+      () => outboxRows(to),
+      (rows) => rows[0]?.status === 'sent',
+    );
+    expect(sent).toMatchObject({ status: 'sent', attempts: 2, last_error: null });
+    const answers = (await t.dataSource.query('SELECT smtp_response FROM outbox_messages WHERE id = $1', [
+      row.id,
+    ])) as { smtp_response: string }[];
+    expect(answers[0]?.smtp_response).toMatch(/^250\b/);
+    expect(await mailsTo(to)).toHaveLength(1);
+  });
+});
+
 describe('SMTP failures', () => {
   it('records a failed attempt, retries with backoff and delivers once the server is back', async () => {
     const port = smtp.port;

@@ -1,4 +1,12 @@
-import { mkdtempSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import {
+  existsSync,
+  mkdirSync,
+  mkdtempSync,
+  readdirSync,
+  readFileSync,
+  rmSync,
+  writeFileSync,
+} from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import zlib from 'node:zlib';
@@ -6,13 +14,19 @@ import { LIMITS, RELAXED_POSES } from '@driftmark/shared';
 import sharp from 'sharp';
 import request, { type Agent } from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { LocalFolderStorage, type StorageAdapter } from '../../api/src/adapters/storage.js';
+import { LocalFolderStorage, newStorageKey, type StorageAdapter } from '../../api/src/adapters/storage.js';
 import { ConditionPhoto } from '../../api/src/entities/condition-photo.entity.js';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { todayIn } from '../../api/src/lib/dates.js';
 import { createLogger } from '../../api/src/logger.js';
-import { uploadTempDir } from '../../api/src/middleware/upload.js';
+import { sweepUploadTemp, uploadTempDir } from '../../api/src/middleware/upload.js';
 import { AthleteRepository, type AthleteWithPeople } from '../../api/src/repositories/athlete.repository.js';
+import { PhotoRepository } from '../../api/src/repositories/photo.repository.js';
+import {
+  databaseIdentity,
+  OWNER_MARK,
+  sweepPhotoStorage,
+} from '../../api/src/services/photo-sweep.service.js';
 import { PhotoService } from '../../api/src/services/photo.service.js';
 import { createAthlete, shareAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
@@ -211,12 +225,16 @@ describe('uploading', () => {
     const display = await fetchBytes(agent, big.urls.display);
     expect(display.status).toBe(200);
     expect(display.headers['content-type']).toBe('image/jpeg');
-    expect(display.headers['cache-control']).toMatch(/^private, max-age=\d+$/);
+    // Private images: no browser or proxy keeps them (issue 12, item 7).
+    expect(display.headers['cache-control']).toBe('no-store');
+    expect(display.headers.pragma).toBe('no-cache');
     expect(display.headers['x-content-type-options']).toBe('nosniff');
     const meta = await sharp(display.body as Buffer).metadata();
     expect([meta.format, meta.width, meta.height]).toEqual(['jpeg', 1600, 1200]);
 
     const thumb = await fetchBytes(agent, big.urls.thumb);
+    expect(thumb.headers['cache-control']).toBe('no-store');
+    expect(thumb.headers.pragma).toBe('no-cache');
     const thumbMeta = await sharp(thumb.body as Buffer).metadata();
     expect([thumbMeta.width, thumbMeta.height]).toEqual([320, 240]);
 
@@ -445,11 +463,13 @@ describe('failures after files were written', () => {
     const local = new LocalFolderStorage(uploadsDir);
     let puts = 0;
     const flaky: StorageAdapter = {
-      put: async (key, data, type) => {
+      put: (key, data, type) => local.put(key, data, type),
+      stage: async (key, data, type) => {
         puts += 1;
         if (puts === 3) throw new Error('disk full');
-        await local.put(key, data, type);
+        await local.stage(key, data, type);
       },
+      publish: (key) => local.publish(key),
       get: (key) => local.get(key),
       delete: (key) => local.delete(key),
       exists: (key) => local.exists(key),
@@ -639,5 +659,112 @@ describe('team poses', () => {
     // Another team sees only its own list.
     const outsider = await as(w.outsider);
     expect((await outsider.get('/api/team/poses')).body.data).toEqual([...RELAXED_POSES]);
+  });
+});
+
+describe('files and rows after a kill', () => {
+  /** Every file counts as older than this: the sweep's cut-off, far in the future. */
+  const AFTER_EVERYTHING = new Date(8.64e15);
+
+  it('publishes the files a committed row claims and removes every file no row claims', async () => {
+    const athleteId = w.athlete.athlete.id;
+    const storage = new LocalFolderStorage(uploadsDir);
+    const database = databaseIdentity(t.config.databaseUrl);
+    const sweep = (before: Date, db = database) =>
+      sweepPhotoStorage({
+        dataSource: t.dataSource,
+        storage,
+        database: db,
+        before,
+        logger: createLogger('silent'),
+      });
+
+    // A finished upload: row and published files.
+    const agent = await as(w.athlete.user);
+    const done = await upload(agent, athleteId, [{ data: await jpeg(), name: 'done.jpg' }]);
+    expect(done.status).toBe(201);
+    const [kept] = done.body.data as { id: string; urls: { thumb: string; display: string } }[];
+
+    // Killed before the commit: staged files, no row.
+    const data = await jpeg(20, 20, '#222222');
+    const beforeCommit = [newStorageKey(athleteId, 'image/jpeg'), newStorageKey(athleteId, 'image/jpeg')];
+    for (const key of beforeCommit) await storage.stage(key, data, 'image/jpeg');
+
+    // Killed after the commit, before the publish: staged files and their row.
+    const afterCommit = {
+      thumb: newStorageKey(athleteId, 'image/jpeg'),
+      display: newStorageKey(athleteId, 'image/jpeg'),
+    };
+    for (const key of Object.values(afterCommit)) await storage.stage(key, data, 'image/jpeg');
+    const [committed] = await new PhotoRepository(t.dataSource.manager).insertMany([
+      {
+        athleteId,
+        localDate: today(),
+        pose: 'Front relaxed',
+        width: 20,
+        height: 20,
+        thumbKey: afterCommit.thumb,
+        displayKey: afterCommit.display,
+        contentType: 'image/jpeg',
+        bytes: data.length * 2,
+        contentHash: 'c'.repeat(64),
+      },
+    ]);
+    // The unstaged file is not served yet.
+    expect((await agent.get(`/api/photos/${committed!.id}/display`)).status).toBe(404);
+
+    // Killed between a row's delete and its files': a published file no row claims.
+    const orphan = newStorageKey(athleteId, 'image/jpeg');
+    await storage.put(orphan, data, 'image/jpeg');
+    // An older version's temp file.
+    const stray = path.join(uploadsDir, athleteId, `${'d'.repeat(32)}.jpg.0a1b2c.tmp`);
+    writeFileSync(stray, data);
+
+    // Files changed after the cut-off (an upload still running elsewhere) are left alone.
+    expect(await sweep(new Date(0))).toEqual({ published: 0, orphans: 0, pending: 0, strays: 0 });
+    // The first sweep marked the folder for this database; a server on another database leaves it.
+    expect(readFileSync(path.join(uploadsDir, OWNER_MARK), 'utf8').trim()).toBe(database);
+    expect(await sweep(AFTER_EVERYTHING, '127.0.0.1:1/another')).toEqual({
+      published: 0,
+      orphans: 0,
+      pending: 0,
+      strays: 0,
+    });
+    expect(storedFiles().filter((f) => !f.endsWith(OWNER_MARK))).toHaveLength(8);
+
+    expect(await sweep(AFTER_EVERYTHING)).toEqual({ published: 2, orphans: 1, pending: 2, strays: 1 });
+    const claimed = (await t.dataSource.getRepository(ConditionPhoto).find()).flatMap((p) => [
+      p.thumbKey,
+      p.displayKey,
+    ]);
+    expect(claimed).toHaveLength(4);
+    expect(
+      storedFiles()
+        .map((f) => path.relative(uploadsDir, f))
+        .filter((f) => f !== OWNER_MARK)
+        .sort(),
+    ).toEqual(claimed.sort());
+
+    expect((await agent.get(kept!.urls.display)).status).toBe(200);
+    expect((await agent.get(`/api/photos/${committed!.id}/display`)).status).toBe(200);
+    expect(await sweep(AFTER_EVERYTHING)).toEqual({ published: 0, orphans: 0, pending: 0, strays: 0 });
+  });
+
+  it('empties the upload temp folders of processes that are gone and keeps those of running ones', async () => {
+    const root = path.dirname(uploadTempDir());
+    // Above Linux's largest pid_max (2^22), so no process can have it.
+    const gone = path.join(root, '4194399');
+    mkdirSync(path.join(gone, 'a-killed-upload'), { recursive: true });
+    writeFileSync(path.join(gone, 'a-killed-upload', 'x.upload'), 'partial');
+    const running = path.join(root, String(process.ppid));
+    const madeRunning = !existsSync(running);
+    mkdirSync(running, { recursive: true });
+    try {
+      expect(await sweepUploadTemp()).toBeGreaterThanOrEqual(1);
+      expect(existsSync(gone)).toBe(false);
+      expect(existsSync(running)).toBe(true);
+    } finally {
+      if (madeRunning) rmSync(running, { recursive: true, force: true });
+    }
   });
 });

@@ -1,6 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import { createReadStream } from 'node:fs';
-import { mkdir, rename, rm, stat, unlink, writeFile } from 'node:fs/promises';
+import { mkdir, readdir, rename, rm, stat, unlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
 
@@ -16,13 +16,33 @@ export interface StoredObject {
  * from a request; a local folder backs it today, an object store could tomorrow.
  */
 export interface StorageAdapter {
+  /** Writes and publishes at once (the seed, which has no row to wait for). */
   put(key: string, data: Buffer, contentType: string): Promise<void>;
+  /**
+   * Writes the object under its pending name: `get` does not see it until `publish`. Uploads stage
+   * their files, commit the rows, then publish, so a kill at any point leaves either a pending file
+   * (swept at the next start) or a row with its file.
+   */
+  stage(key: string, data: Buffer, contentType: string): Promise<void>;
+  /** Makes a staged object visible under its key; an object already published is fine. */
+  publish(key: string): Promise<void>;
   /** Opens the object; null when it does not exist. */
   get(key: string): Promise<StoredObject | null>;
-  /** Removes the object; removing a missing key is not an error. */
+  /** Removes the object and any staged copy of it; removing a missing key is not an error. */
   delete(key: string): Promise<void>;
   exists(key: string): Promise<boolean>;
 }
+
+/** One entry found by `LocalFolderStorage.list` (the start sweep). */
+export interface ListedObject {
+  key: string;
+  /** Staged and not yet published. */
+  pending: boolean;
+  modifiedAt: Date;
+}
+
+/** The suffix of a staged object's file. */
+const PENDING_SUFFIX = '.pending';
 
 /** `<folder>/<32 hex>.<ext>`: folder and extension from the server, the name random. */
 const KEY_PATTERN = /^[a-z0-9-]{1,64}\/[0-9a-f]{32}\.(jpg|webp)$/;
@@ -47,7 +67,10 @@ function isMissing(error: unknown): boolean {
   return (error as NodeJS.ErrnoException | null)?.code === 'ENOENT';
 }
 
-/** Files under one root folder (UPLOADS_DIR); a write lands under a temporary name, then is renamed. */
+/**
+ * Files under one root folder (UPLOADS_DIR), `<athlete id>/<32 hex>.<ext>`; a staged file carries
+ * `.pending` until it is published (renamed).
+ */
 export class LocalFolderStorage implements StorageAdapter {
   readonly root: string;
 
@@ -64,20 +87,79 @@ export class LocalFolderStorage implements StorageAdapter {
   }
 
   async put(key: string, data: Buffer, contentType: string): Promise<void> {
+    await this.stage(key, data, contentType);
+    await this.publish(key);
+  }
+
+  async stage(key: string, data: Buffer, contentType: string): Promise<void> {
     const target = this.pathOf(key);
     if (CONTENT_TYPES[key.split('.').pop() ?? ''] !== contentType) {
       throw new Error(`Storage key ${key} does not match ${contentType}`);
     }
     await mkdir(path.dirname(target), { recursive: true });
-    const temp = `${target}.${randomBytes(6).toString('hex')}.tmp`;
+    const pending = target + PENDING_SUFFIX;
     try {
       // `wx`: never overwrite; a random name colliding means something is badly wrong.
-      await writeFile(temp, data, { flag: 'wx', mode: 0o640 });
-      await rename(temp, target);
+      await writeFile(pending, data, { flag: 'wx', mode: 0o640 });
     } catch (error) {
-      await rm(temp, { force: true });
+      if ((error as NodeJS.ErrnoException).code !== 'EEXIST') await rm(pending, { force: true });
       throw error;
     }
+  }
+
+  async publish(key: string): Promise<void> {
+    const target = this.pathOf(key);
+    try {
+      await rename(target + PENDING_SUFFIX, target);
+    } catch (error) {
+      // Published already (a sweep or an earlier call): nothing left to do.
+      if (isMissing(error) && (await this.exists(key))) return;
+      throw error;
+    }
+  }
+
+  /**
+   * Every object and staged object under the root, with its key (files that are not ours, such as
+   * the temp names of an older version, come back with `key: null` and their path).
+   */
+  async *list(): AsyncGenerator<ListedObject | { key: null; path: string; modifiedAt: Date }> {
+    let folders: string[];
+    try {
+      folders = await readdir(this.root);
+    } catch (error) {
+      if (isMissing(error)) return;
+      throw error;
+    }
+    for (const folder of folders) {
+      let names: string[];
+      try {
+        names = await readdir(path.join(this.root, folder));
+      } catch {
+        continue; // a file at the top level, or gone meanwhile
+      }
+      for (const name of names) {
+        const full = path.join(this.root, folder, name);
+        let modifiedAt: Date;
+        try {
+          const info = await stat(full);
+          if (!info.isFile()) continue;
+          modifiedAt = info.mtime;
+        } catch {
+          continue;
+        }
+        const pending = name.endsWith(PENDING_SUFFIX);
+        const key = `${folder}/${pending ? name.slice(0, -PENDING_SUFFIX.length) : name}`;
+        if (KEY_PATTERN.test(key)) yield { key, pending, modifiedAt };
+        else yield { key: null, path: full, modifiedAt };
+      }
+    }
+  }
+
+  /** Removes a file `list` returned without a key (inside the root only). */
+  async removeStray(file: string): Promise<void> {
+    const full = path.resolve(file);
+    if (!full.startsWith(this.root + path.sep)) throw new Error(`Not under the storage root: ${file}`);
+    await rm(full, { force: true });
   }
 
   async get(key: string): Promise<StoredObject | null> {
@@ -98,10 +180,13 @@ export class LocalFolderStorage implements StorageAdapter {
   }
 
   async delete(key: string): Promise<void> {
-    try {
-      await unlink(this.pathOf(key));
-    } catch (error) {
-      if (!isMissing(error)) throw error;
+    const target = this.pathOf(key);
+    for (const file of [target, target + PENDING_SUFFIX]) {
+      try {
+        await unlink(file);
+      } catch (error) {
+        if (!isMissing(error)) throw error;
+      }
     }
   }
 

@@ -1,7 +1,7 @@
 import { Check, Column, Entity, Index } from 'typeorm';
 import { BaseRecord } from './base.entity.js';
 
-export const OUTBOX_STATUSES = ['pending', 'sent', 'failed'] as const;
+export const OUTBOX_STATUSES = ['pending', 'sending', 'sent', 'failed'] as const;
 export type OutboxStatus = (typeof OUTBOX_STATUSES)[number];
 
 /**
@@ -9,7 +9,7 @@ export type OutboxStatus = (typeof OUTBOX_STATUSES)[number];
  * caused it, so a rolled-back change never mails and a committed one is never lost.
  */
 @Entity({ name: 'outbox_messages' })
-@Check('CHK_outbox_messages_status', `"status" IN ('pending', 'sent', 'failed')`)
+@Check('CHK_outbox_messages_status', `"status" IN ('pending', 'sending', 'sent', 'failed')`)
 @Index('IDX_outbox_messages_status_created_at', ['status', 'createdAt'])
 export class OutboxMessage extends BaseRecord {
   /** What kind of mail (e.g. `invitation`, `password_reset`). */
@@ -39,6 +39,14 @@ export class OutboxMessage extends BaseRecord {
 
   @Column({ name: 'sent_at', type: 'timestamptz', nullable: true })
   sentAt: Date | null;
+
+  /** While `sending`: until when the claiming worker owns the send (after that it was cut off). */
+  @Column({ name: 'sending_until', type: 'timestamptz', nullable: true })
+  sendingUntil: Date | null;
+
+  /** The SMTP server's answer when it accepted the message (recorded with `sent`). */
+  @Column({ name: 'smtp_response', type: 'varchar', length: 500, nullable: true })
+  smtpResponse: string | null;
 
   /** Extra headers sent with the mail (List-Unsubscribe on reminders), or null. */
   @Column({ type: 'jsonb', nullable: true })

@@ -2,21 +2,25 @@
  * Delivers the mail outbox.
  *
  * Each outbox row gets a `mail-send` job (inserted with the row, or later by the sweep). The
- * handler locks the row (FOR UPDATE SKIP LOCKED, pending only), sends it over SMTP with the
- * row's own Message-ID and marks it sent, all inside one transaction. A failed send records the
- * attempt and the error, then rethrows so pg-boss retries with exponential backoff; after the
- * last attempt the row is marked failed.
+ * handler claims the row in its own short transaction (pending only, FOR UPDATE SKIP LOCKED):
+ * status `sending`, attempts + 1, a lease as long as the job's expiry. The claim commits before the
+ * send, so every attempt is counted, a kill included. Then it sends over SMTP with the row's own
+ * Message-ID, holding no transaction, and marks the row `sent` with the server's answer in the next
+ * statement (retried within the lease while the database is away). A failed send records the
+ * error and puts the row back to pending, then rethrows so pg-boss retries with exponential
+ * backoff; after the last attempt the row is marked failed.
  *
  * No loss: a job only exists for a committed row, and the sweep (at start and every minute)
- * enqueues any pending row without a live job, e.g. after a crash between commit and enqueue,
- * or when the row was written by a process that does not run the queue.
+ * enqueues any pending row without a live job, e.g. after a crash between commit and enqueue, or
+ * when the row was written by a process that does not run the queue. A row still `sending` after
+ * its lease was cut off mid-send; the sweep (or the job's own retry) sends it again.
  *
- * No double send in normal operation: a row is only sent while its lock is held, and only while
- * it is still pending, so a second job for the same row (sweep vs. original, two workers) finds
- * it locked or already sent and ends. The one remaining edge is inherent to SMTP: if the server
- * accepted the message but the process dies (or the database fails) before the "sent" update
- * commits, the row stays pending and is sent again later. Delivery is therefore at least once;
- * the repeat carries the same Message-ID, which lets receiving systems drop the duplicate.
+ * No double send in normal operation: only a claimed row is sent, and a row is claimed only while
+ * pending (or its lease is over), so a second job for the same row (sweep vs. original, two
+ * workers) finds it claimed or sent and ends. What remains at least once is inherent to SMTP: a
+ * message the server accepted while the process died (or the database stayed away for the whole
+ * lease) before `sent` was written goes out again; the repeat carries the same Message-ID, which
+ * lets receiving systems drop the duplicate.
  */
 import type PgBoss from 'pg-boss';
 import type { DataSource } from 'typeorm';
@@ -25,9 +29,10 @@ import type { Config } from '../config.js';
 import type { Logger } from '../logger.js';
 import {
   findOrphanedPendingIds,
-  lockPendingMessage,
+  claimMessage,
   markMessageSent,
   recordFailedAttempt,
+  releaseExpiredClaims,
 } from '../mail/outbox.repository.js';
 import {
   clearRunningQueue,
@@ -81,6 +86,8 @@ export interface MailWorker {
 
 const UUID_PATTERN = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const SWEEP_BATCH = 500;
+/** Pause between tries to mark an accepted message sent while the database is away. */
+const MARK_SENT_RETRY_MS = 1_000;
 // Two sweeps at once (two processes) would enqueue the same rows twice: harmless, but wasteful.
 const SWEEP_LOCK_KEY = 'driftmark:mail-sweep';
 
@@ -110,30 +117,41 @@ export async function startMailWorker(opts: MailWorkerOptions): Promise<MailWork
     outboxId: string,
     job: PgBoss.JobWithMetadata<MailSendJob>,
   ): Promise<DeliveryOutcome> {
-    return dataSource.transaction(async (manager) => {
-      const message = await lockPendingMessage(manager, outboxId);
-      if (!message) return { kind: 'skipped' };
-      const attempts = message.attempts + 1;
+    // 1. Claim and record the attempt, committed before any byte goes to the SMTP server.
+    const leaseUntil = new Date(Date.now() + tuning.expireInSeconds * 1000);
+    const claim = await dataSource.transaction((manager) => claimMessage(manager, outboxId, leaseUntil));
+    if (!claim) return { kind: 'skipped' };
+    const { message, attempts } = claim;
+    // 2. Send, holding no transaction.
+    let response: string;
+    try {
+      ({ response } = await mailer.send({
+        to: message.toAddress,
+        from: config.mailFrom,
+        subject: message.subject,
+        text: message.textBody,
+        html: message.htmlBody ?? '',
+        messageId: message.messageId ?? `<${message.id}@driftmark.local>`,
+        ...(message.headers ? { headers: message.headers } : {}),
+      }));
+    } catch (err) {
+      const error = err instanceof Error ? err : new Error(String(err));
+      const final = job.retryCount >= job.retryLimit || attempts >= maxAttempts;
+      await recordFailedAttempt(dataSource.manager, message.id, { error: error.message, final });
+      return { kind: 'failed', attempts, final, error };
+    }
+    // 3. Accepted: marked sent in the very next statement. Should the database be away right now,
+    // keep trying within the lease, so a database restart does not turn into a second send.
+    for (let tries = 1; ; tries++) {
       try {
-        await mailer.send({
-          to: message.toAddress,
-          from: config.mailFrom,
-          subject: message.subject,
-          text: message.textBody,
-          html: message.htmlBody ?? '',
-          messageId: message.messageId ?? `<${message.id}@driftmark.local>`,
-          ...(message.headers ? { headers: message.headers } : {}),
-        });
+        await markMessageSent(dataSource.manager, message.id, response);
+        return { kind: 'sent', attempts };
       } catch (err) {
-        const error = err instanceof Error ? err : new Error(String(err));
-        const final = job.retryCount >= job.retryLimit || attempts >= maxAttempts;
-        await recordFailedAttempt(manager, message.id, { attempts, error: error.message, final });
-        return { kind: 'failed', attempts, final, error };
+        if (Date.now() + MARK_SENT_RETRY_MS >= leaseUntil.getTime()) throw err;
+        log.warn({ err, outboxId, tries }, 'mail accepted by SMTP but not yet marked sent; retrying');
+        await new Promise((resolve) => setTimeout(resolve, MARK_SENT_RETRY_MS));
       }
-      // Same transaction as the send's row lock: see the module comment for the one edge.
-      await markMessageSent(manager, message.id, attempts);
-      return { kind: 'sent', attempts };
-    });
+    }
   }
 
   async function handleSend(jobs: PgBoss.JobWithMetadata<MailSendJob>[]): Promise<void> {
@@ -164,6 +182,8 @@ export async function startMailWorker(opts: MailWorkerOptions): Promise<MailWork
         SWEEP_LOCK_KEY,
       ])) as { locked: boolean }[];
       if (!lock?.locked) return 0;
+      const released = await releaseExpiredClaims(manager);
+      if (released > 0) log.warn({ released }, 'mail cut off while sending goes out again');
       const ids = await findOrphanedPendingIds(
         manager,
         { schema: QUEUE_SCHEMA, queueName: MAIL_SEND_QUEUE },

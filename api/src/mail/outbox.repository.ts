@@ -23,40 +23,82 @@ export async function insertPendingMessage(
 }
 
 /**
- * Locks a pending message for delivery. Returns null when it is not pending any more (sent or
- * failed), is gone, or another worker holds the lock right now (SKIP LOCKED: that worker is
- * delivering it, so this one must not).
+ * Claims a message for one delivery attempt, in the caller's (short) transaction: a pending
+ * message, or one left `sending` past its lease (a worker cut off mid-send). Locked with SKIP
+ * LOCKED, so a message another worker is claiming right now is not claimed twice. The claim
+ * records the attempt (attempts + 1) and a lease until `leaseUntil`; null when there is nothing to
+ * claim (sent, failed, gone, or being sent by a worker whose lease still runs).
  */
-export async function lockPendingMessage(manager: EntityManager, id: string): Promise<OutboxMessage | null> {
-  return manager
+export async function claimMessage(
+  manager: EntityManager,
+  id: string,
+  leaseUntil: Date,
+): Promise<{ message: OutboxMessage; attempts: number } | null> {
+  const message = await manager
     .getRepository(OutboxMessage)
     .createQueryBuilder('message')
     .setLock('pessimistic_write')
     .setOnLocked('skip_locked')
     .where('message.id = :id', { id })
-    .andWhere('message.status = :status', { status: 'pending' })
+    .andWhere(
+      "(message.status = 'pending' OR (message.status = 'sending' AND message.sending_until < now()))",
+    )
     .getOne();
-}
-
-export async function markMessageSent(manager: EntityManager, id: string, attempts: number): Promise<void> {
+  if (!message) return null;
+  const attempts = message.attempts + 1;
   await manager
     .getRepository(OutboxMessage)
-    .update({ id }, { status: 'sent', sentAt: new Date(), attempts, lastError: null });
+    .update({ id }, { status: 'sending', attempts, sendingUntil: leaseUntil });
+  return { message, attempts };
 }
 
+/** Marks a claimed message sent with the SMTP server's answer, in one statement. */
+export async function markMessageSent(
+  manager: EntityManager,
+  id: string,
+  smtpResponse: string,
+): Promise<void> {
+  await manager.getRepository(OutboxMessage).update(
+    { id, status: 'sending' },
+    {
+      status: 'sent',
+      sentAt: new Date(),
+      sendingUntil: null,
+      smtpResponse: smtpResponse.slice(0, 500),
+      lastError: null,
+    },
+  );
+}
+
+/** Ends a claimed attempt that failed: back to pending (retried) or, after the last, failed. */
 export async function recordFailedAttempt(
   manager: EntityManager,
   id: string,
-  failure: { attempts: number; error: string; final: boolean },
+  failure: { error: string; final: boolean },
 ): Promise<void> {
   await manager.getRepository(OutboxMessage).update(
-    { id },
+    { id, status: 'sending' },
     {
-      attempts: failure.attempts,
       lastError: failure.error.slice(0, 2000),
+      sendingUntil: null,
       status: failure.final ? 'failed' : 'pending',
     },
   );
+}
+
+/**
+ * Messages left `sending` past their lease (the worker was killed mid-send, so whether the SMTP
+ * server accepted them is unknown) go back to pending, to be sent again: the at-least-once edge.
+ */
+export async function releaseExpiredClaims(manager: EntityManager): Promise<number> {
+  const rows: unknown[] = await manager.query(
+    `UPDATE outbox_messages
+        SET status = 'pending', sending_until = NULL,
+            last_error = 'cut off while sending; no SMTP answer was recorded'
+      WHERE status = 'sending' AND sending_until < now()
+      RETURNING id`,
+  );
+  return rows.length;
 }
 
 /**

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { z } from 'zod';
-import { zodFields } from './errors.js';
+import { isDatabaseUnavailable, zodFields } from './errors.js';
 
 describe('zodFields', () => {
   it('keys issues by dot-joined path, first message per path', () => {
@@ -21,5 +21,55 @@ describe('zodFields', () => {
   it('keeps a root issue out of the fields', () => {
     const result = z.object({ a: z.string() }).safeParse('not an object');
     expect(zodFields(result.error!)).toEqual({ fields: {}, rootMessage: expect.any(String) });
+  });
+});
+
+describe('isDatabaseUnavailable', () => {
+  const withCode = (code: string, message = 'x') => Object.assign(new Error(message), { code });
+
+  it('knows refused and reset sockets and PostgreSQL connection/shutdown SQLSTATEs', () => {
+    // SQLSTATEs from the PostgreSQL manual, appendix A "PostgreSQL Error Codes".
+    for (const code of [
+      'ECONNREFUSED',
+      'ECONNRESET',
+      'ETIMEDOUT',
+      '57P01',
+      '57P02',
+      '57P03',
+      '08006',
+      '53300',
+    ])
+      expect(isDatabaseUnavailable(withCode(code)), code).toBe(true);
+  });
+
+  it('knows the messages pg, pg-pool and TypeORM use without a code', () => {
+    for (const message of [
+      'Connection terminated unexpectedly',
+      'Connection terminated due to connection timeout',
+      'timeout exceeded when trying to connect',
+      'Cannot use a pool after calling end on the pool',
+      'Client has encountered a connection error and is not queryable',
+    ])
+      expect(isDatabaseUnavailable(new Error(message)), message).toBe(true);
+  });
+
+  it('looks inside TypeORM driverError, cause chains and AggregateError', () => {
+    const queryFailed = Object.assign(new Error('terminating connection due to administrator command'), {
+      driverError: withCode('57P01'),
+    });
+    expect(isDatabaseUnavailable(queryFailed)).toBe(true);
+    expect(isDatabaseUnavailable(new Error('outer', { cause: withCode('ECONNREFUSED') }))).toBe(true);
+    expect(
+      isDatabaseUnavailable(new AggregateError([withCode('ECONNREFUSED'), withCode('ECONNREFUSED')], '')),
+    ).toBe(true);
+  });
+
+  it('leaves query mistakes and constraint violations as they are', () => {
+    // 23505 unique_violation, 22P02 invalid_text_representation, 42P01 undefined_table.
+    for (const code of ['23505', '22P02', '42P01'])
+      expect(isDatabaseUnavailable(withCode(code, 'query failed')), code).toBe(false);
+    expect(isDatabaseUnavailable(new Error('boom'))).toBe(false);
+    expect(isDatabaseUnavailable(null)).toBe(false);
+    expect(isDatabaseUnavailable('ECONNREFUSED')).toBe(false);
   });
 });

@@ -1,4 +1,4 @@
-import type { ErrorRequestHandler, RequestHandler } from 'express';
+import type { ErrorRequestHandler, Request, RequestHandler, Response } from 'express';
 import { ZodError } from 'zod';
 import type { ErrorBody } from '@driftmark/shared';
 import { AppError, notFound } from '../errors.js';
@@ -15,6 +15,68 @@ export function zodFields(error: ZodError): { fields: Record<string, string>; ro
   return rootMessage === undefined ? { fields } : { fields, rootMessage };
 }
 
+/** How long a client is asked to wait before trying again while the database is unreachable. */
+export const DB_RETRY_AFTER_SECONDS = 5;
+
+/**
+ * Error codes that mean "the database cannot be reached or is going away", not "the query was
+ * wrong": socket errors from node and pg, and PostgreSQL SQLSTATE classes 08 (connection exception)
+ * and 57P (operator intervention: admin/crash shutdown, cannot connect now) plus 53300 (too many
+ * connections). PostgreSQL manual, appendix A "PostgreSQL Error Codes".
+ */
+const UNAVAILABLE_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  'EHOSTUNREACH',
+  'ENETUNREACH',
+  'EAI_AGAIN',
+  '08000',
+  '08001',
+  '08003',
+  '08004',
+  '08006',
+  '57P01',
+  '57P02',
+  '57P03',
+  '53300',
+]);
+
+/** Messages pg, pg-pool and TypeORM use for a lost, refused or closed connection (they carry no code). */
+const UNAVAILABLE_MESSAGES = [
+  /^Connection terminated/i,
+  /timeout exceeded when trying to connect/i,
+  /Client has encountered a connection error and is not queryable/i,
+  /Cannot use a pool after calling end on the pool/i,
+  /Client was closed and is not queryable/i,
+  /connection is not yet established/i,
+  /Driver not Connected/i,
+];
+
+/**
+ * Whether an error means the database is unreachable (down, restarting, refusing, pool exhausted on
+ * connect), so the request may succeed later: 503 with Retry-After rather than 500. Looks through
+ * TypeORM's `driverError`, `cause` chains and AggregateError's `errors` (node's happy-eyeballs
+ * connect fails with one per address).
+ */
+export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
+  if (!err || typeof err !== 'object' || depth > 5) return false;
+  const e = err as {
+    code?: unknown;
+    message?: unknown;
+    driverError?: unknown;
+    cause?: unknown;
+    errors?: unknown;
+  };
+  if (typeof e.code === 'string' && UNAVAILABLE_CODES.has(e.code)) return true;
+  if (typeof e.message === 'string' && UNAVAILABLE_MESSAGES.some((re) => re.test(e.message as string)))
+    return true;
+  if (isDatabaseUnavailable(e.driverError, depth + 1) || isDatabaseUnavailable(e.cause, depth + 1))
+    return true;
+  return Array.isArray(e.errors) && e.errors.some((inner) => isDatabaseUnavailable(inner, depth + 1));
+}
+
 /** body-parser and http-errors style errors carry `type` and `status`. */
 interface HttpishError {
   type?: string;
@@ -28,6 +90,8 @@ function toAppError(err: unknown): AppError | null {
     const { fields, rootMessage } = zodFields(err);
     return new AppError('validation_failed', rootMessage ?? 'Please check the highlighted fields.', fields);
   }
+  if (isDatabaseUnavailable(err))
+    return new AppError('db_unavailable', 'Driftmark is briefly unavailable. Please try again shortly.');
   if (err && typeof err === 'object') {
     const e = err as HttpishError;
     switch (e.type) {
@@ -54,24 +118,37 @@ function toAppError(err: unknown): AppError | null {
   return null;
 }
 
+/** Sends `err` as the error shape (what `errorHandler` does; for answers made outside the chain). */
+export function sendError(req: Request, res: Response, err: unknown): void {
+  const requestId = typeof req.id === 'string' ? req.id : undefined;
+  const known = toAppError(err);
+  if (!known) req.log.error({ err, requestId }, 'unhandled error');
+  else if (known.code === 'db_unavailable') {
+    req.log.warn({ err, requestId }, 'database unavailable');
+    res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
+  }
+  const appError =
+    known ?? new AppError('internal_error', 'Something went wrong on our side. Please try again.');
+  const body: ErrorBody = {
+    error: {
+      code: appError.code,
+      message: appError.message,
+      ...(appError.fields && Object.keys(appError.fields).length > 0 ? { fields: appError.fields } : {}),
+      ...(requestId ? { requestId } : {}),
+    },
+  };
+  res.status(appError.status).json(body);
+}
+
 /** The one place errors become responses: `{ error: { code, message, fields?, requestId } }`. */
 export function errorHandler(): ErrorRequestHandler {
   return (err: unknown, req, res, next) => {
-    if (res.headersSent) return next(err);
-    const requestId = typeof req.id === 'string' ? req.id : undefined;
-    const known = toAppError(err);
-    if (!known) req.log.error({ err, requestId }, 'unhandled error');
-    const appError =
-      known ?? new AppError('internal_error', 'Something went wrong on our side. Please try again.');
-    const body: ErrorBody = {
-      error: {
-        code: appError.code,
-        message: appError.message,
-        ...(appError.fields && Object.keys(appError.fields).length > 0 ? { fields: appError.fields } : {}),
-        ...(requestId ? { requestId } : {}),
-      },
-    };
-    res.status(appError.status).json(body);
+    if (res.headersSent) {
+      // A body refused mid-read was answered already; what the reader reports afterwards is moot.
+      if (res.locals.bodyRefused === true) return;
+      return next(err);
+    }
+    sendError(req, res, err);
   };
 }
 

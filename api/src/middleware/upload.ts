@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { mkdirSync } from 'node:fs';
-import { rm } from 'node:fs/promises';
+import { readdir, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
 import { LIMITS } from '@driftmark/shared';
@@ -13,7 +13,42 @@ import { AppError } from '../errors.js';
  * removed as each upload ends.
  */
 export function uploadTempDir(): string {
-  return path.join(os.tmpdir(), 'driftmark-uploads', String(process.pid));
+  return path.join(uploadTempRoot(), String(process.pid));
+}
+
+function uploadTempRoot(): string {
+  return path.join(os.tmpdir(), 'driftmark-uploads');
+}
+
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (error) {
+    // EPERM: alive, someone else's.
+    return (error as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/**
+ * At start, before any upload: removes this process's temp folder and those of processes that are
+ * gone (a kill leaves its folder behind); folders of running servers stay. Returns how many went.
+ */
+export async function sweepUploadTemp(): Promise<number> {
+  let names: string[];
+  try {
+    names = await readdir(uploadTempRoot());
+  } catch {
+    return 0;
+  }
+  let removed = 0;
+  for (const name of names) {
+    const pid = Number(name);
+    if (Number.isInteger(pid) && pid > 0 && pid !== process.pid && processAlive(pid)) continue;
+    await rm(path.join(uploadTempRoot(), name), { recursive: true, force: true });
+    removed += 1;
+  }
+  return removed;
 }
 
 /**
@@ -46,8 +81,10 @@ export interface UploadedFile {
 export const FILES_FIELD = 'files';
 
 const MB = 1024 * 1024;
-/** The largest body a refused upload is read to the end for (a full upload plus its fields). */
-const MAX_DRAIN_BYTES = LIMITS.photosPerUpload * LIMITS.photoMaxBytes + MB;
+/** The largest multipart body: a full upload plus its fields. A larger Content-Length is refused unread. */
+export const MAX_UPLOAD_BYTES = LIMITS.photosPerUpload * LIMITS.photoMaxBytes + MB;
+/** The largest body a refused upload is read to the end for. */
+const MAX_DRAIN_BYTES = MAX_UPLOAD_BYTES;
 
 const uploader = multer({
   storage: multer.diskStorage({

@@ -94,4 +94,15 @@ export class PhotoRepository {
   async delete(id: string): Promise<void> {
     await this.manager.delete(ConditionPhoto, { id });
   }
+
+  /** Which of these storage keys a photo row names (as its thumb or its display size). */
+  async claimedKeys(keys: readonly string[]): Promise<Set<string>> {
+    if (keys.length === 0) return new Set();
+    const rows: { key: string }[] = await this.manager.query(
+      `SELECT thumb_key AS key FROM condition_photos WHERE thumb_key = ANY($1)
+       UNION SELECT display_key FROM condition_photos WHERE display_key = ANY($1)`,
+      [keys],
+    );
+    return new Set(rows.map((r) => r.key));
+  }
 }

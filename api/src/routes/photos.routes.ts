@@ -30,10 +30,11 @@ const listQuery = z
   });
 
 /**
- * Browsers may keep a photo for an hour, only for this user (`private`): ids are never reused, and
- * a revoked share stops new fetches at once.
+ * Body photos are never stored by a browser or a proxy (`no-store`; `Pragma` for HTTP/1.0 caches):
+ * after a sign-out or a revoked share a shared device has nothing left to show. The web client keeps
+ * them only in the page's memory (plain `<img>`, no service worker, no persistent cache).
  */
-const PHOTO_CACHE_CONTROL = 'private, max-age=3600';
+const PHOTO_CACHE_CONTROL = 'no-store';
 
 /** Loads the photo, then its athlete, and authorizes `action` on the athlete (404 for outsiders). */
 async function loadPhoto(req: Request, photoId: string, action: AthleteAction) {
@@ -104,6 +105,7 @@ export function photosRouter(): Router {
     res.setHeader('Content-Type', file.contentType);
     res.setHeader('Content-Length', String(file.size));
     res.setHeader('Cache-Control', PHOTO_CACHE_CONTROL);
+    res.setHeader('Pragma', 'no-cache');
     res.setHeader('X-Content-Type-Options', 'nosniff');
     res.setHeader('Content-Disposition', 'inline');
     try {

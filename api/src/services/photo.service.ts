@@ -14,7 +14,7 @@ import { AppError, conflict, forbidden, notFound, validationFailed } from '../er
 import { todayIn } from '../lib/dates.js';
 import type { Logger } from '../logger.js';
 import type { UploadedFile } from '../middleware/upload.js';
-import { zodFields } from '../middleware/errors.js';
+import { isDatabaseUnavailable, zodFields } from '../middleware/errors.js';
 import { presentPhoto, type PhotoView } from '../presenters/photo.presenter.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import {
@@ -86,8 +86,9 @@ export class PhotoService {
 
   /**
    * Stores uploaded photos of `athlete` (the caller has authorized `log` and checked consent).
-   * Every file is checked and re-encoded first; then all sizes are written; then the rows, in one
-   * transaction. Any failure removes every file written so far and leaves no row. A file whose
+   * Every file is checked and re-encoded first; then all sizes are staged; then the rows, in one
+   * transaction; then the files are published. Any failure before the commit removes the staged
+   * files and leaves no row. A file whose
    * bytes are already stored for that day and pose comes back as the existing photo.
    */
   async upload(
@@ -136,17 +137,19 @@ export class PhotoService {
         fresh.set(photo.contentHash, photo);
     }
 
-    // 3. Write every size, then 4. the rows; on any failure remove what was written.
-    const written: string[] = [];
+    // 3. Stage every size (pending names), 4. commit the rows, 5. publish the files. A kill before
+    // the commit leaves pending files no row claims; after it, rows whose files the start sweep
+    // publishes (`sweepPhotoStorage`). A refused commit removes what was staged.
+    const staged: string[] = [];
+    const rows: NewConditionPhoto[] = [];
     try {
-      const rows: NewConditionPhoto[] = [];
       for (const photo of fresh.values()) {
         const thumbKey = newStorageKey(athlete.id, photo.thumb.contentType);
-        await this.storage.put(thumbKey, photo.thumb.data, photo.thumb.contentType);
-        written.push(thumbKey);
+        await this.storage.stage(thumbKey, photo.thumb.data, photo.thumb.contentType);
+        staged.push(thumbKey);
         const displayKey = newStorageKey(athlete.id, photo.display.contentType);
-        await this.storage.put(displayKey, photo.display.data, photo.display.contentType);
-        written.push(displayKey);
+        await this.storage.stage(displayKey, photo.display.data, photo.display.contentType);
+        staged.push(displayKey);
         rows.push({
           athleteId: athlete.id,
           localDate: date,
@@ -165,12 +168,15 @@ export class PhotoService {
       );
       for (const row of inserted) existing.set(row.contentHash, row);
     } catch (error) {
-      await this.removeKeys(written);
+      // A lost connection may have lost the COMMIT's answer, not the commit: the sweep decides
+      // from the rows. Any other failure means no row, so the staged files go now.
+      if (!isDatabaseUnavailable(error)) await this.removeKeys(staged);
       if (isUniqueViolation(error)) {
         throw conflict('These photos are being uploaded already. Refresh the gallery to see them.');
       }
       throw error;
     }
+    for (const key of staged) await this.storage.publish(key);
 
     return processed.map((p) => presentPhoto(existing.get(p.contentHash)!));
   }

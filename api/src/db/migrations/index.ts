@@ -6,6 +6,7 @@ import { AddPlans1796173077550 } from './1796173077550-AddPlans.js';
 import { AddMarksAndReviews1796175671267 } from './1796175671267-AddMarksAndReviews.js';
 import { AddWeeklyCheckInsAndNotifications1796178387090 } from './1796178387090-AddWeeklyCheckInsAndNotifications.js';
 import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitCounters.js';
+import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -16,4 +17,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddMarksAndReviews1796175671267,
   AddWeeklyCheckInsAndNotifications1796178387090,
   AddRateLimitCounters1796190000000,
+  OutboxSendingLease1796190000001,
 ];
