@@ -295,9 +295,12 @@ describe('SMTP failures', () => {
     try {
       await startWorker();
       await t.dataSource.transaction((manager) => queueMail(manager, invitation(to).mail));
+      // Each attempt is claimed (attempts + 1, status sending) before the SMTP server is tried, so
+      // wait for the failure to be recorded, not just for the claim.
       const [failed] = await eventually(
         () => outboxRows(to),
-        (rows) => (rows[0]?.attempts ?? 0) >= 1,
+        (rows) =>
+          (rows[0]?.attempts ?? 0) >= 1 && rows[0]?.status === 'pending' && rows[0]?.last_error != null,
       );
       expect(failed).toMatchObject({ status: 'pending' });
       expect(failed?.last_error).toMatch(/ECONNREFUSED|connect/i);
