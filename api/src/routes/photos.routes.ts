@@ -1,5 +1,5 @@
 import { pipeline } from 'node:stream/promises';
-import { isoDate, LIMITS, uuid } from '@driftmark/shared';
+import { isoDate, LIMITS, text, uuid } from '@driftmark/shared';
 import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
@@ -18,7 +18,7 @@ const fileParams = z.object({ photoId: uuid, size: z.enum(['thumb', 'display']) 
 const listQuery = z
   .object({
     /** One pose only (exact name as listed). */
-    pose: z.string().trim().min(LIMITS.poseName.min).max(LIMITS.poseName.max).optional(),
+    pose: text('Pose', LIMITS.poseName).optional(),
     /** First day, inclusive (YYYY-MM-DD). */
     from: isoDate.optional(),
     /** Last day, inclusive (YYYY-MM-DD). */

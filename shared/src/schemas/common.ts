@@ -17,12 +17,51 @@ export const newPassword = z
   .min(LIMITS.password.min, `At least ${LIMITS.password.min} characters`)
   .max(LIMITS.password.max, `At most ${LIMITS.password.max} characters`);
 
+/**
+ * Control characters other than tab (U+0009) and newline (U+000A): C0, DEL and C1. A NUL cannot
+ * be stored in PostgreSQL text and the others only hide or mangle what a reader sees.
+ */
+// eslint-disable-next-line no-control-regex
+const CONTROL_CHARACTERS = /[\u0000-\u0008\u000B-\u001F\u007F-\u009F]/;
+
+/** Half of a surrogate pair without its other half: not a character, cannot be encoded as UTF-8. */
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+/** True when `value` has no control character other than tab and newline. */
+export function hasNoControlCharacters(value: string): boolean {
+  return !CONTROL_CHARACTERS.test(value);
+}
+
+/** Removes control characters other than tab and newline (file names and other text we only show). */
+export function stripControlCharacters(value: string): string {
+  return value.replace(new RegExp(CONTROL_CHARACTERS.source, 'g'), '');
+}
+
+/**
+ * The one input policy for free text (notes, names, questions, reasons, replies…): line ends
+ * become `\n`; any other control character (NUL included) or a broken surrogate pair is refused
+ * with a message naming the field; the value is trimmed and NFC-normalised, then its length is
+ * checked (`min` only when given; a required field says "<label> is required").
+ */
+export function text(label: string, limits: { min?: number; max: number }, minMessage?: string) {
+  let schema = z
+    .string({ error: `${label} is required` })
+    .overwrite((v) => v.replace(/\r\n?/g, '\n'))
+    .refine(hasNoControlCharacters, `${label} contains a control character; remove it`)
+    .refine((v) => !LONE_SURROGATE.test(v), `${label} contains a broken character; retype it`)
+    .trim()
+    .normalize('NFC');
+  if (limits.min !== undefined && limits.min > 0) {
+    schema = schema.min(
+      limits.min,
+      minMessage ?? (limits.min === 1 ? `${label} is required` : `At least ${limits.min} characters`),
+    );
+  }
+  return schema.max(limits.max, `At most ${limits.max} characters`);
+}
+
 /** A person's display name. */
-export const personName = z
-  .string({ error: 'Name is required' })
-  .trim()
-  .min(LIMITS.name.min, 'Name is required')
-  .max(LIMITS.name.max, `At most ${LIMITS.name.max} characters`);
+export const personName = text('Name', LIMITS.name);
 
 /** A calendar date, `YYYY-MM-DD`. */
 export const isoDate = z

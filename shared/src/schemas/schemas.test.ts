@@ -3,7 +3,7 @@ import { intakeRequestOn, ageOn } from './athletes.js';
 import { LIMITS } from '../limits.js';
 import { signInRequest, changePasswordRequest } from './auth.js';
 import { createInvitationRequest } from './invitations.js';
-import { isoDate } from './common.js';
+import { isoDate, text } from './common.js';
 
 /** The pinned day the intakes below are checked on. */
 const TODAY = '2026-06-01';
@@ -137,5 +137,40 @@ describe('weighInRequest', () => {
     const ok = { weight: 176.4, unit: 'lb', time: '07:10', protocolConfirmed: true };
     expect(weighInRequest.safeParse(ok).success).toBe(true);
     expect(fieldsOf(weighInRequest.safeParse({ ...ok, weight: 0, unit: 'kg' }))).toEqual(['weight']);
+  });
+});
+
+describe('text (the one input policy for free text)', () => {
+  const note = text('Note', { max: 10 });
+  const required = text('Name', { min: 1, max: 10 });
+
+  it('refuses NUL and the other control characters, naming the field', () => {
+    for (const c of ['\u0000', '\u0007', '\u000b', '\u001b', '\u007f', '\u0085']) {
+      const r = note.safeParse(`a${c}b`);
+      expect(r.success, JSON.stringify(c)).toBe(false);
+      expect(r.error?.issues[0]?.message).toBe('Note contains a control character; remove it');
+    }
+  });
+
+  it('keeps tab and newline, and turns CR LF and CR into a newline', () => {
+    expect(note.parse('a\tb\nc')).toBe('a\tb\nc');
+    expect(note.parse('a\r\nb\rc')).toBe('a\nb\nc');
+  });
+
+  it('refuses half of a surrogate pair but keeps a whole one', () => {
+    expect(note.safeParse('a\ud800b').success).toBe(false);
+    expect(note.parse('🙂')).toBe('🙂');
+  });
+
+  it('trims and NFC-normalises before counting', () => {
+    // "é" as e + U+0301 COMBINING ACUTE ACCENT is one character once composed (Unicode UAX #15).
+    expect(note.parse('  e\u0301  ')).toBe('\u00e9');
+    expect(note.parse('e\u0301'.repeat(10))).toBe('\u00e9'.repeat(10));
+    expect(note.safeParse('x'.repeat(11)).error?.issues[0]?.message).toBe('At most 10 characters');
+  });
+
+  it('a required field says so when blank or missing', () => {
+    expect(required.safeParse('   ').error?.issues[0]?.message).toBe('Name is required');
+    expect(required.safeParse(undefined).error?.issues[0]?.message).toBe('Name is required');
   });
 });
