@@ -63,6 +63,8 @@ export const LIMITS = {
   answer: { max: 1000 },
   questionsForCoach: { max: 2000 },
   weeklyReply: { min: 1, max: 4000 },
+  /** Dates a request may name, in whole years from the server's today (common practice, no source). */
+  dateWindow: { historyYears: 5, aheadYears: 3 },
   /** A clock time this far past "now" still counts as now (phone clocks drift). */
   futureSlackMinutes: 5,
   /** Entries per kind per day. */

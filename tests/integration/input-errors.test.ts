@@ -4,6 +4,7 @@ import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
+import { planContent, versionBody } from './plans-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**
@@ -123,7 +124,6 @@ describe('upload file names', () => {
       expect(res.status, JSON.stringify(name)).toBeGreaterThanOrEqual(400);
       expect(res.status, JSON.stringify(name)).toBeLessThan(500);
       expect(res.body.error.code).toEqual(expect.any(String));
-      // eslint-disable-next-line no-control-regex
       expect(res.body.error.message).not.toMatch(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/);
     }
   });
@@ -141,5 +141,40 @@ describe('upload file names', () => {
     expect(res.status).toBeGreaterThanOrEqual(400);
     expect(res.status).toBeLessThan(500);
     expect(res.body.error.code).toEqual(expect.any(String));
+  });
+});
+
+describe('dates within their windows (5 years back, 3 years ahead of the pinned today)', () => {
+  const a = () => `/api/athletes/${athlete.athlete.id}`;
+  const weighIn = { weight: 72.4, unit: 'kg', time: '07:10', protocolConfirmed: true, tags: [] };
+
+  it('an entry: at most 5 years back, naming the date', async () => {
+    const old = await agents.athlete.put(`${a()}/days/2021-11-30/weigh-in`).send(weighIn);
+    expect(old.status).toBe(400);
+    expect(old.body.error.fields.date).toMatch(/No earlier than 2021-12-01/);
+    const oldest = await agents.athlete.put(`${a()}/days/2021-12-01/weigh-in`).send(weighIn);
+    expect(oldest.status).toBe(200);
+  });
+
+  it('an event: at most 3 years ahead', async () => {
+    const res = await agents.coach.patch(`${a()}/event`).send({ eventDate: '2029-12-02' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.fields.eventDate).toMatch(/No later than 2029-12-01/);
+  });
+
+  it('a plan version, a mark and a trend range', async () => {
+    const version = await agents.coach
+      .post(`${a()}/plan/versions`)
+      .send(versionBody('9999-12-31', planContent()));
+    expect(version.status).toBe(400);
+    expect(version.body.error.fields.effectiveFrom).toMatch(/No later than 2029-12-01/);
+    const mark = await agents.coach
+      .post(`${a()}/marks`)
+      .send({ metric: 'weight', fromDate: '1000-01-01', toDate: TODAY, note: 'Old' });
+    expect(mark.status).toBe(400);
+    expect(mark.body.error.fields.fromDate).toMatch(/No earlier than/);
+    const trend = await agents.coach.get(`${a()}/trend`).query({ from: '1000-01-01', to: '9999-12-31' });
+    expect(trend.status).toBe(400);
+    expect(trend.body.error.fields).toMatchObject({ from: expect.any(String), to: expect.any(String) });
   });
 });

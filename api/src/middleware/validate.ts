@@ -1,4 +1,5 @@
 import type { Request, RequestHandler } from 'express';
+import { datesWithin, todayIn } from '@driftmark/shared';
 import type { z } from 'zod';
 import { notFound } from '../errors.js';
 
@@ -23,6 +24,17 @@ export interface ValidateSchemas {
   body?: z.ZodType | ((req: Request) => z.ZodType | undefined);
   params?: z.ZodType;
   query?: z.ZodType | ((req: Request) => z.ZodType | undefined);
+}
+
+/**
+ * `schema` with its top-level date fields held to their windows (shared `dateWindow`) as of the
+ * request's today, for `validate({ body: dated(schema, { eventDate: 'any' }) })` or `query:`.
+ */
+export function dated<T extends z.ZodType>(
+  schema: T,
+  fields: Record<string, 'past' | 'any'>,
+): (req: Request) => T {
+  return (req) => datesWithin(schema, todayIn('UTC', req.ctx.clock()), fields);
 }
 
 type Out<S extends z.ZodType | undefined, Fallback> = S extends z.ZodType ? z.output<S> : Fallback;

@@ -5,7 +5,7 @@ import { z } from 'zod';
 import { notFound } from '../errors.js';
 import { authenticate } from '../middleware/authenticate.js';
 import { discardUploads, drainBeforeError, photoUpload, uploadedFiles } from '../middleware/upload.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import type { AthleteAction } from '../policies/athlete.policy.js';
 import { PhotoRepository } from '../repositories/photo.repository.js';
 import { assertPhotoConsent, PhotoService } from '../services/photo.service.js';
@@ -89,7 +89,7 @@ export function photosRouter(): Router {
   router.get(
     '/athletes/:athleteId/photos',
     authenticate(),
-    validate({ params: athleteParams, query: listQuery }),
+    validate({ params: athleteParams, query: dated(listQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { athlete } = await loadAthleteById(req, req.params.athleteId, 'read');
       const { pose, from, to } = req.query;

@@ -3,7 +3,9 @@ import { intakeRequestOn, ageOn } from './athletes.js';
 import { LIMITS } from '../limits.js';
 import { signInRequest, changePasswordRequest } from './auth.js';
 import { createInvitationRequest } from './invitations.js';
-import { isoDate, text } from './common.js';
+import { datesWithin, dateWindow, dateWindowProblem, isoDate, text } from './common.js';
+import { addYears } from '../calendar.js';
+import { z } from 'zod';
 
 /** The pinned day the intakes below are checked on. */
 const TODAY = '2026-06-01';
@@ -172,5 +174,30 @@ describe('text (the one input policy for free text)', () => {
   it('a required field says so when blank or missing', () => {
     expect(required.safeParse('   ').error?.issues[0]?.message).toBe('Name is required');
     expect(required.safeParse(undefined).error?.issues[0]?.message).toBe('Name is required');
+  });
+});
+
+describe('date windows', () => {
+  it('moves by whole years, 29 February to 28 February in a common year', () => {
+    // Calendar arithmetic checked by hand against the Gregorian calendar (2024 leap, 2019 and 2027 not).
+    expect(addYears('2024-02-29', -5)).toBe('2019-02-28');
+    expect(addYears('2024-02-29', 4)).toBe('2028-02-29');
+    expect(addYears('2026-12-01', 3)).toBe('2029-12-01');
+  });
+
+  it('past: back LIMITS.dateWindow.historyYears and not after today; any: up to aheadYears ahead', () => {
+    expect(dateWindow(TODAY, 'past')).toEqual({ earliest: '2021-06-01', latest: TODAY });
+    expect(dateWindow(TODAY, 'any')).toEqual({ earliest: '2021-06-01', latest: '2029-06-01' });
+    expect(dateWindowProblem('2021-06-01', TODAY, 'past')).toBeNull();
+    expect(dateWindowProblem('2021-05-31', TODAY, 'past')).toMatch(/No earlier than 2021-06-01/);
+    expect(dateWindowProblem('2026-06-02', TODAY, 'past')).toMatch(/future/);
+    expect(dateWindowProblem('2029-06-01', TODAY, 'any')).toBeNull();
+    expect(dateWindowProblem('2029-06-02', TODAY, 'any')).toMatch(/No later than 2029-06-01/);
+  });
+
+  it('datesWithin names the field it refuses', () => {
+    const schema = datesWithin(z.object({ eventDate: isoDate }), TODAY, { eventDate: 'any' });
+    const r = schema.safeParse({ eventDate: '9999-12-31' });
+    expect(fieldsOf(r)).toEqual(['eventDate']);
   });
 });
