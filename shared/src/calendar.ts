@@ -34,6 +34,17 @@ export function addDays(date: string, days: number): string {
   return d.toISOString().slice(0, 10);
 }
 
+/** `date` moved by whole years; 29 February becomes 28 February in a common year. */
+export function addYears(date: string, years: number): string {
+  const [y, m, d] = date.split('-').map(Number) as [number, number, number];
+  const target = new Date(0);
+  target.setUTCFullYear(y + years, m - 1, 1);
+  const monthEnd = new Date(0);
+  monthEnd.setUTCFullYear(y + years, m, 0);
+  target.setUTCDate(Math.min(d, monthEnd.getUTCDate()));
+  return target.toISOString().slice(0, 10);
+}
+
 /** Whole calendar days from `from` to `to`; negative when `to` is earlier. */
 export function daysBetween(from: string, to: string): number {
   return Math.round((utcMidnight(to).getTime() - utcMidnight(from).getTime()) / DAY_MS);

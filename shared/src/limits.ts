@@ -21,6 +21,7 @@ export const LIMITS = {
   /** Usual daily energy intake, kcal. */
   usualEnergyKcal: { min: 800, max: 10000 },
   division: { max: 100 },
+  eventName: { max: 100 },
   /** Age in whole years at intake. */
   ageYears: { min: 16, max: 100 },
   /** Invitation links stay valid this long. */
@@ -55,6 +56,20 @@ export const LIMITS = {
   rating: { min: 1, max: 5 },
   note: { max: 2000 },
   trainingNote: { max: 120 },
+  // Plans, countdown templates and weekly check-ins (free text).
+  planItem: { min: 1, max: 80 },
+  planUnit: { max: 16 },
+  dayTypeName: { min: 1, max: 40 },
+  dayLabel: { max: 60 },
+  templateName: { min: 2, max: 80 },
+  templateDescription: { max: 1000 },
+  warningKey: { max: 120 },
+  question: { min: 3, max: 200 },
+  answer: { max: 1000 },
+  questionsForCoach: { max: 2000 },
+  weeklyReply: { min: 1, max: 4000 },
+  /** Dates a request may name, in whole years from the server's today (common practice, no source). */
+  dateWindow: { historyYears: 5, aheadYears: 3 },
   /** A clock time this far past "now" still counts as now (phone clocks drift). */
   futureSlackMinutes: 5,
   /** Entries per kind per day. */

@@ -235,4 +235,38 @@ describe('demo date refresh', () => {
     expect((await day(localDate(now, COUNTDOWN_TZ))).countdown.dayLabel).toBe('E-4');
     expect(await incoherentRows()).toBe(0);
   });
+  it('never fails on a bad stored value: an unknown zone moves by UTC days, a date too far ahead stays put', async () => {
+    const athletes = await t.dataSource.query<{ id: string; user_id: string }[]>(
+      'SELECT id, user_id FROM athletes ORDER BY id',
+    );
+    const [odd, far, plain] = athletes as [
+      { id: string; user_id: string },
+      { id: string; user_id: string },
+      { id: string; user_id: string },
+    ];
+    // Values the input policy now refuses, written before it existed.
+    await t.dataSource.query(`UPDATE users SET time_zone = 'US/Pacific-New' WHERE id = $1`, [odd.user_id]);
+    await t.dataSource.query(`UPDATE athletes SET event_date = '9999-12-30' WHERE id = $1`, [far.id]);
+    const eventOf = async (id: string) =>
+      (
+        await t.dataSource.query<{ d: string }[]>(
+          `SELECT to_char(event_date, 'YYYY-MM-DD') AS d FROM athletes WHERE id = $1`,
+          [id],
+        )
+      )[0]?.d;
+    const plainBefore = await eventOf(plain.id);
+    const warnings: string[] = [];
+    now = new Date(now.getTime() + 3 * DAY_MS);
+    const result = await seedDemo(t.dataSource, {
+      appMode: 'test',
+      now,
+      storage: createStorage({ uploadsDir }),
+      warn: (message) => warnings.push(message),
+    });
+    expect(result.movedDays).toBeGreaterThan(0);
+    expect(await eventOf(far.id)).toBe('9999-12-30');
+    if (plainBefore) expect(await eventOf(plain.id)).toBe(addDays(plainBefore, 3));
+    expect(warnings.some((w) => /unknown time zone/.test(w))).toBe(true);
+    expect(warnings.some((w) => /too far ahead/.test(w))).toBe(true);
+  });
 });

@@ -1,5 +1,5 @@
 import { TZDate } from '@date-fns/tz';
-import { clockIn, LIMITS, todayIn } from '@driftmark/shared';
+import { clockIn, dateWindowProblem, LIMITS, todayIn } from '@driftmark/shared';
 
 /** The calendar date (YYYY-MM-DD) and clock time (HH:MM) of an instant in an IANA time zone. */
 export function localDateTime(now: Date, timeZone: string): { date: string; time: string } {
@@ -31,6 +31,9 @@ export function futureEntryProblem(
 ): { date: string } | { time: string } | null {
   const today = localDateTime(now, timeZone).date;
   if (entry.date > today) return { date: FUTURE_DATE_MESSAGE };
+  // Not further back than the history window (shared dateWindow).
+  const tooOld = dateWindowProblem(entry.date, today, 'past');
+  if (tooOld) return { date: tooOld };
   if (entry.time) {
     const at = localInstant(entry.date, entry.time, timeZone);
     if (at.getTime() > now.getTime() + LIMITS.futureSlackMinutes * 60_000)

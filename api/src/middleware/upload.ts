@@ -3,7 +3,7 @@ import { mkdirSync } from 'node:fs';
 import { readdir, rm } from 'node:fs/promises';
 import os from 'node:os';
 import path from 'node:path';
-import { LIMITS } from '@driftmark/shared';
+import { LIMITS, stripControlCharacters } from '@driftmark/shared';
 import type { Request, RequestHandler } from 'express';
 import multer from 'multer';
 import { AppError } from '../errors.js';
@@ -100,6 +100,8 @@ const uploader = multer({
     },
     filename: (_req, _file, cb) => cb(null, `${randomUUID()}.upload`),
   }),
+  // File names are sent as UTF-8 by browsers; busboy's default (latin1) turns "é" into "Ã©".
+  defParamCharset: 'utf8',
   limits: {
     fileSize: LIMITS.photoMaxBytes,
     files: LIMITS.photosPerUpload,
@@ -150,10 +152,15 @@ export async function discardUploads(req: Request): Promise<void> {
   }
 }
 
+/** The client's file name for messages: control characters removed, NFC, at most 200 characters. */
+export function cleanFileName(name: string): string {
+  return stripControlCharacters(name).normalize('NFC').trim().slice(0, 200);
+}
+
 /** The files of a request that passed `photoUpload()`. */
 export function uploadedFiles(req: Request): UploadedFile[] {
   const files = Array.isArray(req.files) ? req.files : [];
-  return files.map((f) => ({ path: f.path, originalName: f.originalname, size: f.size }));
+  return files.map((f) => ({ path: f.path, originalName: cleanFileName(f.originalname), size: f.size }));
 }
 
 /** The client went away before the whole body arrived; nobody reads the answer, the log does. */
@@ -208,9 +215,23 @@ export function photoUpload(): RequestHandler {
       if (!error) return next();
       if (error instanceof multer.MulterError) return next(fromMulter(error));
       if (req.destroyed && !req.complete) return next(cutOff());
+      if (error instanceof AppError) return next(error);
+      // busboy's refusals of a malformed body (bad part headers, a broken boundary…) are the
+      // client's: answer 400, never 500. Failures writing the temp file stay server errors.
+      if (isBodyError(error)) {
+        req.log.info({ err: error }, 'multipart body refused');
+        return next(new AppError('validation_failed', 'The upload could not be read. Please try again.'));
+      }
       next(error);
     });
   };
+}
+
+/** An error about the multipart body itself (not a file system error such as ENOSPC). */
+function isBodyError(error: unknown): boolean {
+  if (!(error instanceof Error)) return false;
+  const code = (error as NodeJS.ErrnoException).code;
+  return typeof code !== 'string' || !code.startsWith('E');
 }
 
 /**

@@ -1,9 +1,15 @@
-import { intakeRequestOn, shareAthleteRequest, updateEventRequest, uuid } from '@driftmark/shared';
+import {
+  datesWithin,
+  intakeRequestOn,
+  shareAthleteRequest,
+  updateEventRequest,
+  uuid,
+} from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { forbidden, notFound } from '../errors.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import {
   athleteAbilities,
   authorizeAthlete,
@@ -63,7 +69,13 @@ export function athletesRouter(): Router {
     '/:athleteId/intake',
     authenticate(),
     // Ages are counted to the server's today (UTC: the athlete's own zone is part of this very form).
-    validate({ params: athleteParams, body: (req) => intakeRequestOn(todayIn('UTC', req.ctx.clock())) }),
+    validate({
+      params: athleteParams,
+      body: (req) => {
+        const today = todayIn('UTC', req.ctx.clock());
+        return datesWithin(intakeRequestOn(today), today, { eventDate: 'any' });
+      },
+    }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'completeIntake');
       res.json({ data: await new AthleteService(req.ctx).completeIntake(athlete, req.body) });
@@ -74,7 +86,7 @@ export function athletesRouter(): Router {
   router.patch(
     '/:athleteId/event',
     authenticate(),
-    validate({ params: athleteParams, body: updateEventRequest }),
+    validate({ params: athleteParams, body: dated(updateEventRequest, { eventDate: 'any' }) }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'update');
       res.json({ data: await new PlanService(req.ctx).updateEvent(athlete, req.body) });

@@ -10,7 +10,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import { readerOf } from '../lib/reader.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { CheckInService } from '../services/check-in.service.js';
@@ -85,7 +85,7 @@ export function checkInsRouter(): Router {
   router.get(
     '/:athleteId/days',
     authenticate(),
-    validate({ params: athleteParams, query: dayRangeQuery }),
+    validate({ params: athleteParams, query: dated(dayRangeQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const days = await new DayService(req.ctx).listDays(athlete, req.query.from, req.query.to);

@@ -2,7 +2,7 @@ import { trendQuery, uuid } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import { athleteProfileView } from '../services/plan.service.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { DaysExportService, daysCsvFileName } from '../services/days-export.service.js';
@@ -18,7 +18,7 @@ export function dataRouter(): Router {
   router.get(
     '/:athleteId/days.csv',
     authenticate(),
-    validate({ params: athleteParams, query: trendQuery }),
+    validate({ params: athleteParams, query: dated(trendQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { user } = requireAuth(req);
       const { athlete } = await loadAthlete(req, 'read');

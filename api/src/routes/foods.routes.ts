@@ -1,4 +1,4 @@
-import { createFoodRequest } from '@driftmark/shared';
+import { createFoodRequest, text } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
@@ -11,7 +11,7 @@ const MAX_LIMIT = 50;
 
 const foodsQuery = z.object({
   /** Words of the name, any order, any case; empty lists from the start. */
-  q: z.string().trim().max(100, 'At most 100 characters').optional(),
+  q: text('Search', { max: 100 }).optional(),
   /** How many foods to return (1–50, default 20). */
   limit: z.coerce
     .number({ error: 'Use a whole number' })

@@ -9,7 +9,7 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
 import { authenticate } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import { authorizeMark, markAbilities, markListAbilities, type MarkAction } from '../policies/mark.policy.js';
 import { MarkRepository } from '../repositories/mark.repository.js';
 import { MarkService } from '../services/mark.service.js';
@@ -35,7 +35,7 @@ export function marksRouter(): Router {
   router.get(
     '/athletes/:athleteId/marks',
     authenticate(),
-    validate({ params: athleteParams, query: listMarksQuery }),
+    validate({ params: athleteParams, query: dated(listMarksQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const marks = await new MarkService(req.ctx).list(actor, athlete, req.query);
@@ -50,7 +50,7 @@ export function marksRouter(): Router {
   router.post(
     '/athletes/:athleteId/marks',
     authenticate(),
-    validate({ params: athleteParams, body: createMarkRequest }),
+    validate({ params: athleteParams, body: dated(createMarkRequest, { fromDate: 'any', toDate: 'any' }) }),
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       authorizeMark(actor, 'create', { athlete: target, authorId: null });

@@ -1,11 +1,11 @@
 import { pipeline } from 'node:stream/promises';
-import { isoDate, LIMITS, uuid } from '@driftmark/shared';
+import { isoDate, LIMITS, text, uuid } from '@driftmark/shared';
 import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
 import { authenticate } from '../middleware/authenticate.js';
 import { discardUploads, drainBeforeError, photoUpload, uploadedFiles } from '../middleware/upload.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import type { AthleteAction } from '../policies/athlete.policy.js';
 import { PhotoRepository } from '../repositories/photo.repository.js';
 import { assertPhotoConsent, PhotoService } from '../services/photo.service.js';
@@ -18,7 +18,7 @@ const fileParams = z.object({ photoId: uuid, size: z.enum(['thumb', 'display']) 
 const listQuery = z
   .object({
     /** One pose only (exact name as listed). */
-    pose: z.string().trim().min(LIMITS.poseName.min).max(LIMITS.poseName.max).optional(),
+    pose: text('Pose', LIMITS.poseName).optional(),
     /** First day, inclusive (YYYY-MM-DD). */
     from: isoDate.optional(),
     /** Last day, inclusive (YYYY-MM-DD). */
@@ -90,7 +90,7 @@ export function photosRouter(): Router {
   router.get(
     '/athletes/:athleteId/photos',
     authenticate(),
-    validate({ params: athleteParams, query: listQuery }),
+    validate({ params: athleteParams, query: dated(listQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { athlete } = await loadAthleteById(req, req.params.athleteId, 'read');
       const { pose, from, to } = req.query;

@@ -8,7 +8,7 @@ import {
 import { Router, type Response } from 'express';
 import { z } from 'zod';
 import { authenticate } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { PlanService, type CountdownResult } from '../services/plan.service.js';
 import { loadAthlete } from './athletes.routes.js';
@@ -47,7 +47,7 @@ export function plansRouter(): Router {
   router.post(
     '/:athleteId/plan/check',
     authenticate(),
-    validate({ params: athleteParams, body: checkPlanRequest }),
+    validate({ params: athleteParams, body: dated(checkPlanRequest, { effectiveFrom: 'any' }) }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'plan');
       res.json({ data: await new PlanService(req.ctx).check(athlete, req.body) });
@@ -57,7 +57,7 @@ export function plansRouter(): Router {
   router.post(
     '/:athleteId/plan/versions',
     authenticate(),
-    validate({ params: athleteParams, body: createPlanVersionRequest }),
+    validate({ params: athleteParams, body: dated(createPlanVersionRequest, { effectiveFrom: 'any' }) }),
     async (req, res) => {
       const { actor, athlete } = await loadAthlete(req, 'plan');
       res.status(201).json({ data: await new PlanService(req.ctx).createVersion(actor, athlete, req.body) });
@@ -67,7 +67,7 @@ export function plansRouter(): Router {
   router.post(
     '/:athleteId/plan/countdown',
     authenticate(),
-    validate({ params: athleteParams, body: applyCountdownRequest }),
+    validate({ params: athleteParams, body: dated(applyCountdownRequest, { eventDate: 'any' }) }),
     async (req, res) => {
       const { actor, athlete } = await loadAthlete(req, 'plan');
       sendCountdown(res, await new PlanService(req.ctx).applyCountdown(actor, athlete, req.body));
@@ -77,7 +77,7 @@ export function plansRouter(): Router {
   router.post(
     '/:athleteId/plan/countdown/move',
     authenticate(),
-    validate({ params: athleteParams, body: moveCountdownRequest }),
+    validate({ params: athleteParams, body: dated(moveCountdownRequest, { eventDate: 'any' }) }),
     async (req, res) => {
       const { actor, athlete } = await loadAthlete(req, 'plan');
       sendCountdown(res, await new PlanService(req.ctx).moveCountdown(actor, athlete, req.body));

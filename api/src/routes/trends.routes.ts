@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { readerOf } from '../lib/reader.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
-import { validate } from '../middleware/validate.js';
+import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { TrendService } from '../services/trend.service.js';
 import { loadAthlete } from './athletes.routes.js';
@@ -17,7 +17,7 @@ export function trendsRouter(): Router {
   router.get(
     '/:athleteId/trend',
     authenticate(),
-    validate({ params: athleteParams, query: trendQuery }),
+    validate({ params: athleteParams, query: dated(trendQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
       const { actor, athlete, target } = await loadAthlete(req, 'read');
       const view = await new TrendService(req.ctx).getTrend(athlete, req.query.from, req.query.to);

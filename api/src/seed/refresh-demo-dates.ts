@@ -16,7 +16,13 @@
  * figures and the athlete's check-in weekday (so a due date stays on it). Not moved: birth dates, countdown templates (offsets only),
  * accounts, sessions, invitations, mail and notification sends (not part of anyone's history).
  */
-import { planContent, utcMidnight, type GuardrailScope, type PlanContent } from '@driftmark/shared';
+import {
+  isValidTimeZone,
+  planContent,
+  utcMidnight,
+  type GuardrailScope,
+  type PlanContent,
+} from '@driftmark/shared';
 import { In, type EntityManager } from 'typeorm';
 import { GuardrailAcknowledgement } from '../entities/guardrail-acknowledgement.entity.js';
 import { PlanVersion } from '../entities/plan-version.entity.js';
@@ -72,7 +78,17 @@ interface Shift {
  * zone). Returns the most days any athlete moved; 0 (and nothing written) when none did. Runs in
  * the caller's transaction, which holds the seed lock.
  */
-export async function refreshDemoDates(manager: EntityManager, now: Date): Promise<number> {
+/** The last date a stored row may reach: the app writes and reads four-digit years only. */
+const LAST_DATE = '9999-12-31';
+
+/** Where the refresh reports rows it leaves alone (a bad stored value must not stop the start). */
+export type RefreshWarn = (message: string, details: Record<string, unknown>) => void;
+
+export async function refreshDemoDates(
+  manager: EntityManager,
+  now: Date,
+  warn: RefreshWarn = () => undefined,
+): Promise<number> {
   const owner = await manager.findOne(User, { where: { email: DEMO_OWNER_EMAIL }, select: { teamId: true } });
   const team = owner && (await manager.findOneBy(Team, { id: owner.teamId }));
   if (!team) return 0;
@@ -89,19 +105,41 @@ export async function refreshDemoDates(manager: EntityManager, now: Date): Promi
       WHERE a.team_id = $1`,
     [team.id],
   );
+  const latest = await latestDates(
+    manager,
+    athletes.map((a) => a.id),
+  );
   const shifts: Shift[] = athletes
-    .map((a) => ({
-      athleteId: a.id,
-      userId: a.user_id,
-      timeZone: a.time_zone,
-      eventDate: a.event_date,
-      // The event date moves with the athlete's own days (the demo events are in their time zones).
-      days: daysBetween(localDate(anchor, a.time_zone), localDate(now, a.time_zone)),
-    }))
-    .filter((s) => s.days > 0);
+    .map((a) => {
+      // A zone PostgreSQL or Intl does not know (saved before zones were checked) would make the
+      // statements below fail: such an athlete's instants move by UTC days instead.
+      const timeZone = isValidTimeZone(a.time_zone) ? a.time_zone : 'UTC';
+      if (timeZone !== a.time_zone)
+        warn('demo refresh: unknown time zone, moved by UTC days', { athleteId: a.id });
+      return {
+        athleteId: a.id,
+        userId: a.user_id,
+        timeZone,
+        eventDate: a.event_date,
+        // The event date moves with the athlete's own days (the demo events are in their time zones).
+        days: daysBetween(localDate(anchor, timeZone), localDate(now, timeZone)),
+      };
+    })
+    .filter((s) => s.days > 0)
+    .filter((s) => {
+      // A stored date so far ahead that moving it would leave four-digit years: this athlete stays put.
+      const last = latest.get(s.athleteId);
+      const fits = !last || daysBetween(last, LAST_DATE) >= s.days;
+      if (!fits)
+        warn('demo refresh: a stored date is too far ahead to move; athlete skipped', {
+          athleteId: s.athleteId,
+          last,
+        });
+      return fits;
+    });
   if (shifts.length === 0) return 0;
 
-  await rewritePlans(manager, shifts);
+  await rewritePlans(manager, shifts, warn);
   const params = [
     shifts.map((s) => s.athleteId),
     shifts.map((s) => s.userId),
@@ -181,11 +219,30 @@ export async function refreshDemoDates(manager: EntityManager, now: Date): Promi
   return Math.max(...shifts.map((s) => s.days));
 }
 
+/** Each athlete's latest date over every column the refresh moves (YYYY-MM-DD), if any. */
+async function latestDates(manager: EntityManager, athleteIds: string[]): Promise<Map<string, string>> {
+  if (athleteIds.length === 0) return new Map();
+  const parts = SHIFTED_DATE_COLUMNS.map((c) => {
+    const [table, column] = c.split('.') as [string, string];
+    return `SELECT ${table === 'athletes' ? 'id' : 'athlete_id'} AS athlete_id, "${column}" AS d FROM "${table}"`;
+  });
+  const rows = await manager.query<{ athlete_id: string; d: string | null }[]>(
+    `SELECT athlete_id, to_char(max(d), 'YYYY-MM-DD') AS d FROM (${parts.join(' UNION ALL ')}) x
+      WHERE athlete_id = ANY($1::uuid[]) GROUP BY athlete_id`,
+    [athleteIds],
+  );
+  return new Map(rows.filter((r) => r.d != null).map((r) => [r.athlete_id, r.d!]));
+}
+
 /**
  * The dates inside plan versions (dated days, the countdown's event date, the reason's ISO dates)
  * and in their acknowledgements (date scope, key, the dates in the message).
  */
-async function rewritePlans(manager: EntityManager, shifts: readonly Shift[]): Promise<void> {
+async function rewritePlans(
+  manager: EntityManager,
+  shifts: readonly Shift[],
+  warn: RefreshWarn,
+): Promise<void> {
   const byAthlete = new Map(shifts.map((s) => [s.athleteId, s]));
   const versions = await manager.find(PlanVersion, { where: { athleteId: In([...byAthlete.keys()]) } });
   const acks = await manager.find(GuardrailAcknowledgement, {
@@ -194,11 +251,19 @@ async function rewritePlans(manager: EntityManager, shifts: readonly Shift[]): P
   const known = new Map<string, { n: number; dates: string[] }>();
   for (const v of versions) {
     const { days: n, eventDate } = byAthlete.get(v.athleteId)!;
-    const content = planContent.parse(v.content);
+    // Content the schema no longer reads (or that would not read once moved) stays as it is.
+    const parsed = planContent.safeParse(v.content);
+    const moved = parsed.success ? planContent.safeParse(shiftContent(parsed.data, n)) : parsed;
+    if (!parsed.success || !moved.success) {
+      warn('demo refresh: plan version content left unmoved', { planVersionId: v.id });
+      known.set(v.id, { n, dates: [] });
+      continue;
+    }
+    const content = parsed.data;
     const dates = [...content.dates.map((d) => d.date), content.countdown?.eventDate, eventDate];
     known.set(v.id, { n, dates: dates.filter((d): d is string => d != null) });
     await manager.update(PlanVersion, v.id, {
-      content: shiftContent(content, n),
+      content: moved.data,
       reason: shiftText(v.reason, n, []),
       updatedAt: v.updatedAt,
     });

@@ -29,7 +29,7 @@ import {
   type DemoAthleteDefinition,
 } from './demo-team.js';
 import { createRandom } from './random.js';
-import { refreshDemoDates } from './refresh-demo-dates.js';
+import { refreshDemoDates, type RefreshWarn } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoMarks } from './seed-marks.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
@@ -41,6 +41,8 @@ const SEED_LOCK_KEY = 'driftmark:seed-demo';
 const DAY_MS = 86_400_000;
 
 export interface SeedDemoOptions {
+  /** Where the date refresh reports stored rows it could not move (default: stderr). */
+  warn?: RefreshWarn;
   /**
    * The seed date; event dates are counted from it in each athlete's time zone. On an already
    * seeded database, the date the demo team's dates are moved to.
@@ -113,7 +115,11 @@ export async function seedDemo(
     const movedDays = await dataSource.transaction(async (manager) => {
       // Two refreshes at once must not both move the dates: the second waits, then finds none to move.
       await lockSeed(manager);
-      return refreshDemoDates(manager, now);
+      return refreshDemoDates(
+        manager,
+        now,
+        options.warn ?? ((message, details) => console.warn(message, JSON.stringify(details))),
+      );
     });
     return { created: false, movedDays };
   }

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
-import { clockTime, isoDate, timeZone } from './common.js';
+import { clockTime, isoDate, text, timeZone } from './common.js';
 import { rosterFigures } from './trends.js';
 
 export const SEXES = ['female', 'male'] as const;
@@ -52,7 +52,7 @@ const intakeFields = z.object({
   /** The dated event being prepared for. */
   eventType: z.enum(EVENT_TYPES, { error: 'Choose an event type' }),
   /** The event's name (e.g. "Regional classic"); optional. */
-  eventName: z.string().trim().max(100, 'At most 100 characters').optional(),
+  eventName: text('Event name', LIMITS.eventName).optional(),
   /** Event date in the event's time zone; required unless there is no event. */
   eventDate: isoDate.optional(),
   /** Event clock time (or weigh-in time), HH:MM in the event's time zone. */
@@ -60,11 +60,7 @@ const intakeFields = z.object({
   /** The event's own time zone. */
   eventTimeZone: timeZone.optional(),
   /** Division (shows) or weight class (weigh-ins). */
-  division: z
-    .string()
-    .trim()
-    .max(LIMITS.division.max, `At most ${LIMITS.division.max} characters`)
-    .optional(),
+  division: text('Division', LIMITS.division).optional(),
   /** Weigh-in limit for the class, kg. */
   weighInLimitKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Weigh-in limit', 'kg').optional(),
   /** The athlete's own time zone: decides which date a log belongs to. */

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits.js';
 import { VOLUME_UNITS, WEIGHT_UNITS, volumeToMl, weightToKg } from '../units.js';
-import { clockTime, isoDate, uuid } from './common.js';
+import { clockTime, isoDate, text, uuid } from './common.js';
 
 /** Noise the athlete can tag a morning weigh-in with. */
 export const WEIGH_IN_TAGS = [
@@ -172,11 +172,7 @@ const mealBase = {
   /** Clock time eaten, HH:MM. */
   time: clockTime,
   /** What the athlete calls the meal ("Breakfast", "Post-training"). */
-  name: z
-    .string({ error: 'Name is required' })
-    .trim()
-    .min(LIMITS.mealName.min, 'Name is required')
-    .max(LIMITS.mealName.max, `At most ${LIMITS.mealName.max} characters`),
+  name: text('Name', LIMITS.mealName),
 };
 
 /** POST /api/athletes/:athleteId/days/:date/meals: grams of macros, or a food with a quantity. */
@@ -200,15 +196,11 @@ export const supplementEntryRequest = z.object({
   /** Clock time taken, HH:MM. */
   time: clockTime,
   /** Item name ("Creatine monohydrate"). */
-  name: z
-    .string({ error: 'Name is required' })
-    .trim()
-    .min(LIMITS.supplementName.min, 'Name is required')
-    .max(LIMITS.supplementName.max, `At most ${LIMITS.supplementName.max} characters`),
+  name: text('Name', LIMITS.supplementName),
   /** Dose amount (optional). */
   dose: range(LIMITS.supplementDose.min, LIMITS.supplementDose.max, 'Dose').nullable().optional(),
   /** Dose unit ("g", "mg", "capsule"). */
-  doseUnit: z.string().trim().max(LIMITS.supplementUnit.max).nullable().optional(),
+  doseUnit: text('Dose unit', LIMITS.supplementUnit).nullable().optional(),
   /** The schedule item this ticks, once plans exist. */
   scheduleItemId: uuid.nullable().optional(),
 });
@@ -230,12 +222,7 @@ export const eveningRequest = z.object({
   /** Whether the planned training was done. */
   trainingDone: z.boolean().nullable().optional(),
   /** A word on the training ("legs", "rest"). */
-  trainingNote: z
-    .string()
-    .trim()
-    .max(LIMITS.trainingNote.max, `At most ${LIMITS.trainingNote.max} characters`)
-    .nullable()
-    .optional(),
+  trainingNote: text('Training note', LIMITS.trainingNote).nullable().optional(),
   /** Ratings 1–5. */
   ratings: z
     .object(
@@ -254,7 +241,7 @@ export const eveningRequest = z.object({
     )
     .default({}),
   /** Free note for the coach. */
-  note: z.string().trim().max(LIMITS.note.max, `At most ${LIMITS.note.max} characters`).nullable().optional(),
+  note: text('Note', LIMITS.note).nullable().optional(),
 });
 export type EveningRequest = z.infer<typeof eveningRequest>;
 
@@ -270,18 +257,14 @@ export const symptomReportRequest = z.object({
     .min(1, 'Choose at least one symptom')
     .max(SYMPTOMS.length),
   /** Anything else the coach should know. */
-  note: z.string().trim().max(LIMITS.note.max, `At most ${LIMITS.note.max} characters`).nullable().optional(),
+  note: text('Note', LIMITS.note).nullable().optional(),
 });
 export type SymptomReportRequest = z.infer<typeof symptomReportRequest>;
 
 /** POST /api/foods (staff): a team food, nutrients per 100 g. */
 export const createFoodRequest = z.object({
   /** Name shown in search. */
-  name: z
-    .string({ error: 'Name is required' })
-    .trim()
-    .min(LIMITS.foodName.min, `At least ${LIMITS.foodName.min} characters`)
-    .max(LIMITS.foodName.max, `At most ${LIMITS.foodName.max} characters`),
+  name: text('Name', LIMITS.foodName),
   /** Grams per 100 g. */
   proteinG: range(LIMITS.per100gMacroG.min, LIMITS.per100gMacroG.max, 'Protein', ' g'),
   carbohydrateG: range(LIMITS.per100gMacroG.min, LIMITS.per100gMacroG.max, 'Carbohydrate', ' g'),
@@ -303,23 +286,13 @@ export const photoUploadFields = z.object({
   /** The day the photos belong to (athlete's local date). */
   date: isoDate,
   /** A pose from the team's list (GET /api/team/poses). */
-  pose: z
-    .string({ error: 'Choose a pose' })
-    .trim()
-    .min(LIMITS.poseName.min, 'Choose a pose')
-    .max(LIMITS.poseName.max),
+  pose: text('Pose', LIMITS.poseName, 'Choose a pose'),
 });
 
 /** PUT /api/team/poses (owner or coach): the team's pose list beyond the three relaxed poses. */
 export const posesRequest = z.object({
   poses: z
-    .array(
-      z
-        .string()
-        .trim()
-        .min(LIMITS.poseName.min)
-        .max(LIMITS.poseName.max, `At most ${LIMITS.poseName.max} characters`),
-    )
+    .array(text('Pose', LIMITS.poseName))
     .max(LIMITS.posesPerTeam, `At most ${LIMITS.posesPerTeam} poses`),
 });
 /** Poses every team has. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { isoDate, uuid } from './common.js';
+import { isoDate, text, uuid } from './common.js';
 
 /** A mark: a coach's note pinned to a chart's date or date range for one athlete. */
 
@@ -28,32 +28,20 @@ export const createMarkRequest = z
     fromDate: isoDate,
     /** Last day (same as fromDate for a single day). */
     toDate: isoDate,
-    note: z
-      .string({ error: 'Note is required' })
-      .trim()
-      .min(MARK_LIMITS.note.min, 'Note is required')
-      .max(MARK_LIMITS.note.max, `At most ${MARK_LIMITS.note.max} characters`),
+    note: text('Note', MARK_LIMITS.note),
   })
   .refine((v) => v.toDate >= v.fromDate, { path: ['toDate'], message: 'Must be on or after the first day' });
 export type CreateMarkRequest = z.infer<typeof createMarkRequest>;
 
 /** PATCH /api/marks/:markId (author only): edit the note. */
 export const updateMarkRequest = z.object({
-  note: z
-    .string({ error: 'Note is required' })
-    .trim()
-    .min(MARK_LIMITS.note.min, 'Note is required')
-    .max(MARK_LIMITS.note.max, `At most ${MARK_LIMITS.note.max} characters`),
+  note: text('Note', MARK_LIMITS.note),
 });
 export type UpdateMarkRequest = z.infer<typeof updateMarkRequest>;
 
 /** POST /api/marks/:markId/replies */
 export const createReplyRequest = z.object({
-  body: z
-    .string({ error: 'Reply is required' })
-    .trim()
-    .min(MARK_LIMITS.reply.min, 'Reply is required')
-    .max(MARK_LIMITS.reply.max, `At most ${MARK_LIMITS.reply.max} characters`),
+  body: text('Reply', MARK_LIMITS.reply),
 });
 export type CreateReplyRequest = z.infer<typeof createReplyRequest>;
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { clockTime, isoDate, uuid } from './common.js';
+import { clockTime, isoDate, text, uuid } from './common.js';
+import { LIMITS } from '../limits.js';
 import { EVENT_TYPES, SEXES } from './athletes.js';
 
 /**
@@ -97,15 +98,11 @@ export const scheduleItem = z
     /** Stable id; a supplement entry ticks it via `scheduleItemId`. */
     id: uuid,
     /** What to take ("Creatine monohydrate"). */
-    item: z
-      .string({ error: 'Item is required' })
-      .trim()
-      .min(1, 'Item is required')
-      .max(80, 'At most 80 characters'),
+    item: text('Item', LIMITS.planItem),
     /** Dose amount, optional. */
     dose: num(0, 100000, 'Dose').nullable(),
     /** Dose unit ("g", "mg", "capsule"), optional. */
-    unit: z.string().trim().max(16, 'At most 16 characters').nullable(),
+    unit: text('Unit', LIMITS.planUnit).nullable(),
     /** Clock times, HH:MM in the athlete's time zone. */
     times: z
       .array(clockTime)
@@ -178,7 +175,7 @@ export const dayTargets = z.object({
     .array(scheduleItem)
     .max(PLAN_LIMITS.supplementsPerDay, `At most ${PLAN_LIMITS.supplementsPerDay} items`),
   /** A note the athlete reads with the day's targets. */
-  note: z.string().trim().max(PLAN_LIMITS.note, `At most ${PLAN_LIMITS.note} characters`).nullable(),
+  note: text('Note', { max: PLAN_LIMITS.note }).nullable(),
 });
 export type DayTargets = z.infer<typeof dayTargets>;
 
@@ -213,7 +210,7 @@ export const DEFAULT_TOLERANCES: Required<Tolerances> = {
 export const dayType = z.object({
   /** Short stable key, lower-case letters, digits and dashes ("training"). */
   key: z.string().regex(/^[a-z0-9-]{1,24}$/, 'Use lower-case letters, digits and dashes'),
-  name: z.string().trim().min(1, 'Name is required').max(40, 'At most 40 characters'),
+  name: text('Name', LIMITS.dayTypeName),
   targets: dayTargets,
 });
 export type DayType = z.infer<typeof dayType>;
@@ -222,7 +219,7 @@ export type DayType = z.infer<typeof dayType>;
 export const dateOverride = z.object({
   date: isoDate,
   /** Shown with the day ("E-3 · Water load"). */
-  label: z.string().trim().max(60, 'At most 60 characters').nullable(),
+  label: text('Label', LIMITS.dayLabel).nullable(),
   /** Days from the event day when this day belongs to a countdown (−3 for E-3); else null. */
   countdownOffset: z.number().int().min(PLAN_LIMITS.offset.min).max(PLAN_LIMITS.offset.max).nullable(),
   targets: dayTargets,
@@ -362,14 +359,10 @@ export type GuardrailContext = z.infer<typeof guardrailContext>;
 // ---------------------------------------------------------------------------------------------
 // API shapes
 
-const reason = z
-  .string({ error: 'Reason is required' })
-  .trim()
-  .min(PLAN_LIMITS.reason.min, `At least ${PLAN_LIMITS.reason.min} characters`)
-  .max(PLAN_LIMITS.reason.max, `At most ${PLAN_LIMITS.reason.max} characters`);
+const reason = text('Reason', PLAN_LIMITS.reason);
 
 /** Warning keys the coach has read and accepts. Each current warning must be listed. */
-const acknowledgedKeys = z.array(z.string().max(120)).max(200);
+const acknowledgedKeys = z.array(text('Warning key', LIMITS.warningKey)).max(200);
 
 /** POST /api/athletes/:athleteId/plan/versions: save a new version. */
 export const createPlanVersionRequest = z.object({
@@ -493,7 +486,7 @@ export type CountdownPreview = z.infer<typeof countdownPreview>;
 export const updateEventRequest = z.object({
   eventDate: isoDate,
   eventTime: clockTime.nullable().optional(),
-  eventName: z.string().trim().max(100, 'At most 100 characters').nullable().optional(),
+  eventName: text('Event name', LIMITS.eventName).nullable().optional(),
 });
 export type UpdateEventRequest = z.infer<typeof updateEventRequest>;
 
@@ -507,21 +500,17 @@ export const templateDay = z.object({
     .min(PLAN_LIMITS.offset.min, `No earlier than E${PLAN_LIMITS.offset.min}`)
     .max(PLAN_LIMITS.offset.max, `No later than E+${PLAN_LIMITS.offset.max}`),
   /** Short name for the day ("Water load"). */
-  label: z.string().trim().max(60, 'At most 60 characters').nullable(),
+  label: text('Label', LIMITS.dayLabel).nullable(),
   targets: dayTargets,
 });
 export type TemplateDay = z.infer<typeof templateDay>;
 
 /** POST /api/countdown-templates, PUT /api/countdown-templates/:id */
 export const templateRequest = z.object({
-  name: z
-    .string({ error: 'Name is required' })
-    .trim()
-    .min(2, 'At least 2 characters')
-    .max(80, 'At most 80 characters'),
+  name: text('Name', LIMITS.templateName),
   /** The kind of event it is written for. */
   eventType: z.enum(EVENT_TYPES, { error: 'Choose an event type' }),
-  description: z.string().trim().max(1000, 'At most 1000 characters').nullable(),
+  description: text('Description', LIMITS.templateDescription).nullable(),
   days: z.array(templateDay).min(1, 'Add at least one day').max(PLAN_LIMITS.templateDays),
 });
 export type TemplateRequest = z.infer<typeof templateRequest>;

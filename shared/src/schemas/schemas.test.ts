@@ -3,7 +3,9 @@ import { intakeRequestOn, ageOn } from './athletes.js';
 import { LIMITS } from '../limits.js';
 import { signInRequest, changePasswordRequest, resetPasswordRequest } from './auth.js';
 import { acceptInvitationRequest, createInvitationRequest } from './invitations.js';
-import { isoDate } from './common.js';
+import { datesWithin, dateWindow, dateWindowProblem, isoDate, text } from './common.js';
+import { addYears } from '../calendar.js';
+import { z } from 'zod';
 
 /** The pinned day the intakes below are checked on. */
 const TODAY = '2026-06-01';
@@ -157,5 +159,65 @@ describe('passwords over 72 bytes', () => {
 
   it('still reach sign-in, where they simply do not match', () => {
     expect(signInRequest.safeParse({ email: 'a@example.test', password: long }).success).toBe(true);
+  });
+});
+
+describe('text (the one input policy for free text)', () => {
+  const note = text('Note', { max: 10 });
+  const required = text('Name', { min: 1, max: 10 });
+
+  it('refuses NUL and the other control characters, naming the field', () => {
+    for (const c of ['\u0000', '\u0007', '\u000b', '\u001b', '\u007f', '\u0085']) {
+      const r = note.safeParse(`a${c}b`);
+      expect(r.success, JSON.stringify(c)).toBe(false);
+      expect(r.error?.issues[0]?.message).toBe('Note contains a control character; remove it');
+    }
+  });
+
+  it('keeps tab and newline, and turns CR LF and CR into a newline', () => {
+    expect(note.parse('a\tb\nc')).toBe('a\tb\nc');
+    expect(note.parse('a\r\nb\rc')).toBe('a\nb\nc');
+  });
+
+  it('refuses half of a surrogate pair but keeps a whole one', () => {
+    expect(note.safeParse('a\ud800b').success).toBe(false);
+    expect(note.parse('🙂')).toBe('🙂');
+  });
+
+  it('trims and NFC-normalises before counting', () => {
+    // "é" as e + U+0301 COMBINING ACUTE ACCENT is one character once composed (Unicode UAX #15).
+    expect(note.parse('  e\u0301  ')).toBe('\u00e9');
+    expect(note.parse('e\u0301'.repeat(10))).toBe('\u00e9'.repeat(10));
+    expect(note.safeParse('x'.repeat(11)).error?.issues[0]?.message).toBe('At most 10 characters');
+  });
+
+  it('a required field says so when blank or missing', () => {
+    expect(required.safeParse('   ').error?.issues[0]?.message).toBe('Name is required');
+    expect(required.safeParse(undefined).error?.issues[0]?.message).toBe('Name is required');
+  });
+});
+
+describe('date windows', () => {
+  it('moves by whole years, 29 February to 28 February in a common year', () => {
+    // Calendar arithmetic checked by hand against the Gregorian calendar (2024 leap, 2019 and 2027 not).
+    expect(addYears('2024-02-29', -5)).toBe('2019-02-28');
+    expect(addYears('2024-02-29', 4)).toBe('2028-02-29');
+    expect(addYears('2026-12-01', 3)).toBe('2029-12-01');
+  });
+
+  it('past: back LIMITS.dateWindow.historyYears and not after today; any: up to aheadYears ahead', () => {
+    expect(dateWindow(TODAY, 'past')).toEqual({ earliest: '2021-06-01', latest: TODAY });
+    expect(dateWindow(TODAY, 'any')).toEqual({ earliest: '2021-06-01', latest: '2029-06-01' });
+    expect(dateWindowProblem('2021-06-01', TODAY, 'past')).toBeNull();
+    expect(dateWindowProblem('2021-05-31', TODAY, 'past')).toMatch(/No earlier than 2021-06-01/);
+    expect(dateWindowProblem('2026-06-02', TODAY, 'past')).toMatch(/future/);
+    expect(dateWindowProblem('2029-06-01', TODAY, 'any')).toBeNull();
+    expect(dateWindowProblem('2029-06-02', TODAY, 'any')).toMatch(/No later than 2029-06-01/);
+  });
+
+  it('datesWithin names the field it refuses', () => {
+    const schema = datesWithin(z.object({ eventDate: isoDate }), TODAY, { eventDate: 'any' });
+    const r = schema.safeParse({ eventDate: '9999-12-31' });
+    expect(fieldsOf(r)).toEqual(['eventDate']);
   });
 });

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { uuid } from './common.js';
+import { text, uuid } from './common.js';
+import { LIMITS } from '../limits.js';
 import { WEEKDAYS } from './plans.js';
 import { DRIFT_METRICS, rateView } from './trends.js';
 
@@ -20,11 +21,7 @@ export const QUESTION_KIND_LABELS: Record<QuestionKind, string> = {
 export const checkInQuestion = z.object({
   id: uuid,
   kind: z.enum(QUESTION_KINDS, { error: 'Choose a kind' }),
-  prompt: z
-    .string({ error: 'Question is required' })
-    .trim()
-    .min(3, 'At least 3 characters')
-    .max(200, 'At most 200 characters'),
+  prompt: text('Question', LIMITS.question),
 });
 export type CheckInQuestion = z.infer<typeof checkInQuestion>;
 
@@ -73,7 +70,7 @@ export const weeklyFigures = z.object({
 export type WeeklyFigures = z.infer<typeof weeklyFigures>;
 
 export const answerValue = z.union([
-  z.string().trim().max(1000, 'At most 1000 characters'),
+  text('Answer', LIMITS.answer),
   z.number().int().min(1).max(5),
   z.boolean(),
   z.null(),
@@ -85,17 +82,13 @@ export const submitWeeklyCheckInRequest = z.object({
   dueDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD'),
   answers: z.array(z.object({ questionId: uuid, value: answerValue })).max(12),
   /** The athlete's own questions for the coach. */
-  questionsForCoach: z.string().trim().max(2000, 'At most 2000 characters').nullable(),
+  questionsForCoach: text('Questions for the coach', LIMITS.questionsForCoach).nullable(),
 });
 export type SubmitWeeklyCheckInRequest = z.infer<typeof submitWeeklyCheckInRequest>;
 
 /** POST /api/weekly-check-ins/:checkInId/reply (staff who may annotate the athlete). */
 export const replyWeeklyCheckInRequest = z.object({
-  body: z
-    .string({ error: 'Reply is required' })
-    .trim()
-    .min(1, 'Reply is required')
-    .max(4000, 'At most 4000 characters'),
+  body: text('Reply', LIMITS.weeklyReply),
   /** A plan version saved from the same screen, linked to the reply. */
   planVersionId: uuid.nullable().optional(),
 });
