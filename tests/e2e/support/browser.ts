@@ -18,7 +18,17 @@ export interface Session {
 /** A fresh browser profile (own cookies) at the given viewport width. */
 export async function openSession(width = 1280, height = width < 600 ? 812 : 860): Promise<Session> {
   const dir = await mkdtemp(path.join(tmpdir(), 'driftmark-e2e-'));
+  // When the whole run is on a faked system clock (libfaketime, to try the suite on another day),
+  // the browser is started without it (it does not run under it) and gets the runner's clock
+  // through Playwright's clock instead. Without FAKETIME nothing changes.
+  const faked = Boolean(process.env.FAKETIME);
+  const env = faked
+    ? Object.fromEntries(
+        Object.entries(process.env).filter(([k]) => k !== 'LD_PRELOAD' && !k.startsWith('FAKETIME')),
+      )
+    : undefined;
   const context = await chromium.launchPersistentContext(dir, {
+    ...(env ? { env: env as Record<string, string> } : {}),
     executablePath: chromiumPath,
     headless: true,
     viewport: { width, height },
@@ -34,6 +44,7 @@ export async function openSession(width = 1280, height = width < 600 ? 812 : 860
     ],
   });
   context.setDefaultTimeout(15_000);
+  if (faked) await context.clock.install({ time: new Date() });
   const page = context.pages()[0] ?? (await context.newPage());
   return {
     context,
