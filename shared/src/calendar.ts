@@ -62,43 +62,47 @@ export function weekdayNumber(date: string): number {
   return utcMidnight(date).getUTCDay();
 }
 
-const dateParts = new Map<string, Intl.DateTimeFormat>();
-const clockParts = new Map<string, Intl.DateTimeFormat>();
+const formatters = new Map<string, Intl.DateTimeFormat>();
 
-function formatter(
-  cache: Map<string, Intl.DateTimeFormat>,
-  timeZone: string,
-  make: () => Intl.DateTimeFormat,
-) {
-  let f = cache.get(timeZone);
+/** The wall-clock fields of an instant in an IANA time zone (one cached formatter per zone). */
+export function wallClock(at: Date | number, timeZone: string) {
+  let f = formatters.get(timeZone);
   if (!f) {
-    f = make();
-    cache.set(timeZone, f);
+    f = new Intl.DateTimeFormat('en-US', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      second: '2-digit',
+    });
+    formatters.set(timeZone, f);
   }
-  return f;
+  const parts = Object.fromEntries(f.formatToParts(at).map((p) => [p.type, p.value]));
+  return {
+    year: Number(parts.year),
+    month: Number(parts.month),
+    day: Number(parts.day),
+    hour: Number(parts.hour),
+    minute: Number(parts.minute),
+    second: Number(parts.second),
+  };
 }
+
+const pad = (n: number, width = 2) => String(n).padStart(width, '0');
 
 /** The calendar date a clock in `timeZone` shows at `now`. */
 export function todayIn(timeZone: string, now: Date = new Date()): string {
-  const parts = formatter(
-    dateParts,
-    timeZone,
-    () => new Intl.DateTimeFormat('en-CA', { timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }),
-  ).formatToParts(now);
-  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '';
-  return `${get('year')}-${get('month')}-${get('day')}`;
+  const w = wallClock(now, timeZone);
+  return `${pad(w.year, 4)}-${pad(w.month)}-${pad(w.day)}`;
 }
 
 /** The clock time "HH:MM" (24 h) in `timeZone` at `now`. */
 export function clockIn(timeZone: string, now: Date = new Date()): string {
-  const parts = formatter(
-    clockParts,
-    timeZone,
-    () =>
-      new Intl.DateTimeFormat('en-GB', { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }),
-  ).formatToParts(now);
-  const get = (type: string) => parts.find((p) => p.type === type)?.value ?? '00';
-  return `${get('hour')}:${get('minute')}`;
+  const w = wallClock(now, timeZone);
+  return `${pad(w.hour)}:${pad(w.minute)}`;
 }
 
 /**

@@ -34,6 +34,7 @@ import {
   type SummaryLine,
 } from '../mail/notify-templates.js';
 import {
+  alreadySent,
   configureNotifications,
   DEFAULT_REMINDER_HOUR,
   mailBase,
@@ -204,6 +205,8 @@ async function staffSummaries(dataSource: DataSource, now: Date): Promise<number
     const today = localDateTime(now, row.time_zone).date;
     const from = shiftDate(today, -7);
     const to = shiftDate(today, -1);
+    // Every tick of the week after the first finds it sent: look before loading anyone's figures.
+    if (await alreadySent(dataSource.manager, row.user_id, 'weekly_summary', week)) continue;
     // Safety flags by the one rule the roster and the review queue use (hasSafetyFlag), over each
     // athlete's own last 7 days.
     const athletes = (

@@ -126,6 +126,20 @@ export async function claimSend(
   return rows.length > 0;
 }
 
+/** Whether the (user, kind, due key) send has been claimed already: a cheap look before costly work. */
+export async function alreadySent(
+  manager: EntityManager,
+  userId: string,
+  kind: NotificationKind,
+  dueKey: string,
+): Promise<boolean> {
+  const rows: unknown[] = await manager.query(
+    `SELECT 1 FROM notification_sends WHERE user_id = $1 AND kind = $2 AND due_key = $3`,
+    [userId, kind, dueKey.slice(0, 64)],
+  );
+  return rows.length > 0;
+}
+
 /** Queues one notification e-mail to `user` when wanted (and the due slot is free). */
 export async function sendNotification(
   manager: EntityManager,

@@ -1,3 +1,4 @@
+import { wallClock } from '../calendar.js';
 import type { DayTargets, ResolvedTargets } from '../schemas/plans.js';
 
 /*
@@ -17,43 +18,7 @@ export interface EventClock {
   timeZone: string;
 }
 
-const formatters = new Map<string, Intl.DateTimeFormat>();
-function formatter(timeZone: string): Intl.DateTimeFormat {
-  let f = formatters.get(timeZone);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-US', {
-      timeZone,
-      hourCycle: 'h23',
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-      second: '2-digit',
-    });
-    formatters.set(timeZone, f);
-  }
-  return f;
-}
-
 const pad = (n: number) => String(n).padStart(2, '0');
-
-/** The wall-clock fields of an instant in a time zone. */
-function wallClock(ms: number, timeZone: string) {
-  const parts = Object.fromEntries(
-    formatter(timeZone)
-      .formatToParts(new Date(ms))
-      .map((p) => [p.type, p.value]),
-  );
-  return {
-    year: Number(parts.year),
-    month: Number(parts.month),
-    day: Number(parts.day),
-    hour: Number(parts.hour),
-    minute: Number(parts.minute),
-    second: Number(parts.second),
-  };
-}
 
 /** The date (YYYY-MM-DD) and clock time (HH:MM) an instant reads in a time zone. */
 export function zonedDateTime(ms: number, timeZone: string): { date: string; time: string } {
