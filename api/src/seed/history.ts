@@ -20,6 +20,7 @@ import {
   type VolumeUnit,
   type WeighInTag,
   type WeightUnit,
+  inFinalWeek,
   URGENT_SYMPTOMS,
   weekdayNumber,
 } from '@driftmark/shared';
@@ -971,7 +972,7 @@ function evening(
   const span = DEMO_HISTORY_DAYS - 1;
   const s = clamp((span - plan.t) / span, 0, 1);
   const toShow = daysToShow(def, plan.t);
-  const finalWeek = toShow !== null && toShow >= 0 && toShow <= 7;
+  const finalWeek = inFinalWeek(toShow);
   const afterShow = toShow !== null && toShow < 0;
   const rest = trainingName === 'rest';
   const trainingDone = rest ? null : !r.chance(plan.travelling ? 0.5 : 0.07);
