@@ -38,6 +38,13 @@ describe('rate limits', () => {
     ).toBe(200);
   });
 
+  it('counts whatever the client typed, NUL and all, and still answers 400 naming the field', async () => {
+    // The limiter keys on the e-mail before it is validated (found by the route fuzz).
+    const res = await browser(t.app).post('/api/auth/sign-in').send({ email: 'a\u0000@example.test' });
+    expect(res.status).toBe(400);
+    expect(Object.keys(res.body.error.fields)).toContain('email');
+  });
+
   it('does not count successful sign-ins', async () => {
     const owner = await createOwner(t.dataSource);
     for (let i = 0; i < 5; i += 1) {

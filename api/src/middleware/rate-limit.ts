@@ -1,3 +1,4 @@
+import { createHash } from 'node:crypto';
 import type { RequestHandler } from 'express';
 import {
   ipKeyGenerator,
@@ -35,10 +36,19 @@ export class PgRateLimitStore implements Store {
     this.windowMs = options.windowMs;
   }
 
+  /**
+   * The stored key: the limiter's prefix and a SHA-256 of the client's key. Keys carry what the
+   * client typed (an e-mail, read before any validation), which may hold NUL or be very long;
+   * PostgreSQL text refuses NUL, and a digest has a fixed length.
+   */
+  private rowKey(key: string): string {
+    return this.prefix + createHash('sha256').update(key).digest('hex');
+  }
+
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
     const rows: { hits: number; reset_at: Date }[] = await this.dataSource.query(
       `SELECT hits, reset_at FROM rate_limit_counters WHERE key = $1 AND reset_at > now()`,
-      [this.prefix + key],
+      [this.rowKey(key)],
     );
     const row = rows[0];
     return row ? { totalHits: row.hits, resetTime: row.reset_at } : undefined;
@@ -60,7 +70,7 @@ export class PgRateLimitStore implements Store {
                          ELSE rate_limit_counters.reset_at END,
          updated_at = now()
        RETURNING hits, reset_at`,
-      [this.prefix + key, this.windowMs],
+      [this.rowKey(key), this.windowMs],
     );
     const row = rows[0]!;
     return { totalHits: row.hits, resetTime: row.reset_at };
@@ -72,12 +82,12 @@ export class PgRateLimitStore implements Store {
     await this.dataSource.query(
       `UPDATE rate_limit_counters SET hits = GREATEST(hits - 1, 0), updated_at = now()
        WHERE key = $1 AND reset_at > now()`,
-      [this.prefix + key],
+      [this.rowKey(key)],
     );
   }
 
   async resetKey(key: string): Promise<void> {
-    await this.dataSource.query(`DELETE FROM rate_limit_counters WHERE key = $1`, [this.prefix + key]);
+    await this.dataSource.query(`DELETE FROM rate_limit_counters WHERE key = $1`, [this.rowKey(key)]);
   }
 
   /** Windows that ended a day ago or more; called now and then so the table stays small. */
