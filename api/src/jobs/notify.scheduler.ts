@@ -13,11 +13,10 @@
  * No loss, no doubles across restarts: a send is due from its time on (not only at it), so the
  * first tick after a restart catches up whatever fell due while nothing ran, and the
  * notification_sends row claimed in the same transaction as the outbox row makes every later
- * tick (or a second process) skip it. Local hours come from @date-fns/tz, so the changes to and
+ * tick (or a second process) skip it. Local hours come from the shared wall clock (Intl's tz database), so the changes to and
  * from daylight-saving time move the reminder with the athlete's clock.
  */
-import { TZDate } from '@date-fns/tz';
-import { STAFF_ROLES, type Weekday } from '@driftmark/shared';
+import { STAFF_ROLES, wallClock, type Weekday } from '@driftmark/shared';
 import { getISOWeek, getISOWeekYear } from 'date-fns';
 import type PgBoss from 'pg-boss';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -97,7 +96,9 @@ function localHour(now: Date, timeZone: string): number {
 
 /** "2027-W10" for the ISO week of the local date in `timeZone`. */
 export function isoWeekKey(now: Date, timeZone: string): string {
-  const local = new TZDate(now.getTime(), timeZone);
+  const w = wallClock(now, timeZone);
+  // A Date on the runtime's own calendar holding the local date: date-fns reads it as that day.
+  const local = new Date(w.year, w.month - 1, w.day);
   return `${getISOWeekYear(local)}-W${String(getISOWeek(local)).padStart(2, '0')}`;
 }
 
@@ -197,10 +198,11 @@ async function staffSummaries(dataSource: DataSource, now: Date): Promise<number
   for (const row of staff) {
     const user = asUser(row);
     if (!wants(user, 'weekly_summary')) continue;
-    const local = new TZDate(now.getTime(), row.time_zone);
+    const local = wallClock(now, row.time_zone);
     // Monday from SUMMARY_HOUR on, or any later day of the ISO week (catching up after downtime).
-    const isoDay = local.getDay() === 0 ? 7 : local.getDay();
-    if (isoDay === 1 && local.getHours() < SUMMARY_HOUR) continue;
+    const weekday = new Date(Date.UTC(local.year, local.month - 1, local.day)).getUTCDay();
+    const isoDay = weekday === 0 ? 7 : weekday;
+    if (isoDay === 1 && local.hour < SUMMARY_HOUR) continue;
     const week = isoWeekKey(now, row.time_zone);
     const today = localDateTime(now, row.time_zone).date;
     const from = shiftDate(today, -7);

@@ -1,5 +1,4 @@
-import { TZDate } from '@date-fns/tz';
-import { clockIn, dateWindowProblem, LIMITS, todayIn } from '@driftmark/shared';
+import { clockIn, dateWindowProblem, LIMITS, todayIn, zonedInstant } from '@driftmark/shared';
 
 /** The calendar date (YYYY-MM-DD) and clock time (HH:MM) of an instant in an IANA time zone. */
 export function localDateTime(now: Date, timeZone: string): { date: string; time: string } {
@@ -7,13 +6,11 @@ export function localDateTime(now: Date, timeZone: string): { date: string; time
 }
 
 /**
- * The instant a local date and clock time name in a time zone. A time skipped by a daylight-saving
- * change (02:30 on a spring-forward night) resolves the way `TZDate` does: shifted forward.
+ * The instant a local date and clock time name in a time zone: the shared `zonedInstant` (first of a
+ * repeated hour, a skipped one pushed forward), as a Date.
  */
 export function localInstant(date: string, time: string, timeZone: string): Date {
-  const [y, mo, d] = date.split('-').map(Number) as [number, number, number];
-  const [h, mi] = time.split(':').map(Number) as [number, number];
-  return new Date(new TZDate(y, mo - 1, d, h, mi, timeZone).getTime());
+  return new Date(zonedInstant(date, time, timeZone));
 }
 
 export const FUTURE_DATE_MESSAGE = 'That date is still in the future';
