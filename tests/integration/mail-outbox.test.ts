@@ -15,7 +15,7 @@ import { createLogger } from '../../api/src/logger.js';
 import { renderInvitationMail } from '../../api/src/mail/templates.js';
 import { queueMail } from '../../api/src/services/mail.service.js';
 import {
-  readCapturedMail,
+  readAllCapturedMail,
   startSmtpFake,
   waitForMail,
   type CapturedMail,
@@ -118,7 +118,7 @@ async function jobStates(outboxId: string, manager: EntityManager = t.dataSource
 }
 
 async function mailsTo(to: string): Promise<CapturedMail[]> {
-  return (await readCapturedMail(captureDir)).filter((m) => m.to.includes(to));
+  return (await readAllCapturedMail(captureDir)).filter((m) => m.to.includes(to));
 }
 
 async function eventually<T>(

@@ -16,7 +16,7 @@ import {
   type NotifyScheduler,
 } from '../../api/src/jobs/notify.scheduler.js';
 import { createLogger } from '../../api/src/logger.js';
-import { readCapturedMail, type CapturedMail } from '../../scripts/src/lib/smtp-fake.js';
+import { readAllCapturedMail, type CapturedMail } from '../../scripts/src/lib/smtp-fake.js';
 import { startSmtpFake, type SmtpFake } from '../../scripts/src/lib/smtp-fake.js';
 import { createAthlete, shareAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
@@ -71,7 +71,7 @@ async function mailsTo(to: string, count: number, timeoutMs = 15_000): Promise<C
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     await w.sweep();
-    const found = (await readCapturedMail(captureDir)).filter((m) => m.to.includes(to));
+    const found = (await readAllCapturedMail(captureDir)).filter((m) => m.to.includes(to));
     if (found.length >= count || Date.now() > deadline) return found.reverse();
     await new Promise((r) => setTimeout(r, 200));
   }

@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import nodemailer from 'nodemailer';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { readCapturedMail, startSmtpFake, waitForMail, type SmtpFake } from './smtp-fake.js';
+import { readAllCapturedMail, startSmtpFake, waitForMail, type SmtpFake } from './smtp-fake.js';
 
 let dir: string;
 let fake: SmtpFake;
@@ -45,7 +45,7 @@ describe('startSmtpFake', () => {
     });
     mailer.close();
 
-    const [second, first] = await readCapturedMail(dir);
+    const [second, first] = await readAllCapturedMail(dir);
     expect(first).toMatchObject({
       from: 'Driftmark <no-reply@driftmark.test>',
       to: ['ana@example.test'],
@@ -62,7 +62,7 @@ describe('startSmtpFake', () => {
   });
 
   it('refuses a message above the size limit and captures nothing', async () => {
-    const before = (await readCapturedMail(dir)).length;
+    const before = (await readAllCapturedMail(dir)).length;
     const mailer = transport();
     await expect(
       mailer.sendMail({
@@ -73,15 +73,15 @@ describe('startSmtpFake', () => {
       }),
     ).rejects.toThrow(/552|size|exceed/i);
     mailer.close();
-    expect(await readCapturedMail(dir)).toHaveLength(before);
+    expect(await readAllCapturedMail(dir)).toHaveLength(before);
   });
 });
 
-describe('readCapturedMail and waitForMail', () => {
+describe('readAllCapturedMail and waitForMail', () => {
   it('treats a missing folder as empty and skips half-written files', async () => {
-    expect(await readCapturedMail(path.join(dir, 'missing'))).toEqual([]);
+    expect(await readAllCapturedMail(path.join(dir, 'missing'))).toEqual([]);
     await writeFile(path.join(dir, '9999999999999-abc.json.tmp'), '{');
-    const mails = await readCapturedMail(dir);
+    const mails = await readAllCapturedMail(dir);
     expect(mails.every((m) => !m.id.includes('tmp'))).toBe(true);
   });
 

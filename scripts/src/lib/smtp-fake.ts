@@ -1,30 +1,18 @@
 /**
  * A local SMTP server that accepts every message and writes it, parsed, as one JSON file into a
- * capture folder. The dev inbox (GET /api/dev/mail) and the tests read those files.
+ * capture folder (format: api/src/adapters/mail-capture.ts, which reads it for the dev inbox and the tests).
  * Loopback only, no TLS, no real authentication: it is a development and test tool.
  */
 import { randomBytes } from 'node:crypto';
-import { mkdir, readdir, readFile, rename, writeFile } from 'node:fs/promises';
+import { mkdir, rename, writeFile } from 'node:fs/promises';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
 import { simpleParser, type AddressObject } from 'mailparser';
 import { SMTPServer, type SMTPServerAddress } from 'smtp-server';
+// The folder's format is read in one place, next to the demo inbox that serves it.
+import { readAllCapturedMail, type CapturedMail } from '../../../api/src/adapters/mail-capture.js';
 
-/** One captured message, exactly as written to `<captureDir>/<id>.json`. */
-export interface CapturedMail {
-  /** File base name: `<ms-since-epoch>-<random>`. */
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string | null;
-  messageId: string | null;
-  /** Raw List-Unsubscribe and List-Unsubscribe-Post header values, when present. */
-  listUnsubscribe?: string | null;
-  listUnsubscribePost?: string | null;
-}
+export { readAllCapturedMail, type CapturedMail };
 
 export interface SmtpFakeOptions {
   /** 0 picks a free port; the returned `port` is the real one. */
@@ -42,7 +30,6 @@ export interface SmtpFake {
 }
 
 const DEFAULT_MAX_BYTES = 10 * 1024 * 1024;
-const ID_PATTERN = /^\d{13,}-[a-f0-9]+$/;
 
 function addressList(field: AddressObject | AddressObject[] | undefined): string[] {
   if (!field) return [];
@@ -162,35 +149,6 @@ export async function startSmtpFake(options: SmtpFakeOptions): Promise<SmtpFake>
   };
 }
 
-/** Every captured message in `captureDir`, newest first. A missing folder holds none. */
-export async function readCapturedMail(captureDir: string): Promise<CapturedMail[]> {
-  let names: string[];
-  try {
-    names = await readdir(captureDir);
-  } catch (err) {
-    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return [];
-    throw err;
-  }
-  const ids = names
-    .filter((n) => n.endsWith('.json'))
-    .map((n) => n.slice(0, -'.json'.length))
-    .filter((id) => ID_PATTERN.test(id));
-  const mails: CapturedMail[] = [];
-  for (const id of ids) {
-    try {
-      mails.push(JSON.parse(await readFile(path.join(captureDir, `${id}.json`), 'utf8')) as CapturedMail);
-    } catch {
-      // Removed between readdir and read, or not ours: skip it.
-    }
-  }
-  return mails.sort(compareNewestFirst);
-}
-
-function compareNewestFirst(a: CapturedMail, b: CapturedMail): number {
-  const [aStamp, bStamp] = [Number(a.id.split('-')[0]), Number(b.id.split('-')[0])];
-  return bStamp - aStamp || (a.id < b.id ? 1 : a.id > b.id ? -1 : 0);
-}
-
 /**
  * Polls `captureDir` until a message matches `predicate` and returns the newest match.
  * Throws after `timeoutMs`, naming the subjects it did see.
@@ -202,7 +160,7 @@ export async function waitForMail(
 ): Promise<CapturedMail> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
-    const mails = await readCapturedMail(captureDir);
+    const mails = await readAllCapturedMail(captureDir);
     const match = mails.find(predicate);
     if (match) return match;
     if (Date.now() >= deadline) {
