@@ -14,8 +14,10 @@ import { UrgentSymptomAlert } from './urgent-symptom-alert';
 import { useClock } from './use-clock';
 import { clockCaption, formatInstant } from '@/lib/clock';
 
-const loadEntryCards = () => import('./day-entry-cards');
-const DayEntryCards = lazy(() => loadEntryCards().then((m) => ({ default: m.DayEntryCards })));
+// Every screen that shows a day draws its forms: their code starts loading with this module, at the
+// same time as the day's data, not after the first render.
+const entryCards = import('./day-entry-cards');
+const DayEntryCards = lazy(() => entryCards.then((m) => ({ default: m.DayEntryCards })));
 
 /** Placeholders of the cards' usual heights while their chunk loads (below the fold on a phone). */
 const CARD_PLACEHOLDERS = ['h-64', 'h-48', 'h-32', 'h-56', 'h-32', 'h-32'];
@@ -66,9 +68,6 @@ export function DayCheckIn({
   const [urgentShown, setUrgentShown] = useState<{ date: string; message?: string } | null>(null);
   const alertRef = useRef<HTMLDivElement>(null);
   const [focusAlert, setFocusAlert] = useState(0);
-
-  // The cards' code loads while the day does, not after it.
-  useEffect(() => void loadEntryCards(), []);
 
   useEffect(() => {
     if (focusAlert === 0) return;
