@@ -75,7 +75,9 @@ export default defineConfig({
               test: /node_modules[\\/](recharts|d3-[a-z-]+|victory-vendor|internmap|decimal\.js-light|es-toolkit|redux|@reduxjs|immer|reselect|react-redux|use-sync-external-store)[\\/]/,
             },
             { name: 'table', test: /node_modules[\\/]@tanstack[\\/](react-table|table-core)[\\/]/ },
-            { name: 'data', test: /node_modules[\\/](@tanstack[\\/](react-query|query-core)|zod)[\\/]/ },
+            { name: 'data', test: /node_modules[\\/]@tanstack[\\/](react-query|query-core)[\\/]/ },
+            // zod loads with the forms and the screens that parse; the entry and the session need none.
+            { name: 'zod', test: /node_modules[\\/]zod[\\/]/ },
           ],
         },
       },

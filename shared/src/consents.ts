@@ -25,3 +25,10 @@ export const SAFETY_NOTE =
   'Estimates only, not medical advice. Consult a licensed physician or registered dietitian ' +
   'before aggressive deficits, final-week or weigh-in protocols, and follow your federation or ' +
   'commission rules.';
+
+/** Standing words on every countdown day and every day with an acknowledged warning. */
+export const STOP_SIGNS_TEXT =
+  'Stop and seek medical care at once if you feel dizzy, faint, have palpitations or feel confused.';
+export const NOT_MEDICAL_ADVICE_TEXT =
+  'This plan is not medical advice. Set it with a licensed physician or registered dietitian and ' +
+  'within your federation or commission rules.';

@@ -4,6 +4,8 @@ export * from './units.js';
 export * from './limits.js';
 export * from './time-zones.js';
 export * from './consents.js';
+export * from './vocabulary.js';
+export * from './symptoms.js';
 export * from './schemas/common.js';
 export * from './schemas/auth.js';
 export * from './schemas/me.js';

@@ -6,7 +6,8 @@ import type {
   TemplateDay,
   TemplateView,
 } from '../schemas/plans.js';
-import type { CountdownMismatch, EVENT_TYPES } from '../schemas/athletes.js';
+import type { CountdownMismatch } from '../schemas/athletes.js';
+import type { EVENT_TYPES } from '../vocabulary.js';
 import { addDays, cloneJson } from './format.js';
 import { countdownDayLabel, resolveTargets, starterPlanContent } from './resolve.js';
 

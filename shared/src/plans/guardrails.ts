@@ -346,13 +346,6 @@ export function unacknowledged(
   return warnings.filter((w) => !keys.has(w.key));
 }
 
-/** Standing words on every countdown day and every day with an acknowledged warning. */
-export const STOP_SIGNS_TEXT =
-  'Stop and seek medical care at once if you feel dizzy, faint, have palpitations or feel confused.';
-export const NOT_MEDICAL_ADVICE_TEXT =
-  'This plan is not medical advice. Set it with a licensed physician or registered dietitian and ' +
-  'within your federation or commission rules.';
-
 /** One warning per code and scope: facts joined, the strongest severity, the first field. */
 function merge(hits: readonly Hit[]): GuardrailWarning[] {
   const byKey = new Map<string, Hit[]>();

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TOLERANCES } from '../schemas/plans.js';
-import { DRIFT_METRICS, DRIFT_STATE_LABELS } from '../schemas/trends.js';
+import { DRIFT_METRICS } from '../schemas/trends.js';
+import { DRIFT_STATE_LABELS } from '../vocabulary.js';
 import {
   ACTIVITY_TOLERANCE_PCT,
   adherenceOf,

@@ -5,10 +5,9 @@ import {
   type CutoffStatus,
   type DriftEntry,
   type DriftMetric,
-  type DriftState,
-  type JudgedState,
   type TargetKind,
 } from '../schemas/trends.js';
+import type { DriftState, JudgedState } from '../vocabulary.js';
 
 /*
  * The day-verdict rules, in one place: how each metric's target is met (its kind), its tolerance,

@@ -1,4 +1,4 @@
-import type { JudgedState } from '../schemas/trends.js';
+import type { JudgedState } from '../vocabulary.js';
 
 /** Where a rate runs against its band: inside, faster or slower than it, or outside a band around zero. */
 export type RatePace = 'inside' | 'faster' | 'slower' | 'outside';

@@ -1,24 +1,18 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
+import { EVENT_TYPES } from '../vocabulary.js';
 import { clockTime, isoDate, text, timeZone } from './common.js';
 import { rosterFigures } from './trends.js';
 
 export const SEXES = ['female', 'male'] as const;
 export const GOALS = ['lose', 'maintain', 'gain'] as const;
-export const EVENT_TYPES = ['show', 'shoot', 'weigh_in', 'none'] as const;
 export const ATHLETE_STATUSES = ['intake_pending', 'active', 'ended'] as const;
 
 export const GOAL_LABELS: Record<(typeof GOALS)[number], string> = {
   lose: 'Lose fat',
   maintain: 'Hold steady',
   gain: 'Gain / regain',
-};
-export const EVENT_TYPE_LABELS: Record<(typeof EVENT_TYPES)[number], string> = {
-  show: 'Show',
-  shoot: 'Photo shoot',
-  weigh_in: 'Weigh-in',
-  none: 'No event',
 };
 
 const inRange = (min: number, max: number, what: string, unit: string) =>

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { CYCLE_PHASES, FLUID_KINDS, SYMPTOMS, WEIGH_IN_TAGS } from './check-ins.js';
+import { SYMPTOMS } from '../symptoms.js';
+import { CYCLE_PHASES, FLUID_KINDS, WEIGH_IN_TAGS } from './check-ins.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
 import { countdownDay, dayCaution, dayTargetsInForce } from './plans.js';
 import { cutoffBreach, cutoffStatus, driftEntry } from './trends.js';

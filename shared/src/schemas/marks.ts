@@ -1,17 +1,6 @@
 import { z } from 'zod';
+import { MARK_METRICS } from '../vocabulary.js';
 import { isoDate, text, uuid } from './common.js';
-
-/** A mark: a coach's note pinned to a chart's date or date range for one athlete. */
-
-export const MARK_METRICS = ['weight', 'fluids', 'energy', 'macros', 'general'] as const;
-export type MarkMetric = (typeof MARK_METRICS)[number];
-export const MARK_METRIC_LABELS: Record<MarkMetric, string> = {
-  weight: 'Weight',
-  fluids: 'Fluids',
-  energy: 'Energy',
-  macros: 'Macros',
-  general: 'General',
-};
 
 export const MARK_LIMITS = {
   note: { min: 1, max: 2000 },

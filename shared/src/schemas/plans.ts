@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { clockTime, isoDate, text, uuid } from './common.js';
 import { LIMITS } from '../limits.js';
-import { EVENT_TYPES, SEXES } from './athletes.js';
+import { EVENT_TYPES } from '../vocabulary.js';
+import { SEXES } from './athletes.js';
 
 /**
  * Plans, countdown templates and guardrails. A plan is a series of versions; each version holds

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { uuid } from './common.js';
-import { EVENT_TYPES, GOALS } from './athletes.js';
+import { EVENT_TYPES } from '../vocabulary.js';
+import { GOALS } from './athletes.js';
 
 export const REVIEW_REASON_KINDS = ['safety', 'missed', 'drift', 'reply', 'countdown'] as const;
 export type ReviewReasonKind = (typeof REVIEW_REASON_KINDS)[number];

@@ -1,26 +1,11 @@
 import { z } from 'zod';
+import { DRIFT_STATES } from '../vocabulary.js';
 import { isoDate, uuid } from './common.js';
 
 /**
  * Trend, rate, projection, drift from plan and adherence, as the server computes them
  * (api/src/lib/analysis.ts). All weights in kg, fluids in mL, energy in kcal, sodium in mg.
  */
-
-/**
- * A metric's verdict on a day (rules in shared/src/rules/day-verdicts.ts). `in_progress` is the
- * athlete's today until their local day ends: figures "so far", never judged, never counted.
- */
-export const DRIFT_STATES = ['on_plan', 'drifting', 'off_plan', 'not_logged', 'in_progress'] as const;
-export type DriftState = (typeof DRIFT_STATES)[number];
-/** The states of a finished day with a logged value. */
-export type JudgedState = Extract<DriftState, 'on_plan' | 'drifting' | 'off_plan'>;
-export const DRIFT_STATE_LABELS: Record<DriftState, string> = {
-  on_plan: 'On plan',
-  drifting: 'Drifting',
-  off_plan: 'Off plan',
-  not_logged: 'Not logged',
-  in_progress: 'So far',
-};
 
 /**
  * How a target is met: `range` (target ± tolerance), `at_least` (reaching or passing it is on plan),

@@ -11,6 +11,7 @@ import { planQueryOptions } from '@/features/plans/api/get-plan';
 import { templateQueryOptions } from '@/features/plans/api/get-template';
 import { templatesQueryOptions } from '@/features/plans/api/get-templates';
 import { reviewQueueQueryOptions } from '@/features/review/api/get-review-queue';
+import { currentWeeklyCheckInQueryOptions } from '@/features/weekly/api/get-current-weekly-check-in';
 import { todayIn } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
@@ -51,12 +52,17 @@ const prefetchOwnProfile = prefetchWhen(
   (me) => void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!)),
 );
 
-/** Today's screen: the profile and today's day (the athlete's own date) start loading together. */
+/**
+ * Today's screen: the profile, today's day (the athlete's own date), the weekly check-in banner and
+ * the shell's unread marks start loading together, as soon as the session is known.
+ */
 const prefetchToday = prefetchWhen(
   (me) => me.role === 'athlete' && me.athleteId !== null,
   (me) => {
     void queryClient.prefetchQuery(athleteQueryOptions(me.athleteId!));
     void queryClient.prefetchQuery(dayQueryOptions(me.athleteId!, todayIn(me.timeZone)));
+    void queryClient.prefetchQuery(currentWeeklyCheckInQueryOptions(me.athleteId!));
+    void queryClient.prefetchQuery(marksQueryOptions(me.athleteId!));
   },
 );
 

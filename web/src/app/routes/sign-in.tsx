@@ -6,6 +6,14 @@ import { safeNextPath } from '@/lib/safe-next';
 import { PublicShell } from '../layouts/public-shell';
 import { homePathFor } from '../session';
 
+/**
+ * Most accounts are athletes: Today's code loads while the server checks the password (a few hundred
+ * milliseconds), instead of after the answer.
+ */
+function preloadToday() {
+  void import('./athlete-home').catch(() => undefined);
+}
+
 export function SignInRoute() {
   const [params] = useSearchParams();
   const navigate = useNavigate();
@@ -25,6 +33,7 @@ export function SignInRoute() {
       ) : (
         <div className="rounded-lg border border-line bg-surface p-5 shadow-card sm:p-6">
           <SignInForm
+            onSubmitting={preloadToday}
             onSignedIn={(user) => void navigate(safeNextPath(next, homePathFor(user)), { replace: true })}
           />
         </div>

@@ -1,25 +1,26 @@
 import type { DayView, VolumeUnit, WeightUnit } from '@driftmark/shared';
-import { useEffect, useRef, useState, type ReactNode } from 'react';
+import { lazy, Suspense, useEffect, useRef, useState, type ReactNode } from 'react';
 import { Link } from 'react-router';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { CameraIcon, CautionIcon } from '@/components/ui/icons';
 import { Skeleton } from '@/components/ui/spinner';
-import { cn } from '@/lib/cn';
 import { useDay } from '../api/get-day';
 import { addDays } from '../utils/dates';
 import { dayHasUrgentSymptom } from '../utils/symptoms';
 import { DayCautionCard } from './countdown-caution';
 import { DayTargetsCard } from './day-targets';
-import { EveningCard } from './evening-card';
-import { FluidsCard } from './fluids-card';
-import { MealsCard } from './meals-card';
-import { SupplementsCard } from './supplements-card';
-import { SymptomsCard } from './symptoms-card';
 import { UrgentSymptomAlert } from './urgent-symptom-alert';
 import { useClock } from './use-clock';
-import { WeighInCard } from './weigh-in-card';
 import { clockCaption, formatInstant } from '@/lib/clock';
+
+// Every screen that shows a day draws its forms: their code starts loading with this module, at the
+// same time as the day's data, not after the first render.
+const entryCards = import('./day-entry-cards');
+const DayEntryCards = lazy(() => entryCards.then((m) => ({ default: m.DayEntryCards })));
+
+/** Placeholders of the cards' usual heights while their chunk loads (below the fold on a phone). */
+const CARD_PLACEHOLDERS = ['h-64', 'h-48', 'h-32', 'h-56', 'h-32', 'h-32'];
 
 interface DayCheckInProps {
   athleteId: string;
@@ -127,20 +128,25 @@ export function DayCheckIn({
       <DayCautionCard day={day} />
       {before}
       <DayTargetsCard {...props} />
-      <div className={cn(layout === 'grid' ? 'grid items-start gap-4 lg:grid-cols-2' : 'space-y-4')}>
-        <WeighInCard {...props} />
-        <FluidsCard {...props} />
-        <MealsCard {...props} />
-        <SupplementsCard {...props} previous={previous.data?.data.supplements} />
-        <EveningCard {...props} />
-        <SymptomsCard
+      <Suspense
+        fallback={
+          <div aria-busy="true" aria-label="Loading the day's forms" className="space-y-4">
+            {CARD_PLACEHOLDERS.map((h, i) => (
+              <Skeleton key={i} className={h} />
+            ))}
+          </div>
+        }
+      >
+        <DayEntryCards
           {...props}
+          layout={layout}
+          previous={previous.data?.data.supplements}
           onUrgent={(message) => {
             setUrgentShown((prev) => ({ date, message: message ?? prev?.message }));
             setFocusAlert((n) => n + 1);
           }}
         />
-      </div>
+      </Suspense>
       {day.photos.length > 0 ? <DayPhotos day={day} href={photosHref} /> : null}
     </div>
   );

@@ -26,7 +26,7 @@ import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { ConfirmDelete, EditableEntries } from './entry-row';
 import { showServerError } from './server-errors';
-import { useFollowClock } from './use-clock';
+import { useFollowClock } from './use-follow-clock';
 
 const KIND_OPTIONS = FLUID_KINDS.map((k) => ({ value: k, label: FLUID_KIND_LABELS[k] }));
 

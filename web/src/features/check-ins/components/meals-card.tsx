@@ -19,7 +19,7 @@ import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
 import { FoodPicker } from './food-picker';
-import { useFollowClock } from './use-clock';
+import { useFollowClock } from './use-follow-clock';
 
 const grams = (g: number) => `${formatNumber(g, 1)}${NBSP}g`;
 const milligrams = (mg: number) => `${formatNumber(mg, 0)}${NBSP}mg`;

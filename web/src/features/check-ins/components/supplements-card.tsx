@@ -21,7 +21,7 @@ import { createRequestResolver } from '../utils/resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
-import { useFollowClock } from './use-clock';
+import { useFollowClock } from './use-follow-clock';
 
 type Supplement = DayView['supplements'][number];
 

@@ -32,7 +32,7 @@ import { hasUrgentSymptom } from '../utils/symptoms';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';
-import { useFollowClock } from './use-clock';
+import { useFollowClock } from './use-follow-clock';
 
 const URGENT = new Set<Symptom>(URGENT_SYMPTOMS);
 

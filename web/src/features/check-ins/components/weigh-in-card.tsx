@@ -24,7 +24,7 @@ import { displayWeight } from '../utils/units';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { ConfirmDelete } from './entry-row';
-import { useFollowClock } from './use-clock';
+import { useFollowClock } from './use-follow-clock';
 
 /** The protocol, in one line: it is also the checkbox's label. */
 export const WEIGH_IN_PROTOCOL = 'After waking and voiding, before food and drink';
