@@ -7,7 +7,7 @@
  * - weigh-in: PUT …/days/:date/weigh-in vs INSERT INTO weigh_ins … ON CONFLICT (athlete, date) DO UPDATE.
  *
  * The API's requests go round 20 roster athletes (each signed in once) over the last 60 days, so no
- * single day grows long. Statements per write: the API's own count (X-Db-Statements, the counter of
+ * single day grows long; pgbench writes for a 21st athlete, and its rows are removed after each run. Statements per write: the API's own count (X-Db-Statements, the counter of
  * STATEMENT_COUNT_HEADER=1: every statement TypeORM sends, BEGIN and COMMIT included) for one write
  * sent alone, median of three.
  */
@@ -73,6 +73,9 @@ export async function openWriteBench(options: {
   today: string;
 }): Promise<WriteBench> {
   const writers = options.athletes.slice(0, WRITERS);
+  // pgbench writes for an athlete of its own, so its rows never crowd the API's days.
+  const pgbenchAthlete = options.athletes[WRITERS];
+  if (!pgbenchAthlete) throw new Error(`The write bench needs ${WRITERS + 1} athletes.`);
   const cookies: string[] = [];
   for (const a of writers) cookies.push(await signIn(options.baseUrl, a.email, options.password));
 
@@ -98,6 +101,17 @@ export async function openWriteBench(options: {
       headers: { ...headers, ...body.headers },
       body: body.body,
     };
+  };
+
+  const removePgbenchRows = async (): Promise<void> => {
+    const db = new pg.Client({ connectionString: options.databaseUrl });
+    await db.connect();
+    try {
+      await db.query(`DELETE FROM fluid_entries WHERE local_time = $1`, [PGBENCH_MARK_TIME]);
+      await db.query(`DELETE FROM weigh_ins WHERE local_time = $1`, [PGBENCH_MARK_TIME]);
+    } finally {
+      await db.end();
+    }
   };
 
   let sequence = 0;
@@ -137,7 +151,7 @@ export async function openWriteBench(options: {
     async pgbench(kind, connections, seconds) {
       const dir = mkdtempSync(path.join(tmpdir(), 'driftmark-pgbench-'));
       try {
-        const athlete = writers[0]!.id;
+        const athlete = pgbenchAthlete.id;
         const script =
           kind === 'fluid'
             ? `\\set d random(0, ${SPREAD_DAYS - 1})
@@ -184,6 +198,7 @@ INSERT INTO weigh_ins (athlete_id, local_date, local_time, logged_at, weight_kg,
         };
       } finally {
         rmSync(dir, { recursive: true, force: true });
+        await removePgbenchRows();
       }
     },
 
@@ -197,15 +212,6 @@ INSERT INTO weigh_ins (athlete_id, local_date, local_time, logged_at, weight_kg,
       return median(counts);
     },
 
-    async cleanUp() {
-      const db = new pg.Client({ connectionString: options.databaseUrl });
-      await db.connect();
-      try {
-        await db.query(`DELETE FROM fluid_entries WHERE local_time = $1`, [PGBENCH_MARK_TIME]);
-        await db.query(`DELETE FROM weigh_ins WHERE local_time = $1`, [PGBENCH_MARK_TIME]);
-      } finally {
-        await db.end();
-      }
-    },
+    cleanUp: removePgbenchRows,
   };
 }
