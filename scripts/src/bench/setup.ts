@@ -87,7 +87,8 @@ export async function setUpBench(log: (message: string) => void): Promise<BenchE
   if (!pgBinDir) throw new Error('No PostgreSQL binaries found (pgbench).');
   const versionDb = new pg.Client({ connectionString: databaseUrl });
   await versionDb.connect();
-  const pgVersion = (await versionDb.query<{ v: string }>('SHOW server_version')).rows[0]!.v;
+  const pgVersion = (await versionDb.query<{ v: string }>(`SELECT current_setting('server_version') AS v`))
+    .rows[0]!.v;
   await versionDb.end();
 
   return {
