@@ -39,7 +39,8 @@ export interface Line {
 const ms = (n: number) => (n >= 1000 ? `${(n / 1000).toFixed(2)} s` : `${n.toFixed(1)} ms`);
 const kB = (n: number) =>
   n >= 1_000_000 ? `${(n / 1_000_000).toFixed(2)} MB` : `${(n / 1000).toFixed(1)} kB`;
-const x = (n: number) => `${n >= 10 ? n.toFixed(1) : n.toFixed(2)} ×`;
+/** A ratio with two significant figures below 0.1 (0.0047 ×), else one or two decimals. */
+const x = (n: number) => `${n >= 10 ? n.toFixed(1) : n >= 0.1 ? n.toFixed(2) : n.toPrecision(2)} ×`;
 const rate = (n: number) => `${Math.round(n).toLocaleString('en-US')}/s`;
 
 function shiftDays(date: string, days: number): string {
