@@ -16,6 +16,7 @@ export default defineConfig({
             'shared/src/**/*.test.ts',
             'api/src/**/*.test.ts',
             'web/src/**/*.test.{ts,tsx}',
+            'web/*.test.ts',
             'scripts/src/**/*.test.ts',
           ],
         },

@@ -4,6 +4,7 @@ import { brotliCompressSync, constants, gzipSync } from 'node:zlib';
 import tailwindcss from '@tailwindcss/vite';
 import react from '@vitejs/plugin-react';
 import { defineConfig, type Plugin } from 'vite';
+import { reportBudget } from './budget';
 
 const src = decodeURIComponent(new URL('./src', import.meta.url).pathname);
 
@@ -26,7 +27,8 @@ function precompress(): Plugin {
           return statSync(file).isDirectory() ? walk(file) : [file];
         });
       for (const file of walk(outDir)) {
-        if (!/\.(js|css|html|svg|json|txt)$/.test(file)) continue;
+        if (!/\.(js|css|html|svg|json|txt)$/.test(file) || file.includes(`${path.sep}.vite${path.sep}`))
+          continue;
         const body = readFileSync(file);
         if (body.length < 1024) continue;
         writeFileSync(`${file}.gz`, gzipSync(body, { level: 9 }));
@@ -39,8 +41,23 @@ function precompress(): Plugin {
   };
 }
 
+/** The first-route JavaScript budget (budget.ts), checked on every build after the files are written. */
+function firstRouteBudget(): Plugin {
+  let outDir = 'dist';
+  return {
+    name: 'driftmark-first-route-budget',
+    apply: 'build',
+    configResolved(config) {
+      outDir = path.resolve(config.root, config.build.outDir);
+    },
+    closeBundle() {
+      if (!reportBudget(outDir)) throw new Error('The first-route JavaScript is over its budget.');
+    },
+  };
+}
+
 export default defineConfig({
-  plugins: [react(), tailwindcss(), precompress()],
+  plugins: [react(), tailwindcss(), precompress(), firstRouteBudget()],
   resolve: {
     alias: { '@': src },
   },
@@ -62,6 +79,8 @@ export default defineConfig({
     outDir: 'dist',
     emptyOutDir: true,
     sourcemap: true,
+    // dist/.vite/manifest.json: which chunks each route loads (read by the budget check and the bench).
+    manifest: true,
     rolldownOptions: {
       output: {
         // Libraries change less often than the app: separate chunks stay cached across releases. No

@@ -2,6 +2,7 @@ import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import express from 'express';
 import type { DataSource } from 'typeorm';
+import { statementCount } from './db/data-source.js';
 import type { Config } from './config.js';
 import type { AppContext } from './context.js';
 import { configureNotifications } from './services/notify.service.js';
@@ -57,6 +58,19 @@ export function createApp(deps: {
   app.set('query parser', 'simple');
 
   app.use(requestLogging(logger));
+  if (config.statementCountHeader) {
+    // The statements the process sent between the request's arrival and its answer's headers: the
+    // request's own only while requests run one at a time, as `npm run bench` sends them.
+    app.use((_req, res, next) => {
+      const before = statementCount.total;
+      const writeHead = res.writeHead.bind(res) as (...args: unknown[]) => typeof res;
+      res.writeHead = ((...args: unknown[]) => {
+        if (!res.headersSent) res.setHeader('X-Db-Statements', String(statementCount.total - before));
+        return writeHead(...args);
+      }) as typeof res.writeHead;
+      next();
+    });
+  }
   app.use((req, _res, next) => {
     req.ctx = ctx;
     next();

@@ -35,7 +35,9 @@ describe('loadConfig', () => {
       addressRateLimit: 30,
       sessionTtlMinutes: 15,
       sessionMaxDays: 30,
+      statementCountHeader: false,
     });
+    expect(loadConfig({ ...base, STATEMENT_COUNT_HEADER: '1' }).statementCountHeader).toBe(true);
     expect(c.smtpUrl).toBeUndefined();
     expect(c.mailCaptureDir).toBeUndefined();
     expect(c.webDist).toMatch(/web[/\\]dist$/);

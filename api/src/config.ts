@@ -85,6 +85,10 @@ export const configSchema = z.object({
   SESSION_MAX_DAYS: positiveInt(30),
   /** `1` lets a production start use an http APP_ORIGIN (a local run, never a public server). */
   ALLOW_HTTP_ORIGIN: optionalString.pipe(z.enum(['0', '1'], { error: 'must be 1 (allow) or 0' }).optional()),
+  /** `1`: every answer carries X-Db-Statements (set by `npm run bench`; see app.ts). */
+  STATEMENT_COUNT_HEADER: optionalString.pipe(
+    z.enum(['0', '1'], { error: 'must be 1 (on) or 0' }).optional(),
+  ),
 });
 
 /**
@@ -146,6 +150,8 @@ export interface Config {
   sessionTtlMinutes: number;
   /** Absolute session lifetime in days. */
   sessionMaxDays: number;
+  /** Count the SQL statements sent and report them per answer in X-Db-Statements (the bench's counter). */
+  statementCountHeader: boolean;
 }
 
 /**
@@ -185,5 +191,6 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     addressRateLimit: e.ADDRESS_RATE_LIMIT,
     sessionTtlMinutes: e.SESSION_TTL_MINUTES,
     sessionMaxDays: e.SESSION_MAX_DAYS,
+    statementCountHeader: e.STATEMENT_COUNT_HEADER === '1',
   };
 }

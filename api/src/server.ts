@@ -39,7 +39,7 @@ async function main(): Promise<void> {
   installProcessErrorHandlers(logger);
 
   const startedAt = new Date();
-  const dataSource = createDataSource(config);
+  const dataSource = createDataSource(config, { countStatements: config.statementCountHeader });
   await dataSource.initialize();
   // Files and rows agree before the first request: whatever a kill left behind is settled now.
   const storage = new LocalFolderStorage(config.uploadsDir);

@@ -1,5 +1,5 @@
 import 'reflect-metadata';
-import { DataSource } from 'typeorm';
+import { DataSource, type Logger as TypeOrmLogger } from 'typeorm';
 import type { Config } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
 import { AthleteFlag } from '../entities/athlete-flag.entity.js';
@@ -69,11 +69,27 @@ export const ENTITIES = [
   NotificationSend,
 ];
 
+/** Statements this process has sent through TypeORM, counted only when `countStatements` is on. */
+export const statementCount = { total: 0 };
+
+/** Counts every statement TypeORM sends (transaction control included) and logs nothing. */
+class StatementCounter implements TypeOrmLogger {
+  logQuery(): void {
+    statementCount.total += 1;
+  }
+  logQueryError(): void {}
+  logQuerySlow(): void {}
+  logSchemaBuild(): void {}
+  logMigration(): void {}
+  log(): void {}
+}
+
 export function createDataSource(
   config: Pick<Config, 'databaseUrl'>,
-  options: { poolSize?: number } = {},
+  options: { poolSize?: number; countStatements?: boolean } = {},
 ): DataSource {
   return new DataSource({
+    ...(options.countStatements ? { logger: new StatementCounter() } : {}),
     type: 'postgres',
     url: config.databaseUrl,
     entities: ENTITIES,
