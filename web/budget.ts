@@ -24,11 +24,8 @@ export const FIRST_ROUTES = {
 } as const;
 export type FirstRoute = keyof typeof FIRST_ROUTES;
 
-/**
- * Whether `vite build` fails over budget. False for now: the bundle on main is over the budget while
- * it is being split (issue 13), so the build only warns; set it to true once both routes fit.
- */
-export const FIRST_ROUTE_BUDGET_FAILS_BUILD = false;
+/** Whether `vite build` fails over budget (it does; `FIRST_ROUTE_BUDGET=warn` only warns, for one build). */
+export const FIRST_ROUTE_BUDGET_FAILS_BUILD = true;
 
 /** `FIRST_ROUTE_BUDGET=enforce` (or `warn`) overrides FIRST_ROUTE_BUDGET_FAILS_BUILD for one run. */
 export const BUDGET_MODE_VARIABLE = 'FIRST_ROUTE_BUDGET';
