@@ -54,7 +54,7 @@ beforeAll(async () => {
     .send({ metric: 'weight', fromDate: TODAY, toDate: TODAY, note: 'Fuzz mark' });
   const template = await agents.coach.post('/api/countdown-templates').send(templateBody());
   ids.athleteId = [athlete.athlete.id];
-  ids.entryId = [fluid.body.data?.fluids?.[0]?.id ?? randomUUID()];
+  ids.entryId = [fluid.body.data?.id ?? randomUUID()];
   ids.markId = [mark.body.data?.id ?? randomUUID()];
   ids.templateId = [template.body.data?.id ?? randomUUID()];
   ids.userId = [coach.id, owner.id, athlete.user.id];

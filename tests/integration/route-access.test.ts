@@ -198,10 +198,10 @@ beforeAll(async () => {
     },
   };
   entryIds = {
-    fluids: fluid.body.data.fluids[0].id,
-    meals: meal.body.data.meals[0].id,
-    supplements: supplement.body.data.supplements[0].id,
-    symptoms: symptom.body.data.symptoms[0].id,
+    fluids: fluid.body.data.id,
+    meals: meal.body.data.id,
+    supplements: supplement.body.data.id,
+    symptoms: symptom.body.data.id,
   };
   routes = appRoutes(t.app);
 }, 120_000);

@@ -29,4 +29,15 @@ describe('session tokens', () => {
     expect(verifySessionToken(hs512, secret)).toBeNull();
     expect(verifySessionToken('garbage', secret)).toBeNull();
   });
+
+  it('reads tokens jsonwebtoken signs with the plain secret, and the other way round (the cached key is the same HMAC key)', () => {
+    // jsonwebtoken is the reference: a string secret is the HMAC key as its UTF-8 bytes (RFC 7518 §3.2).
+    const exp = Math.floor(Date.now() / 1000) + 60;
+    const plain = jwt.sign({ sid: 's', exp }, secret, { subject: 'u', algorithm: 'HS256' });
+    expect(verifySessionToken(plain, secret)).toMatchObject({ sub: 'u', sid: 's', exp });
+    const ours = signSessionToken({ userId: 'u', sessionId: 's', expiresAt: new Date(exp * 1000) }, secret);
+    expect(jwt.verify(ours, secret, { algorithms: ['HS256'] })).toMatchObject({ sub: 'u', sid: 's', exp });
+    // A second secret gets its own key.
+    expect(verifySessionToken(plain, 'u'.repeat(40))).toBeNull();
+  });
 });

@@ -4,11 +4,6 @@ import { AthleteShare } from '../entities/athlete-share.entity.js';
 export class AthleteShareRepository {
   constructor(private readonly manager: EntityManager) {}
 
-  async listUserIds(athleteId: string): Promise<string[]> {
-    const rows = await this.manager.find(AthleteShare, { where: { athleteId }, select: { userId: true } });
-    return rows.map((r) => r.userId);
-  }
-
   /** athlete id → user ids it is shared with. */
   async listUserIdsByAthlete(athleteIds: string[]): Promise<Map<string, string[]>> {
     const map = new Map<string, string[]>();

@@ -44,6 +44,28 @@ export class AthleteRepository {
     }) as Promise<AthleteWithPeople | null>;
   }
 
+  /**
+   * The athlete with both people and the user ids it is shared with (what the athlete policy
+   * needs), in one statement: every request about an athlete starts here.
+   */
+  async findForAccess(
+    id: string,
+  ): Promise<{ athlete: AthleteWithPeople; sharedWithUserIds: string[] } | null> {
+    const { entities, raw } = await this.manager
+      .createQueryBuilder(Athlete, 'a')
+      .leftJoinAndSelect('a.user', 'u')
+      .leftJoinAndSelect('a.coach', 'c')
+      .addSelect(
+        'ARRAY(SELECT sh.user_id::text FROM athlete_shares sh WHERE sh.athlete_id = a.id)',
+        'shared_user_ids',
+      )
+      .where('a.id = :id', { id })
+      .getRawAndEntities<{ shared_user_ids: string[] }>();
+    const athlete = entities[0];
+    if (!athlete) return null;
+    return { athlete: athlete as AthleteWithPeople, sharedWithUserIds: raw[0]?.shared_user_ids ?? [] };
+  }
+
   /** Locks the athlete row inside the caller's transaction (serialises writes about one athlete). */
   async lockForUpdate(id: string): Promise<void> {
     await this.manager.findOne(Athlete, { where: { id }, lock: { mode: 'pessimistic_write' } });

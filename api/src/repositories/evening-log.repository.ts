@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { EveningLog } from '../entities/evening-log.entity.js';
+import { hydrateRows } from './hydrate.js';
 
 export type EveningValues = Pick<
   EveningLog,
@@ -21,9 +22,9 @@ export class EveningLogRepository {
     return this.manager.findOneBy(EveningLog, { athleteId, localDate: date });
   }
 
-  /** Inserts the day's evening log or replaces it. */
-  async upsert(values: EveningValues): Promise<void> {
-    await this.manager
+  /** Inserts the day's evening log or replaces it; returns the stored row. */
+  async upsert(values: EveningValues): Promise<EveningLog> {
+    const result = await this.manager
       .createQueryBuilder()
       .insert()
       .into(EveningLog)
@@ -41,7 +42,11 @@ export class EveningLogRepository {
         ],
         ['athlete_id', 'local_date'],
       )
+      .returning('*')
       .execute();
+    const [row] = hydrateRows(this.manager, EveningLog, result.raw as Record<string, unknown>[]);
+    if (!row) throw new Error('evening upsert returned no row');
+    return row;
   }
 
   async removeForDay(athleteId: string, date: string): Promise<void> {

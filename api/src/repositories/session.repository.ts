@@ -11,11 +11,16 @@ export class SessionRepository {
     );
   }
 
-  /** The session with its user, or null. Validity (revoked, expired) is the caller's check. */
+  /**
+   * The session with its user, or null, in one statement (every request asks). Validity (revoked,
+   * expired) is the caller's check.
+   */
   findWithUser(id: string): Promise<(Session & { user: User }) | null> {
-    return this.manager.findOne(Session, { where: { id }, relations: { user: true } }) as Promise<
-      (Session & { user: User }) | null
-    >;
+    return this.manager
+      .createQueryBuilder(Session, 's')
+      .innerJoinAndSelect('s.user', 'u')
+      .where('s.id = :id', { id })
+      .getOne() as Promise<(Session & { user: User }) | null>;
   }
 
   findById(id: string): Promise<Session | null> {

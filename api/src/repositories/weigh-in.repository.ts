@@ -1,5 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { WeighIn } from '../entities/weigh-in.entity.js';
+import { hydrateRows } from './hydrate.js';
 
 export type WeighInValues = Pick<
   WeighIn,
@@ -32,9 +33,12 @@ export class WeighInRepository {
     );
   }
 
-  /** Inserts the day's weigh-in or replaces it (one statement, so two at once cannot both insert). */
-  async upsert(values: WeighInValues): Promise<void> {
-    await this.manager
+  /**
+   * Inserts the day's weigh-in or replaces it (one statement, so two at once cannot both insert);
+   * returns the stored row.
+   */
+  async upsert(values: WeighInValues): Promise<WeighIn> {
+    const result = await this.manager
       .createQueryBuilder()
       .insert()
       .into(WeighIn)
@@ -53,7 +57,11 @@ export class WeighInRepository {
         ],
         ['athlete_id', 'local_date'],
       )
+      .returning('*')
       .execute();
+    const [row] = hydrateRows(this.manager, WeighIn, result.raw as Record<string, unknown>[]);
+    if (!row) throw new Error('weigh-in upsert returned no row');
+    return row;
   }
 
   async removeForDay(athleteId: string, date: string): Promise<void> {

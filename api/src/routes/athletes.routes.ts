@@ -18,7 +18,6 @@ import {
 } from '../policies/athlete.policy.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { todayIn } from '../lib/dates.js';
-import { AthleteShareRepository } from '../repositories/athlete-share.repository.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { athleteProfileView, PlanService } from '../services/plan.service.js';
 
@@ -34,13 +33,14 @@ export function loadAthlete(req: Request<{ athleteId: string }>, action: Athlete
 export async function loadAthleteById(req: Request, athleteId: string, action: AthleteAction) {
   const { actor } = requireAuth(req);
   const manager = req.ctx.dataSource.manager;
-  const athlete = await new AthleteRepository(manager).findWithPeople(athleteId);
-  if (!athlete) throw notFound();
+  const found = await new AthleteRepository(manager).findForAccess(athleteId);
+  if (!found) throw notFound();
+  const { athlete, sharedWithUserIds } = found;
   const target: AthleteTarget = {
     userId: athlete.userId,
     teamId: athlete.teamId,
     coachId: athlete.coachId,
-    sharedWithUserIds: await new AthleteShareRepository(manager).listUserIds(athlete.id),
+    sharedWithUserIds,
   };
   authorizeAthlete(actor, action, target);
   if (action === 'log' && athlete.status === 'ended') {

@@ -1,17 +1,11 @@
-import {
-  dayRangeQuery,
-  eveningRequest,
-  isoDate,
-  uuid,
-  weighInRequest,
-  type DayView,
-} from '@driftmark/shared';
+import { dayRangeQuery, eveningRequest, isoDate, uuid, weighInRequest } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { dated, validate } from '../middleware/validate.js';
 import { readerOf } from '../lib/reader.js';
+import { presentEvening, presentWeighIn } from '../presenters/day.presenter.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { CheckInService } from '../services/check-in.service.js';
 import {
@@ -28,9 +22,16 @@ const athleteParams = z.object({ athleteId: uuid });
 const dayParams = z.object({ athleteId: uuid, date: isoDate });
 const entryParams = z.object({ athleteId: uuid, entryId: uuid });
 
-const dayBody = (day: DayView, meta?: Record<string, string>) => ({ data: day, ...(meta ? { meta } : {}) });
+const entryBody = (entry: unknown, meta?: Record<string, string>) => ({
+  data: entry,
+  ...(meta ? { meta } : {}),
+});
 
-/** POST /days/:date/<kind>, PATCH and DELETE /<kind>/:entryId for one kind of entry. */
+/**
+ * POST /days/:date/<kind>, PATCH and DELETE /<kind>/:entryId for one kind of entry. A write answers
+ * with the entry it wrote (a delete with 204), not the day: the day's totals and verdicts come
+ * from GET …/days/:date, so a write is the session check, the access check and its own statement.
+ */
 function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; time: string }>(
   router: Router,
   kind: EntryKind<E, I>,
@@ -42,7 +43,7 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
       const result = await new CheckInService(req.ctx).createEntry(kind, athlete, req.params.date, req.body);
-      res.status(result.created ? 201 : 200).json(dayBody(result.day, result.meta));
+      res.status(result.created ? 201 : 200).json(entryBody(kind.present(result.entry), result.meta));
     },
   );
 
@@ -59,7 +60,7 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
         req.params.entryId,
         req.body,
       );
-      res.json(dayBody(result.day, result.meta));
+      res.json(entryBody(kind.present(result.entry), result.meta));
     },
   );
 
@@ -69,7 +70,8 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
     validate({ params: entryParams }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
-      res.json(dayBody(await new CheckInService(req.ctx).deleteEntry(kind, athlete, req.params.entryId)));
+      await new CheckInService(req.ctx).deleteEntry(kind, athlete, req.params.entryId);
+      res.status(204).end();
     },
   );
 }
@@ -112,7 +114,8 @@ export function checkInsRouter(): Router {
     validate({ params: dayParams, body: weighInRequest }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
-      res.json({ data: await new CheckInService(req.ctx).putWeighIn(athlete, req.params.date, req.body) });
+      const weighIn = await new CheckInService(req.ctx).putWeighIn(athlete, req.params.date, req.body);
+      res.json({ data: presentWeighIn(weighIn) });
     },
   );
 
@@ -122,7 +125,8 @@ export function checkInsRouter(): Router {
     validate({ params: dayParams }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
-      res.json({ data: await new CheckInService(req.ctx).deleteWeighIn(athlete, req.params.date) });
+      await new CheckInService(req.ctx).deleteWeighIn(athlete, req.params.date);
+      res.status(204).end();
     },
   );
 
@@ -132,7 +136,8 @@ export function checkInsRouter(): Router {
     validate({ params: dayParams, body: eveningRequest }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
-      res.json({ data: await new CheckInService(req.ctx).putEvening(athlete, req.params.date, req.body) });
+      const evening = await new CheckInService(req.ctx).putEvening(athlete, req.params.date, req.body);
+      res.json({ data: presentEvening(evening) });
     },
   );
 
@@ -142,7 +147,8 @@ export function checkInsRouter(): Router {
     validate({ params: dayParams }),
     async (req, res) => {
       const { athlete } = await loadAthlete(req, 'log');
-      res.json({ data: await new CheckInService(req.ctx).deleteEvening(athlete, req.params.date) });
+      await new CheckInService(req.ctx).deleteEvening(athlete, req.params.date);
+      res.status(204).end();
     },
   );
 

@@ -1,14 +1,8 @@
-import {
-  LIMITS,
-  RATING_KEYS,
-  weightToKg,
-  type DayView,
-  type EveningRequest,
-  type WeighInRequest,
-} from '@driftmark/shared';
-import type { DataSource, QueryDeepPartialEntity } from 'typeorm';
+import { LIMITS, RATING_KEYS, weightToKg, type EveningRequest, type WeighInRequest } from '@driftmark/shared';
+import type { DataSource, EntityManager, QueryDeepPartialEntity } from 'typeorm';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
-import type { Ratings } from '../entities/evening-log.entity.js';
+import type { EveningLog, Ratings } from '../entities/evening-log.entity.js';
+import type { WeighIn } from '../entities/weigh-in.entity.js';
 import { notFound, validationFailed } from '../errors.js';
 import { futureEntryProblem, localInstant } from '../lib/local-time.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
@@ -16,11 +10,9 @@ import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { EveningLogRepository } from '../repositories/evening-log.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import type { EntryContext, EntryKind } from './day-entry-kinds.js';
-import { readerOf } from '../lib/reader.js';
-import { loadDayView } from './day.service.js';
 
-export interface EntryResult {
-  day: DayView;
+export interface EntryResult<E> {
+  entry: E;
   /** False when the client id had been used: the first entry is returned, nothing is added. */
   created: boolean;
   meta?: Record<string, string>;
@@ -31,7 +23,11 @@ type CheckInDeps = { dataSource: DataSource; clock: () => Date };
 const isPlainObject = (v: unknown): v is Record<string, unknown> =>
   typeof v === 'object' && v !== null && !Array.isArray(v);
 
-/** Writes to an athlete's days. The caller has authorized `log` on the athlete. */
+/**
+ * Writes to an athlete's days. The caller has authorized `log` on the athlete. Each write answers
+ * with the row it wrote, never the day view: the day's totals and verdicts are the day view's
+ * (`GET …/days/:date`), which the client fetches again after a write.
+ */
 export class CheckInService {
   constructor(private readonly deps: CheckInDeps) {}
 
@@ -40,16 +36,10 @@ export class CheckInService {
     if (problem) throw validationFailed(problem);
   }
 
-  private day(athlete: AthleteWithPeople, date: string, now: Date): Promise<DayView> {
-    // Only the athlete logs their own days, so the athlete reads the answer.
-    return loadDayView(this.deps.dataSource.manager, athlete, date, now, readerOf(athlete.user, athlete));
-  }
-
-  /** Replaces the day's weigh-in (kg stored, the typed value and unit kept). */
-  async putWeighIn(athlete: AthleteWithPeople, date: string, input: WeighInRequest): Promise<DayView> {
-    const now = this.deps.clock();
-    this.assertNotFuture(athlete, date, input.time, now);
-    await new WeighInRepository(this.deps.dataSource.manager).upsert({
+  /** Replaces the day's weigh-in (kg stored, the typed value and unit kept): one statement. */
+  async putWeighIn(athlete: AthleteWithPeople, date: string, input: WeighInRequest): Promise<WeighIn> {
+    this.assertNotFuture(athlete, date, input.time, this.deps.clock());
+    return new WeighInRepository(this.deps.dataSource.manager).upsert({
       athleteId: athlete.id,
       localDate: date,
       localTime: input.time,
@@ -61,21 +51,18 @@ export class CheckInService {
       tags: [...new Set(input.tags)],
       cyclePhase: input.cyclePhase ?? null,
     });
-    return this.day(athlete, date, now);
   }
 
-  async deleteWeighIn(athlete: AthleteWithPeople, date: string): Promise<DayView> {
+  async deleteWeighIn(athlete: AthleteWithPeople, date: string): Promise<void> {
     await new WeighInRepository(this.deps.dataSource.manager).removeForDay(athlete.id, date);
-    return this.day(athlete, date, this.deps.clock());
   }
 
   /**
    * Saves the evening card. Fields left out keep what was saved (the card fills up through the
    * evening); null clears one. Ratings merge the same way, key by key.
    */
-  async putEvening(athlete: AthleteWithPeople, date: string, input: EveningRequest): Promise<DayView> {
-    const now = this.deps.clock();
-    this.assertNotFuture(athlete, date, null, now);
+  async putEvening(athlete: AthleteWithPeople, date: string, input: EveningRequest): Promise<EveningLog> {
+    this.assertNotFuture(athlete, date, null, this.deps.clock());
     const repo = new EveningLogRepository(this.deps.dataSource.manager);
     const saved = await repo.findForDay(athlete.id, date);
     const pick = <T>(value: T | undefined, stored: T | null | undefined): T | null =>
@@ -85,7 +72,7 @@ export class CheckInService {
       const value = input.ratings[key];
       if (value !== undefined) ratings[key] = value;
     }
-    await repo.upsert({
+    return repo.upsert({
       athleteId: athlete.id,
       localDate: date,
       steps: pick(input.steps, saved?.steps),
@@ -96,55 +83,72 @@ export class CheckInService {
       ratings,
       note: pick(input.note === '' ? null : input.note, saved?.note),
     });
-    return this.day(athlete, date, now);
   }
 
-  async deleteEvening(athlete: AthleteWithPeople, date: string): Promise<DayView> {
+  async deleteEvening(athlete: AthleteWithPeople, date: string): Promise<void> {
     await new EveningLogRepository(this.deps.dataSource.manager).removeForDay(athlete.id, date);
-    return this.day(athlete, date, this.deps.clock());
+  }
+
+  /**
+   * Runs `work` in a transaction when the kind writes more than its row (an urgent symptom
+   * report and its flag commit together), else straight on the pool: one insert needs none.
+   */
+  private write<E extends ClientDayEntry, I extends { clientId: string; time: string }, T>(
+    kind: EntryKind<E, I>,
+    work: (manager: EntityManager) => Promise<T>,
+  ): Promise<T> {
+    const { dataSource } = this.deps;
+    return kind.afterSave ? dataSource.transaction(work) : work(dataSource.manager);
   }
 
   /**
    * Creates an entry on `date`, idempotently: a client id the athlete already used returns the
    * first entry (`created: false`) whatever the body says, also when both requests race (the
-   * insert is ON CONFLICT DO NOTHING and the loser reads the winner's row). One transaction, so
-   * an urgent symptom report and its flag commit together.
+   * insert is ON CONFLICT DO NOTHING and the loser reads the winner's row). The day's limit is
+   * checked by the insert itself, so a fluid is one statement.
    */
   async createEntry<E extends ClientDayEntry, I extends { clientId: string; time: string }>(
     kind: EntryKind<E, I>,
     athlete: AthleteWithPeople,
     date: string,
     input: I,
-  ): Promise<EntryResult> {
+  ): Promise<EntryResult<E>> {
     const now = this.deps.clock();
-    const { entry, created } = await this.deps.dataSource.transaction(async (manager) => {
+    const { entry, created } = await this.write(kind, async (manager) => {
       const repo = new DayEntryRepository(manager, kind.entity);
-      const first = await repo.findByClientId(athlete.id, input.clientId);
-      if (first) return { entry: first, created: false };
-
-      this.assertNotFuture(athlete, date, input.time, now);
-      if ((await repo.countForDay(athlete.id, date)) >= LIMITS.entriesPerDay) {
-        throw validationFailed({ date: `At most ${LIMITS.entriesPerDay} ${kind.plural} a day` });
+      const replay = async () => {
+        const first = await repo.findByClientId(athlete.id, input.clientId);
+        return first ? { entry: first, created: false } : null;
+      };
+      const problem = futureEntryProblem({ date, time: input.time }, athlete.user.timeZone, now);
+      if (problem) {
+        const first = await replay();
+        if (first) return first;
+        throw validationFailed(problem);
       }
       const ctx: EntryContext = { manager, athlete, previous: null };
-      const inserted = await repo.insertUnlessDuplicate({
-        ...(await kind.columns(input, ctx)),
-        athleteId: athlete.id,
-        localDate: date,
-        localTime: input.time,
-        loggedAt: localInstant(date, input.time, athlete.user.timeZone),
-        clientId: input.clientId,
-      } as QueryDeepPartialEntity<E>);
+      const inserted = await repo.insertWithinDayLimit(
+        {
+          ...(await kind.columns(input, ctx)),
+          athleteId: athlete.id,
+          localDate: date,
+          localTime: input.time,
+          loggedAt: localInstant(date, input.time, athlete.user.timeZone),
+          clientId: input.clientId,
+        } as QueryDeepPartialEntity<E>,
+        LIMITS.entriesPerDay,
+      );
       if (!inserted) {
-        const winner = await repo.findByClientId(athlete.id, input.clientId);
-        if (!winner) throw new Error('client id conflict without a row');
-        return { entry: winner, created: false };
+        // Either the client id was taken (return its entry) or the day is full.
+        const first = await replay();
+        if (first) return first;
+        throw validationFailed({ date: `At most ${LIMITS.entriesPerDay} ${kind.plural} a day` });
       }
       await kind.afterSave?.(inserted, ctx);
       return { entry: inserted, created: true };
     });
     const meta = kind.meta?.(entry);
-    return { day: await this.day(athlete, entry.localDate, now), created, ...(meta ? { meta } : {}) };
+    return { entry, created, ...(meta ? { meta } : {}) };
   }
 
   /**
@@ -157,10 +161,10 @@ export class CheckInService {
     athlete: AthleteWithPeople,
     entryId: string,
     body: unknown,
-  ): Promise<Omit<EntryResult, 'created'>> {
+  ): Promise<Omit<EntryResult<E>, 'created'>> {
     if (!isPlainObject(body)) throw validationFailed({}, 'Send the fields to change as a JSON object.');
     const now = this.deps.clock();
-    const entry = await this.deps.dataSource.transaction(async (manager) => {
+    const entry = await this.write(kind, async (manager) => {
       const repo = new DayEntryRepository(manager, kind.entity);
       const stored = await repo.findForAthlete(entryId, athlete.id);
       if (!stored) throw notFound();
@@ -171,30 +175,26 @@ export class CheckInService {
       const input = kind.schema.parse({ ...base, ...body, clientId: stored.clientId });
       this.assertNotFuture(athlete, stored.localDate, input.time, now);
       const ctx: EntryContext = { manager, athlete, previous: stored };
-      await repo.update(stored.id, {
+      const updated = await repo.updateForAthlete(stored.id, athlete.id, {
         ...(await kind.columns(input, ctx)),
         localTime: input.time,
         loggedAt: localInstant(stored.localDate, input.time, athlete.user.timeZone),
       } as QueryDeepPartialEntity<E>);
-      const updated = await repo.findForAthlete(stored.id, athlete.id);
       if (!updated) throw notFound();
       await kind.afterSave?.(updated, ctx);
       return updated;
     });
     const meta = kind.meta?.(entry);
-    return { day: await this.day(athlete, entry.localDate, now), ...(meta ? { meta } : {}) };
+    return { entry, ...(meta ? { meta } : {}) };
   }
 
-  /** Deletes an entry of this athlete (404 for anyone else's id); answers with its day. */
+  /** Deletes an entry of this athlete (404 for anyone else's id): one statement. */
   async deleteEntry<E extends ClientDayEntry, I extends { clientId: string; time: string }>(
     kind: EntryKind<E, I>,
     athlete: AthleteWithPeople,
     entryId: string,
-  ): Promise<DayView> {
+  ): Promise<void> {
     const repo = new DayEntryRepository(this.deps.dataSource.manager, kind.entity);
-    const stored = await repo.findForAthlete(entryId, athlete.id);
-    if (!stored) throw notFound();
-    await repo.remove(stored.id);
-    return this.day(athlete, stored.localDate, this.deps.clock());
+    if (!(await repo.removeForAthlete(entryId, athlete.id))) throw notFound();
   }
 }

@@ -21,6 +21,7 @@ import { MealEntry } from '../entities/meal-entry.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
+import { presentFluid, presentMeal, presentSupplement, presentSymptom } from '../presenters/day.presenter.js';
 import { foodMealNutrients, macroMealNutrients, type Per100g } from '../lib/meal-nutrients.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteFlagRepository } from '../repositories/athlete-flag.repository.js';
@@ -54,11 +55,14 @@ export interface EntryKind<E extends ClientDayEntry, I extends { clientId: strin
   afterSave?(entry: E, ctx: EntryContext): Promise<void>;
   /** Extra response fields beside `data`. */
   meta?(entry: E): Record<string, string> | undefined;
+  /** The entry as the day view lists it: what a write answers with. */
+  present(entry: E): unknown;
 }
 
 export const fluidKind: EntryKind<FluidEntry, FluidEntryRequest> = {
   path: 'fluids',
   plural: 'fluid entries',
+  present: presentFluid,
   entity: FluidEntry,
   schema: fluidEntryRequest,
   columns: async (input) => ({
@@ -104,6 +108,7 @@ async function mealFood(
 export const mealKind: EntryKind<MealEntry, MealEntryRequest> = {
   path: 'meals',
   plural: 'meals',
+  present: presentMeal,
   entity: MealEntry,
   schema: mealEntryRequest,
   columns: async (input, ctx) => {
@@ -146,6 +151,7 @@ export const mealKind: EntryKind<MealEntry, MealEntryRequest> = {
 export const supplementKind: EntryKind<SupplementEntry, SupplementEntryRequest> = {
   path: 'supplements',
   plural: 'supplement entries',
+  present: presentSupplement,
   entity: SupplementEntry,
   schema: supplementEntryRequest,
   columns: async (input) => ({
@@ -168,6 +174,7 @@ const isUrgent = (s: Symptom) => (URGENT_SYMPTOMS as readonly Symptom[]).include
 export const symptomKind: EntryKind<SymptomReport, SymptomReportRequest> = {
   path: 'symptoms',
   plural: 'symptom reports',
+  present: presentSymptom,
   entity: SymptomReport,
   schema: symptomReportRequest,
   columns: async (input) => {

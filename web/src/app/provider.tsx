@@ -3,9 +3,14 @@ import { StrictMode } from 'react';
 import { RouterProvider } from 'react-router';
 import { signInWithNext } from '@/config/paths';
 import { authKeys } from '@/features/auth/api/keys';
+import { DayLinkedKeys } from '@/features/check-ins/api/day-cache';
+import { trendKeys } from '@/features/trends/api/keys';
 import { setUnauthenticatedHandler } from '@/lib/api-client';
 import { queryClient } from '@/lib/query-client';
 import { router } from './router';
+
+/** What a check-in write makes stale beyond the day and its history: the athlete's trend ranges. */
+const dayLinkedKeys = (athleteId: string) => [trendKeys.athlete(athleteId)];
 
 // A 401 from any call but /api/me and sign-in means the session ended (expired, revoked on
 // another device): forget the user and go to sign-in, coming back here afterwards.
@@ -19,7 +24,9 @@ export function App() {
   return (
     <StrictMode>
       <QueryClientProvider client={queryClient}>
-        <RouterProvider router={router} />
+        <DayLinkedKeys.Provider value={dayLinkedKeys}>
+          <RouterProvider router={router} />
+        </DayLinkedKeys.Provider>
       </QueryClientProvider>
     </StrictMode>
   );

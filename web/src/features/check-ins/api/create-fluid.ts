@@ -1,27 +1,27 @@
-import type { DayView, FluidEntryRequest } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { FluidEntryRequest, FluidView } from '@driftmark/shared';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryPath } from './day-cache';
+import { entryPath, useDayCache } from './day-cache';
 
 /**
- * POST /api/athletes/:athleteId/days/:date/fluids: adds a drink. The body's clientId makes a repeat
- * return the first entry (200) instead of a second one.
+ * POST /api/athletes/:athleteId/days/:date/fluids: adds a drink and answers with the entry. The
+ * body's clientId makes a repeat return the first entry (200) instead of a second one.
  */
-export function createFluid(athleteId: string, date: string, body: FluidEntryRequest): Promise<DayView> {
-  return api.post<DayView>(entryPath(athleteId, date, 'fluids'), body);
+export function createFluid(athleteId: string, date: string, body: FluidEntryRequest): Promise<FluidView> {
+  return api.post<FluidView>(entryPath(athleteId, date, 'fluids'), body);
 }
 
 export function useCreateFluid(
   athleteId: string,
   date: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
+  options: { onSuccess?: (entry: FluidView) => void } = {},
 ) {
-  const queryClient = useQueryClient();
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (body: FluidEntryRequest) => createFluid(athleteId, date, body),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (entry) => {
+      await cache.entry(date, 'fluids', entry);
+      options.onSuccess?.(entry);
     },
   });
 }

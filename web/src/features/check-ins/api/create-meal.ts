@@ -1,27 +1,27 @@
-import type { DayView, MealEntryRequest } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { MealEntryRequest, MealView } from '@driftmark/shared';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryPath } from './day-cache';
+import { entryPath, useDayCache } from './day-cache';
 
 /**
- * POST /api/athletes/:athleteId/days/:date/meals: adds a meal. The body's clientId makes a repeat
- * return the first entry (200) instead of a second one.
+ * POST /api/athletes/:athleteId/days/:date/meals: adds a meal and answers with the entry. The
+ * body's clientId makes a repeat return the first entry (200) instead of a second one.
  */
-export function createMeal(athleteId: string, date: string, body: MealEntryRequest): Promise<DayView> {
-  return api.post<DayView>(entryPath(athleteId, date, 'meals'), body);
+export function createMeal(athleteId: string, date: string, body: MealEntryRequest): Promise<MealView> {
+  return api.post<MealView>(entryPath(athleteId, date, 'meals'), body);
 }
 
 export function useCreateMeal(
   athleteId: string,
   date: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
+  options: { onSuccess?: (entry: MealView) => void } = {},
 ) {
-  const queryClient = useQueryClient();
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (body: MealEntryRequest) => createMeal(athleteId, date, body),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (entry) => {
+      await cache.entry(date, 'meals', entry);
+      options.onSuccess?.(entry);
     },
   });
 }

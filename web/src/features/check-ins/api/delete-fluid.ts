@@ -1,20 +1,20 @@
-import type { DayView } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryByIdPath } from './day-cache';
+import { entryByIdPath, useDayCache } from './day-cache';
 
-/** DELETE /api/athletes/:athleteId/fluids/:entryId */
-export function deleteFluid(athleteId: string, entryId: string): Promise<DayView> {
-  return api.delete<DayView>(entryByIdPath(athleteId, 'fluids', entryId));
+/** DELETE /api/athletes/:athleteId/fluids/:entryId (204). */
+export function deleteFluid(athleteId: string, entryId: string): Promise<void> {
+  return api.delete<void>(entryByIdPath(athleteId, 'fluids', entryId));
 }
 
-export function useDeleteFluid(athleteId: string, options: { onSuccess?: (day: DayView) => void } = {}) {
-  const queryClient = useQueryClient();
+/** `date` is the day the entry is on (the cached day it leaves). */
+export function useDeleteFluid(athleteId: string, date: string, options: { onSuccess?: () => void } = {}) {
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (entryId: string) => deleteFluid(athleteId, entryId),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (_, entryId) => {
+      await cache.removed(date, 'fluids', entryId);
+      options.onSuccess?.();
     },
   });
 }

@@ -1,20 +1,24 @@
-import type { DayView } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryByIdPath } from './day-cache';
+import { entryByIdPath, useDayCache } from './day-cache';
 
-/** DELETE /api/athletes/:athleteId/supplements/:entryId */
-export function deleteSupplement(athleteId: string, entryId: string): Promise<DayView> {
-  return api.delete<DayView>(entryByIdPath(athleteId, 'supplements', entryId));
+/** DELETE /api/athletes/:athleteId/supplements/:entryId (204). */
+export function deleteSupplement(athleteId: string, entryId: string): Promise<void> {
+  return api.delete<void>(entryByIdPath(athleteId, 'supplements', entryId));
 }
 
-export function useDeleteSupplement(athleteId: string, options: { onSuccess?: (day: DayView) => void } = {}) {
-  const queryClient = useQueryClient();
+/** `date` is the day the entry is on (the cached day it leaves). */
+export function useDeleteSupplement(
+  athleteId: string,
+  date: string,
+  options: { onSuccess?: () => void } = {},
+) {
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (entryId: string) => deleteSupplement(athleteId, entryId),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (_, entryId) => {
+      await cache.removed(date, 'supplements', entryId);
+      options.onSuccess?.();
     },
   });
 }

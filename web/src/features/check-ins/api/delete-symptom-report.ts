@@ -1,23 +1,24 @@
-import type { DayView } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryByIdPath } from './day-cache';
+import { entryByIdPath, useDayCache } from './day-cache';
 
-/** DELETE /api/athletes/:athleteId/symptoms/:entryId */
-export function deleteSymptomReport(athleteId: string, entryId: string): Promise<DayView> {
-  return api.delete<DayView>(entryByIdPath(athleteId, 'symptoms', entryId));
+/** DELETE /api/athletes/:athleteId/symptoms/:entryId (204). */
+export function deleteSymptomReport(athleteId: string, entryId: string): Promise<void> {
+  return api.delete<void>(entryByIdPath(athleteId, 'symptoms', entryId));
 }
 
+/** `date` is the day the report is on (the cached day it leaves). */
 export function useDeleteSymptomReport(
   athleteId: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
+  date: string,
+  options: { onSuccess?: () => void } = {},
 ) {
-  const queryClient = useQueryClient();
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (entryId: string) => deleteSymptomReport(athleteId, entryId),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (_, entryId) => {
+      await cache.removed(date, 'symptoms', entryId);
+      options.onSuccess?.();
     },
   });
 }

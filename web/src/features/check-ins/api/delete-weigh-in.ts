@@ -1,24 +1,19 @@
-import type { DayView } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryPath } from './day-cache';
+import { entryPath, useDayCache } from './day-cache';
 
-/** DELETE /api/athletes/:athleteId/days/:date/weigh-in */
-export function deleteWeighIn(athleteId: string, date: string): Promise<DayView> {
-  return api.delete<DayView>(entryPath(athleteId, date, 'weigh-in'));
+/** DELETE /api/athletes/:athleteId/days/:date/weigh-in (204). */
+export function deleteWeighIn(athleteId: string, date: string): Promise<void> {
+  return api.delete<void>(entryPath(athleteId, date, 'weigh-in'));
 }
 
-export function useDeleteWeighIn(
-  athleteId: string,
-  date: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
-) {
-  const queryClient = useQueryClient();
+export function useDeleteWeighIn(athleteId: string, date: string, options: { onSuccess?: () => void } = {}) {
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: () => deleteWeighIn(athleteId, date),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async () => {
+      await cache.part(date, 'weighIn', null);
+      options.onSuccess?.();
     },
   });
 }

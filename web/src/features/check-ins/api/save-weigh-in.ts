@@ -1,24 +1,24 @@
-import type { DayView, WeighInRequest } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { WeighInRequest, WeighInView } from '@driftmark/shared';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryPath } from './day-cache';
+import { entryPath, useDayCache } from './day-cache';
 
 /** PUT /api/athletes/:athleteId/days/:date/weigh-in: one per day, a repeat replaces it. */
-export function saveWeighIn(athleteId: string, date: string, body: WeighInRequest): Promise<DayView> {
-  return api.put<DayView>(entryPath(athleteId, date, 'weigh-in'), body);
+export function saveWeighIn(athleteId: string, date: string, body: WeighInRequest): Promise<WeighInView> {
+  return api.put<WeighInView>(entryPath(athleteId, date, 'weigh-in'), body);
 }
 
 export function useSaveWeighIn(
   athleteId: string,
   date: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
+  options: { onSuccess?: (weighIn: WeighInView) => void } = {},
 ) {
-  const queryClient = useQueryClient();
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: (body: WeighInRequest) => saveWeighIn(athleteId, date, body),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (weighIn) => {
+      await cache.part(date, 'weighIn', weighIn);
+      options.onSuccess?.(weighIn);
     },
   });
 }

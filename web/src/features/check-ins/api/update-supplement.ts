@@ -1,7 +1,7 @@
-import type { DayView, SupplementEntryRequest } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { SupplementView, SupplementEntryRequest } from '@driftmark/shared';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryByIdPath } from './day-cache';
+import { entryByIdPath, useDayCache } from './day-cache';
 
 export type SupplementUpdate = Omit<SupplementEntryRequest, 'clientId'>;
 
@@ -10,18 +10,23 @@ export function updateSupplement(
   athleteId: string,
   entryId: string,
   body: SupplementUpdate,
-): Promise<DayView> {
-  return api.patch<DayView>(entryByIdPath(athleteId, 'supplements', entryId), body);
+): Promise<SupplementView> {
+  return api.patch<SupplementView>(entryByIdPath(athleteId, 'supplements', entryId), body);
 }
 
-export function useUpdateSupplement(athleteId: string, options: { onSuccess?: (day: DayView) => void } = {}) {
-  const queryClient = useQueryClient();
+/** `date` is the day the entry is on (an edit keeps its date). */
+export function useUpdateSupplement(
+  athleteId: string,
+  date: string,
+  options: { onSuccess?: (entry: SupplementView) => void } = {},
+) {
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: ({ entryId, body }: { entryId: string; body: SupplementUpdate }) =>
       updateSupplement(athleteId, entryId, body),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (entry) => {
+      await cache.entry(date, 'supplements', entry);
+      options.onSuccess?.(entry);
     },
   });
 }

@@ -1,7 +1,7 @@
-import type { DayView, SymptomReportRequest } from '@driftmark/shared';
-import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { SymptomView, SymptomReportRequest } from '@driftmark/shared';
+import { useMutation } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
-import { applyDayChange, entryByIdPath } from './day-cache';
+import { entryByIdPath, useDayCache } from './day-cache';
 
 export type SymptomReportUpdate = Omit<SymptomReportRequest, 'clientId'>;
 
@@ -10,21 +10,23 @@ export function updateSymptomReport(
   athleteId: string,
   entryId: string,
   body: SymptomReportUpdate,
-): Promise<DayView> {
-  return api.patch<DayView>(entryByIdPath(athleteId, 'symptoms', entryId), body);
+): Promise<SymptomView> {
+  return api.patch<SymptomView>(entryByIdPath(athleteId, 'symptoms', entryId), body);
 }
 
+/** `date` is the day the entry is on (an edit keeps its date). */
 export function useUpdateSymptomReport(
   athleteId: string,
-  options: { onSuccess?: (day: DayView) => void } = {},
+  date: string,
+  options: { onSuccess?: (entry: SymptomView) => void } = {},
 ) {
-  const queryClient = useQueryClient();
+  const cache = useDayCache(athleteId);
   return useMutation({
     mutationFn: ({ entryId, body }: { entryId: string; body: SymptomReportUpdate }) =>
       updateSymptomReport(athleteId, entryId, body),
-    onSuccess: async (day) => {
-      await applyDayChange(queryClient, athleteId, day);
-      options.onSuccess?.(day);
+    onSuccess: async (entry) => {
+      await cache.entry(date, 'symptoms', entry);
+      options.onSuccess?.(entry);
     },
   });
 }

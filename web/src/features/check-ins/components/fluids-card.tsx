@@ -31,7 +31,7 @@ import { useFollowClock } from './use-follow-clock';
 const KIND_OPTIONS = FLUID_KINDS.map((k) => ({ value: k, label: FLUID_KIND_LABELS[k] }));
 
 export function FluidsCard({ athleteId, day, units, canEdit, now }: DayCardProps) {
-  const remove = useDeleteFluid(athleteId);
+  const remove = useDeleteFluid(athleteId, day.date);
   const total = displayVolume(day.fluidTotalMl, null, units.volume);
 
   return (
@@ -68,6 +68,7 @@ export function FluidsCard({ athleteId, day, units, canEdit, now }: DayCardProps
             form={(f, done) => (
               <EditFluidForm
                 athleteId={athleteId}
+                date={day.date}
                 entry={f}
                 onDone={done}
                 onDelete={() => remove.mutateAsync(f.id)}
@@ -220,11 +221,13 @@ function FluidTimeField({ followsClock }: { followsClock: boolean }) {
 
 function EditFluidForm({
   athleteId,
+  date,
   entry,
   onDone,
   onDelete,
 }: {
   athleteId: string;
+  date: string;
   entry: DayView['fluids'][number];
   onDone: () => void;
   onDelete: () => Promise<unknown>;
@@ -232,7 +235,7 @@ function EditFluidForm({
   const resolver = useMemo(() => createRequestResolver(fluidEntryRequest, toFluidRequest), []);
   const initial = fluidFormValues(entry, entry.entered.unit, entry.time);
   const form = useForm<FluidFormValues, unknown, FluidEntryRequest>({ resolver, defaultValues: initial });
-  const update = useUpdateFluid(athleteId, { onSuccess: onDone });
+  const update = useUpdateFluid(athleteId, date, { onSuccess: onDone });
   const unitLabel = VOLUME_UNIT_LABELS[initial.unit];
   return (
     <Form

@@ -28,7 +28,7 @@ const MEAL_NAMES = ['Breakfast', 'Lunch', 'Dinner', 'Snack', 'Pre-training', 'Po
 
 export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
   const [adding, setAdding] = useState(false);
-  const remove = useDeleteMeal(athleteId);
+  const remove = useDeleteMeal(athleteId, day.date);
   const t = day.totals;
 
   return (
@@ -162,7 +162,7 @@ function MealForm({
   const [food, setFood] = useState<FoodView | null>(() => (entry ? foodFromEntry(entry) : null));
   const keeper = useRef(createClientIdKeeper()).current;
   const create = useCreateMeal(athleteId, date);
-  const update = useUpdateMeal(athleteId);
+  const update = useUpdateMeal(athleteId, date);
   const values = useWatch({ control: form.control });
   const source = values.source ?? 'macros';
 

@@ -56,7 +56,7 @@ interface SupplementsCardProps extends DayCardProps {
 
 export function SupplementsCard({ athleteId, day, canEdit, now, previous }: SupplementsCardProps) {
   const [adding, setAdding] = useState(false);
-  const remove = useDeleteSupplement(athleteId);
+  const remove = useDeleteSupplement(athleteId, day.date);
   // What the plan schedules today is ticked under the day's targets, not offered again here.
   const scheduled = new Set((day.targets?.targets.supplements ?? []).map((s) => s.item.trim().toLowerCase()));
   const suggestions = canEdit
@@ -232,7 +232,7 @@ function SupplementForm({
   useFollowClock(form, 'time', now, entry === null);
   const keeper = useRef(createClientIdKeeper()).current;
   const create = useCreateSupplement(athleteId, date);
-  const update = useUpdateSupplement(athleteId);
+  const update = useUpdateSupplement(athleteId, date);
 
   return (
     <Form

@@ -43,7 +43,7 @@ interface SymptomsCardProps extends DayCardProps {
 
 export function SymptomsCard({ athleteId, day, canEdit, now, onUrgent }: SymptomsCardProps) {
   const [adding, setAdding] = useState(false);
-  const remove = useDeleteSymptomReport(athleteId);
+  const remove = useDeleteSymptomReport(athleteId, day.date);
 
   return (
     <CheckInCard
@@ -142,7 +142,7 @@ function SymptomForm({
   useFollowClock(form, 'time', now, entry === null);
   const keeper = useRef(createClientIdKeeper()).current;
   const create = useCreateSymptomReport(athleteId, date);
-  const update = useUpdateSymptomReport(athleteId);
+  const update = useUpdateSymptomReport(athleteId, date);
   const chosen = useWatch({ control: form.control, name: 'symptoms' });
   const urgentChosen = Array.isArray(chosen) && hasUrgentSymptom(chosen);
 
