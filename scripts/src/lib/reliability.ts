@@ -15,18 +15,26 @@
  * `npm run test:reliability` runs FULL_COUNTS; the `reliability` stage of `npm test` SMALL_COUNTS.
  */
 import { randomBytes, randomUUID } from 'node:crypto';
-import { mkdirSync, readdirSync, rmSync, cpSync, existsSync, statSync } from 'node:fs';
+import { cpSync, existsSync, mkdirSync, readdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
 import { deflateSync } from 'node:zlib';
 import pg from 'pg';
-import { apiCli, appEnv, buildShared, buildWorkspace, DEMO_PASSWORD, startBuiltServer } from './app.js';
+import {
+  apiCli,
+  appEnv,
+  buildShared,
+  buildWorkspace,
+  DEMO_PASSWORD,
+  startBuiltServer,
+  startSmtpFake,
+  type RunningSmtpFake,
+} from './app.js';
 import { log } from './log.js';
 import { pickFreePort } from './ports.js';
 import { ensureCluster, ensureDatabase, stopCluster } from './postgres.js';
 import { sleep, type Service } from './proc.js';
 import { crc32, tally, type ScenarioResult, type WriteRecord } from './reliability-tally.js';
 import { readCapturedMail } from './smtp-fake.js';
-import { startSmtpFake, type RunningSmtpFake } from './app.js';
 import { generateSecret } from './secrets.js';
 
 export interface ReliabilityCounts {
@@ -356,7 +364,6 @@ interface WriteRun {
   /** Exchanges that ended without an answer (refused, reset), by cause. */
   networkErrors: Map<string, number>;
   aborted: number;
-  /** Set while the server is meant to be away: connection errors are retried without comment. */
 }
 
 /** Sends one logical write until it is acknowledged, refused for good, or abandoned. */
@@ -416,7 +423,7 @@ async function performWrite(
   }
 }
 
-/** Runs writes with `concurrency` clients; `onProgress` sees the count of acknowledged writes. */
+/** Runs writes with `concurrency` clients; `onAcknowledged` sees the running count of acknowledged writes. */
 async function runWrites(
   h: Harness,
   writes: readonly PlannedWrite[],
@@ -916,7 +923,7 @@ export async function runReliability(
     // The cluster must be up for whatever runs next (scenario b stops it).
     await ensureCluster();
   }
-  if (statSync(scratch, { throwIfNoEntry: false }))
-    rmSync(path.join(scratch, 'tmp'), { recursive: true, force: true });
+  // The photo and mail folders and the server log stay for a look; the temp folder is checked empty.
+  rmSync(tempDir, { recursive: true, force: true });
   return results;
 }
