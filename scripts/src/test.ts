@@ -1,5 +1,6 @@
 /**
- * `npm test [-- stage...]`: lint → format → typecheck → unit → integration → migration-check → e2e,
+ * `npm test [-- stage...]`: lint → format → typecheck → unit → integration → migration-check →
+ * reliability (the small run of scripts/src/lib/reliability.ts) → e2e,
  * stopping at the first failing stage. `npm run test:integration` / `test:e2e` pick one stage.
  * Every vitest run writes test-results/<project>.json; the last line printed is the total, e.g.
  * "Tests: 123 passed, 0 failed".
@@ -23,6 +24,8 @@ import { repoPath, repoRoot } from './lib/paths.js';
 import { pickFreePort } from './lib/ports.js';
 import { ensureCluster, ensureDatabase } from './lib/postgres.js';
 import { npmCommand, onShutdownSignal, packageBin, run, type Service } from './lib/proc.js';
+import { FULL_COUNTS, runReliability, SMALL_COUNTS } from './lib/reliability.js';
+import { formatResult, scenarioFailed } from './lib/reliability-tally.js';
 import { checkSchema } from './lib/schema-check.js';
 import { generateSecret } from './lib/secrets.js';
 import { formatSummary, parseStageArgs, runStages, type Stage, type StageName } from './lib/stages.js';
@@ -33,6 +36,8 @@ const reportsDir = repoPath('test-results');
 const jwtSecret = generateSecret();
 const running: Service[] = [];
 const vitestProjectsRun: string[] = [];
+/** Reliability scenarios count in the total like tests do. */
+const reliabilityTotals: TestTotals = { passed: 0, failed: 0, skipped: 0 };
 
 onShutdownSignal(() => {
   fail('Interrupted.');
@@ -178,6 +183,19 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   }
 }
 
+/** The reliability run with small counts (`npm run test:reliability` runs the full one). */
+async function reliabilityStage(): Promise<void> {
+  const results = await runReliability(
+    { counts: SMALL_COUNTS, workDir: path.join(reportsDir, 'reliability-small') },
+    (result) => console.log(formatResult(result)),
+  );
+  const failed = results.filter(scenarioFailed);
+  reliabilityTotals.passed += results.length - failed.length;
+  reliabilityTotals.failed += failed.length;
+  if (failed.length > 0)
+    throw new Error(`${failed.length} of ${results.length} reliability scenarios failed`);
+}
+
 async function main(): Promise<number> {
   const selected = parseStageArgs(process.argv.slice(2));
   const has = (name: StageName) => selected.includes(name);
@@ -190,7 +208,7 @@ async function main(): Promise<number> {
     name: 'setup',
     describe: 'PostgreSQL, fresh test databases, Chromium, shared build',
     run: async () => {
-      if (has('integration') || has('migration-check') || has('e2e')) {
+      if (has('integration') || has('migration-check') || has('reliability') || has('e2e')) {
         await ensureCluster();
         if (has('integration') || has('migration-check'))
           testUrl = await ensureDatabase('driftmark_test', { fresh: true });
@@ -241,6 +259,11 @@ async function main(): Promise<number> {
       describe: 'api cli check-schema against driftmark_test',
       run: () => checkSchema(testUrl, jwtSecret),
     },
+    reliability: {
+      name: 'reliability',
+      describe: `a copy of the product under writes, a database restart, kill -9 and SIGTERM (${SMALL_COUNTS.writes} writes; the full run has ${FULL_COUNTS.writes})`,
+      run: reliabilityStage,
+    },
     e2e: {
       name: 'e2e',
       describe: 'build, migrate + seed driftmark_e2e, server, vitest run --project e2e',
@@ -251,7 +274,7 @@ async function main(): Promise<number> {
   const results = await runStages([setup, ...selected.map((name) => all[name])]);
   const totals = vitestProjectsRun.reduce<TestTotals>(
     (sum, project) => addTotals(sum, readTotals(reportFile(project)) ?? { passed: 0, failed: 0, skipped: 0 }),
-    { passed: 0, failed: 0, skipped: 0 },
+    reliabilityTotals,
   );
   console.log(`\n${formatSummary(results)}`);
   const failed = results.find((result) => result.status === 'failed');

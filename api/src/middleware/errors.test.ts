@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { QueryRunnerAlreadyReleasedError } from 'typeorm';
 import { z } from 'zod';
 import { isDatabaseUnavailable, zodFields } from './errors.js';
 
@@ -51,6 +52,11 @@ describe('isDatabaseUnavailable', () => {
       'Client has encountered a connection error and is not queryable',
     ])
       expect(isDatabaseUnavailable(new Error(message)), message).toBe(true);
+  });
+
+  it("knows TypeORM's error for a query on a runner its lost connection released", () => {
+    // Thrown by typeorm's PostgresQueryRunner.query once the client's 'error' event released it.
+    expect(isDatabaseUnavailable(new QueryRunnerAlreadyReleasedError())).toBe(true);
   });
 
   it('looks inside TypeORM driverError, cause chains and AggregateError', () => {

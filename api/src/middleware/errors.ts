@@ -52,6 +52,11 @@ const UNAVAILABLE_MESSAGES = [
   /Client was closed and is not queryable/i,
   /connection is not yet established/i,
   /Driver not Connected/i,
+  // TypeORM's PostgresQueryRunner releases itself when its connection emits an error (the server
+  // went away between two queries of one call, e.g. a `getOne` that reads twice); the next query
+  // then throws QueryRunnerAlreadyReleasedError. Our code never keeps a runner past its own release
+  // (transactions go through `dataSource.transaction`), so here it means a lost connection.
+  /^Query runner already released/i,
 ];
 
 /**

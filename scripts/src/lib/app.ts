@@ -123,6 +123,8 @@ export async function startSmtpFake(options: {
   captureDir: string;
   logFile?: string;
   exclude?: number[];
+  /** Delay before each 250 answer (see SmtpFakeOptions.answerDelayMs). */
+  answerDelayMs?: number;
 }): Promise<RunningSmtpFake> {
   const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
   const service = startService(
@@ -135,6 +137,7 @@ export async function startSmtpFake(options: {
         SMTP_PORT: String(port),
         SMTP_HOST: '127.0.0.1',
         MAIL_CAPTURE_DIR: options.captureDir,
+        SMTP_ANSWER_DELAY_MS: String(options.answerDelayMs ?? 0),
       },
       ipc: true,
       logFile: options.logFile,

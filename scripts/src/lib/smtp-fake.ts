@@ -21,6 +21,11 @@ export interface SmtpFakeOptions {
   captureDir: string;
   /** Largest accepted message in bytes (default 10 MiB). */
   maxMessageBytes?: number;
+  /**
+   * Waits this long after capturing a message before answering 250 (default 0): a slow server, so
+   * that a sender killed mid-send leaves a message captured but never confirmed (reliability run).
+   */
+  answerDelayMs?: number;
 }
 
 export interface SmtpFake {
@@ -120,6 +125,7 @@ export async function startSmtpFake(options: SmtpFakeOptions): Promise<SmtpFake>
             // Readers never see a half-written file: they skip *.tmp and rename is atomic.
             await writeFile(tmpPath, JSON.stringify(mail, null, 2), 'utf8');
             await rename(tmpPath, finalPath);
+            if (options.answerDelayMs) await new Promise((r) => setTimeout(r, options.answerDelayMs));
             callback(null, `Captured as ${id}`);
           })
           .catch((err: unknown) => callback(err instanceof Error ? err : new Error(String(err))));

@@ -7,6 +7,7 @@ export const STAGE_NAMES = [
   'unit',
   'integration',
   'migration-check',
+  'reliability',
   'e2e',
 ] as const;
 export type StageName = (typeof STAGE_NAMES)[number];
