@@ -34,3 +34,4 @@ export * from './calendar.js';
 export * from './rules/day-verdicts.js';
 export * from './reader.js';
 export * from './rules/rate-verdict.js';
+export * from './rules/weight-cut.js';
