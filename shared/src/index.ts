@@ -35,3 +35,4 @@ export * from './rules/day-verdicts.js';
 export * from './reader.js';
 export * from './rules/rate-verdict.js';
 export * from './rules/weight-cut.js';
+export * from './schemas/cuts.js';

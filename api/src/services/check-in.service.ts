@@ -18,6 +18,7 @@ import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import type { EntryContext, EntryKind } from './day-entry-kinds.js';
 import { readerOf } from '../lib/reader.js';
 import { loadDayView } from './day.service.js';
+import { CutService } from './cut.service.js';
 
 export interface EntryResult {
   day: DayView;
@@ -61,6 +62,8 @@ export class CheckInService {
       tags: [...new Set(input.tags)],
       cyclePhase: input.cyclePhase ?? null,
     });
+    // A weigh-in moves the projection: the coach hears once when it first crosses above the limit.
+    await new CutService(this.deps).notifyIfOver(athlete);
     return this.day(athlete, date, now);
   }
 

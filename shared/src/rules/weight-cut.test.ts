@@ -6,7 +6,9 @@ import {
   chronicRate,
   competitionDate,
   cutPathKg,
+  cutWarnings,
   limitGap,
+  limitGapSummary,
   preAcuteDate,
   rateSeverity,
   recoveryTargets,
@@ -227,5 +229,30 @@ describe('recovery targets from the kg lost at the scale', () => {
     const r = recoveryTargets({ kgLost: -0.2, bodyKg: 60, windowHours: 0.5 });
     expect(r.fluidL).toBe(0);
     expect(r.slots).toHaveLength(1);
+  });
+});
+
+describe('the words of the warnings and the gap', () => {
+  it('asks one acknowledgement per warning: rate, acute share, and the second above 7 %', () => {
+    const keys = cutWarnings(chronicRate(linear), acuteShare(68, 63), 5).map((w) => [w.key, w.severity]);
+    expect(keys).toEqual([
+      ['chronic_rate', 'strong'],
+      ['acute_share', 'strong'],
+      ['acute_share_severe', 'strong'],
+    ]);
+    expect(cutWarnings(null, acuteShare(66, 63), 5)).toEqual([]);
+  });
+
+  it('says the gap in kg, days and the extra rate', () => {
+    const gap = limitGap({
+      projection: { kg: 63.6, lowKg: 62.3 },
+      limitKg: 63,
+      currentKg: 64.4,
+      today: '2026-03-22',
+      weighInDate: '2026-04-01',
+    });
+    expect(limitGapSummary(gap, 63)).toBe(
+      'Projected 0.6 kg over the 63.0 kg limit in 10 days; needs 0.7 %/week more',
+    );
   });
 });

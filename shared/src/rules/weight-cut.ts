@@ -302,3 +302,70 @@ function carbGPerKg(a: number, b: number, end: 'min' | 'max'): number {
   const late = Math.max(0, b - Math.max(a, cut));
   return RECOVERY_CARB.perHourGPerKg[end] * early + (RECOVERY_CARB.perDayGPerKg[end] * late) / 24;
 }
+
+/** The words every making-weight screen carries: the evidence, no safe number, the deferral. */
+export const CUT_CAUTION =
+  'These figures are estimates from published studies, not a safe amount: no published limit for ' +
+  'acute weight loss was confirmed. The commission’s rules decide the weigh-in; agree any acute loss ' +
+  'with a physician.';
+
+/** A cut-plan warning with its words and source; every one needs the coach's acknowledgement. */
+export interface CutWarning {
+  key: 'chronic_rate' | 'acute_share' | 'acute_share_severe';
+  severity: 'warning' | 'strong';
+  message: string;
+  source: string;
+}
+
+const fixed = (n: number, digits: number) => n.toFixed(digits);
+
+/** The warnings of a plan's figures, in the order they are shown. */
+export function cutWarnings(
+  chronic: ChronicRate | null,
+  acute: AcuteShare,
+  thresholdPct: number,
+): CutWarning[] {
+  const out: CutWarning[] = [];
+  if (chronic && chronic.severity !== 'none') {
+    out.push({
+      key: 'chronic_rate',
+      severity: chronic.severity === 'strong' ? 'strong' : 'warning',
+      message:
+        `The chronic part loses ${fixed(chronic.kgPerWeek, 2)} kg a week, up to ${fixed(chronic.pctPerWeek, 1)} % ` +
+        `of body weight a week: faster than the 1 % a week advised` +
+        (chronic.severity === 'strong' ? ' and above the 1.4 % a week at which lean mass suffered.' : '.'),
+      source: CUT_SOURCES.chronicRate,
+    });
+  }
+  if (acute.severity !== 'none') {
+    out.push({
+      key: 'acute_share',
+      severity: 'strong',
+      message:
+        `The last days must take off ${fixed(acute.kg, 1)} kg, ${fixed(acute.pct, 1)} % of body mass, above the ` +
+        `team's ${fixed(thresholdPct, 1)} %: repeat-effort performance was still reduced 24 h after about 5 % ` +
+        'rapid loss.',
+      source: CUT_SOURCES.acuteShare,
+    });
+  }
+  if (acute.severity === 'severe') {
+    out.push({
+      key: 'acute_share_severe',
+      severity: 'strong',
+      message:
+        `An acute loss above ${ACUTE_SHARE_SEVERE_PCT} % of body mass (${fixed(acute.pct, 1)} % here) needs a ` +
+        'physician involved; the athlete is shown the signs to stop and seek care.',
+      source: CUT_SOURCES.acuteShare,
+    });
+  }
+  return out;
+}
+
+/** "Projected 0.6 kg over the 63.0 kg limit in 10 days; needs 0.7 %/week more". */
+export function limitGapSummary(gap: LimitGap, limitKg: number): string {
+  const days = `${gap.daysLeft} ${gap.daysLeft === 1 ? 'day' : 'days'}`;
+  if (!gap.over)
+    return `Projected ${fixed(Math.abs(gap.overKg), 1)} kg under the ${fixed(limitKg, 1)} kg limit in ${days}`;
+  const extra = gap.extraPctPerWeek === null ? '' : `; needs ${fixed(gap.extraPctPerWeek, 1)} %/week more`;
+  return `Projected ${fixed(gap.overKg, 1)} kg over the ${fixed(limitKg, 1)} kg limit in ${days}${extra}`;
+}

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { uuid } from './common.js';
 import { EVENT_TYPES, GOALS } from './athletes.js';
 
-export const REVIEW_REASON_KINDS = ['safety', 'missed', 'drift', 'reply', 'countdown'] as const;
+export const REVIEW_REASON_KINDS = ['safety', 'missed', 'drift', 'reply', 'countdown', 'over_limit'] as const;
 export type ReviewReasonKind = (typeof REVIEW_REASON_KINDS)[number];
 
 /** GET /api/review-queue: one row per athlete that needs attention, most urgent first. */
