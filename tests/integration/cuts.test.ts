@@ -13,7 +13,7 @@ import { weighInBody } from './check-ins-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 import { shift } from './trend-helpers.js';
 
-const now = new Date('2026-12-01T20:00:00Z');
+let now = new Date('2026-12-01T20:00:00Z');
 const TODAY = '2026-12-01';
 /** Ten days ahead: a weigh-in the day before a competition on 12 December. */
 const WEIGH_IN = '2026-12-11';
@@ -45,6 +45,7 @@ async function weighLine(athleteId: string) {
 }
 
 beforeEach(async () => {
+  now = new Date('2026-12-01T20:00:00Z');
   await t.reset();
   coach = await createCoach(t.dataSource);
   a = await createAthlete(t.dataSource, {
@@ -266,5 +267,38 @@ describe('cut plans', () => {
       .send(body({ startKg: 66.8, acknowledgedKeys: ['acute_share'] }));
     expect(res.status).toBe(403);
     expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
+  });
+});
+
+describe('the recovery checklist on the weigh-in day', () => {
+  it('counts fluid and carbohydrate from the kg lost, each slot on the athlete’s clock', async () => {
+    await coachAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    const saved = await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send({
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      path: 'linear',
+      notes: null,
+      acknowledgedKeys: ['acute_share'],
+    });
+    expect(saved.status).toBe(201);
+    expect(cutView.parse(saved.body.data).recovery).toBeNull();
+
+    now = new Date('2026-12-11T12:00:00Z');
+    const view = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    const r = view.recovery!;
+    // 66.5 − 63 = 3.5 kg lost; × 1.5 L = 5.25 L (Sawka 2007). 16 h window: 4 h × 1.0–1.2 g/kg +
+    // 12 h × 5–10 g/kg / 24 = 6.5–9.8 g/kg × 63 kg = 409.5–617.4 g.
+    expect(r.basis).toBe('plan');
+    expect(r.kgLost).toBeCloseTo(3.5, 10);
+    expect(r.windowHours).toBe(16);
+    expect(r.fluidL).toBeCloseTo(5.25, 10);
+    expect(r.carbohydrateG.min).toBeCloseTo(409.5, 8);
+    expect(r.carbohydrateG.max).toBeCloseTo(617.4, 8);
+    // 18:00 in Auckland on 11 Dec (UTC+13, daylight time) is 05:00 UTC, the athlete's clock.
+    expect(r.slots).toHaveLength(16);
+    expect(r.slots[0]).toMatchObject({ date: '2026-12-11', time: '05:00' });
+    expect(r.slots[15]).toMatchObject({ date: '2026-12-11', time: '20:00' });
   });
 });

@@ -1,11 +1,14 @@
 import {
   acuteShare,
+  beforeEventOnAthleteClock,
   chronicRate,
   competitionDate,
   CUT_CAUTION,
+  CUT_SOURCES,
   cutPathKg,
   cutWarnings,
   preAcuteDate,
+  recoveryTargets,
   recoveryWindowHours,
   STOP_SIGNS_TEXT,
   type CreateCutPlanRequest,
@@ -13,6 +16,7 @@ import {
   type CutPlanShape,
   type CutView,
   type LimitGapView,
+  type RecoveryView,
   type WeighInEventRequest,
   type WeighInEventView,
 } from '@driftmark/shared';
@@ -91,6 +95,43 @@ export function cutFigures(shape: CutPlanShape, thresholdPct: number, today: str
   };
 }
 
+/**
+ * On the weigh-in day and until the competition: recovery targets from the kg lost at the scale,
+ * counted from the plan's pre-acute weight (else the usual weight) down to the limit, each slot
+ * placed on the athlete's clock from the weigh-in's time on the venue clock.
+ */
+export function recoveryOf(
+  event: WeighInEventView | null,
+  plan: Pick<CutPlanShape, 'preAcuteKg'> | null,
+  today: string,
+  athleteTimeZone: string,
+): RecoveryView | null {
+  if (!event || event.recoveryWindowHours === null || !event.weighInTime || !event.timeZone) return null;
+  if (today < event.date || (event.competitionDate !== null && today > event.competitionDate)) return null;
+  const from = plan
+    ? { kg: plan.preAcuteKg, basis: 'plan' as const }
+    : event.usualWeightKg !== null
+      ? { kg: event.usualWeightKg, basis: 'usual' as const }
+      : null;
+  if (!from) return null;
+  const kgLost = Math.max(0, from.kg - event.limitKg);
+  const targets = recoveryTargets({ kgLost, bodyKg: event.limitKg, windowHours: event.recoveryWindowHours });
+  const clock = { date: event.date, time: event.weighInTime, timeZone: event.timeZone };
+  return {
+    kgLost,
+    basis: from.basis,
+    windowHours: event.recoveryWindowHours,
+    fluidL: targets.fluidL,
+    carbohydrateG: targets.carbohydrateG,
+    slots: targets.slots.map((s) => ({
+      ...beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone),
+      fluidL: s.fluidL,
+      carbohydrateG: s.carbohydrateG,
+    })),
+    source: CUT_SOURCES.recovery,
+  };
+}
+
 export class CutService {
   constructor(private readonly deps: CutDeps) {}
 
@@ -108,13 +149,15 @@ export class CutService {
       new TeamRepository(this.manager).acuteSharePct(athlete.teamId),
     ]);
     const acks = plan ? await new CutPlanRepository(this.manager).acknowledgements(plan.id) : [];
+    const event = weighInEventOf(athlete);
     return {
       athleteId: athlete.id,
-      weighIn: weighInEventOf(athlete),
+      weighIn: event,
       gap: snapshots.get(athlete.id)?.figures.weighInGap ?? null,
       plan: plan ? presentCutPlan(plan, acks) : null,
       figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
       thresholdPct,
+      recovery: recoveryOf(event, plan, today, athlete.user.timeZone),
       caution: CUT_CAUTION,
     };
   }

@@ -161,6 +161,28 @@ export const cutFiguresView = z.object({
 });
 export type CutFiguresView = z.infer<typeof cutFiguresView>;
 
+/** The recovery targets for the window after the weigh-in (rules/weight-cut.ts recoveryTargets). */
+export const recoveryView = z.object({
+  /** kg lost at the scale: the weight before the last days (the plan's, else the usual) minus the limit. */
+  kgLost: z.number(),
+  /** Which weight the loss is counted from. */
+  basis: z.enum(['plan', 'usual']),
+  windowHours: z.number(),
+  fluidL: z.number(),
+  carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+  /** The timed checklist, on the athlete's clock. */
+  slots: z.array(
+    z.object({
+      date: z.string(),
+      time: z.string(),
+      fluidL: z.number(),
+      carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+    }),
+  ),
+  source: z.string(),
+});
+export type RecoveryView = z.infer<typeof recoveryView>;
+
 /** GET /api/athletes/:athleteId/cut */
 export const cutView = z.object({
   athleteId: z.string(),
@@ -171,6 +193,8 @@ export const cutView = z.object({
   plan: cutPlanView.nullable(),
   figures: cutFiguresView.nullable(),
   thresholdPct: z.number(),
+  /** From the weigh-in day to the competition: the recovery checklist; null on other days. */
+  recovery: recoveryView.nullable(),
   /** The evidence and the deferral every cut screen shows. */
   caution: z.string(),
 });
