@@ -183,7 +183,7 @@ export const DEMO_ATHLETES: readonly DemoAthleteDefinition[] = [
         classAboveKg: 70,
       },
     },
-    history: { seed: 202, startWeightKg: 67.2, seedDateWeightKg: 64.3, checkInRate: 0.93 },
+    history: { seed: 202, startWeightKg: 67.2, seedDateWeightKg: 65.2, checkInRate: 0.93 },
   },
   {
     key: 'photo_shoot',

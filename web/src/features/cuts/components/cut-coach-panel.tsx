@@ -1,3 +1,4 @@
+import { useState, type ReactNode } from 'react';
 import { Card, CardHeader } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/spinner';
 import { Alert } from '@/components/ui/alert';
@@ -37,16 +38,24 @@ export function CutCoachPanel({
         <p className="text-sm text-ink-muted">No cut plan yet.</p>
       )}
       {cut.data.abilities.plan ? (
-        <details className="rounded-md border border-line p-4" open={!view.plan}>
-          <summary className="cursor-pointer font-semibold text-ink">
-            {view.plan ? 'New cut plan' : 'Build a cut plan'}
-          </summary>
-          <div className="mt-4">
-            <CutPlanBuilder athleteId={athleteId} today={today} />
-          </div>
-        </details>
+        <BuilderDetails hasPlan={view.plan !== null}>
+          <CutPlanBuilder athleteId={athleteId} today={today} />
+        </BuilderDetails>
       ) : null}
       <p className="text-sm text-ink-muted">{view.caution}</p>
     </Card>
+  );
+}
+
+/** Open at first when there is no plan yet, and left as it is after a save (the notice stays in view). */
+function BuilderDetails({ hasPlan, children }: { hasPlan: boolean; children: ReactNode }) {
+  const [openAtFirst] = useState(!hasPlan);
+  return (
+    <details className="rounded-md border border-line p-4" open={openAtFirst}>
+      <summary className="cursor-pointer font-semibold text-ink">
+        {hasPlan ? 'New cut plan' : 'Build a cut plan'}
+      </summary>
+      <div className="mt-4">{children}</div>
+    </details>
   );
 }
