@@ -34,6 +34,17 @@ describe('making weight', () => {
     await screenshot(page, 'making-weight-coach-1280');
   });
 
+  it('marks Aroha over the limit on the roster, with the gap and the days left', async () => {
+    const { page } = desktop;
+    await page.goto(page.url().replace(/\/coach\/.*$/, '/coach/roster'));
+    const row = page.getByRole('row').filter({ hasText: 'Aroha Tane' });
+    await row.getByText('Over the limit').waitFor();
+    await expect(row.innerText()).resolves.toMatch(/\+\d+\.\d\s?kg · \d+\.\d\s?% · 10 days left/);
+    await screenshot(page, 'making-weight-roster-1280');
+    await page.goBack();
+    await page.getByRole('region', { name: 'Making weight' }).waitFor();
+  });
+
   it('builds a cut plan and acknowledges the acute-share warning', async () => {
     const { page } = desktop;
     const panel = page.getByRole('region', { name: 'Making weight' });
