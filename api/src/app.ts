@@ -15,6 +15,7 @@ import { requestLogging } from './middleware/request-logging.js';
 import { securityHeaders } from './middleware/security.js';
 import { webAppRouter } from './middleware/web-app.js';
 import { athletesRouter } from './routes/athletes.routes.js';
+import { cutSettingsRouter, cutsRouter } from './routes/cuts.routes.js';
 import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
@@ -105,6 +106,7 @@ export function createApp(deps: {
   api.use('/review-queue', reviewQueueRouter());
   api.use('/team/poses', posesRouter());
   api.use('/team', teamRouter());
+  api.use('/team', cutSettingsRouter());
   api.use('/athletes', athletesRouter());
   // An athlete's days and entries (/athletes/:athleteId/days/…, /athletes/:athleteId/fluids/:entryId …).
   api.use('/athletes', checkInsRouter());
@@ -112,6 +114,8 @@ export function createApp(deps: {
   api.use('/athletes', plansRouter());
   // The trend, drift and flags over a range (/athletes/:athleteId/trend).
   api.use('/athletes', trendsRouter());
+  // Making weight: the weigh-in's record and the cut plan (/athletes/:athleteId/cut, …/weigh-in, …/cut-plans).
+  api.use('/athletes', cutsRouter());
   // The days as CSV and the end of the coaching (/athletes/:athleteId/days.csv, …/end-coaching).
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());

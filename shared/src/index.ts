@@ -36,3 +36,5 @@ export * from './calendar.js';
 export * from './rules/day-verdicts.js';
 export * from './reader.js';
 export * from './rules/rate-verdict.js';
+export * from './rules/weight-cut.js';
+export * from './schemas/cuts.js';

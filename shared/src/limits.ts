@@ -64,6 +64,12 @@ export const LIMITS = {
   templateName: { min: 2, max: 80 },
   templateDescription: { max: 1000 },
   warningKey: { max: 120 },
+  /** What the acute part of a cut consists of (free text). */
+  cutNotes: { max: 2000 },
+  /** Days of acute loss before a weigh-in a cut plan may hold. */
+  cutAcuteDays: { min: 0, max: 14 },
+  /** The team's acute-share threshold, % of body mass. */
+  acuteSharePct: { min: 1, max: 10 },
   question: { min: 3, max: 200 },
   answer: { max: 1000 },
   questionsForCoach: { max: 2000 },

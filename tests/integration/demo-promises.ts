@@ -67,6 +67,16 @@ export function brokenDemoPromises(view: DemoView): string[] {
       item?.priority === 1 && item.reasons.some((r) => r.kind === 'safety' && /down/i.test(r.text)),
       `Aroha is not in the queue with the drop as a safety reason (${JSON.stringify(item?.reasons)})`,
     );
+    // Making weight: the projection at the weigh-in is over her 63.0 kg limit, with the gap and days.
+    const gap = row?.figures.weighInGap ?? null;
+    expect(
+      gap !== null && gap.over && gap.overKg > 0 && gap.daysLeft === 10,
+      `Aroha is not projected over her limit with 10 days left (${JSON.stringify(gap)})`,
+    );
+    expect(
+      item?.reasons.some((r) => r.kind === 'over_limit' && /over the weigh-in limit/.test(r.text)) ?? false,
+      `Aroha is not in the queue as over the limit (${JSON.stringify(item?.reasons)})`,
+    );
   }
   // Priya: 5 weeks from a shoot, losing faster than 1.4 %/week over the last 14 days.
   {

@@ -141,6 +141,7 @@ describe('event e-mails', () => {
         weekly_check_in_received: true,
         mark_reply: true,
         weekly_summary: true,
+        over_limit: true,
         morning_reminder: true,
         coach_note: true,
         weekly_check_in_due: true,

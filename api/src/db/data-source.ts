@@ -7,6 +7,8 @@ import { AthleteReview } from '../entities/athlete-review.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { Consent } from '../entities/consent.entity.js';
+import { CutPlan } from '../entities/cut-plan.entity.js';
+import { CutPlanAcknowledgement } from '../entities/cut-plan-acknowledgement.entity.js';
 import { CountdownTemplate } from '../entities/countdown-template.entity.js';
 import { EveningLog } from '../entities/evening-log.entity.js';
 import { FluidEntry } from '../entities/fluid-entry.entity.js';
@@ -67,6 +69,9 @@ export const ENTITIES = [
   // Weekly check-ins and e-mail notifications
   WeeklyCheckIn,
   NotificationSend,
+  // Making weight
+  CutPlan,
+  CutPlanAcknowledgement,
 ];
 
 /** Statements this process has sent through TypeORM, counted only when `countStatements` is on. */

@@ -1,5 +1,5 @@
 import { Check, Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
-import type { ATHLETE_STATUSES, EVENT_TYPES, GOALS, SEXES, Weekday } from '@driftmark/shared';
+import type { ATHLETE_STATUSES, EVENT_TYPES, GOALS, SEXES, Weekday, WeighInTiming } from '@driftmark/shared';
 import { BaseRecord } from './base.entity.js';
 import { Team } from './team.entity.js';
 import { User } from './user.entity.js';
@@ -21,6 +21,10 @@ export type EventType = (typeof EVENT_TYPES)[number];
 @Check(
   'CHK_athletes_event_type',
   `"event_type" IS NULL OR "event_type" IN ('show', 'shoot', 'weigh_in', 'none')`,
+)
+@Check(
+  'CHK_athletes_weigh_in_timing',
+  `"weigh_in_timing" IS NULL OR "weigh_in_timing" IN ('day_before', 'same_day')`,
 )
 export class Athlete extends BaseRecord {
   @Index('UQ_athletes_user_id', { unique: true })
@@ -95,6 +99,25 @@ export class Athlete extends BaseRecord {
 
   @Column({ name: 'weigh_in_limit_kg', type: 'double precision', nullable: true })
   weighInLimitKg: number | null;
+
+  /** Weigh-in the day before the competition or the same day (weigh-in events only). */
+  @Column({ name: 'weigh_in_timing', type: 'varchar', length: 16, nullable: true })
+  weighInTiming: WeighInTiming | null;
+
+  /** Competition clock time, HH:MM in the event's time zone (weigh-in events). */
+  @Column({ name: 'competition_time', type: 'varchar', length: 5, nullable: true })
+  competitionTime: string | null;
+
+  /** The athlete's usual weight outside a cut, kg. */
+  @Column({ name: 'usual_weight_kg', type: 'double precision', nullable: true })
+  usualWeightKg: number | null;
+
+  /** The next class's limits below and above the athlete's, kg. */
+  @Column({ name: 'class_below_kg', type: 'double precision', nullable: true })
+  classBelowKg: number | null;
+
+  @Column({ name: 'class_above_kg', type: 'double precision', nullable: true })
+  classAboveKg: number | null;
 
   @Column({ name: 'photo_consent', type: 'boolean', default: false })
   photoConsent: boolean;

@@ -12,6 +12,8 @@ export interface TeamSettings {
   guardrails?: GuardrailFloors;
   /** The questions every weekly check-in asks, in order (PUT /api/team/check-in-questions). */
   checkInQuestions?: CheckInQuestion[];
+  /** Acute share of body mass above which a cut plan carries a strong warning, % (PUT /api/team/cut-settings). */
+  acuteSharePct?: number;
   /** Demo team only: the instant (ISO 8601) its dates were seeded or last moved for (seed/refresh-demo-dates.ts). */
   demoAnchorAt?: string;
 }

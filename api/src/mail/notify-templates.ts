@@ -189,3 +189,20 @@ export function renderWeeklySummaryMail(
     action: 'Open the review queue',
   });
 }
+
+export function renderOverLimitMail(
+  input: NotifyMailBase & { athleteName: string; summary: string; weighInDate: string },
+): RenderedMail {
+  return render(input, {
+    kind: 'over_limit',
+    subject: `Projected over the limit: ${input.athleteName}`,
+    title: `${input.athleteName} is projected over the weigh-in limit`,
+    preheader: input.summary,
+    intro: [
+      `${input.athleteName}'s weight trend now projects over the limit for the weigh-in on ${input.weighInDate}:`,
+      `${input.summary}.`,
+      'Look at the cut plan with them. The commission’s rules decide the weigh-in; agree any acute loss with a physician.',
+    ],
+    action: "Open the athlete's page",
+  });
+}

@@ -1,4 +1,10 @@
-import { GUARDRAIL_DEFAULTS, guardrailFloors, type GuardrailFloors } from '@driftmark/shared';
+import {
+  ACUTE_SHARE_DEFAULT_PCT,
+  cutSettingsRequest,
+  GUARDRAIL_DEFAULTS,
+  guardrailFloors,
+  type GuardrailFloors,
+} from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
 import { Team } from '../entities/team.entity.js';
 
@@ -21,6 +27,21 @@ export class TeamRepository {
     });
     const parsed = guardrailFloors.safeParse(team?.settings?.guardrails);
     return parsed.success ? parsed.data : GUARDRAIL_DEFAULTS;
+  }
+
+  /** The team's acute-share threshold for cut plans (`settings.acuteSharePct`), else the default 5 %. */
+  async acuteSharePct(teamId: string): Promise<number> {
+    const team = await this.findSettings(teamId);
+    const parsed = cutSettingsRequest.shape.acuteSharePct.safeParse(team?.settings?.acuteSharePct);
+    return parsed.success ? parsed.data : ACUTE_SHARE_DEFAULT_PCT;
+  }
+
+  /** Sets the acute-share threshold in one statement, leaving the other settings as they are. */
+  async setAcuteSharePct(teamId: string, pct: number): Promise<void> {
+    await this.manager.query(
+      `UPDATE "teams" SET "settings" = "settings" || jsonb_build_object('acuteSharePct', $2::float8), "updated_at" = now() WHERE "id" = $1`,
+      [teamId, pct],
+    );
   }
 
   /** Replaces the floors in one statement, leaving the other settings as they are. */

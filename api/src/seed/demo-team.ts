@@ -4,7 +4,15 @@
  * definitions, so every demo number traces back to here and to each person's PRNG seed.
  * Everyone and everything here is invented.
  */
-import type { EVENT_TYPES, GOALS, SEXES, StaffRole, VolumeUnit, WeightUnit } from '@driftmark/shared';
+import type {
+  EVENT_TYPES,
+  GOALS,
+  SEXES,
+  StaffRole,
+  VolumeUnit,
+  WeighInTiming,
+  WeightUnit,
+} from '@driftmark/shared';
 
 export const DEMO_PASSWORD = 'driftmark-demo';
 export const DEMO_TEAM_NAME = 'Northline Physique';
@@ -57,6 +65,14 @@ export interface DemoAthleteDefinition {
         timeZone: string;
         division: string | null;
         weighInLimitKg: number | null;
+        /** A weigh-in's record beyond its limit (timing, competition time, usual weight, classes). */
+        weighIn?: {
+          timing: WeighInTiming;
+          competitionTime: string;
+          usualWeightKg: number;
+          classBelowKg: number | null;
+          classAboveKg: number | null;
+        };
       };
   /** Division or class without a coming event (kept on the profile). */
   division?: string;
@@ -159,8 +175,15 @@ export const DEMO_ATHLETES: readonly DemoAthleteDefinition[] = [
       timeZone: 'Pacific/Auckland',
       division: 'Women’s −63 kg',
       weighInLimitKg: 63,
+      weighIn: {
+        timing: 'day_before',
+        competitionTime: '09:30',
+        usualWeightKg: 67.5,
+        classBelowKg: 57,
+        classAboveKg: 70,
+      },
     },
-    history: { seed: 202, startWeightKg: 67.2, seedDateWeightKg: 64.3, checkInRate: 0.93 },
+    history: { seed: 202, startWeightKg: 67.2, seedDateWeightKg: 65.2, checkInRate: 0.93 },
   },
   {
     key: 'photo_shoot',

@@ -72,6 +72,14 @@ export class SeedRefusedError extends Error {
   override readonly name = 'SeedRefusedError';
 }
 
+const NO_WEIGH_IN = {
+  weighInTiming: null,
+  competitionTime: null,
+  usualWeightKg: null,
+  classBelowKg: null,
+  classAboveKg: null,
+};
+
 /** The intake answers and event of a definition, with dates resolved against the seed date. */
 export function resolveDemoAthlete(def: DemoAthleteDefinition, now: Date) {
   const event =
@@ -83,6 +91,7 @@ export function resolveDemoAthlete(def: DemoAthleteDefinition, now: Date) {
           eventTime: null,
           eventTimeZone: null,
           weighInLimitKg: null,
+          ...NO_WEIGH_IN,
         }
       : {
           eventType: def.event.type,
@@ -91,6 +100,15 @@ export function resolveDemoAthlete(def: DemoAthleteDefinition, now: Date) {
           eventTime: def.event.time,
           eventTimeZone: def.event.timeZone,
           weighInLimitKg: def.event.weighInLimitKg,
+          ...(def.event.weighIn
+            ? {
+                weighInTiming: def.event.weighIn.timing,
+                competitionTime: def.event.weighIn.competitionTime,
+                usualWeightKg: def.event.weighIn.usualWeightKg,
+                classBelowKg: def.event.weighIn.classBelowKg,
+                classAboveKg: def.event.weighIn.classAboveKg,
+              }
+            : NO_WEIGH_IN),
         };
   const division = def.event.type === 'none' ? (def.division ?? null) : def.event.division;
   return { ...def.intake, ...event, division };

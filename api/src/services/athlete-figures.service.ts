@@ -15,6 +15,7 @@ import { rate14, rateGuidance } from '../lib/analysis.js';
 import { plannedDay, type CountdownMark } from '../lib/day-plan.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
+import { weighInGap } from '../lib/weigh-in-gap.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import {
   TrendRepository,
@@ -108,6 +109,7 @@ export function snapshotOf(input: {
   const rate = rate14(rawPoints(h), today, guidance);
   const latestWeighIn = h.weighIns.at(-1) ?? h.before?.weighIn ?? null;
   const trend = trendByDate(h);
+  const trendKg = latestWeighIn ? (trend.get(latestWeighIn.date) ?? null) : null;
   const recentFrom = shiftDate(today, -RECENT_DAYS);
   const recent = trendDays(h, recentFrom, shiftDate(today, -1), today).map((d) => ({
     date: d.date,
@@ -136,7 +138,7 @@ export function snapshotOf(input: {
       countdownLabel: countdown?.dayLabel ?? null,
       latestWeightKg: latestWeighIn?.kg ?? null,
       latestWeighInDate: latestWeighIn?.date ?? null,
-      trendKg: latestWeighIn ? (trend.get(latestWeighIn.date) ?? null) : null,
+      trendKg,
       ratePercentPerWeek: rate?.percentPerWeek ?? null,
       rateBand: band ? { minPct: band.minPct, maxPct: band.maxPct } : null,
       rateBandNote: guidance.note,
@@ -145,6 +147,7 @@ export function snapshotOf(input: {
       lastCheckInDate: input.lastCheckInDate,
       flags: FLAG_KINDS.filter((k) => kinds.has(k)),
       safetyFlag: hasSafetyFlag({ athlete, flags, flagRows }),
+      weighInGap: weighInGap(athlete, rawPoints(h), trendKg, today),
     },
   };
 }

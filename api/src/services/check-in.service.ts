@@ -10,6 +10,7 @@ import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { EveningLogRepository } from '../repositories/evening-log.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import type { EntryContext, EntryKind } from './day-entry-kinds.js';
+import { CutService } from './cut.service.js';
 
 export interface EntryResult<E> {
   entry: E;
@@ -39,7 +40,7 @@ export class CheckInService {
   /** Replaces the day's weigh-in (kg stored, the typed value and unit kept): one statement. */
   async putWeighIn(athlete: AthleteWithPeople, date: string, input: WeighInRequest): Promise<WeighIn> {
     this.assertNotFuture(athlete, date, input.time, this.deps.clock());
-    return new WeighInRepository(this.deps.dataSource.manager).upsert({
+    const saved = await new WeighInRepository(this.deps.dataSource.manager).upsert({
       athleteId: athlete.id,
       localDate: date,
       localTime: input.time,
@@ -51,6 +52,10 @@ export class CheckInService {
       tags: [...new Set(input.tags)],
       cyclePhase: input.cyclePhase ?? null,
     });
+    // A weigh-in moves the projection: the coach hears once when it first crosses above the limit
+    // (athletes with a weigh-in only; the others' write stays one statement).
+    await new CutService(this.deps).notifyIfOver(athlete);
+    return saved;
   }
 
   async deleteWeighIn(athlete: AthleteWithPeople, date: string): Promise<void> {

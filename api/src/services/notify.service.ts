@@ -24,6 +24,7 @@ import { signUnsubscribeToken } from '../lib/unsubscribe-token.js';
 import {
   renderMarkCreatedMail,
   renderMarkReplyMail,
+  renderOverLimitMail,
   renderSafetyFlagMail,
   renderWeeklyCheckInReceivedMail,
   renderWeeklyCheckInRepliedMail,
@@ -189,6 +190,29 @@ export async function notifySafetyFlag(
       message: inReaderUnits(flag.message, { weight: staff.weightUnit, volume: staff.volumeUnit }),
     });
     await sendNotification(manager, staff, 'safety_flag', mail, { dueKey: `flag:${flag.id}` });
+  }
+}
+
+/**
+ * The athlete's projection first crossed above the weigh-in limit: their coach and shared staff hear
+ * at once, once per weigh-in date (a later crossing for the same weigh-in does not mail again).
+ */
+export async function notifyOverLimit(
+  manager: EntityManager,
+  athlete: AthleteWithPeople,
+  gap: { summary: string },
+): Promise<void> {
+  if (!athlete.eventDate) return;
+  for (const staff of await athleteStaff(manager, athlete)) {
+    const mail = renderOverLimitMail({
+      ...mailBase(staff, 'over_limit', `/coach/athletes/${encodeURIComponent(athlete.id)}`),
+      athleteName: athlete.user.name,
+      summary: inReaderUnits(gap.summary, { weight: staff.weightUnit, volume: staff.volumeUnit }),
+      weighInDate: athlete.eventDate,
+    });
+    await sendNotification(manager, staff, 'over_limit', mail, {
+      dueKey: `${athlete.id}:${athlete.eventDate}`,
+    });
   }
 }
 

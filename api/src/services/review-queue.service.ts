@@ -47,6 +47,7 @@ const PRIORITY: Record<ReviewReasonKind, Reason['priority']> = {
   missed: 2,
   drift: 3,
   countdown: 3,
+  over_limit: 3,
   reply: 4,
 };
 
@@ -84,6 +85,8 @@ const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one :
  *   at the start of the athlete's today (so a review clears it for the day, and it comes back the next);
  * - drift: a metric off plan on 2 of the last 3 days, 7-day adherence below 0.6, cut-off breaches
  *   in the last 3 days (arising when the day closed), a 14-day loss beyond 1 %/week (Helms 2014);
+ * - projected over the weigh-in limit (the projection against the class limit), arising at the
+ *   start of the athlete's today;
  * - the countdown day (standing);
  * - unread replies to marks;
  * - weekly check-ins received and not answered yet (standing until a reply, with the time since
@@ -206,6 +209,20 @@ export function reasonsFor(
       text: `${Math.round(d.breach.excessMl)} mL of fluids after the ${d.breach.cutoff} cut-off beyond the allowance`,
       date: d.date,
       at: startOf(shiftDate(d.date, 1)),
+    });
+  }
+
+  // Making weight: projected over the weigh-in limit (shared rules/weight-cut.ts limitGap), arising
+  // at the start of the athlete's today like the missed check-ins: a review clears it for the day.
+  const gap = s.figures.weighInGap;
+  if (gap?.over) {
+    add({
+      kind: 'over_limit',
+      text:
+        `Projected ${gap.overKg.toFixed(1)} kg (${gap.overPct.toFixed(1)} %) over the weigh-in limit, ` +
+        `${plural(gap.daysLeft, 'day', 'days')} left`,
+      date: s.athlete.eventDate,
+      at: todayStart,
     });
   }
 

@@ -61,6 +61,7 @@ const EMPTY_FIGURES: RosterFigures = {
   lastCheckInDate: null,
   flags: [],
   safetyFlag: false,
+  weighInGap: null,
 };
 
 export class RosterService {

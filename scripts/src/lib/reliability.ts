@@ -34,7 +34,7 @@ import { pickFreePort } from './ports.js';
 import { ensureCluster, ensureDatabase, stopCluster } from './postgres.js';
 import { sleep, type Service } from './proc.js';
 import { crc32, tally, type ScenarioResult, type WriteRecord } from './reliability-tally.js';
-import { readCapturedMail } from './smtp-fake.js';
+import { readAllCapturedMail } from './smtp-fake.js';
 import { generateSecret } from './secrets.js';
 
 export interface ReliabilityCounts {
@@ -734,7 +734,7 @@ async function scenarioMailKill(h: Harness, counts: ReliabilityCounts): Promise<
     await sleep(500);
   }
   await sleep(500);
-  const captured = await readCapturedMail(h.mailDir);
+  const captured = await readAllCapturedMail(h.mailDir);
   const receivedById = new Map<string, number>();
   for (const mail of captured)
     if (mail.messageId) receivedById.set(mail.messageId, (receivedById.get(mail.messageId) ?? 0) + 1);

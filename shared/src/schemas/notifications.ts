@@ -6,6 +6,7 @@ export const STAFF_NOTIFICATION_KINDS = [
   'weekly_check_in_received',
   'mark_reply',
   'weekly_summary',
+  'over_limit',
 ] as const;
 export const ATHLETE_NOTIFICATION_KINDS = ['morning_reminder', 'coach_note', 'weekly_check_in_due'] as const;
 export const NOTIFICATION_KINDS = [...STAFF_NOTIFICATION_KINDS, ...ATHLETE_NOTIFICATION_KINDS] as const;
@@ -16,6 +17,7 @@ export const NOTIFICATION_LABELS: Record<NotificationKind, string> = {
   weekly_check_in_received: 'A weekly check-in arrives',
   mark_reply: 'An athlete replies to a mark',
   weekly_summary: 'Weekly roster summary',
+  over_limit: 'An athlete is first projected over the weigh-in limit (at once)',
   morning_reminder: 'Morning reminder when no weigh-in is logged',
   coach_note: "Your coach's new marks and replies",
   weekly_check_in_due: 'Weekly check-in due',

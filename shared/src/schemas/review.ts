@@ -3,7 +3,7 @@ import { uuid } from './common.js';
 import { EVENT_TYPES } from '../vocabulary.js';
 import { GOALS } from './athletes.js';
 
-export const REVIEW_REASON_KINDS = ['safety', 'missed', 'drift', 'reply', 'countdown'] as const;
+export const REVIEW_REASON_KINDS = ['safety', 'missed', 'drift', 'reply', 'countdown', 'over_limit'] as const;
 export type ReviewReasonKind = (typeof REVIEW_REASON_KINDS)[number];
 
 /** GET /api/review-queue: one row per athlete that needs attention, most urgent first. */

@@ -209,6 +209,22 @@ export const projectionView = z.object({
 });
 export type ProjectionView = z.infer<typeof projectionView>;
 
+/** The projection at the weigh-in against the limit (shared/src/rules/weight-cut.ts limitGap). */
+export const limitGapView = z.object({
+  projectedKg: z.number(),
+  lowKg: z.number(),
+  highKg: z.number(),
+  overKg: z.number(),
+  overPct: z.number(),
+  over: z.boolean(),
+  rangeOver: z.boolean(),
+  daysLeft: z.number().int(),
+  extraPctPerWeek: z.number().nullable(),
+  /** "Projected 0.6 kg over the 63.0 kg limit, needs 0.7 %/week more". */
+  summary: z.string(),
+});
+export type LimitGapView = z.infer<typeof limitGapView>;
+
 /** Weekly adherence for one metric: share of logged days on plan. */
 export const adherenceWeek = z.object({
   /** Monday of the week. */
@@ -306,5 +322,7 @@ export const rosterFigures = z.object({
   flags: z.array(z.enum(FLAG_KINDS)),
   /** Whether any of them is a safety flag (SAFETY_FLAG_KINDS; the review queue's safety items). */
   safetyFlag: z.boolean(),
+  /** For a weigh-in ahead: the projection against the class limit (rules/weight-cut.ts); null otherwise. */
+  weighInGap: limitGapView.nullable(),
 });
 export type RosterFigures = z.infer<typeof rosterFigures>;

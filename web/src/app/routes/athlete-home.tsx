@@ -6,6 +6,7 @@ import { Skeleton } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { CoachCard, EventCountdownCard } from '@/features/athletes/components/athlete-today';
+import { CutTodayCard } from '@/features/cuts/components/cut-today-card';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
 import { useToday } from '@/features/check-ins/components/use-clock';
 import { WeeklyDueBanner } from '@/features/weekly/components/weekly-due-banner';
@@ -55,6 +56,7 @@ export function AthleteHomeRoute() {
       </header>
       <div className="space-y-4">
         <WeeklyDueBanner athleteId={athleteId} href={paths.athleteWeekly} />
+        {athleteId ? <CutTodayCard athleteId={athleteId} unit={me.units.weight} /> : null}
         <DayCheckIn
           athleteId={athleteId}
           date={today}

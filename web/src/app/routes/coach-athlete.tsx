@@ -15,6 +15,7 @@ import { Skeleton } from '@/components/ui/spinner';
 import { CoachAthleteTabs } from '../layouts/coach-athlete-tabs';
 import { CountdownMismatchBanner } from '../layouts/countdown-mismatch-banner';
 import { paths } from '@/config/paths';
+import { CutCoachPanel } from '@/features/cuts/components/cut-coach-panel';
 import { EndCoachingPanel } from '@/features/athletes/components/end-coaching-panel';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
@@ -160,6 +161,7 @@ export function CoachAthleteRoute() {
             abilities={athlete.data.abilities}
             className="mb-5"
           />
+          <CutCoachPanel athleteId={athleteId} today={today} unit={me.units.weight} />
           <section aria-labelledby="day-heading" className="mb-8">
             <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
               <h2 id="day-heading" className="text-xl font-bold text-ink tabular-nums">

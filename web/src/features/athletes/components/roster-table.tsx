@@ -478,7 +478,7 @@ function EventCell({ row }: { row: RosterRow }) {
 }
 
 function WeightCell({ row, unit }: { row: RosterRow; unit: WeightUnit }) {
-  const { latestWeightKg, latestWeighInDate, trendKg } = row.figures;
+  const { latestWeightKg, latestWeighInDate, trendKg, weighInGap: gap } = row.figures;
   if (latestWeightKg === null) return <Missing label="no weigh-in yet" />;
   return (
     <span className="inline-flex flex-col items-end">
@@ -490,6 +490,15 @@ function WeightCell({ row, unit }: { row: RosterRow; unit: WeightUnit }) {
       </span>
       {trendKg !== null ? (
         <span className="text-xs whitespace-nowrap text-ink-faint">trend {formatWeight(trendKg, unit)}</span>
+      ) : null}
+      {gap?.over ? (
+        <span className="mt-1 inline-flex flex-col items-end gap-0.5">
+          <Badge tone="caution">Over the limit</Badge>
+          <span className="text-xs whitespace-nowrap text-ink-muted tabular-nums">
+            +{formatWeight(gap.overKg, unit)} · {formatNumber(gap.overPct, 1, 1)}
+            {NBSP}% · {gap.daysLeft} days left
+          </span>
+        </span>
       ) : null}
     </span>
   );

@@ -40,6 +40,7 @@ export const REASON_KIND_STYLE: Record<
   drift: { label: 'Drift', icon: PulseIcon, tag: 'bg-drifting-soft text-drifting' },
   reply: { label: 'Reply', icon: ReplyIcon, tag: 'bg-accent-soft text-accent-strong' },
   countdown: { label: 'Countdown', icon: CountdownIcon, tag: 'bg-sunken text-ink-muted' },
+  over_limit: { label: 'Over the limit', icon: CautionIcon, tag: 'bg-drifting-soft text-drifting' },
 };
 
 type Reason = ReviewQueueItem['reasons'][number];

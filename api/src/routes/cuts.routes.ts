@@ -1,0 +1,63 @@
+import { createCutPlanRequest, cutSettingsRequest, uuid, weighInEventRequest } from '@driftmark/shared';
+import { Router } from 'express';
+import { z } from 'zod';
+import { authenticate, requireAuth } from '../middleware/authenticate.js';
+import { dated, validate } from '../middleware/validate.js';
+import { canOnAthlete } from '../policies/athlete.policy.js';
+import { authorizeTeam } from '../policies/team.policy.js';
+import { TeamRepository } from '../repositories/team.repository.js';
+import { CutService } from '../services/cut.service.js';
+import { loadAthlete } from './athletes.routes.js';
+
+const athleteParams = z.object({ athleteId: uuid });
+
+/**
+ * Making weight under /api/athletes/:athleteId: the weigh-in's record and the cut plan. Reading is
+ * the athlete policy's `read` (the athlete too); writing is `plan` (coach, owner, shared staff).
+ */
+export function cutsRouter(): Router {
+  const router = Router();
+
+  router.get('/:athleteId/cut', authenticate(), validate({ params: athleteParams }), async (req, res) => {
+    const { actor, athlete, target } = await loadAthlete(req, 'read');
+    res.json({
+      data: await new CutService(req.ctx).getCut(athlete),
+      abilities: { plan: canOnAthlete(actor, 'plan', target) },
+    });
+  });
+
+  router.put(
+    '/:athleteId/weigh-in',
+    authenticate(),
+    validate({ params: athleteParams, body: weighInEventRequest }),
+    async (req, res) => {
+      const { athlete } = await loadAthlete(req, 'plan');
+      res.json({ data: await new CutService(req.ctx).setWeighInEvent(athlete, req.body) });
+    },
+  );
+
+  router.post(
+    '/:athleteId/cut-plans',
+    authenticate(),
+    validate({ params: athleteParams, body: dated(createCutPlanRequest, { startDate: 'any' }) }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'plan');
+      res.status(201).json({ data: await new CutService(req.ctx).createPlan(actor, athlete, req.body) });
+    },
+  );
+
+  return router;
+}
+
+/** PUT /api/team/cut-settings: the team's acute-share threshold (owner). */
+export function cutSettingsRouter(): Router {
+  const router = Router();
+  router.put('/cut-settings', authenticate(), validate({ body: cutSettingsRequest }), async (req, res) => {
+    const { actor } = requireAuth(req);
+    authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
+    const teams = new TeamRepository(req.ctx.dataSource.manager);
+    await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
+    res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
+  });
+  return router;
+}

@@ -1,0 +1,251 @@
+import {
+  acuteShare,
+  beforeEventOnAthleteClock,
+  chronicRate,
+  competitionDate,
+  CUT_CAUTION,
+  CUT_SOURCES,
+  cutPathKg,
+  cutWarnings,
+  preAcuteDate,
+  recoveryTargets,
+  recoveryWindowHours,
+  STOP_SIGNS_TEXT,
+  type CreateCutPlanRequest,
+  type CutFiguresView,
+  type CutPlanShape,
+  type CutView,
+  type LimitGapView,
+  type RecoveryView,
+  type WeighInEventRequest,
+  type WeighInEventView,
+} from '@driftmark/shared';
+import type { DataSource, EntityManager } from 'typeorm';
+import { AppError, conflict, notFound, validationFailed } from '../errors.js';
+import { localDateTime } from '../lib/local-time.js';
+import type { Actor } from '../policies/actor.js';
+import { presentCutPlan } from '../presenters/cut.presenter.js';
+import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
+import { CutPlanRepository, type CutPlanWithAuthor } from '../repositories/cut-plan.repository.js';
+import { TeamRepository } from '../repositories/team.repository.js';
+import { loadSnapshots } from './athlete-figures.service.js';
+import { notifyOverLimit } from './notify.service.js';
+
+type CutDeps = { dataSource: DataSource; clock: () => Date };
+
+const NOT_A_WEIGH_IN = 'The athlete’s event is not a weigh-in with a date: set the event first.';
+
+/** The weigh-in's record, with its recovery window once both clock times and the zone are known. */
+export function weighInEventOf(athlete: AthleteWithPeople): WeighInEventView | null {
+  if (athlete.eventType !== 'weigh_in' || !athlete.eventDate || athlete.weighInLimitKg === null) return null;
+  const timing = athlete.weighInTiming;
+  const window =
+    timing && athlete.eventTime && athlete.competitionTime && athlete.eventTimeZone
+      ? recoveryWindowHours({
+          weighInDate: athlete.eventDate,
+          weighInTime: athlete.eventTime,
+          timing,
+          competitionTime: athlete.competitionTime,
+          timeZone: athlete.eventTimeZone,
+        })
+      : null;
+  return {
+    date: athlete.eventDate,
+    limitKg: athlete.weighInLimitKg,
+    timing,
+    weighInTime: athlete.eventTime,
+    competitionDate: timing ? competitionDate({ weighInDate: athlete.eventDate, timing }) : null,
+    competitionTime: athlete.competitionTime,
+    timeZone: athlete.eventTimeZone,
+    recoveryWindowHours: window,
+    usualWeightKg: athlete.usualWeightKg,
+    classBelowKg: athlete.classBelowKg,
+    classAboveKg: athlete.classAboveKg,
+  };
+}
+
+function shapeOf(
+  plan: CutPlanWithAuthor | (CreateCutPlanRequest & { weighInDate: string; limitKg: number }),
+): CutPlanShape {
+  return {
+    startDate: plan.startDate,
+    startKg: plan.startKg,
+    preAcuteKg: plan.preAcuteKg,
+    acuteDays: plan.acuteDays,
+    weighInDate: plan.weighInDate,
+    limitKg: plan.limitKg,
+    path: plan.path,
+  };
+}
+
+/** The plan's figures on `today` (shared rules/weight-cut.ts), with its warnings. */
+export function cutFigures(shape: CutPlanShape, thresholdPct: number, today: string): CutFiguresView {
+  const path = cutPathKg(shape, today);
+  const chronic = chronicRate(shape);
+  const acute = acuteShare(shape.preAcuteKg, shape.limitKg, thresholdPct);
+  return {
+    today,
+    todayKg: path.kg,
+    stage: path.stage,
+    chronic,
+    acute,
+    thresholdPct,
+    warnings: cutWarnings(chronic, acute, thresholdPct).map((w) => ({ ...w, needsAcknowledgement: true })),
+    stopSigns: acute.severity === 'severe' ? STOP_SIGNS_TEXT : null,
+  };
+}
+
+/**
+ * On the weigh-in day and until the competition: recovery targets from the kg lost at the scale,
+ * counted from the plan's pre-acute weight (else the usual weight) down to the limit, each slot
+ * placed on the athlete's clock from the weigh-in's time on the venue clock.
+ */
+export function recoveryOf(
+  event: WeighInEventView | null,
+  plan: Pick<CutPlanShape, 'preAcuteKg'> | null,
+  today: string,
+  athleteTimeZone: string,
+): RecoveryView | null {
+  if (!event || event.recoveryWindowHours === null || !event.weighInTime || !event.timeZone) return null;
+  if (today < event.date || (event.competitionDate !== null && today > event.competitionDate)) return null;
+  const from = plan
+    ? { kg: plan.preAcuteKg, basis: 'plan' as const }
+    : event.usualWeightKg !== null
+      ? { kg: event.usualWeightKg, basis: 'usual' as const }
+      : null;
+  if (!from) return null;
+  const kgLost = Math.max(0, from.kg - event.limitKg);
+  const targets = recoveryTargets({ kgLost, bodyKg: event.limitKg, windowHours: event.recoveryWindowHours });
+  const clock = { date: event.date, time: event.weighInTime, timeZone: event.timeZone };
+  return {
+    kgLost,
+    basis: from.basis,
+    windowHours: event.recoveryWindowHours,
+    fluidL: targets.fluidL,
+    carbohydrateG: targets.carbohydrateG,
+    slots: targets.slots.map((s) => ({
+      ...beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone),
+      fluidL: s.fluidL,
+      carbohydrateG: s.carbohydrateG,
+    })),
+    source: CUT_SOURCES.recovery,
+  };
+}
+
+export class CutService {
+  constructor(private readonly deps: CutDeps) {}
+
+  private get manager(): EntityManager {
+    return this.deps.dataSource.manager;
+  }
+
+  /** The weigh-in, the projection against its limit, and the plan in force with today's figures. */
+  async getCut(athlete: AthleteWithPeople): Promise<CutView> {
+    const now = this.deps.clock();
+    const today = localDateTime(now, athlete.user.timeZone).date;
+    const [snapshots, plan, thresholdPct] = await Promise.all([
+      loadSnapshots(this.manager, [athlete], now),
+      new CutPlanRepository(this.manager).latest(athlete.id),
+      new TeamRepository(this.manager).acuteSharePct(athlete.teamId),
+    ]);
+    const acks = plan ? await new CutPlanRepository(this.manager).acknowledgements(plan.id) : [];
+    const event = weighInEventOf(athlete);
+    return {
+      athleteId: athlete.id,
+      weighIn: event,
+      gap: snapshots.get(athlete.id)?.figures.weighInGap ?? null,
+      plan: plan ? presentCutPlan(plan, acks) : null,
+      figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
+      thresholdPct,
+      recovery: recoveryOf(event, plan, today, athlete.user.timeZone),
+      caution: CUT_CAUTION,
+    };
+  }
+
+  /** Sets the weigh-in's record on the athlete (the event must already be a dated weigh-in). */
+  async setWeighInEvent(athlete: AthleteWithPeople, input: WeighInEventRequest): Promise<CutView> {
+    if (athlete.eventType !== 'weigh_in' || !athlete.eventDate) throw conflict(NOT_A_WEIGH_IN);
+    const athletes = new AthleteRepository(this.manager);
+    await athletes.update(athlete.id, {
+      weighInLimitKg: input.weighInLimitKg,
+      eventTime: input.weighInTime,
+      weighInTiming: input.weighInTiming,
+      competitionTime: input.competitionTime,
+      usualWeightKg: input.usualWeightKg,
+      classBelowKg: input.classBelowKg,
+      classAboveKg: input.classAboveKg,
+    });
+    const updated = await athletes.findWithPeople(athlete.id);
+    if (!updated) throw notFound();
+    return this.getCut(updated);
+  }
+
+  /**
+   * Saves a cut plan for the athlete's weigh-in: refused (409 `guardrails_unacknowledged`, fields by
+   * key) while any of its warnings is not acknowledged; stored with one acknowledgement per warning.
+   */
+  async createPlan(actor: Actor, athlete: AthleteWithPeople, input: CreateCutPlanRequest): Promise<CutView> {
+    const event = weighInEventOf(athlete);
+    if (!event) throw conflict(NOT_A_WEIGH_IN);
+    const shapeInput = { ...input, weighInDate: event.date, limitKg: event.limitKg };
+    if (input.startDate >= preAcuteDate(shapeInput))
+      throw validationFailed({
+        startDate: `Start before the last ${input.acuteDays} days before the weigh-in`,
+      });
+    if (input.preAcuteKg > input.startKg)
+      throw validationFailed({ preAcuteKg: 'Must not be above the start weight' });
+    const thresholdPct = await new TeamRepository(this.manager).acuteSharePct(athlete.teamId);
+    const today = localDateTime(this.deps.clock(), athlete.user.timeZone).date;
+    const warnings = cutFigures(shapeOf(shapeInput), thresholdPct, today).warnings;
+    const missing = warnings.filter((w) => !input.acknowledgedKeys.includes(w.key));
+    if (missing.length > 0) {
+      throw new AppError(
+        'guardrails_unacknowledged',
+        missing.length === 1
+          ? 'One warning needs your acknowledgement before this can be saved.'
+          : `${missing.length} warnings need your acknowledgement before this can be saved.`,
+        Object.fromEntries(missing.map((w) => [w.key, w.message])),
+      );
+    }
+    const at = this.deps.clock();
+    await this.deps.dataSource.transaction((manager) =>
+      new CutPlanRepository(manager).create(
+        {
+          athleteId: athlete.id,
+          weighInDate: event.date,
+          limitKg: event.limitKg,
+          startDate: input.startDate,
+          startKg: input.startKg,
+          preAcuteKg: input.preAcuteKg,
+          acuteDays: input.acuteDays,
+          path: input.path,
+          thresholdPct,
+          notes: input.notes,
+          createdById: actor.userId,
+        },
+        warnings.map((w) => ({
+          key: w.key,
+          severity: w.severity,
+          message: w.message,
+          source: w.source,
+          acknowledgedById: actor.userId,
+          acknowledgedAt: at,
+        })),
+      ),
+    );
+    return this.getCut(athlete);
+  }
+
+  /**
+   * After a weigh-in is logged: when the projection is over the limit, the coach and shared staff
+   * hear once per weigh-in date (the notification_sends claim makes it once).
+   */
+  async notifyIfOver(athlete: AthleteWithPeople): Promise<LimitGapView | null> {
+    if (athlete.eventType !== 'weigh_in') return null;
+    const now = this.deps.clock();
+    const gap =
+      (await loadSnapshots(this.manager, [athlete], now)).get(athlete.id)?.figures.weighInGap ?? null;
+    if (gap?.over) await this.deps.dataSource.transaction((m) => notifyOverLimit(m, athlete, gap));
+    return gap;
+  }
+}

@@ -1,0 +1,258 @@
+import { describe, expect, it } from 'vitest';
+import {
+  ACUTE_SHARE_DEFAULT_PCT,
+  acknowledgementsNeeded,
+  acuteShare,
+  chronicRate,
+  competitionDate,
+  cutPathKg,
+  cutWarnings,
+  limitGap,
+  limitGapSummary,
+  preAcuteDate,
+  rateSeverity,
+  recoveryTargets,
+  recoveryWindowHours,
+  type CutPlanShape,
+} from './weight-cut.js';
+
+// Invented cases worked out by hand; the thresholds' sources are named beside them in weight-cut.ts
+// (Helms 2014 JISSN 11:20 and Garthe 2011 IJSNEM 21:97 for the weekly rate, Barley 2018 JSCR for the
+// 5 % acute share, 7 % common practice, no source).
+
+// 70 kg on Sun 1 Mar 2026, 66 kg planned before 3 acute days, weigh-in Wed 1 Apr 2026, limit 63 kg:
+// the chronic part runs 1 Mar → 29 Mar = 28 days = 4 weeks, 4 kg = 1 kg a week.
+const linear: CutPlanShape = {
+  startDate: '2026-03-01',
+  startKg: 70,
+  preAcuteKg: 66,
+  acuteDays: 3,
+  weighInDate: '2026-04-01',
+  limitKg: 63,
+  path: 'linear',
+};
+const rate: CutPlanShape = { ...linear, path: 'rate' };
+
+describe('the cut path: weight needed today to stay on plan', () => {
+  it('ends the chronic part acuteDays before the weigh-in', () => {
+    expect(preAcuteDate(linear)).toBe('2026-03-29');
+  });
+
+  it('linear: equal kg a day (day 14 of 28 → 70 − 4 × 14/28 = 68.0 kg)', () => {
+    expect(cutPathKg(linear, '2026-03-01')).toEqual({ stage: 'chronic', kg: 70 });
+    expect(cutPathKg(linear, '2026-03-15')).toEqual({ stage: 'chronic', kg: 68 });
+    // Day 7: 70 − 4 × 7/28 = 69.0.
+    expect(cutPathKg(linear, '2026-03-08').kg).toBeCloseTo(69, 10);
+  });
+
+  it('rate: the same share a day (day 14 of 28 → 70 × (66/70)^½ = √4620 = 67.9706 kg)', () => {
+    expect(cutPathKg(rate, '2026-03-15').kg).toBeCloseTo(67.9706, 4);
+  });
+
+  it('holds the start weight before the start and the pre-acute weight through the acute days', () => {
+    expect(cutPathKg(linear, '2026-02-28')).toEqual({ stage: 'before', kg: 70 });
+    expect(cutPathKg(linear, '2026-03-29')).toEqual({ stage: 'acute', kg: 66 });
+    expect(cutPathKg(linear, '2026-04-01')).toEqual({ stage: 'acute', kg: 66 });
+    expect(cutPathKg(linear, '2026-04-02')).toEqual({ stage: 'after', kg: 66 });
+  });
+});
+
+describe('the chronic weekly rate against 1 %/week (warning) and 1.4 %/week (strong)', () => {
+  it('linear: the last week is the fastest in % (1 kg / 67 kg = 1.4925 %) → strong', () => {
+    const r = chronicRate(linear)!;
+    expect(r.kgPerWeek).toBeCloseTo(1, 10);
+    expect(r.pctPerWeek).toBeCloseTo(1.4925, 4);
+    expect(r.severity).toBe('strong');
+  });
+
+  it('rate: 1 − (66/70)^(1/4) = 1.4602 %/week every week → strong', () => {
+    const r = chronicRate(rate)!;
+    expect(r.pctPerWeek).toBeCloseTo(1.4602, 4);
+    expect(r.severity).toBe('strong');
+  });
+
+  it('80 → 76 kg in 4 weeks, linear: 1 kg / 77 kg = 1.2987 % → warning; rate 1.2741 % → warning', () => {
+    const plan = { ...linear, startKg: 80, preAcuteKg: 76 };
+    expect(chronicRate(plan)!.pctPerWeek).toBeCloseTo(1.2987, 4);
+    expect(chronicRate(plan)!.severity).toBe('warning');
+    expect(chronicRate({ ...plan, path: 'rate' })!.pctPerWeek).toBeCloseTo(1.2741, 4);
+  });
+
+  it('reads the thresholds as "above": 1 and 1.4 exactly are not', () => {
+    expect(rateSeverity(1)).toBe('none');
+    expect(rateSeverity(1.01)).toBe('warning');
+    expect(rateSeverity(1.4)).toBe('warning');
+    expect(rateSeverity(1.41)).toBe('strong');
+  });
+
+  it('has no rate when the chronic part has no days', () => {
+    expect(chronicRate({ ...linear, startDate: '2026-03-29' })).toBeNull();
+  });
+});
+
+describe('the acute share: pre-acute weight down to the limit', () => {
+  it('66 → 63 kg: 3 kg, 3/66 = 4.5455 % → under the default 5 %', () => {
+    const a = acuteShare(66, 63);
+    expect(a.kg).toBe(3);
+    expect(a.pct).toBeCloseTo(4.5455, 4);
+    expect(a.severity).toBe('none');
+    expect(ACUTE_SHARE_DEFAULT_PCT).toBe(5);
+  });
+
+  it('67 → 63 kg: 4/67 = 5.9701 % → strong, one acknowledgement', () => {
+    const a = acuteShare(67, 63);
+    expect(a.pct).toBeCloseTo(5.9701, 4);
+    expect(a.severity).toBe('strong');
+    expect(acknowledgementsNeeded(a.severity)).toEqual(['acute_share']);
+  });
+
+  it('68 → 63 kg: 5/68 = 7.3529 % → severe, two acknowledgements', () => {
+    const a = acuteShare(68, 63);
+    expect(a.pct).toBeCloseTo(7.3529, 4);
+    expect(a.severity).toBe('severe');
+    expect(acknowledgementsNeeded(a.severity)).toEqual(['acute_share', 'acute_share_severe']);
+  });
+
+  it('exactly the threshold (60 → 57 kg = 5 %) is not above it; a team threshold of 4 % is', () => {
+    expect(acuteShare(60, 57).severity).toBe('none');
+    expect(acuteShare(66, 63, 4).severity).toBe('strong');
+  });
+
+  it('needs nothing when the pre-acute weight is already under the limit', () => {
+    expect(acuteShare(62, 63)).toEqual({ kg: 0, pct: 0, severity: 'none' });
+  });
+});
+
+describe('the projection at the weigh-in against the limit', () => {
+  it('63.6 projected against 63.0 with 10 days left at 64.4 kg: 0.6 kg over, 0.6/(10/7)/64.4 = 0.6522 %/week more', () => {
+    const g = limitGap({
+      projection: { kg: 63.6, lowKg: 62.3 },
+      limitKg: 63,
+      currentKg: 64.4,
+      today: '2026-03-22',
+      weighInDate: '2026-04-01',
+    });
+    expect(g.over).toBe(true);
+    expect(g.overKg).toBeCloseTo(0.6, 10);
+    // 0.6 / 63 = 0.9524 % of the limit.
+    expect(g.overPct).toBeCloseTo(0.9524, 4);
+    expect(g.daysLeft).toBe(10);
+    expect(g.extraPctPerWeek).toBeCloseTo(0.6522, 4);
+    expect(g.rangeOver).toBe(false);
+  });
+
+  it('under the limit: no extra rate; the whole range over the limit is told apart', () => {
+    const base = { limitKg: 63, currentKg: 64, today: '2026-03-22', weighInDate: '2026-04-01' };
+    const under = limitGap({ ...base, projection: { kg: 62.5, lowKg: 61.5 } });
+    expect(under.over).toBe(false);
+    expect(under.overKg).toBeCloseTo(-0.5, 10);
+    expect(under.extraPctPerWeek).toBeNull();
+    expect(limitGap({ ...base, projection: { kg: 64, lowKg: 63.2 } }).rangeOver).toBe(true);
+  });
+});
+
+describe('the recovery window on the venue clock', () => {
+  it('day before: weigh-in 18:00 Tue 31 Mar, competition 10:00 the next day → 16 h', () => {
+    const w = {
+      weighInDate: '2026-03-31',
+      weighInTime: '18:00',
+      timing: 'day_before' as const,
+      competitionTime: '10:00',
+      timeZone: 'Pacific/Auckland',
+    };
+    expect(competitionDate(w)).toBe('2026-04-01');
+    expect(recoveryWindowHours(w)).toBe(16);
+  });
+
+  it('same day: 07:00 → 13:00 = 6 h', () => {
+    expect(
+      recoveryWindowHours({
+        weighInDate: '2026-04-01',
+        weighInTime: '07:00',
+        timing: 'same_day',
+        competitionTime: '13:00',
+        timeZone: 'Europe/London',
+      }),
+    ).toBe(6);
+  });
+
+  it('counts the hour New Zealand gains at 03:00 on Sun 5 Apr 2026 (18:00 → 10:00 is 17 h)', () => {
+    // NZ daylight saving ends on the first Sunday of April (IANA tz database, Pacific/Auckland).
+    expect(
+      recoveryWindowHours({
+        weighInDate: '2026-04-04',
+        weighInTime: '18:00',
+        timing: 'day_before',
+        competitionTime: '10:00',
+        timeZone: 'Pacific/Auckland',
+      }),
+    ).toBe(17);
+  });
+});
+
+describe('recovery targets from the kg lost at the scale', () => {
+  it('3 kg lost, 63 kg, 16 h: 4.5 L; carbohydrate 4.0–4.8 g/kg for 4 h + 5–10 g/kg × 12/24 = 6.5–9.8 g/kg', () => {
+    const r = recoveryTargets({ kgLost: 3, bodyKg: 63, windowHours: 16 });
+    expect(r.fluidL).toBeCloseTo(4.5, 10);
+    expect(r.carbohydrateGPerKg.min).toBeCloseTo(6.5, 10);
+    expect(r.carbohydrateGPerKg.max).toBeCloseTo(9.8, 10);
+    // 6.5 × 63 = 409.5 g; 9.8 × 63 = 617.4 g.
+    expect(r.carbohydrateG.min).toBeCloseTo(409.5, 10);
+    expect(r.carbohydrateG.max).toBeCloseTo(617.4, 10);
+    // Slots every hour until an hour before: 0, 60, …, 900 minutes = 16 slots of 4.5/16 = 0.28125 L.
+    expect(r.slots).toHaveLength(16);
+    expect(r.slots[15]!.minutesAfterWeighIn).toBe(900);
+    expect(r.slots[0]!.fluidL).toBeCloseTo(0.28125, 10);
+    // First hour: 1.0–1.2 g/kg × 63 = 63–75.6 g; last hour (15–16 h): 5/24–10/24 × 63 = 13.125–26.25 g.
+    expect(r.slots[0]!.carbohydrateG.min).toBeCloseTo(63, 10);
+    expect(r.slots[0]!.carbohydrateG.max).toBeCloseTo(75.6, 10);
+    expect(r.slots[15]!.carbohydrateG.min).toBeCloseTo(13.125, 10);
+    expect(r.slots[15]!.carbohydrateG.max).toBeCloseTo(26.25, 10);
+    const sum = r.slots.reduce((a, s) => a + s.carbohydrateG.min, 0);
+    expect(sum).toBeCloseTo(409.5, 8);
+  });
+
+  it('2 kg lost, 60 kg, 3 h: 3.0 L in 3 slots of 1.0 L; 3.0–3.6 g/kg = 180–216 g, 60–72 g an hour', () => {
+    const r = recoveryTargets({ kgLost: 2, bodyKg: 60, windowHours: 3 });
+    expect(r.fluidL).toBeCloseTo(3, 10);
+    expect(r.carbohydrateG.min).toBeCloseTo(180, 10);
+    expect(r.carbohydrateG.max).toBeCloseTo(216, 10);
+    expect(r.slots.map((s) => s.minutesAfterWeighIn)).toEqual([0, 60, 120]);
+    for (const s of r.slots) {
+      expect(s.fluidL).toBeCloseTo(1, 10);
+      expect(s.carbohydrateG.min).toBeCloseTo(60, 10);
+      expect(s.carbohydrateG.max).toBeCloseTo(72, 10);
+    }
+  });
+
+  it('keeps one slot for a window under an hour and asks no fluid when nothing was lost', () => {
+    const r = recoveryTargets({ kgLost: -0.2, bodyKg: 60, windowHours: 0.5 });
+    expect(r.fluidL).toBe(0);
+    expect(r.slots).toHaveLength(1);
+  });
+});
+
+describe('the words of the warnings and the gap', () => {
+  it('asks one acknowledgement per warning: rate, acute share, and the second above 7 %', () => {
+    const keys = cutWarnings(chronicRate(linear), acuteShare(68, 63), 5).map((w) => [w.key, w.severity]);
+    expect(keys).toEqual([
+      ['chronic_rate', 'strong'],
+      ['acute_share', 'strong'],
+      ['acute_share_severe', 'strong'],
+    ]);
+    expect(cutWarnings(null, acuteShare(66, 63), 5)).toEqual([]);
+  });
+
+  it('says the gap in kg, days and the extra rate', () => {
+    const gap = limitGap({
+      projection: { kg: 63.6, lowKg: 62.3 },
+      limitKg: 63,
+      currentKg: 64.4,
+      today: '2026-03-22',
+      weighInDate: '2026-04-01',
+    });
+    expect(limitGapSummary(gap, 63)).toBe(
+      'Projected 0.6 kg over the 63.0 kg limit in 10 days; needs 0.7 %/week more',
+    );
+  });
+});

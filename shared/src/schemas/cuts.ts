@@ -1,0 +1,201 @@
+import { z } from 'zod';
+import { LIMITS } from '../limits.js';
+import { CUT_PATHS, WEIGH_IN_TIMINGS } from '../rules/weight-cut.js';
+import { clockTime, isoDate, text } from './common.js';
+import { limitGapView } from './trends.js';
+
+const kg = (what: string) =>
+  z
+    .number({ error: `${what} is required` })
+    .finite()
+    .min(LIMITS.weightKg.min, `${what} must be at least ${LIMITS.weightKg.min} kg`)
+    .max(LIMITS.weightKg.max, `${what} must be at most ${LIMITS.weightKg.max} kg`);
+
+export const WEIGH_IN_TIMING_LABELS: Record<(typeof WEIGH_IN_TIMINGS)[number], string> = {
+  day_before: 'Day before',
+  same_day: 'Same day',
+};
+export const CUT_PATH_LABELS: Record<(typeof CUT_PATHS)[number], string> = {
+  linear: 'Equal kg each week',
+  rate: 'Equal % each week',
+};
+
+/** PUT /api/athletes/:athleteId/weigh-in: the weigh-in's record (the event must be a weigh-in). */
+export const weighInEventRequest = z
+  .object({
+    /** The class limit, kg. */
+    weighInLimitKg: kg('Weigh-in limit'),
+    /** Weigh-in the day before the competition, or the same day. */
+    weighInTiming: z.enum(WEIGH_IN_TIMINGS, { error: 'Choose day before or same day' }),
+    /** Weigh-in clock time, HH:MM on the venue's clock (the event date is the weigh-in date). */
+    weighInTime: clockTime,
+    /** Competition clock time, HH:MM on the venue's clock. */
+    competitionTime: clockTime,
+    /** The athlete's usual weight outside a cut, kg. */
+    usualWeightKg: kg('Usual weight').nullable(),
+    /** The next class's limit below, kg; null when there is none. */
+    classBelowKg: kg('Class below').nullable(),
+    /** The next class's limit above, kg; null when there is none. */
+    classAboveKg: kg('Class above').nullable(),
+  })
+  .superRefine(
+    (v, ctx) => {
+      const limit = v.weighInLimitKg;
+      if (typeof limit !== 'number') return;
+      if (typeof v.classBelowKg === 'number' && v.classBelowKg >= limit)
+        ctx.addIssue({ code: 'custom', path: ['classBelowKg'], message: 'Must be below the limit' });
+      if (typeof v.classAboveKg === 'number' && v.classAboveKg <= limit)
+        ctx.addIssue({ code: 'custom', path: ['classAboveKg'], message: 'Must be above the limit' });
+      if (
+        v.weighInTiming === 'same_day' &&
+        typeof v.weighInTime === 'string' &&
+        typeof v.competitionTime === 'string' &&
+        v.competitionTime <= v.weighInTime
+      )
+        ctx.addIssue({
+          code: 'custom',
+          path: ['competitionTime'],
+          message: 'On the same day the competition must start after the weigh-in',
+        });
+    },
+    { when: () => true },
+  );
+export type WeighInEventRequest = z.infer<typeof weighInEventRequest>;
+
+/** POST /api/athletes/:athleteId/cut-plans: a cut plan the coach built with the athlete. */
+export const createCutPlanRequest = z.object({
+  /** First day of the chronic part (the athlete's date). */
+  startDate: isoDate,
+  /** Weight on the start day, kg. */
+  startKg: kg('Start weight'),
+  /** Weight planned when the acute days begin, kg. */
+  preAcuteKg: kg('Weight before the last days'),
+  /** Days of acute loss before the weigh-in (gut content, sodium, water). */
+  acuteDays: z
+    .number({ error: 'Days are required' })
+    .int('Whole days')
+    .min(LIMITS.cutAcuteDays.min, `At least ${LIMITS.cutAcuteDays.min}`)
+    .max(LIMITS.cutAcuteDays.max, `At most ${LIMITS.cutAcuteDays.max}`),
+  /** How the chronic part runs: equal kg or equal % each week. */
+  path: z.enum(CUT_PATHS, { error: 'Choose how the weight comes down' }),
+  /** What the acute part consists of, in words. */
+  notes: text('Notes', LIMITS.cutNotes).nullable(),
+  /** Warning keys the coach has read with the athlete and accepts; each current one must be listed. */
+  acknowledgedKeys: z.array(text('Warning key', LIMITS.warningKey)).max(20).default([]),
+});
+export type CreateCutPlanRequest = z.infer<typeof createCutPlanRequest>;
+
+/** PUT /api/team/cut-settings: the team's acute-share threshold. */
+export const cutSettingsRequest = z.object({
+  /** Acute share above which a cut plan carries a strong warning, % of body mass (default 5). */
+  acuteSharePct: z
+    .number({ error: 'Threshold is required' })
+    .finite()
+    .min(LIMITS.acuteSharePct.min, `At least ${LIMITS.acuteSharePct.min} %`)
+    .max(LIMITS.acuteSharePct.max, `At most ${LIMITS.acuteSharePct.max} %`),
+});
+export type CutSettingsRequest = z.infer<typeof cutSettingsRequest>;
+
+const severity = z.enum(['none', 'warning', 'strong', 'severe']);
+
+/** A cut-plan warning as the server words it. */
+export const cutWarningView = z.object({
+  /** `acute_share` | `acute_share_severe` | `chronic_rate`. */
+  key: z.string(),
+  severity: z.enum(['warning', 'strong']),
+  message: z.string(),
+  source: z.string(),
+  /** Whether the plan must carry an acknowledgement of it. */
+  needsAcknowledgement: z.boolean(),
+});
+export type CutWarningView = z.infer<typeof cutWarningView>;
+
+/** The weigh-in's record with its recovery window. */
+export const weighInEventView = z.object({
+  date: z.string(),
+  limitKg: z.number(),
+  timing: z.enum(WEIGH_IN_TIMINGS).nullable(),
+  weighInTime: z.string().nullable(),
+  competitionDate: z.string().nullable(),
+  competitionTime: z.string().nullable(),
+  timeZone: z.string().nullable(),
+  /** Hours from weigh-in to competition; null until both clock times and the zone are known. */
+  recoveryWindowHours: z.number().nullable(),
+  usualWeightKg: z.number().nullable(),
+  classBelowKg: z.number().nullable(),
+  classAboveKg: z.number().nullable(),
+});
+export type WeighInEventView = z.infer<typeof weighInEventView>;
+
+export const cutPlanView = z.object({
+  id: z.string(),
+  startDate: z.string(),
+  startKg: z.number(),
+  preAcuteKg: z.number(),
+  preAcuteDate: z.string(),
+  acuteDays: z.number().int(),
+  path: z.enum(CUT_PATHS),
+  notes: z.string().nullable(),
+  createdAt: z.string(),
+  createdBy: z.object({ id: z.string(), name: z.string() }),
+  acknowledgements: z.array(
+    z.object({ key: z.string(), message: z.string(), acknowledgedAt: z.string(), by: z.string() }),
+  ),
+});
+export type CutPlanView = z.infer<typeof cutPlanView>;
+
+/** The plan's figures for the athlete's today, computed by the server. */
+export const cutFiguresView = z.object({
+  today: z.string(),
+  /** Weight needed today to stay on the plan, kg; and where in the plan today falls. */
+  todayKg: z.number(),
+  stage: z.enum(['before', 'chronic', 'acute', 'after']),
+  chronic: z
+    .object({ kgPerWeek: z.number(), pctPerWeek: z.number(), severity: severity.exclude(['severe']) })
+    .nullable(),
+  acute: z.object({ kg: z.number(), pct: z.number(), severity: z.enum(['none', 'strong', 'severe']) }),
+  thresholdPct: z.number(),
+  warnings: z.array(cutWarningView),
+  /** Above 7 %: the athlete sees the stop-and-seek-care signs. */
+  stopSigns: z.string().nullable(),
+});
+export type CutFiguresView = z.infer<typeof cutFiguresView>;
+
+/** The recovery targets for the window after the weigh-in (rules/weight-cut.ts recoveryTargets). */
+export const recoveryView = z.object({
+  /** kg lost at the scale: the weight before the last days (the plan's, else the usual) minus the limit. */
+  kgLost: z.number(),
+  /** Which weight the loss is counted from. */
+  basis: z.enum(['plan', 'usual']),
+  windowHours: z.number(),
+  fluidL: z.number(),
+  carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+  /** The timed checklist, on the athlete's clock. */
+  slots: z.array(
+    z.object({
+      date: z.string(),
+      time: z.string(),
+      fluidL: z.number(),
+      carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+    }),
+  ),
+  source: z.string(),
+});
+export type RecoveryView = z.infer<typeof recoveryView>;
+
+/** GET /api/athletes/:athleteId/cut */
+export const cutView = z.object({
+  athleteId: z.string(),
+  /** Null when the athlete's event is not a weigh-in. */
+  weighIn: weighInEventView.nullable(),
+  /** Null without enough weigh-ins for a projection (7 in the last 14 days) or no weigh-in ahead. */
+  gap: limitGapView.nullable(),
+  plan: cutPlanView.nullable(),
+  figures: cutFiguresView.nullable(),
+  thresholdPct: z.number(),
+  /** From the weigh-in day to the competition: the recovery checklist; null on other days. */
+  recovery: recoveryView.nullable(),
+  /** The evidence and the deferral every cut screen shows. */
+  caution: z.string(),
+});
+export type CutView = z.infer<typeof cutView>;

@@ -1,0 +1,77 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { daysFromToday, openSession, screenshot, signIn, type Session } from './support/browser.js';
+
+// The coach opens Aroha (a weigh-in in 10 days, 63.0 kg limit), reads that she is projected over the
+// limit, builds a cut plan whose last days take off more than 5 % of body mass, acknowledges that
+// warning and saves; Aroha sees today's weight to stay on the plan on her Today screen.
+describe('making weight', () => {
+  let desktop: Session;
+  let phone: Session;
+
+  beforeAll(async () => {
+    desktop = await openSession(1280);
+    phone = await openSession(375);
+  });
+  afterAll(async () => {
+    await desktop?.close();
+    await phone?.close();
+  });
+
+  it('shows the coach that Aroha is projected over her limit', async () => {
+    const { page } = desktop;
+    await signIn(page, 'coach@driftmark.test');
+    await page.waitForURL('**/coach');
+    await page
+      .getByRole('list', { name: 'Athletes to review' })
+      .getByRole('link', { name: 'Aroha Tane' })
+      .click();
+    const panel = page.getByRole('region', { name: 'Making weight' });
+    await panel.getByText('Projected over the limit').waitFor();
+    await expect(panel.innerText()).resolves.toMatch(
+      /Projected \d+\.\d kg over the 63\.0 kg limit in 10 days/,
+    );
+    await expect(panel.innerText()).resolves.toMatch(/63\.0\s?kg \(138\.9\s?lb\)/);
+    await screenshot(page, 'making-weight-coach-1280');
+  });
+
+  it('marks Aroha over the limit on the roster, with the gap and the days left', async () => {
+    const { page } = desktop;
+    await page.goto(page.url().replace(/\/coach\/.*$/, '/coach/roster'));
+    const row = page.getByRole('row').filter({ hasText: 'Aroha Tane' });
+    await row.getByText('Over the limit').waitFor();
+    await expect(row.innerText()).resolves.toMatch(/\+\d+\.\d\s?kg · \d+\.\d\s?% · 10 days left/);
+    await screenshot(page, 'making-weight-roster-1280');
+    await page.goBack();
+    await page.getByRole('region', { name: 'Making weight' }).waitFor();
+  });
+
+  it('builds a cut plan and acknowledges the acute-share warning', async () => {
+    const { page } = desktop;
+    const panel = page.getByRole('region', { name: 'Making weight' });
+    const form = panel.getByRole('form', { name: 'Cut plan' });
+    // Two weeks ago at 67.0 kg, 66.4 kg before the last 3 days: 3.4 kg acute = 5.1 % of body mass.
+    await form.getByLabel('Start of the chronic part').fill(daysFromToday(-14));
+    await form.getByLabel('Weight at the start').fill('67.0');
+    await form.getByLabel('Weight before the last days').fill('66.4');
+    await form.getByLabel('Last days (acute part)').fill('3');
+    await form.getByRole('button', { name: 'Check and save' }).click();
+    const warning = panel.getByText('Read these with the athlete before saving');
+    await warning.waitFor();
+    await screenshot(page, 'making-weight-acknowledge-1280');
+    await panel.getByRole('checkbox').check();
+    await panel.getByRole('button', { name: 'Acknowledge and save' }).click();
+    await panel.getByText('Cut plan saved').waitFor();
+    await panel.getByTestId('cut-today-kg').waitFor();
+    await expect(panel.innerText()).resolves.toMatch(/5\.1\s?% of body mass/);
+  });
+
+  it('shows Aroha today’s weight to stay on plan', async () => {
+    const { page } = phone;
+    await signIn(page, 'aroha.tane@driftmark.test');
+    await page.waitForURL('**/athlete');
+    const card = page.getByRole('region', { name: 'Making weight' });
+    await card.getByText('Today’s weight to stay on plan').waitFor();
+    await expect(card.getByTestId('cut-today-kg').innerText()).resolves.toMatch(/\d+\.\d\s?kg/);
+    await screenshot(page, 'making-weight-athlete-375');
+  });
+});

@@ -1,0 +1,304 @@
+/**
+ * Making weight end to end: the weigh-in's record, the projection against the class limit on the
+ * cut page, the roster and the review queue, cut plans with their acknowledgements, and the
+ * coach's e-mail the first time the projection is over the limit. Real PostgreSQL, pinned clock.
+ */
+import { cutView, rosterRow, reviewQueueItem } from '@driftmark/shared';
+import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
+import type { User } from '../../api/src/entities/user.entity.js';
+import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
+import { FACTORY_PASSWORD } from '../factories/password.js';
+import { createCoach, createOwner } from '../factories/users.js';
+import { weighInBody } from './check-ins-helpers.js';
+import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
+import { shift } from './trend-helpers.js';
+
+let now = new Date('2026-12-01T20:00:00Z');
+const TODAY = '2026-12-01';
+/** Ten days ahead: a weigh-in the day before a competition on 12 December. */
+const WEIGH_IN = '2026-12-11';
+
+let t: TestApp;
+let coach: User;
+let coachAgent: Awaited<ReturnType<typeof signedIn>>;
+let athleteAgent: Awaited<ReturnType<typeof signedIn>>;
+let a: CreatedAthlete;
+
+beforeAll(async () => {
+  t = await buildTestApp({}, { clock: () => now });
+});
+afterAll(() => t.close());
+
+/**
+ * Weigh-ins falling 0.04 kg a day, 64.8 kg on 18 Nov to 64.32 kg on 30 Nov: a perfect line, so the
+ * projection (least squares over the 14 days to today) lands on it at the weigh-in, 23 days after
+ * 18 Nov: 64.8 − 0.04 × 23 = 63.88 kg, 0.88 kg over a 63.0 kg limit.
+ */
+async function weighLine(athleteId: string) {
+  await t.dataSource.query(
+    `INSERT INTO weigh_ins (athlete_id, local_date, local_time, logged_at, weight_kg, entered_value, entered_unit,
+                            protocol_confirmed)
+     SELECT $1, $2::date + k, '07:00', ($2::date + k) + time '07:00', 64.8 - 0.04 * k, 64.8 - 0.04 * k, 'kg', true
+       FROM generate_series(0, 12) AS k`,
+    [athleteId, '2026-11-18'],
+  );
+}
+
+beforeEach(async () => {
+  now = new Date('2026-12-01T20:00:00Z');
+  await t.reset();
+  coach = await createCoach(t.dataSource);
+  a = await createAthlete(t.dataSource, {
+    coach,
+    athlete: {
+      eventType: 'weigh_in',
+      eventDate: WEIGH_IN,
+      eventTime: '18:00',
+      eventTimeZone: 'Pacific/Auckland',
+      division: '63 kg',
+      weighInLimitKg: 63,
+    },
+  });
+  await weighLine(a.athlete.id);
+  coachAgent = await signedIn(t.app, coach.email, FACTORY_PASSWORD);
+  athleteAgent = await signedIn(t.app, a.user.email, FACTORY_PASSWORD);
+});
+
+const cutUrl = () => `/api/athletes/${a.athlete.id}/cut`;
+
+describe('the projection against the weigh-in limit', () => {
+  it('reads "projected over" on the cut page, for the coach and the athlete alike', async () => {
+    for (const agent of [coachAgent, athleteAgent]) {
+      const res = await agent.get(cutUrl());
+      expect(res.status).toBe(200);
+      const view = cutView.parse(res.body.data);
+      expect(view.weighIn).toMatchObject({ date: WEIGH_IN, limitKg: 63 });
+      expect(view.gap!.over).toBe(true);
+      expect(view.gap!.projectedKg).toBeCloseTo(63.88, 6);
+      expect(view.gap!.overKg).toBeCloseTo(0.88, 6);
+      expect(view.gap!.daysLeft).toBe(10);
+      expect(view.gap!.summary).toMatch(
+        /^Projected 0\.9 kg over the 63\.0 kg limit in 10 days; needs \d\.\d %\/week more$/,
+      );
+      expect(view.thresholdPct).toBe(5);
+      expect(view.caution).toMatch(/physician/);
+    }
+  });
+
+  it('puts the athlete on the roster with the gap and in the review queue as over the limit', async () => {
+    const roster = await coachAgent.get('/api/roster');
+    const row = rosterRow.parse(
+      roster.body.data.find((r: { athleteId: string }) => r.athleteId === a.athlete.id),
+    );
+    expect(row.figures.weighInGap).toMatchObject({ over: true, daysLeft: 10 });
+    expect(row.figures.weighInGap!.overKg).toBeCloseTo(0.88, 6);
+
+    const queue = await coachAgent.get('/api/review-queue');
+    const item = reviewQueueItem.parse(
+      queue.body.data.find((i: { athleteId: string }) => i.athleteId === a.athlete.id),
+    );
+    // 0.88 / 63 = 1.40 % of the limit.
+    expect(item.reasons).toContainEqual({
+      kind: 'over_limit',
+      text: 'Projected 0.9 kg (1.4 %) over the weigh-in limit, 10 days left',
+      date: WEIGH_IN,
+    });
+  });
+
+  it('e-mails the coach once when a logged weigh-in leaves the projection over the limit', async () => {
+    const log = () =>
+      athleteAgent
+        .put(`/api/athletes/${a.athlete.id}/days/${TODAY}/weigh-in`)
+        .send(weighInBody({ weight: 64.1 }));
+    expect((await log()).status).toBe(200);
+    expect((await log()).status).toBe(200);
+    const rows: { kind: string }[] = await t.dataSource.query(
+      `SELECT kind FROM outbox_messages WHERE to_address = $1`,
+      [coach.email],
+    );
+    expect(rows.map((r) => r.kind)).toEqual(['over_limit']);
+  });
+
+  it('has no gap for an athlete whose event is not a weigh-in', async () => {
+    const other = await createAthlete(t.dataSource, { coach, athlete: { eventType: 'show' } });
+    await weighLine(other.athlete.id);
+    const view = cutView.parse((await coachAgent.get(`/api/athletes/${other.athlete.id}/cut`)).body.data);
+    expect(view).toMatchObject({ weighIn: null, gap: null, plan: null });
+  });
+});
+
+const record = {
+  weighInLimitKg: 63,
+  weighInTiming: 'day_before',
+  weighInTime: '18:00',
+  competitionTime: '10:00',
+  usualWeightKg: 66.5,
+  classBelowKg: 57,
+  classAboveKg: 70,
+};
+
+describe('the weigh-in record', () => {
+  it('stores timing, competition time, usual weight and classes; the window is 16 h on the venue clock', async () => {
+    const res = await coachAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    expect(res.status).toBe(200);
+    expect(cutView.parse(res.body.data).weighIn).toEqual({
+      date: WEIGH_IN,
+      limitKg: 63,
+      timing: 'day_before',
+      weighInTime: '18:00',
+      competitionDate: '2026-12-12',
+      competitionTime: '10:00',
+      timeZone: 'Pacific/Auckland',
+      recoveryWindowHours: 16,
+      usualWeightKg: 66.5,
+      classBelowKg: 57,
+      classAboveKg: 70,
+    });
+  });
+
+  it('refuses classes on the wrong side of the limit and a same-day competition before the weigh-in (400)', async () => {
+    const res = await coachAgent
+      .put(`/api/athletes/${a.athlete.id}/weigh-in`)
+      .send({ ...record, classBelowKg: 63, weighInTiming: 'same_day', competitionTime: '17:00' });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('validation_failed');
+    expect(Object.keys(res.body.error.fields).sort()).toEqual(['classBelowKg', 'competitionTime']);
+  });
+
+  it('is the staff’s to set: the athlete gets 403 and nothing changes', async () => {
+    const res = await athleteAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    expect(res.status).toBe(403);
+    const [row] = await t.dataSource.query(`SELECT weigh_in_timing FROM athletes WHERE id = $1`, [
+      a.athlete.id,
+    ]);
+    expect(row.weigh_in_timing).toBeNull();
+  });
+
+  it('answers 409 when the event is not a weigh-in', async () => {
+    const other = await createAthlete(t.dataSource, { coach, athlete: { eventType: 'show' } });
+    const res = await coachAgent.put(`/api/athletes/${other.athlete.id}/weigh-in`).send(record);
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('conflict');
+  });
+});
+
+describe('cut plans', () => {
+  // 27 Nov → 8 Dec (3 acute days before 11 Dec): 11 days; 66 → 64.5 kg linear.
+  const body = (overrides: Record<string, unknown> = {}) => ({
+    startDate: '2026-11-27',
+    startKg: 66,
+    preAcuteKg: 66.5,
+    acuteDays: 3,
+    path: 'linear',
+    notes: 'Low-residue food for the last two days; sodium as usual',
+    acknowledgedKeys: [],
+    ...overrides,
+  });
+
+  it('refuses an unacknowledged acute share above 5 % (409, fields by key), then stores the acknowledgement', async () => {
+    // 66.5 → 63: 3.5 kg = 5.26 % of 66.5 kg; the chronic part 66.8 → 66.5 kg over 11 days is
+    // 0.19 kg a week, no rate warning.
+    const plan = body({ startKg: 66.8 });
+    const refused = await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send(plan);
+    expect(refused.status).toBe(409);
+    expect(refused.body.error.code).toBe('guardrails_unacknowledged');
+    expect(Object.keys(refused.body.error.fields)).toEqual(['acute_share']);
+    expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
+
+    const saved = await coachAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send({ ...plan, acknowledgedKeys: ['acute_share'] });
+    expect(saved.status).toBe(201);
+    const view = cutView.parse(saved.body.data);
+    expect(view.plan).toMatchObject({ preAcuteDate: '2026-12-08', acuteDays: 3, path: 'linear' });
+    expect(view.plan!.acknowledgements.map((x) => x.key)).toEqual(['acute_share']);
+    // Today (1 Dec) is day 4 of 11: 66.8 − 0.3 × 4/11 = 66.6909 kg.
+    expect(view.figures!.todayKg).toBeCloseTo(66.6909, 4);
+    expect(view.figures!.stage).toBe('chronic');
+    expect(view.figures!.acute.pct).toBeCloseTo(5.2632, 4);
+    expect(view.figures!.stopSigns).toBeNull();
+
+    // The athlete reads the same plan and figures.
+    const mine = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    expect(mine.figures!.todayKg).toBeCloseTo(66.6909, 4);
+  });
+
+  it('asks a second acknowledgement above 7 % and shows the athlete the stop signs', async () => {
+    // 68 → 63: 5/68 = 7.35 %; chronic 68.5 → 68 over 11 days.
+    const plan = body({ startKg: 68.5, preAcuteKg: 68 });
+    const once = await coachAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send({ ...plan, acknowledgedKeys: ['acute_share'] });
+    expect(once.status).toBe(409);
+    expect(Object.keys(once.body.error.fields)).toEqual(['acute_share_severe']);
+    const twice = await coachAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send({ ...plan, acknowledgedKeys: ['acute_share', 'acute_share_severe'] });
+    expect(twice.status).toBe(201);
+    const mine = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    expect(mine.figures!.stopSigns).toMatch(/seek medical care/);
+  });
+
+  it('follows the team threshold', async () => {
+    const owner = await createOwner(t.dataSource, { teamId: coach.teamId });
+    const ownerAgent = await signedIn(t.app, owner.email, FACTORY_PASSWORD);
+    expect((await ownerAgent.put('/api/team/cut-settings').send({ acuteSharePct: 6 })).status).toBe(200);
+    const res = await coachAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send(body({ startKg: 66.8 }));
+    expect(res.status).toBe(201);
+    expect(cutView.parse(res.body.data).figures!.thresholdPct).toBe(6);
+  });
+
+  it('refuses a start inside the acute days and a pre-acute weight above the start (400 naming the field)', async () => {
+    const late = await coachAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send(body({ startDate: shift(WEIGH_IN, -2) }));
+    expect(late.status).toBe(400);
+    expect(Object.keys(late.body.error.fields)).toEqual(['startDate']);
+    const up = await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send(body());
+    expect(up.status).toBe(400);
+    expect(Object.keys(up.body.error.fields)).toEqual(['preAcuteKg']);
+  });
+
+  it('is the staff’s to save: the athlete gets 403 and no plan is written', async () => {
+    const res = await athleteAgent
+      .post(`/api/athletes/${a.athlete.id}/cut-plans`)
+      .send(body({ startKg: 66.8, acknowledgedKeys: ['acute_share'] }));
+    expect(res.status).toBe(403);
+    expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
+  });
+});
+
+describe('the recovery checklist on the weigh-in day', () => {
+  it('counts fluid and carbohydrate from the kg lost, each slot on the athlete’s clock', async () => {
+    await coachAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    const saved = await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send({
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      path: 'linear',
+      notes: null,
+      acknowledgedKeys: ['acute_share'],
+    });
+    expect(saved.status).toBe(201);
+    expect(cutView.parse(saved.body.data).recovery).toBeNull();
+
+    now = new Date('2026-12-11T12:00:00Z');
+    const view = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    const r = view.recovery!;
+    // 66.5 − 63 = 3.5 kg lost; × 1.5 L = 5.25 L (Sawka 2007). 16 h window: 4 h × 1.0–1.2 g/kg +
+    // 12 h × 5–10 g/kg / 24 = 6.5–9.8 g/kg × 63 kg = 409.5–617.4 g.
+    expect(r.basis).toBe('plan');
+    expect(r.kgLost).toBeCloseTo(3.5, 10);
+    expect(r.windowHours).toBe(16);
+    expect(r.fluidL).toBeCloseTo(5.25, 10);
+    expect(r.carbohydrateG.min).toBeCloseTo(409.5, 8);
+    expect(r.carbohydrateG.max).toBeCloseTo(617.4, 8);
+    // 18:00 in Auckland on 11 Dec (UTC+13, daylight time) is 05:00 UTC, the athlete's clock.
+    expect(r.slots).toHaveLength(16);
+    expect(r.slots[0]).toMatchObject({ date: '2026-12-11', time: '05:00' });
+    expect(r.slots[15]).toMatchObject({ date: '2026-12-11', time: '20:00' });
+  });
+});

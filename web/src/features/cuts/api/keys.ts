@@ -1,0 +1,4 @@
+export const cutKeys = {
+  all: ['cuts'] as const,
+  detail: (athleteId: string) => [...cutKeys.all, athleteId] as const,
+};

@@ -1,0 +1,145 @@
+import { kgToLb, type CutView, type WeightUnit } from '@driftmark/shared';
+import { Alert } from '@/components/ui/alert';
+import { formatNumber, formatWeight, NBSP } from '@/lib/format';
+
+/** A limit in both units, whichever the reader uses: "63.0 kg (138.9 lb)". */
+export function bothUnits(kg: number): string {
+  return `${formatNumber(kg, 1, 1)}${NBSP}kg (${formatNumber(kgToLb(kg), 1, 1)}${NBSP}lb)`;
+}
+
+const pct = (n: number) => `${formatNumber(n, 1, 1)}${NBSP}%`;
+
+/** The projection at the weigh-in against the limit, as the server judged it. */
+export function LimitGap({ cut, unit }: { cut: CutView; unit: WeightUnit }) {
+  const { gap, weighIn } = cut;
+  if (!weighIn) return null;
+  if (!gap) {
+    return (
+      <p className="text-sm text-ink-muted">
+        Limit {bothUnits(weighIn.limitKg)}. No projection yet: it needs 7 weigh-ins in the last 14 days.
+      </p>
+    );
+  }
+  return (
+    <Alert
+      tone={gap.over ? 'caution' : 'success'}
+      title={gap.over ? 'Projected over the limit' : 'Projected under the limit'}
+      live={false}
+    >
+      <p>{gap.summary}.</p>
+      <dl className="mt-2 grid grid-cols-2 gap-x-6 gap-y-1 sm:grid-cols-4">
+        <div>
+          <dt className="text-ink-faint">Limit</dt>
+          <dd className="font-medium tabular-nums">{bothUnits(weighIn.limitKg)}</dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Projected</dt>
+          <dd className="font-medium tabular-nums">
+            {formatWeight(gap.projectedKg, unit)} ({formatWeight(gap.lowKg, unit)}–
+            {formatWeight(gap.highKg, unit)}, 80{NBSP}%)
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Gap</dt>
+          <dd className="font-medium tabular-nums">
+            {formatWeight(gap.overKg, unit)} · {pct(gap.overPct)}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Days left</dt>
+          <dd className="font-medium tabular-nums">{gap.daysLeft}</dd>
+        </div>
+      </dl>
+    </Alert>
+  );
+}
+
+/** Today's figures of the plan in force: the weight to stay on plan, the weekly rate, the acute share. */
+export function PlanFigures({ cut, unit }: { cut: CutView; unit: WeightUnit }) {
+  const f = cut.figures;
+  const plan = cut.plan;
+  if (!f || !plan) return null;
+  return (
+    <div className="space-y-3">
+      <dl className="grid grid-cols-2 gap-x-6 gap-y-2 text-sm sm:grid-cols-3">
+        <div>
+          <dt className="text-ink-faint">Today’s weight to stay on plan</dt>
+          <dd className="text-lg font-bold text-ink tabular-nums" data-testid="cut-today-kg">
+            {formatWeight(f.todayKg, unit)}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Chronic part, a week</dt>
+          <dd className="font-medium tabular-nums">
+            {f.chronic
+              ? `${formatWeight(f.chronic.kgPerWeek, unit, 2)} · up to ${pct(f.chronic.pctPerWeek)}`
+              : '—'}
+          </dd>
+        </div>
+        <div>
+          <dt className="text-ink-faint">Acute part (last {plan.acuteDays} days)</dt>
+          <dd className="font-medium tabular-nums">
+            {formatWeight(f.acute.kg, unit)} · {pct(f.acute.pct)} of body mass
+          </dd>
+        </div>
+      </dl>
+      {f.warnings.map((w) => (
+        <Alert
+          key={w.key}
+          tone="caution"
+          title={w.severity === 'strong' ? 'Strong warning' : 'Warning'}
+          live={false}
+        >
+          <p>{w.message}</p>
+          <p className="mt-1 text-xs text-ink-muted">Source: {w.source}</p>
+        </Alert>
+      ))}
+      {f.stopSigns ? (
+        <Alert tone="error" title="Stop and seek care" live={false}>
+          {f.stopSigns}
+        </Alert>
+      ) : null}
+    </div>
+  );
+}
+
+/** The timed recovery checklist from the weigh-in to the competition (the server's targets). */
+export function RecoveryChecklist({ cut }: { cut: CutView }) {
+  const r = cut.recovery;
+  if (!r) return null;
+  const litres = (l: number) => `${formatNumber(l, 2)}${NBSP}L`;
+  const grams = (g: { min: number; max: number }) =>
+    `${formatNumber(g.min)}–${formatNumber(g.max)}${NBSP}g carbohydrate`;
+  return (
+    <section aria-labelledby="recovery-heading" className="space-y-2">
+      <h3 id="recovery-heading" className="font-semibold text-ink">
+        After the weigh-in: recovery checklist
+      </h3>
+      <p className="text-sm text-ink-muted">
+        About {formatNumber(r.kgLost, 1, 1)}
+        {NBSP}kg lost at the scale (
+        {r.basis === 'plan' ? 'from the plan’s weight before the last days' : 'from the usual weight'}
+        ), {formatNumber(r.windowHours, 1)}
+        {NBSP}h to the competition: {litres(r.fluidL)} of fluid with sodium and {grams(r.carbohydrateG)} in
+        all. Log what you drink and eat as on any day.
+      </p>
+      <ol
+        aria-label="Recovery checklist"
+        className="divide-y divide-line rounded-md border border-line text-sm"
+      >
+        {r.slots.map((s) => (
+          <li
+            key={`${s.date} ${s.time}`}
+            className="flex flex-wrap justify-between gap-2 px-3 py-2 tabular-nums"
+          >
+            <span className="font-semibold text-ink">{s.time}</span>
+            <span>
+              {litres(s.fluidL)} fluid with sodium · {grams(s.carbohydrateG)}
+            </span>
+          </li>
+        ))}
+      </ol>
+      <p className="text-xs text-ink-muted">Source: {r.source}</p>
+    </section>
+  );
+}
