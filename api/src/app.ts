@@ -25,6 +25,7 @@ import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
+import { meSessionsRouter } from './routes/me-sessions.routes.js';
 import { meRouter } from './routes/me.routes.js';
 import { photosRouter } from './routes/photos.routes.js';
 import { plansRouter } from './routes/plans.routes.js';
@@ -84,6 +85,8 @@ export function createApp(deps: {
   api.use('/health', healthRouter());
   api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
+  // The signed-in devices (/me/sessions…).
+  api.use('/me', meSessionsRouter());
   // The athlete's data archive (/me/export) and account deletion.
   api.use('/me', meDataRouter(limits));
   api.use('/invitations', invitationsRouter(limits));
