@@ -20,9 +20,10 @@ function baseOptions(config: Pick<Config, 'appOrigin'>): CookieOptions {
 export function setSessionCookie(
   res: Response,
   config: Pick<Config, 'appOrigin'>,
-  issued: { token: string; cookieExpiresAt: Date },
+  issued: { token: string; cookieMaxAgeMs: number },
 ): void {
-  res.cookie(SESSION_COOKIE, issued.token, { ...baseOptions(config), expires: issued.cookieExpiresAt });
+  // Express writes Max-Age and an Expires counted from the process clock.
+  res.cookie(SESSION_COOKIE, issued.token, { ...baseOptions(config), maxAge: issued.cookieMaxAgeMs });
 }
 
 export function clearSessionCookie(res: Response, config: Pick<Config, 'appOrigin'>): void {

@@ -18,10 +18,11 @@ export interface IssuedToken {
   /** The JWT's own end: the session's idle end as of now, never past its absolute end. */
   expiresAt: Date;
   /**
-   * The cookie outlives the JWT by ENDED_NOTICE_DAYS past the absolute end, so a browser that
-   * comes back after its session ended still says which session it was and hears why it ended.
+   * How long the cookie lives from now: until ENDED_NOTICE_DAYS past the absolute end, longer than
+   * the JWT, so a browser that comes back after its session ended still says which session it was
+   * and hears why it ended. A duration (Max-Age), so the browser counts it on its own clock.
    */
-  cookieExpiresAt: Date;
+  cookieMaxAgeMs: number;
 }
 
 export interface ResolvedSession {
@@ -86,7 +87,7 @@ export class SessionService {
     return {
       token,
       expiresAt: new Date(Math.floor(end.getTime() / 1000) * 1000),
-      cookieExpiresAt: addDays(session.expiresAt, ENDED_NOTICE_DAYS),
+      cookieMaxAgeMs: addDays(session.expiresAt, ENDED_NOTICE_DAYS).getTime() - now.getTime(),
     };
   }
 
