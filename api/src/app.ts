@@ -18,6 +18,7 @@ import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
 import { dataRouter } from './routes/data.routes.js';
+import { devInboxEnabled } from './middleware/dev-inbox.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
 import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
@@ -115,13 +116,13 @@ export function createApp(deps: {
   // E-mail preferences (/me/notifications) and unsubscribe links (/unsubscribe).
   api.use(notificationsRouter());
   // The demo inbox: only in demo mode (our own scripts set it), only to clients on this machine.
-  if (config.appMode === 'demo' && config.mailCaptureDir) {
+  if (devInboxEnabled(config)) {
     api.use('/dev/mail', devMailRouter(config));
   }
   api.use(apiNotFound());
   app.use('/api', api);
 
-  const web = webAppRouter(config.webDist);
+  const web = webAppRouter(config.webDist, { devInbox: devInboxEnabled(config) });
   if (web) app.use(web);
 
   app.use(apiNotFound());
