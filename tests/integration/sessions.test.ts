@@ -170,11 +170,14 @@ describe('staff lifetime', () => {
 });
 
 describe('signed-in devices', () => {
-  it('lists the user’s live devices with this one marked, and signs one out', async () => {
+  it('lists the user’s live devices, this one marked and first, and signs one out', async () => {
     const athlete = await athleteUser();
     const laptop = await signIn(athlete, LAPTOP_UA);
     now = at(HOUR);
     const phone = await signIn(athlete, PHONE_UA);
+    // The laptop, seen last, still comes after this device.
+    now = at(HOUR + 5 * MINUTE);
+    await signIn(athlete, LAPTOP_UA);
 
     // Within the phone's refresh interval: listing does not move its "last seen".
     now = at(HOUR + 10 * MINUTE);
@@ -185,15 +188,22 @@ describe('signed-in devices', () => {
         device: 'Safari on iPhone',
         current: true,
         lastSeenAt: at(HOUR).toISOString(),
+        signedInAt: at(HOUR).toISOString(),
         endsAt: at(HOUR + 30 * DAY).toISOString(),
       }),
       expect.objectContaining({
         device: 'Firefox on Windows',
         current: false,
+        lastSeenAt: at(HOUR + 5 * MINUTE).toISOString(),
+      }),
+      expect.objectContaining({
+        device: 'Firefox on Windows',
+        current: false,
+        signedInAt: START.toISOString(),
         lastSeenAt: START.toISOString(),
       }),
     ]);
-    const laptopId = list.res.body.data[1].id as string;
+    const laptopId = list.res.body.data[2].id as string;
     expect(laptopId).toBe(claimsOf(laptop).sid);
 
     const out = await request(t.app)
@@ -206,7 +216,7 @@ describe('signed-in devices', () => {
     expect(gone.res.status).toBe(401);
     expect(gone.res.body.error.code).toBe('session_revoked');
     expect((await get('/api/me', phone)).res.status).toBe(200);
-    expect((await get('/api/me/sessions', phone)).res.body.data).toHaveLength(1);
+    expect((await get('/api/me/sessions', phone)).res.body.data).toHaveLength(2);
   });
 
   it('answers 404 for another user’s session id, an unknown one and a malformed one, and revokes nothing', async () => {

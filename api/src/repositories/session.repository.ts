@@ -5,7 +5,9 @@ import type { User } from '../entities/user.entity.js';
 export class SessionRepository {
   constructor(private readonly manager: EntityManager) {}
 
-  create(input: Pick<Session, 'userId' | 'expiresAt' | 'lastSeenAt' | 'userAgent' | 'ip'>): Promise<Session> {
+  create(
+    input: Pick<Session, 'userId' | 'createdAt' | 'expiresAt' | 'lastSeenAt' | 'userAgent' | 'ip'>,
+  ): Promise<Session> {
     return this.manager.save(this.manager.create(Session, { ...input, revokedAt: null }));
   }
 

@@ -21,10 +21,13 @@ export function meSessionsRouter(): Router {
     const { user, sessionId } = requireAuth(req);
     const now = req.ctx.clock();
     const sessions = await new SessionService(req.ctx.dataSource.manager, req.ctx.config).listLive(user, now);
+    // This device first, then the others by last seen (the service's order).
+    const ordered = [
+      ...sessions.filter((s) => s.id === sessionId),
+      ...sessions.filter((s) => s.id !== sessionId),
+    ];
     res.json({
-      data: sessions.map((s) =>
-        presentSignedInDevice(s, sessionEnd(s, user.role, req.ctx.config), sessionId),
-      ),
+      data: ordered.map((s) => presentSignedInDevice(s, sessionEnd(s, user.role, req.ctx.config), sessionId)),
     });
   });
 

@@ -68,6 +68,8 @@ export class SessionService {
     await sessions.pruneForUser(user.id, now, addDays(now, -REVOKED_KEPT_DAYS));
     const session = await sessions.create({
       userId: user.id,
+      // Signed in "now" on the app's clock, like every other time of the session.
+      createdAt: now,
       expiresAt: absoluteEnd(user.role, now, this.config),
       lastSeenAt: now,
       userAgent: clip(client.userAgent, 500),
