@@ -20,6 +20,7 @@ import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
 import { dataRouter } from './routes/data.routes.js';
+import { devInboxEnabled } from './middleware/dev-inbox.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
 import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
@@ -27,6 +28,7 @@ import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
+import { meSessionsRouter } from './routes/me-sessions.routes.js';
 import { meRouter } from './routes/me.routes.js';
 import { photosRouter } from './routes/photos.routes.js';
 import { plansRouter } from './routes/plans.routes.js';
@@ -99,6 +101,8 @@ export function createApp(deps: {
   api.use('/health', healthRouter());
   api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
+  // The signed-in devices (/me/sessions…).
+  api.use('/me', meSessionsRouter());
   // The athlete's data archive (/me/export) and account deletion.
   api.use('/me', meDataRouter(limits));
   api.use('/invitations', invitationsRouter(limits));
@@ -130,13 +134,13 @@ export function createApp(deps: {
   // E-mail preferences (/me/notifications) and unsubscribe links (/unsubscribe).
   api.use(notificationsRouter());
   // The demo inbox: only in demo mode (our own scripts set it), only to clients on this machine.
-  if (config.appMode === 'demo' && config.mailCaptureDir) {
+  if (devInboxEnabled(config)) {
     api.use('/dev/mail', devMailRouter(config));
   }
   api.use(apiNotFound());
   app.use('/api', api);
 
-  const web = webAppRouter(config.webDist);
+  const web = webAppRouter(config.webDist, { devInbox: devInboxEnabled(config) });
   if (web) app.use(web);
 
   app.use(apiNotFound());

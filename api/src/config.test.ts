@@ -33,8 +33,11 @@ describe('loadConfig', () => {
       signInRateLimit: 10,
       resetRateLimit: 5,
       addressRateLimit: 30,
-      sessionTtlMinutes: 15,
-      sessionMaxDays: 30,
+      sessionRefreshMinutes: 15,
+      sessionLifetimes: {
+        athlete: { idleMs: 30 * 86_400_000, absoluteMs: 90 * 86_400_000 },
+        staff: { idleMs: 12 * 3_600_000, absoluteMs: 14 * 86_400_000 },
+      },
       statementCountHeader: false,
     });
     expect(loadConfig({ ...base, STATEMENT_COUNT_HEADER: '1' }).statementCountHeader).toBe(true);
@@ -68,7 +71,8 @@ describe('loadConfig', () => {
         PORT: 'eighty',
         JWT_SECRET: 'short',
         APP_ORIGIN: 'http://x.test/path',
-        SESSION_TTL_MINUTES: '0',
+        SESSION_REFRESH_MINUTES: '0',
+        SESSION_STAFF_IDLE_HOURS: '1.5',
       });
     } catch (err) {
       message = (err as Error).message;
@@ -79,7 +83,8 @@ describe('loadConfig', () => {
       'DATABASE_URL',
       'JWT_SECRET',
       'APP_ORIGIN',
-      'SESSION_TTL_MINUTES',
+      'SESSION_REFRESH_MINUTES',
+      'SESSION_STAFF_IDLE_HOURS',
     ]) {
       expect(message).toContain(`- ${name}:`);
     }

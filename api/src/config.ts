@@ -28,6 +28,9 @@ const origin = z
   }, 'must be an origin such as http://127.0.0.1:3000 (scheme, host and port only)')
   .transform((s) => new URL(s).origin);
 
+const HOUR_MS = 3_600_000;
+const DAY_MS = 24 * HOUR_MS;
+
 const positiveInt = (fallback: number) =>
   z.preprocess(
     (v) => (v === undefined || v === '' ? fallback : v),
@@ -81,8 +84,11 @@ export const configSchema = z.object({
   SIGN_IN_RATE_LIMIT: positiveInt(10),
   RESET_RATE_LIMIT: positiveInt(5),
   ADDRESS_RATE_LIMIT: positiveInt(30),
-  SESSION_TTL_MINUTES: positiveInt(15),
-  SESSION_MAX_DAYS: positiveInt(30),
+  SESSION_REFRESH_MINUTES: positiveInt(15),
+  SESSION_ATHLETE_IDLE_DAYS: positiveInt(30),
+  SESSION_ATHLETE_MAX_DAYS: positiveInt(90),
+  SESSION_STAFF_IDLE_HOURS: positiveInt(12),
+  SESSION_STAFF_MAX_DAYS: positiveInt(14),
   /** `1` lets a production start use an http APP_ORIGIN (a local run, never a public server). */
   ALLOW_HTTP_ORIGIN: optionalString.pipe(z.enum(['0', '1'], { error: 'must be 1 (allow) or 0' }).optional()),
   /** `1`: every answer carries X-Db-Statements (set by `npm run bench`; see app.ts). */
@@ -146,12 +152,21 @@ export interface Config {
    * password reset, invitation acceptance and deletion confirmation.
    */
   addressRateLimit: number;
-  /** JWT lifetime in minutes (the cookie slides while the session is in use). */
-  sessionTtlMinutes: number;
-  /** Absolute session lifetime in days. */
-  sessionMaxDays: number;
   /** Count the SQL statements sent and report them per answer in X-Db-Statements (the bench's counter). */
   statementCountHeader: boolean;
+  /**
+   * How old a session's cookie gets before a request replaces it; the replacement is the one
+   * write that moves the session's "last seen", so this is also how fresh "last seen" is.
+   */
+  sessionRefreshMinutes: number;
+  /** Session lifetimes by role (`lib/session-lifetime.ts`): idle end slides, absolute end never moves. */
+  sessionLifetimes: SessionLifetimes;
+}
+
+/** Idle and absolute session lifetimes, in milliseconds, for athletes and for staff. */
+export interface SessionLifetimes {
+  athlete: { idleMs: number; absoluteMs: number };
+  staff: { idleMs: number; absoluteMs: number };
 }
 
 /**
@@ -189,8 +204,14 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     signInRateLimit: e.SIGN_IN_RATE_LIMIT,
     resetRateLimit: e.RESET_RATE_LIMIT,
     addressRateLimit: e.ADDRESS_RATE_LIMIT,
-    sessionTtlMinutes: e.SESSION_TTL_MINUTES,
-    sessionMaxDays: e.SESSION_MAX_DAYS,
+    sessionRefreshMinutes: e.SESSION_REFRESH_MINUTES,
+    sessionLifetimes: {
+      athlete: {
+        idleMs: e.SESSION_ATHLETE_IDLE_DAYS * DAY_MS,
+        absoluteMs: e.SESSION_ATHLETE_MAX_DAYS * DAY_MS,
+      },
+      staff: { idleMs: e.SESSION_STAFF_IDLE_HOURS * HOUR_MS, absoluteMs: e.SESSION_STAFF_MAX_DAYS * DAY_MS },
+    },
     statementCountHeader: e.STATEMENT_COUNT_HEADER === '1',
   };
 }

@@ -6,6 +6,10 @@ export const ERROR_CODES = {
   validation_failed: 400,
   invalid_credentials: 401,
   unauthenticated: 401,
+  /** The cookie named a session that has ended (idle or absolute end passed): sign in again. */
+  session_ended: 401,
+  /** The cookie named a session that was signed out (from another device, or by a password change). */
+  session_revoked: 401,
   csrf_rejected: 403,
   forbidden: 403,
   not_found: 404,

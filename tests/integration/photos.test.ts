@@ -327,6 +327,16 @@ describe('uploading', () => {
     const future = await upload(agent, kiritimati.athlete.id, [{ data, name: 'a.jpg' }], { date: tomorrow });
     expect(future.status).toBe(400);
     expect(future.body.error.fields).toEqual({ date: 'That date is still in the future' });
+    // The entries' history window too (shared dateWindow: 5 years back), and nothing is stored.
+    const year = Number(localToday.slice(0, 4));
+    const ancient = await upload(agent, kiritimati.athlete.id, [{ data, name: 'a.jpg' }], {
+      date: `${year - 6}-01-15`,
+    });
+    expect(ancient.status).toBe(400);
+    expect(ancient.body.error.fields).toEqual({ date: expect.stringMatching(/^No earlier than /) });
+    expect(
+      await t.dataSource.getRepository(ConditionPhoto).countBy({ athleteId: kiritimati.athlete.id }),
+    ).toBe(0);
 
     const ok = await upload(agent, kiritimati.athlete.id, [{ data, name: 'a.jpg' }], { date: localToday });
     expect(ok.status).toBe(201);

@@ -52,6 +52,10 @@ const ACCESS: Record<string, Cell> = {
   'POST /api/auth/change-password': SIGNED_IN,
   'GET /api/me': SIGNED_IN,
   'PATCH /api/me/settings': SIGNED_IN,
+  // Only the user's own sessions: another user's id is answered 404 (tests/integration/sessions.test.ts).
+  'GET /api/me/sessions': SIGNED_IN,
+  'DELETE /api/me/sessions/:id': SIGNED_IN,
+  'POST /api/me/sessions/sign-out-others': SIGNED_IN,
   'GET /api/me/export': SIGNED_IN,
   'POST /api/me/deletion-request': SIGNED_IN,
   'POST /api/me/deletion/confirm': 'public',

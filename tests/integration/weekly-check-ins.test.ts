@@ -370,6 +370,12 @@ describe('any week due so far', () => {
     const later = await week('2026-12-07');
     expect(later.status).toBe(400);
     expect(later.body.error.fields).toHaveProperty('dueDate');
+    // Before the entry window (shared dateWindow: 5 years back from the athlete's today).
+    const ancient = await week('2020-11-30');
+    expect(ancient.status).toBe(400);
+    expect(ancient.body.error.fields).toEqual({
+      dueDate: 'No earlier than 2021-12-01 (5 years back)',
+    });
     // Not a date at all: a path that names nothing (404, as every path parameter here).
     expect((await week('2026-02-30')).status).toBe(404);
     expect((await week('2026-11-30', await as(w.outsider))).status).toBe(404);
@@ -460,6 +466,17 @@ describe('submitting and replying', () => {
     const wrongDate = await me.post(weeklyPath()).send(submission({ dueDate: '2026-11-23' }));
     expect(wrongDate.status).toBe(400);
     expect(wrongDate.body.error.fields).toEqual({ dueDate: 'Only the check-in due on 2026-11-30 is open' });
+    // The same entry window as every other entry date, and a real date.
+    const ancient = await me.post(weeklyPath()).send(submission({ dueDate: '2019-01-07' }));
+    expect(ancient.status).toBe(400);
+    expect(ancient.body.error.fields).toEqual({
+      dueDate: 'No earlier than 2021-12-01 (5 years back)',
+    });
+    for (const dueDate of ['2026-02-30', '0000-01-01', '2026-12-07']) {
+      const bad = await me.post(weeklyPath()).send(submission({ dueDate }));
+      expect(bad.status, dueDate).toBe(400);
+      expect(Object.keys(bad.body.error.fields), dueDate).toEqual(['dueDate']);
+    }
 
     const unknown = await me
       .post(weeklyPath())

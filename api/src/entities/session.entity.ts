@@ -16,13 +16,17 @@ export class Session extends BaseRecord {
   @JoinColumn({ name: 'user_id', foreignKeyConstraintName: 'FK_sessions_user_id' })
   user?: User;
 
-  /** Absolute end of the session (sign-in time + SESSION_MAX_DAYS); sliding never passes it. */
+  /**
+   * Absolute end of the session (sign-in time + the role's absolute lifetime, lib/session-lifetime.ts);
+   * the sliding idle end never passes it.
+   */
   @Column({ name: 'expires_at', type: 'timestamptz' })
   expiresAt: Date;
 
   @Column({ name: 'revoked_at', type: 'timestamptz', nullable: true })
   revokedAt: Date | null;
 
+  /** Moved when the cookie's JWT is replaced (at most once per SESSION_REFRESH_MINUTES); the idle end counts from it. */
   @Column({ name: 'last_seen_at', type: 'timestamptz', default: () => 'now()' })
   lastSeenAt: Date;
 

@@ -12,14 +12,18 @@ function baseOptions(config: Pick<Config, 'appOrigin'>): CookieOptions {
   };
 }
 
-/** Sets the session cookie; the browser drops it when the JWT inside expires. */
+/**
+ * Sets the session cookie. It lives a little past the session's absolute end (IssuedToken), longer
+ * than the JWT inside, so a browser back after its session ended is told why; the JWT's own expiry
+ * and the session row decide whether it still opens anything.
+ */
 export function setSessionCookie(
   res: Response,
   config: Pick<Config, 'appOrigin'>,
-  token: string,
-  expiresAt: Date,
+  issued: { token: string; cookieMaxAgeMs: number },
 ): void {
-  res.cookie(SESSION_COOKIE, token, { ...baseOptions(config), expires: expiresAt });
+  // Express writes Max-Age and an Expires counted from the process clock.
+  res.cookie(SESSION_COOKIE, issued.token, { ...baseOptions(config), maxAge: issued.cookieMaxAgeMs });
 }
 
 export function clearSessionCookie(res: Response, config: Pick<Config, 'appOrigin'>): void {

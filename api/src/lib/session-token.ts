@@ -12,6 +12,8 @@ export interface SessionClaims {
   iat: number;
   /** Expires at, seconds since the epoch. */
   exp: number;
+  /** True when `exp` has passed: the token names its session but no longer opens it. */
+  expired: boolean;
 }
 
 /**
@@ -30,23 +32,31 @@ function hmacKey(secret: string): KeyObject {
   return key;
 }
 
-/** Signs the cookie's JWT (HS256). `expiresAt` is never later than the session's absolute end. */
+/**
+ * Signs the cookie's JWT (HS256), issued at `issuedAt` (the app's clock) and expiring at
+ * `expiresAt`, which the caller keeps within the session's idle and absolute ends.
+ */
 export function signSessionToken(
-  input: { userId: string; sessionId: string; expiresAt: Date },
+  input: { userId: string; sessionId: string; issuedAt: Date; expiresAt: Date },
   secret: string,
 ): string {
-  const nowSeconds = Math.floor(Date.now() / 1000);
-  const exp = Math.max(nowSeconds + 1, Math.floor(input.expiresAt.getTime() / 1000));
-  return jwt.sign({ sid: input.sessionId, iat: nowSeconds, exp }, hmacKey(secret), {
+  const iat = Math.floor(input.issuedAt.getTime() / 1000);
+  const exp = Math.max(iat + 1, Math.floor(input.expiresAt.getTime() / 1000));
+  return jwt.sign({ sid: input.sessionId, iat, exp }, hmacKey(secret), {
     algorithm: 'HS256',
     subject: input.userId,
   });
 }
 
-/** Verifies signature, algorithm and expiry; null for anything that isn't a valid session token. */
-export function verifySessionToken(token: string, secret: string): SessionClaims | null {
+/**
+ * Verifies signature and algorithm, and reads expiry against `now`; null for anything that isn't
+ * a session token of ours. An expired token still answers (with `expired`), so the caller can say
+ * why the session ended.
+ */
+export function verifySessionToken(token: string, secret: string, now: Date): SessionClaims | null {
   try {
-    const payload = jwt.verify(token, hmacKey(secret), { algorithms: ['HS256'] });
+    // Expiry is checked below against the app's clock, not the process's.
+    const payload = jwt.verify(token, hmacKey(secret), { algorithms: ['HS256'], ignoreExpiration: true });
     if (typeof payload !== 'object' || payload === null) return null;
     const { sub, sid, iat, exp } = payload as Partial<SessionClaims>;
     if (
@@ -57,7 +67,7 @@ export function verifySessionToken(token: string, secret: string): SessionClaims
     ) {
       return null;
     }
-    return { sub, sid, iat, exp };
+    return { sub, sid, iat, exp, expired: exp * 1000 <= now.getTime() };
   } catch {
     return null;
   }

@@ -1,14 +1,22 @@
-import { IsNull, LessThan, Not, type EntityManager } from 'typeorm';
+import { IsNull, LessThan, MoreThan, Not, type EntityManager } from 'typeorm';
 import { Session } from '../entities/session.entity.js';
 import type { User } from '../entities/user.entity.js';
 
 export class SessionRepository {
   constructor(private readonly manager: EntityManager) {}
 
-  create(input: Pick<Session, 'userId' | 'expiresAt' | 'userAgent' | 'ip'>): Promise<Session> {
-    return this.manager.save(
-      this.manager.create(Session, { ...input, lastSeenAt: new Date(), revokedAt: null }),
-    );
+  create(
+    input: Pick<Session, 'userId' | 'createdAt' | 'expiresAt' | 'lastSeenAt' | 'userAgent' | 'ip'>,
+  ): Promise<Session> {
+    return this.manager.save(this.manager.create(Session, { ...input, revokedAt: null }));
+  }
+
+  /** A user's sessions that are not revoked and not past their absolute end (idle ends are the caller's rule). */
+  listUnrevoked(userId: string, now: Date): Promise<Session[]> {
+    return this.manager.find(Session, {
+      where: { userId, revokedAt: IsNull(), expiresAt: MoreThan(now) },
+      order: { lastSeenAt: 'DESC', createdAt: 'DESC' },
+    });
   }
 
   /**
@@ -31,16 +39,16 @@ export class SessionRepository {
     await this.manager.update(Session, { id }, { lastSeenAt: at });
   }
 
-  async revoke(id: string, at: Date = new Date()): Promise<void> {
+  async revoke(id: string, at: Date): Promise<void> {
     await this.manager.update(Session, { id, revokedAt: IsNull() }, { revokedAt: at });
   }
 
   /** Revokes every live session of a user, except `exceptId` when given. */
-  async revokeAllForUser(userId: string, options: { exceptId?: string; at?: Date } = {}): Promise<number> {
+  async revokeAllForUser(userId: string, options: { exceptId?: string; at: Date }): Promise<number> {
     const where = options.exceptId
       ? { userId, revokedAt: IsNull(), id: Not(options.exceptId) }
       : { userId, revokedAt: IsNull() };
-    const result = await this.manager.update(Session, where, { revokedAt: options.at ?? new Date() });
+    const result = await this.manager.update(Session, where, { revokedAt: options.at });
     return result.affected ?? 0;
   }
 

@@ -26,7 +26,7 @@ export function authRouter(limits: RateLimits): Router {
     validate({ body: signInRequest }),
     async (req, res) => {
       const { me, token } = await new AuthService(req.ctx).signIn(req.body, clientInfo(req));
-      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      setSessionCookie(res, req.ctx.config, token);
       res.json({ data: me });
     },
   );
@@ -36,8 +36,8 @@ export function authRouter(limits: RateLimits): Router {
     const { config: cfg, dataSource } = req.ctx;
     const cookie: unknown = req.cookies?.[SESSION_COOKIE];
     if (typeof cookie === 'string' && cookie !== '') {
-      const resolved = await new SessionService(dataSource.manager, cfg).resolve(cookie);
-      if (resolved) await new AuthService(req.ctx).signOut(resolved.session.id);
+      const resolved = await new SessionService(dataSource.manager, cfg).resolve(cookie, req.ctx.clock());
+      if ('session' in resolved) await new AuthService(req.ctx).signOut(resolved.session.id);
     }
     clearSessionCookie(res, cfg);
     res.status(204).end();
@@ -75,7 +75,7 @@ export function authRouter(limits: RateLimits): Router {
         auth.sessionId,
         req.body,
       );
-      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      setSessionCookie(res, req.ctx.config, token);
       res.json({ data: me });
     },
   );

@@ -1,28 +1,18 @@
 /**
  * The demo inbox: reads the messages the local SMTP fake captured (one JSON file per message in
- * MAIL_CAPTURE_DIR). Not authenticated on purpose, so it is fenced twice: app.ts mounts it only in
- * demo mode (set by `npm start` / `npm run dev`) with MAIL_CAPTURE_DIR set, and it answers only
- * clients on this machine (the socket's own address; no header can claim it).
+ * MAIL_CAPTURE_DIR). Not authenticated on purpose, so it is fenced twice, the API here and its web
+ * page (`/dev/inbox`, middleware/web-app.ts) alike: it exists only in demo mode (set by
+ * `npm start` / `npm run dev`) with MAIL_CAPTURE_DIR set (`devInboxEnabled` in
+ * middleware/dev-inbox.ts), and it answers only clients on this machine (`loopbackOnly`: the
+ * socket's own address; no header can claim it).
  */
 import { Router, type Response } from 'express';
 import { listCapturedIds, readCapturedMail, type CapturedMail } from '../adapters/mail-capture.js';
 import type { Config } from '../config.js';
 import { notFound } from '../errors.js';
+import { loopbackOnly } from '../middleware/dev-inbox.js';
 
 const LIST_LIMIT = 200;
-
-/**
- * True for a loopback peer address: 127.0.0.0/8, ::1, or either written as an IPv4-mapped IPv6
- * address (RFC 4291 §2.4: ::1 is loopback; RFC 1122 §3.2.1.3: 127/8 is loopback; RFC 4291
- * §2.5.5.2: ::ffff:a.b.c.d maps an IPv4 address).
- */
-export function isLoopbackAddress(address: string | undefined): boolean {
-  if (!address) return false;
-  const a = address.toLowerCase();
-  if (a === '::1' || a === '0:0:0:0:0:0:0:1') return true;
-  const v4 = a.startsWith('::ffff:') ? a.slice('::ffff:'.length) : a;
-  return /^127\.\d{1,3}\.\d{1,3}\.\d{1,3}$/.test(v4);
-}
 
 function noStore(res: Response): void {
   res.set('Cache-Control', 'no-store');
@@ -32,10 +22,7 @@ export function devMailRouter(config: Config): Router {
   const router = Router();
   const dir = config.mailCaptureDir;
 
-  // Anyone else gets the same 404 as a route that does not exist.
-  router.use((req, _res, next) => {
-    next(isLoopbackAddress(req.socket.remoteAddress) ? undefined : notFound('No such API route.'));
-  });
+  router.use(loopbackOnly());
 
   router.get('/', async (_req, res) => {
     const ids = dir ? (await listCapturedIds(dir)).slice(0, LIST_LIMIT) : [];

@@ -46,7 +46,7 @@ export function invitationsRouter(limits: RateLimits): Router {
     validate({ body: acceptInvitationRequest }),
     async (req, res) => {
       const { me, token } = await new InvitationService(req.ctx).accept(req.body, clientInfo(req));
-      setSessionCookie(res, req.ctx.config, token.token, token.expiresAt);
+      setSessionCookie(res, req.ctx.config, token);
       res.status(201).json({ data: me });
     },
   );

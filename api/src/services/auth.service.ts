@@ -21,7 +21,7 @@ export interface SignedIn {
   token: IssuedToken;
 }
 
-type AuthDeps = { dataSource: DataSource; config: Config };
+type AuthDeps = { dataSource: DataSource; config: Config; clock: () => Date };
 
 export class AuthService {
   private readonly sessions: SessionService;
@@ -41,13 +41,13 @@ export class AuthService {
       ? await verifyPassword(input.password, user.passwordHash)
       : await verifyAgainstDummy(input.password);
     if (!user || !ok) throw new AppError('invalid_credentials', INVALID_CREDENTIALS);
-    const { token, expiresAt } = await this.sessions.start(user.id, client);
+    const { session: _session, ...token } = await this.sessions.start(user, client, this.deps.clock());
     const me = await new MeService(this.deps.dataSource.manager).describe(user);
-    return { me, token: { token, expiresAt } };
+    return { me, token };
   }
 
   async signOut(sessionId: string): Promise<void> {
-    await this.sessions.revoke(sessionId);
+    await this.sessions.revoke(sessionId, this.deps.clock());
   }
 
   /**
@@ -62,15 +62,15 @@ export class AuthService {
       throw validationFailed({ currentPassword: 'The current password is not correct' });
     }
     const passwordHash = await hashPassword(input.newPassword);
+    const now = this.deps.clock();
     const session = await dataSource.transaction(async (manager) => {
-      const now = new Date();
       await new UserRepository(manager).update(userId, { passwordHash, passwordChangedAt: now });
       await new SessionRepository(manager).revokeAllForUser(userId, { exceptId: sessionId, at: now });
       return new SessionRepository(manager).findById(sessionId);
     });
     if (!session) throw notFound();
     const me = await new MeService(dataSource.manager).get(userId);
-    return { me, token: this.sessions.issue(session) };
+    return { me, token: this.sessions.issue(session, user.role, now) };
   }
 
   /**
@@ -111,7 +111,7 @@ export class AuthService {
       if (!row || row.usedAt || row.expiresAt <= now) throw tokenInvalid(RESET_INVALID);
       await new UserRepository(manager).update(row.userId, { passwordHash, passwordChangedAt: now });
       await tokens.useAllForUser(row.userId, now);
-      await new SessionRepository(manager).revokeAllForUser(row.userId, { at: now });
+      await new SessionRepository(manager).revokeAllForUser(row.userId, { at: this.deps.clock() });
     });
   }
 }

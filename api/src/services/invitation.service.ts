@@ -29,7 +29,7 @@ import { SessionService, type ClientInfo } from './session.service.js';
 const EMAIL_TAKEN = 'This e-mail already has a Driftmark account.';
 const INVITATION_INVALID = 'This invitation link is no longer valid. Ask your coach for a new one.';
 
-type InvitationDeps = { dataSource: DataSource; config: Config };
+type InvitationDeps = { dataSource: DataSource; config: Config; clock: () => Date };
 
 const isOpen = (inv: Invitation, now: Date): boolean =>
   !inv.acceptedAt && !inv.revokedAt && inv.expiresAt > now;
@@ -164,9 +164,14 @@ export class InvitationService {
           });
         }
         await new InvitationRepository(manager).markAccepted(invitation.id, user.id, now);
-        const started = await sessions.start(user.id, client, manager);
+        const { session: _session, ...token } = await sessions.start(
+          user,
+          client,
+          this.deps.clock(),
+          manager,
+        );
         const me = await new MeService(manager).describe(user, manager);
-        return { me, token: { token: started.token, expiresAt: started.expiresAt } };
+        return { me, token };
       });
     } catch (err) {
       // Two invitations to one address accepted at the same moment: the unique e-mail index decides.

@@ -11,7 +11,7 @@ import { createStorage, newStorageKey, type StorageAdapter, type StoredObject } 
 import type { Config } from '../config.js';
 import type { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { AppError, conflict, forbidden, notFound, validationFailed } from '../errors.js';
-import { todayIn } from '../lib/dates.js';
+import { futureEntryProblem } from '../lib/local-time.js';
 import type { Logger } from '../logger.js';
 import type { UploadedFile } from '../middleware/upload.js';
 import { isDatabaseUnavailable, zodFields } from '../middleware/errors.js';
@@ -101,9 +101,11 @@ export class PhotoService {
     const parsed = photoUploadFields.safeParse(body ?? {});
     const fields: Record<string, string> = parsed.success ? {} : zodFields(parsed.error).fields;
     if (files.length === 0) fields.files = 'Choose at least one photo.';
-    if (parsed.success && parsed.data.date > todayIn(athlete.user.timeZone, now)) {
-      fields.date = 'That date is still in the future';
-    }
+    // The same rule as every entry's date: the athlete's today at the latest, within the history window.
+    const dateProblem = parsed.success
+      ? futureEntryProblem({ date: parsed.data.date }, athlete.user.timeZone, now)
+      : null;
+    if (dateProblem && 'date' in dateProblem) fields.date = dateProblem.date;
     let pose: string | null = null;
     if (parsed.success) {
       pose = await findTeamPose(manager, athlete.teamId, parsed.data.pose);

@@ -1,5 +1,6 @@
 import {
   checkInQuestion,
+  dateWindowProblem,
   DRIFT_METRICS,
   RATING_KEYS,
   type CheckInQuestion,
@@ -182,6 +183,15 @@ export class WeeklyCheckInService {
     };
   }
 
+  /**
+   * A due date is an entry date: held to the shared entry window (`dateWindow` 'past': back
+   * LIMITS.dateWindow.historyYears, never after the athlete's today), refused on `dueDate`.
+   */
+  private assertDueDateInWindow(dueDate: string, today: string): void {
+    const problem = dateWindowProblem(dueDate, today, 'past');
+    if (problem) throw validationFailed({ dueDate: problem });
+  }
+
   /** Reads in parallel: pass a pool manager, not a transaction's. */
   async figures(manager: EntityManager, athlete: AthleteWithPeople, dueDate: string): Promise<WeeklyFigures> {
     const { today } = this.dates(athlete);
@@ -234,10 +244,11 @@ export class WeeklyCheckInService {
   /**
    * The check-in due on `dueDate` (today's or an earlier one): stored, or computed from the logs —
    * due while it is the current one, missed after, not_due when none was expected then (joined on or
-   * after it). A later date answers 400.
+   * after it). A later date, or one before the entry window, answers 400 on `dueDate`.
    */
   async forDueDate(athlete: AthleteWithPeople, dueDate: string): Promise<WeeklyCheckInView> {
-    const current = this.dates(athlete).dueDate;
+    const { dueDate: current, today } = this.dates(athlete);
+    this.assertDueDateInWindow(dueDate, today);
     if (dueDate > current) {
       throw validationFailed({
         dueDate: `No check-in is due on ${dueDate} yet (the current one is due on ${current})`,
@@ -283,7 +294,8 @@ export class WeeklyCheckInService {
    * updated on later ones with fresh figures until a staff member replies (then 409).
    */
   async submit(athlete: AthleteWithPeople, input: SubmitWeeklyCheckInRequest): Promise<WeeklyCheckInView> {
-    const { dueDate } = this.dates(athlete);
+    const { dueDate, today } = this.dates(athlete);
+    this.assertDueDateInWindow(input.dueDate, today);
     if (input.dueDate !== dueDate) {
       throw validationFailed({ dueDate: `Only the check-in due on ${dueDate} is open` });
     }

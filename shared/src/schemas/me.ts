@@ -47,3 +47,24 @@ export const updateSettingsRequest = z
   })
   .partial();
 export type UpdateSettingsRequest = z.infer<typeof updateSettingsRequest>;
+
+/** One signed-in device in GET /api/me/sessions (the user's own live sessions, most recently seen first). */
+export const signedInDevice = z.object({
+  /** The session id (DELETE /api/me/sessions/:id signs it out). */
+  id: z.uuid(),
+  /** A readable summary of the browser's user agent, e.g. "Safari on iPhone"; "Unknown device" when it sent none. */
+  device: z.string(),
+  /** When this device signed in (ISO 8601). */
+  signedInAt: z.string(),
+  /** When this device was last seen, to within the session refresh interval (ISO 8601). */
+  lastSeenAt: z.string(),
+  /** When the session ends if the device is not used again (idle end, never past the absolute end; ISO 8601). */
+  endsAt: z.string(),
+  /** True for the device making this request. */
+  current: z.boolean(),
+});
+export type SignedInDevice = z.infer<typeof signedInDevice>;
+
+/** POST /api/me/sessions/sign-out-others: how many other devices were signed out. */
+export const signOutOthersResponse = z.object({ signedOut: z.number().int().min(0) });
+export type SignOutOthersResponse = z.infer<typeof signOutOthersResponse>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { text, uuid } from './common.js';
+import { isoDate, text, uuid } from './common.js';
 import { LIMITS } from '../limits.js';
 import { WEEKDAYS } from './plans.js';
 import { DRIFT_METRICS, rateView } from './trends.js';
@@ -78,8 +78,8 @@ export const answerValue = z.union([
 
 /** POST /api/athletes/:athleteId/weekly-check-ins: the athlete submits the check-in due now. */
 export const submitWeeklyCheckInRequest = z.object({
-  /** The due date this answers (from GET …/weekly-check-ins/current). */
-  dueDate: z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Use the form YYYY-MM-DD'),
+  /** The due date this answers (from GET …/weekly-check-ins/current); held to the entry window by the server. */
+  dueDate: isoDate,
   answers: z.array(z.object({ questionId: uuid, value: answerValue })).max(12),
   /** The athlete's own questions for the coach. */
   questionsForCoach: text('Questions for the coach', LIMITS.questionsForCoach).nullable(),

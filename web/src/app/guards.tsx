@@ -5,15 +5,22 @@ import { signInWithNext } from '@/config/paths';
 import { useMe } from '@/features/auth/api/get-me';
 import { ForbiddenPage } from './routes/forbidden';
 import { LoadFailedPage } from './routes/load-failed';
+import { sessionEndReason } from '@/lib/session-end';
 import { useCurrentUser } from './session';
 
-/** Waits for the session; sends signed-out visitors to sign-in and back here afterwards. */
+/**
+ * Waits for the session; sends signed-out visitors to sign-in and back here afterwards, saying why
+ * when the server said this browser's session ended.
+ */
 export function RequireSignedIn() {
   const me = useMe();
   const location = useLocation();
   if (me.isPending) return <PageLoader label="Checking your session…" />;
   if (me.isError) return <LoadFailedPage error={me.error} onRetry={() => void me.refetch()} />;
-  if (!me.data) return <Navigate to={signInWithNext(`${location.pathname}${location.search}`)} replace />;
+  if (!me.data)
+    return (
+      <Navigate to={signInWithNext(`${location.pathname}${location.search}`, sessionEndReason())} replace />
+    );
   return <Outlet />;
 }
 

@@ -14,10 +14,11 @@ const dayLinkedKeys = (athleteId: string) => [trendKeys.athlete(athleteId)];
 
 // A 401 from any call but /api/me and sign-in means the session ended (expired, revoked on
 // another device): forget the user and go to sign-in, coming back here afterwards.
-setUnauthenticatedHandler((next) => {
+setUnauthenticatedHandler((next, reason) => {
   queryClient.removeQueries({ predicate: (q) => q.queryKey[0] !== authKeys.all[0] });
   queryClient.setQueryData(authKeys.me, null);
-  if (window.location.pathname !== '/sign-in') void router.navigate(signInWithNext(next), { replace: true });
+  if (window.location.pathname !== '/sign-in')
+    void router.navigate(signInWithNext(next, reason), { replace: true });
 });
 
 export function App() {

@@ -5,6 +5,7 @@ import { athleteQueryOptions } from '@/features/athletes/api/get-athlete';
 import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
 import { meQueryOptions } from '@/features/auth/api/get-me';
 import { dayQueryOptions } from '@/features/check-ins/api/get-day';
+import { mailListQueryOptions } from '@/features/dev-inbox/api/get-mail-list';
 import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
 import { marksQueryOptions } from '@/features/marks/api/list-marks';
 import { planQueryOptions } from '@/features/plans/api/get-plan';
@@ -14,6 +15,7 @@ import { reviewQueueQueryOptions } from '@/features/review/api/get-review-queue'
 import { currentWeeklyCheckInQueryOptions } from '@/features/weekly/api/get-current-weekly-check-in';
 import { todayIn } from '@/lib/format';
 import { queryClient } from '@/lib/query-client';
+import { devInboxLoader } from './dev-inbox-gate';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
 import { AthleteShell } from './layouts/athlete-shell';
 import { ShellForRole } from './layouts/shell-for-role';
@@ -100,7 +102,12 @@ export const router = createBrowserRouter([
         path: 'invite/:token',
         lazy: page(() => import('./routes/accept-invitation'), 'AcceptInvitationRoute'),
       },
-      { path: 'dev/inbox', lazy: page(() => import('./routes/dev-inbox'), 'DevInboxRoute') },
+      // Only where the demo inbox exists (demo mode, this machine); a 404 page anywhere else.
+      {
+        path: 'dev/inbox',
+        loader: devInboxLoader(() => queryClient.fetchQuery(mailListQueryOptions())),
+        lazy: page(() => import('./routes/dev-inbox'), 'DevInboxRoute'),
+      },
       { path: 'unsubscribe', lazy: page(() => import('./routes/unsubscribe'), 'UnsubscribeRoute') },
       { path: 'account/delete', lazy: page(() => import('./routes/account-delete'), 'AccountDeleteRoute') },
       {

@@ -52,6 +52,7 @@ export const paths = {
   devInbox: '/dev/inbox',
 } as const;
 
-export function signInWithNext(next: string): string {
-  return `${paths.signIn}?next=${encodeURIComponent(next)}`;
+/** Sign-in, coming back to `next` afterwards; `reason` says why a session ended (lib/session-end.ts). */
+export function signInWithNext(next: string, reason?: string | null): string {
+  return `${paths.signIn}?next=${encodeURIComponent(next)}${reason ? `&reason=${encodeURIComponent(reason)}` : ''}`;
 }

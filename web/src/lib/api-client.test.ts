@@ -1,4 +1,5 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
+import { clearSessionEnd, sessionEndReason } from './session-end';
 import {
   ApiError,
   apiRequest,
@@ -115,11 +116,25 @@ describe('apiRequest with a stubbed fetch', () => {
     const handler = vi.fn();
     setUnauthenticatedHandler(handler);
     await expect(apiRequest('/api/roster')).rejects.toMatchObject({ status: 401, code: 'unauthenticated' });
-    expect(handler).toHaveBeenCalledWith('/coach?tab=1');
+    expect(handler).toHaveBeenCalledWith('/coach?tab=1', null);
 
     handler.mockClear();
     await expect(apiRequest('/api/me')).rejects.toBeInstanceOf(ApiError);
     expect(handler).not.toHaveBeenCalled();
+  });
+
+  it('says why when the server answers that the session ended or was signed out elsewhere', async () => {
+    const handler = vi.fn();
+    setUnauthenticatedHandler(handler);
+    stub(401, { error: { code: 'session_revoked', message: 'Signed out' } });
+    await expect(apiRequest('/api/roster')).rejects.toMatchObject({ code: 'session_revoked' });
+    expect(handler).toHaveBeenCalledWith('/coach?tab=1', 'signed-out');
+
+    // /api/me never redirects, but its answer is remembered for the sign-in page.
+    stub(401, { error: { code: 'session_ended', message: 'Ended' } });
+    await expect(apiRequest('/api/me')).rejects.toMatchObject({ code: 'session_ended' });
+    expect(sessionEndReason()).toBe('ended');
+    clearSessionEnd();
   });
 
   it('turns a network failure into ApiError network_error', async () => {

@@ -1,4 +1,5 @@
 import type { ErrorCode } from '@driftmark/shared';
+import { noteSessionEnd, type SessionEndReason } from './session-end';
 
 /** Codes the client adds for failures that never reached (or never came back from) the API. */
 export type ClientErrorCode = 'network_error' | 'unexpected_response';
@@ -116,10 +117,10 @@ export function unwrapWithMeta<T>(body: unknown): WithMeta<T> {
 /** Paths whose 401 is an answer, not a lost session: never bounce these to sign-in. */
 const NO_REDIRECT_ON_401 = ['/api/me', '/api/auth/sign-in', '/api/auth/sign-out'];
 
-type UnauthenticatedHandler = (next: string) => void;
+type UnauthenticatedHandler = (next: string, reason: SessionEndReason | null) => void;
 
-let onUnauthenticated: UnauthenticatedHandler = (next) => {
-  window.location.assign(`/sign-in?next=${encodeURIComponent(next)}`);
+let onUnauthenticated: UnauthenticatedHandler = (next, reason) => {
+  window.location.assign(`/sign-in?next=${encodeURIComponent(next)}${reason ? `&reason=${reason}` : ''}`);
 };
 
 /** The app decides how to reach sign-in (router navigation, clearing the cache). */
@@ -184,8 +185,10 @@ async function requestRaw(path: string, options: RawOptions = {}): Promise<unkno
   const parsed = await readJson(response);
   if (!response.ok) {
     const error = parseErrorBody(response.status, parsed);
+    // A session that ended says so once (the cookie goes with that answer): remember why for sign-in.
+    const reason = response.status === 401 ? noteSessionEnd(error.code) : null;
     if (response.status === 401 && redirectOn401) {
-      onUnauthenticated(`${window.location.pathname}${window.location.search}`);
+      onUnauthenticated(`${window.location.pathname}${window.location.search}`, reason);
     }
     throw error;
   }

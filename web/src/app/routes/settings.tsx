@@ -11,6 +11,7 @@ import { ChangePasswordForm } from '@/features/settings/components/change-passwo
 import { GuardrailFloorsForm } from '@/features/settings/components/guardrail-floors-form';
 import { NotificationPreferencesForm } from '@/features/settings/components/notification-preferences-form';
 import { SettingsForm } from '@/features/settings/components/settings-form';
+import { SignedInDevices } from '@/features/settings/components/signed-in-devices';
 import { CheckInQuestionsEditor } from '@/features/weekly/components/check-in-questions-editor';
 import { SignOutButton } from '../layouts/sign-out-button';
 import { useCurrentUser } from '../session';
@@ -76,6 +77,13 @@ export function SettingsRoute() {
         <Card aria-labelledby="password-heading">
           <CardHeader id="password-heading" title="Your password" />
           <ChangePasswordForm onChanged={setMe} />
+        </Card>
+        <Card id="devices" aria-labelledby="devices-heading">
+          <CardHeader id="devices-heading" title="Signed-in devices" />
+          <SignedInDevices
+            clock={{ whose: 'viewer', timeZone: me.timeZone }}
+            signOutHere={<SignOutButton size="sm" />}
+          />
         </Card>
         <Card aria-labelledby="account-heading">
           <CardHeader id="account-heading" title="Account" />

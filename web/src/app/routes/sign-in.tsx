@@ -1,8 +1,15 @@
 import { Navigate, useNavigate, useSearchParams } from 'react-router';
+import { Alert } from '@/components/ui/alert';
 import { PageLoader } from '@/components/ui/spinner';
 import { useMe } from '@/features/auth/api/get-me';
 import { SignInForm } from '@/features/auth/components/sign-in-form';
 import { safeNextPath } from '@/lib/safe-next';
+import {
+  clearSessionEnd,
+  parseSessionEndReason,
+  SESSION_END_MESSAGES,
+  sessionEndReason,
+} from '@/lib/session-end';
 import { PublicShell } from '../layouts/public-shell';
 import { homePathFor } from '../session';
 
@@ -19,6 +26,9 @@ export function SignInRoute() {
   const navigate = useNavigate();
   const me = useMe();
   const next = params.get('next');
+  // Why the last session ended: from the redirect, or from this page's own check of a stale cookie.
+  const reason = parseSessionEndReason(params.get('reason')) ?? sessionEndReason();
+  const ended = reason ? SESSION_END_MESSAGES[reason] : null;
 
   // Already signed in (a second tab, the back button): straight on.
   if (me.data) return <Navigate to={safeNextPath(next, homePathFor(me.data))} replace />;
@@ -28,13 +38,21 @@ export function SignInRoute() {
       <title>Sign in · Driftmark</title>
       <h1 className="text-2xl font-bold text-ink">Sign in</h1>
       <p className="mt-1 mb-6 text-ink-muted">Athletes and coaches use the same door.</p>
+      {ended ? (
+        <Alert tone="caution" title={ended.title} className="mb-5">
+          {ended.body}
+        </Alert>
+      ) : null}
       {me.isPending ? (
         <PageLoader label="Checking your session…" />
       ) : (
         <div className="rounded-lg border border-line bg-surface p-5 shadow-card sm:p-6">
           <SignInForm
             onSubmitting={preloadToday}
-            onSignedIn={(user) => void navigate(safeNextPath(next, homePathFor(user)), { replace: true })}
+            onSignedIn={(user) => {
+              clearSessionEnd();
+              void navigate(safeNextPath(next, homePathFor(user)), { replace: true });
+            }}
           />
         </div>
       )}

@@ -9,3 +9,8 @@ export const notificationKeys = {
   /** What an unsubscribe link would stop (GET /api/unsubscribe?token=). */
   unsubscribe: (token: string) => ['unsubscribe', token] as const,
 };
+
+export const sessionKeys = {
+  /** The signed-in user's devices (GET /api/me/sessions). */
+  devices: ['me-sessions'] as const,
+};

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { isLoopbackAddress } from './dev-mail.routes.js';
+import { isLoopbackAddress } from './dev-inbox.js';
 
 // Loopback per RFC 1122 §3.2.1.3 (127.0.0.0/8) and RFC 4291 §2.5.3 (::1); IPv4-mapped form per
 // RFC 4291 §2.5.5.2, as Node reports an IPv4 peer on a dual-stack socket.
