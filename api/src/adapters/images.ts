@@ -1,6 +1,6 @@
 import { createHash } from 'node:crypto';
 import { LIMITS } from '@driftmark/shared';
-import sharp, { type Metadata, type SharpOptions } from 'sharp';
+import sharp, { type Metadata, type Sharp, type SharpOptions } from 'sharp';
 
 /** The upload formats we accept, named as LIMITS.photoTypes names them. */
 export type PhotoFormat = 'jpeg' | 'png' | 'webp' | 'avif';
@@ -100,18 +100,47 @@ function rejectFromSharp(error: unknown): ImageRejectedError {
   );
 }
 
-async function encode(input: Buffer, size: PhotoSize): Promise<EncodedSize> {
-  const edge = PHOTO_SIZES[size];
-  const { data, info } = await sharp(input, inputOptions())
-    // Applies the EXIF orientation to the pixels; the tag itself goes with the rest of the metadata.
-    .rotate()
-    .resize({ width: edge, height: edge, fit: 'inside', withoutEnlargement: true })
-    // JPEG has no alpha: a transparent PNG gets a white background rather than black.
-    .flatten({ background: '#ffffff' })
+// Uploads are decoded once and never again: libvips' operation cache would only hold on to their
+// pixels (up to 50 MB by default) between requests. Threads per image stay at sharp's default, the
+// number of cores.
+sharp.cache(false);
+
+async function jpeg(image: Sharp, size: PhotoSize): Promise<EncodedSize> {
+  const { data, info } = await image
     // No withMetadata()/keepExif(): sharp writes no EXIF, XMP, IPTC or GPS unless asked to.
     .jpeg({ quality: JPEG_QUALITY[size], mozjpeg: true })
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, contentType: 'image/jpeg' };
+}
+
+/**
+ * Both stored sizes from one decode: the upload is decoded (shrunk on load where the format
+ * allows), oriented and scaled to the display size once; the display JPEG is encoded from those
+ * pixels and the thumbnail scaled down from them, never from the upload a second time.
+ */
+async function encodeSizes(input: Buffer): Promise<Pick<ProcessedPhoto, 'display' | 'thumb'>> {
+  const edge = (size: PhotoSize) => ({
+    width: PHOTO_SIZES[size],
+    height: PHOTO_SIZES[size],
+    fit: 'inside' as const,
+    withoutEnlargement: true,
+  });
+  const { data, info } = await sharp(input, inputOptions())
+    // Applies the EXIF orientation to the pixels; the tag itself goes with the rest of the metadata.
+    .rotate()
+    .resize(edge('display'))
+    // JPEG has no alpha: a transparent PNG gets a white background rather than black.
+    .flatten({ background: '#ffffff' })
+    .toColourspace('srgb')
+    .raw({ depth: 'uchar' })
+    .toBuffer({ resolveWithObject: true });
+  const pixels = () =>
+    sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } });
+  const [display, thumb] = await Promise.all([
+    jpeg(pixels(), 'display'),
+    jpeg(pixels().resize(edge('thumb')), 'thumb'),
+  ]);
+  return { display, thumb };
 }
 
 /**
@@ -149,8 +178,7 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
     throw rejectFromSharp(new Error('pixel limit'));
 
   try {
-    const display = await encode(input, 'display');
-    const thumb = await encode(input, 'thumb');
+    const { display, thumb } = await encodeSizes(input);
     return {
       format: real,
       contentHash: createHash('sha256').update(input).digest('hex'),
