@@ -459,3 +459,26 @@ describe('access', () => {
     expect(own.body.abilities).toEqual({ annotate: false });
   });
 });
+
+describe('conditional requests', () => {
+  it('answers an unchanged range 304 with no body, and a changed one 200 with a new tag', async () => {
+    await dataset();
+    const url = `${base}/trend?from=${DAY1}&to=${TODAY}`;
+    const first = await coachAgent.get(url);
+    expect(first.status).toBe(200);
+    const tag = first.headers.etag as string;
+    expect(tag).toMatch(/^W\/".+"$/);
+    // RFC 9110 §13.1.2: If-None-Match naming the current tag answers 304 Not Modified.
+    const again = await coachAgent.get(url).set('If-None-Match', tag);
+    expect(again.status).toBe(304);
+    expect(again.text).toBe('');
+    expect(again.headers['cache-control']).toBe('no-store');
+
+    // Re-entering a weight changes the figures, hence the tag.
+    await weighIns([[TODAY, 78.5]]);
+    const changed = await coachAgent.get(url).set('If-None-Match', tag);
+    expect(changed.status).toBe(200);
+    expect(changed.headers.etag).not.toBe(tag);
+    expect(trendView.strict().parse(changed.body.data).days.at(-1)!.weightKg).toBe(78.5);
+  });
+});

@@ -1,6 +1,7 @@
 import { inReaderUnits, trendQuery, uuid } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
+import { sendConditionalJson } from '../lib/conditional-json.js';
 import { readerOf } from '../lib/reader.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { dated, validate } from '../middleware/validate.js';
@@ -24,7 +25,8 @@ export function trendsRouter(): Router {
       // Flag texts are written in kg; each reader reads their own units.
       const { units } = readerOf(requireAuth(req).user, athlete);
       const flags = view.flags.map((f) => ({ ...f, message: inReaderUnits(f.message, units) }));
-      res.json({
+      // An unchanged range answers 304 to the client that already holds it.
+      sendConditionalJson(req, res, {
         data: { ...view, flags },
         abilities: { annotate: canOnAthlete(actor, 'annotate', target) },
       });
