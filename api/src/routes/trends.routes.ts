@@ -1,4 +1,4 @@
-import { inReaderUnits, trendQuery, uuid } from '@driftmark/shared';
+import { inReaderUnits, trendDaysToColumns, trendQuery, uuid, type TrendResponse } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { sendConditionalJson } from '../lib/conditional-json.js';
@@ -25,9 +25,10 @@ export function trendsRouter(): Router {
       // Flag texts are written in kg; each reader reads their own units.
       const { units } = readerOf(requireAuth(req).user, athlete);
       const flags = view.flags.map((f) => ({ ...f, message: inReaderUnits(f.message, units) }));
-      // An unchanged range answers 304 to the client that already holds it.
+      // Days go as columns (trendResponse); an unchanged range answers 304 to the client holding it.
+      const data: TrendResponse = { ...view, days: trendDaysToColumns(view.days), flags };
       sendConditionalJson(req, res, {
-        data: { ...view, flags },
+        data,
         abilities: { annotate: canOnAthlete(actor, 'annotate', target) },
       });
     },

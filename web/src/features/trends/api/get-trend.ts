@@ -1,4 +1,4 @@
-import type { TrendView } from '@driftmark/shared';
+import { trendViewFromResponse, type TrendResponse, type TrendView } from '@driftmark/shared';
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { trendKeys } from './keys';
@@ -26,14 +26,16 @@ export async function getTrend(
   signal?: AbortSignal,
   held?: TrendView,
 ): Promise<TrendView> {
-  const result = await api.getConditional<TrendView>(
+  const result = await api.getConditional<TrendResponse>(
     trendPath(athleteId, from, to),
     held ? etags.get(held) : undefined,
     signal,
   );
   if (result.notModified) return held!;
-  if (result.etag) etags.set(result.data, result.etag);
-  return result.data;
+  // The days come as columns; the screens read them as rows.
+  const view = trendViewFromResponse(result.data);
+  if (result.etag) etags.set(view, result.etag);
+  return view;
 }
 
 export function trendQueryOptions(athleteId: string, from: string, to: string) {
