@@ -1,4 +1,7 @@
 import { createHash } from 'node:crypto';
+import { createReadStream } from 'node:fs';
+import { open } from 'node:fs/promises';
+import { pipeline } from 'node:stream/promises';
 import { LIMITS } from '@driftmark/shared';
 import sharp, { type Metadata, type Sharp, type SharpOptions } from 'sharp';
 
@@ -118,7 +121,7 @@ async function jpeg(image: Sharp, size: PhotoSize): Promise<EncodedSize> {
  * allows), oriented and scaled to the display size once; the display JPEG is encoded from those
  * pixels and the thumbnail scaled down from them, never from the upload a second time.
  */
-async function encodeSizes(input: Buffer): Promise<Pick<ProcessedPhoto, 'display' | 'thumb'>> {
+async function encodeSizes(input: Buffer | string): Promise<Pick<ProcessedPhoto, 'display' | 'thumb'>> {
   const edge = (size: PhotoSize) => ({
     width: PHOTO_SIZES[size],
     height: PHOTO_SIZES[size],
@@ -149,7 +152,38 @@ async function encodeSizes(input: Buffer): Promise<Pick<ProcessedPhoto, 'display
  * Throws ImageRejectedError for a file we refuse; anything else is our own failure.
  */
 export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
-  const sniffed = sniffFormat(input);
+  return processSource(input, input, () => Promise.resolve(createHash('sha256').update(input).digest('hex')));
+}
+
+/** Bytes enough for sniffFormat. */
+const HEAD_BYTES = 16;
+
+/**
+ * processPhoto for a file on disk (an upload's temp file): libvips reads the file itself and the
+ * hash streams over it, so the upload is never held in memory whole.
+ */
+export async function processPhotoFile(path: string): Promise<ProcessedPhoto> {
+  const head = Buffer.alloc(HEAD_BYTES);
+  const file = await open(path);
+  let length: number;
+  try {
+    ({ bytesRead: length } = await file.read(head, 0, HEAD_BYTES, 0));
+  } finally {
+    await file.close();
+  }
+  return processSource(path, head.subarray(0, length), async () => {
+    const hash = createHash('sha256');
+    await pipeline(createReadStream(path), hash);
+    return hash.digest('hex');
+  });
+}
+
+async function processSource(
+  input: Buffer | string,
+  head: Buffer,
+  contentHash: () => Promise<string>,
+): Promise<ProcessedPhoto> {
+  const sniffed = sniffFormat(head);
   if (sniffed === null) throw new ImageRejectedError('unsupported_type', TYPE_MESSAGE);
   if (sniffed === 'heif') {
     throw new ImageRejectedError(
@@ -178,13 +212,8 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
     throw rejectFromSharp(new Error('pixel limit'));
 
   try {
-    const { display, thumb } = await encodeSizes(input);
-    return {
-      format: real,
-      contentHash: createHash('sha256').update(input).digest('hex'),
-      thumb,
-      display,
-    };
+    const [{ display, thumb }, hash] = await Promise.all([encodeSizes(input), contentHash()]);
+    return { format: real, contentHash: hash, thumb, display };
   } catch (error) {
     throw rejectFromSharp(error);
   }
