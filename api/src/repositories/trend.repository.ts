@@ -148,8 +148,8 @@ export class TrendRepository {
    * Weigh-ins in each window, and the trend before it computed in SQL in closed form: with T₁ = W₁
    * and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet), Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ.
    * A weigh-in k places before the last weighs (1−α)ᵏ, so only the last BEFORE_TREND_WEIGH_INS
-   * earlier weigh-ins are read, newest first straight from the (athlete_id, local_date) index (no
-   * sort, no pass over the rest of the history); what is left out weighs at most 0.9⁴⁰⁰ ≈ 5·10⁻¹⁹ of
+   * earlier weigh-ins are read per athlete through the (athlete_id, local_date) index (at most that
+   * many rows sorted, in memory; never the rest of the history); what is left out weighs at most 0.9⁴⁰⁰ ≈ 5·10⁻¹⁹ of
    * the trend, below double precision, so the smoothing goes on in memory from Tₙ exactly as if it
    * had started at the first weigh-in. With fewer earlier weigh-ins the oldest one read is W₁.
    */
