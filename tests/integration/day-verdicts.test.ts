@@ -19,6 +19,7 @@ import { DEMO_ATHLETES, DEMO_OWNER_EMAIL, DEMO_PASSWORD } from '../../api/src/se
 import { seedDemo } from '../../api/src/seed/seed-demo.js';
 import { newId } from './check-ins-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
+import { readTrend } from './trend-helpers.js';
 
 /**
  * One judgement: every demo athlete's last 28 days read the same verdict per metric in the day
@@ -115,7 +116,7 @@ beforeAll(async () => {
       today,
       dates,
       days,
-      trend: trend.body.data as TrendView,
+      trend: readTrend(trend.body),
       csv: parse(csv.text, { columns: true, bom: true }) as Record<string, string>[],
     });
   }

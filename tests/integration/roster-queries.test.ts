@@ -1,4 +1,4 @@
-import { rosterRow, trendView, type RosterRow } from '@driftmark/shared';
+import { rosterRow, type RosterRow } from '@driftmark/shared';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
@@ -6,7 +6,7 @@ import { FACTORY_PASSWORD, FACTORY_PASSWORD_HASH } from '../factories/password.j
 import { createCoach, createOwner } from '../factories/users.js';
 import { planContent } from './plans-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
-import { BASELINE, countStatements, shift } from './trend-helpers.js';
+import { BASELINE, countStatements, readTrend, shift } from './trend-helpers.js';
 
 // Tuesday 1 December 2026, 10:00 UTC; every athlete here lives in UTC.
 const TODAY = '2026-12-01';
@@ -135,7 +135,7 @@ describe('the roster with a year of history', () => {
     const res = await coachAgent.get(
       `/api/athletes/${first.athlete.id}/trend?from=${shift(TODAY, -13)}&to=${TODAY}`,
     );
-    const view = trendView.parse(res.body.data);
+    const view = readTrend(res.body);
     const yesterday = view.days.find((d) => d.date === shift(TODAY, -1))!;
     expect(row.figures).toMatchObject({
       phase: 'dieting',

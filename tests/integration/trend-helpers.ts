@@ -1,4 +1,10 @@
-import type { PlanBaseline, PlanContent } from '@driftmark/shared';
+import {
+  trendResponse,
+  trendViewFromResponse,
+  type PlanBaseline,
+  type PlanContent,
+  type TrendView,
+} from '@driftmark/shared';
 import type { DataSource } from 'typeorm';
 import { PlanRepository } from '../../api/src/repositories/plan.repository.js';
 
@@ -58,3 +64,8 @@ export async function insertVersion(
 /** The calendar date `days` after `date` (YYYY-MM-DD). */
 export const shift = (date: string, days: number): string =>
   new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+
+/** A trend answer's `data` checked against its schema (days as columns) and read back as rows. */
+export function readTrend(body: { data: unknown }): TrendView {
+  return trendViewFromResponse(trendResponse.strict().parse(body.data));
+}

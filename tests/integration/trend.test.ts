@@ -1,4 +1,4 @@
-import { dayView, trendView, type PlanContent, type TrendView } from '@driftmark/shared';
+import { dayView, type PlanContent, type TrendView } from '@driftmark/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, shareAthlete, type CreatedAthlete } from '../factories/athletes.js';
@@ -7,7 +7,7 @@ import { createAssistant, createCoach, createOwner } from '../factories/users.js
 import { eveningBody, fluidBody, macroMealBody, newId, weighInBody } from './check-ins-helpers.js';
 import { planContent, safeTargets } from './plans-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
-import { countStatements, insertVersion, shift } from './trend-helpers.js';
+import { countStatements, insertVersion, readTrend, shift } from './trend-helpers.js';
 
 // Tuesday 1 December 2026, 11:00 in Madrid: day 14 of the dataset below.
 const TODAY = '2026-12-01';
@@ -77,7 +77,7 @@ const dataset = () => weighIns(WEIGHTS.map((w, i) => [shift(DAY1, i), w] as cons
 async function trend(from: string, to: string, agent = coachAgent): Promise<TrendView> {
   const res = await agent.get(`${base}/trend?from=${from}&to=${to}`);
   expect(res.status).toBe(200);
-  return trendView.strict().parse(res.body.data);
+  return readTrend(res.body);
 }
 
 describe('trend, rate and projection', () => {
@@ -457,5 +457,28 @@ describe('access', () => {
     expect(coachRes.body.abilities).toEqual({ annotate: true });
     const own = await athleteAgent.get(`${base}/trend?from=2026-11-25&to=${TODAY}`);
     expect(own.body.abilities).toEqual({ annotate: false });
+  });
+});
+
+describe('conditional requests', () => {
+  it('answers an unchanged range 304 with no body, and a changed one 200 with a new tag', async () => {
+    await dataset();
+    const url = `${base}/trend?from=${DAY1}&to=${TODAY}`;
+    const first = await coachAgent.get(url);
+    expect(first.status).toBe(200);
+    const tag = first.headers.etag as string;
+    expect(tag).toMatch(/^W\/".+"$/);
+    // RFC 9110 §13.1.2: If-None-Match naming the current tag answers 304 Not Modified.
+    const again = await coachAgent.get(url).set('If-None-Match', tag);
+    expect(again.status).toBe(304);
+    expect(again.text).toBe('');
+    expect(again.headers['cache-control']).toBe('no-store');
+
+    // Re-entering a weight changes the figures, hence the tag.
+    await weighIns([[TODAY, 78.5]]);
+    const changed = await coachAgent.get(url).set('If-None-Match', tag);
+    expect(changed.status).toBe(200);
+    expect(changed.headers.etag).not.toBe(tag);
+    expect(readTrend(changed.body).days.at(-1)!.weightKg).toBe(78.5);
   });
 });

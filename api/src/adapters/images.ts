@@ -1,6 +1,9 @@
 import { createHash } from 'node:crypto';
+import { createReadStream } from 'node:fs';
+import { open } from 'node:fs/promises';
+import { pipeline } from 'node:stream/promises';
 import { LIMITS } from '@driftmark/shared';
-import sharp, { type Metadata, type SharpOptions } from 'sharp';
+import sharp, { type Metadata, type Sharp, type SharpOptions } from 'sharp';
 
 /** The upload formats we accept, named as LIMITS.photoTypes names them. */
 export type PhotoFormat = 'jpeg' | 'png' | 'webp' | 'avif';
@@ -100,18 +103,47 @@ function rejectFromSharp(error: unknown): ImageRejectedError {
   );
 }
 
-async function encode(input: Buffer, size: PhotoSize): Promise<EncodedSize> {
-  const edge = PHOTO_SIZES[size];
-  const { data, info } = await sharp(input, inputOptions())
-    // Applies the EXIF orientation to the pixels; the tag itself goes with the rest of the metadata.
-    .rotate()
-    .resize({ width: edge, height: edge, fit: 'inside', withoutEnlargement: true })
-    // JPEG has no alpha: a transparent PNG gets a white background rather than black.
-    .flatten({ background: '#ffffff' })
+// Uploads are decoded once and never again: libvips' operation cache would only hold on to their
+// pixels (up to 50 MB by default) between requests. Threads per image stay at sharp's default, the
+// number of cores.
+sharp.cache(false);
+
+async function jpeg(image: Sharp, size: PhotoSize): Promise<EncodedSize> {
+  const { data, info } = await image
     // No withMetadata()/keepExif(): sharp writes no EXIF, XMP, IPTC or GPS unless asked to.
     .jpeg({ quality: JPEG_QUALITY[size], mozjpeg: true })
     .toBuffer({ resolveWithObject: true });
   return { data, width: info.width, height: info.height, contentType: 'image/jpeg' };
+}
+
+/**
+ * Both stored sizes from one decode: the upload is decoded (shrunk on load where the format
+ * allows), oriented and scaled to the display size once; the display JPEG is encoded from those
+ * pixels and the thumbnail scaled down from them, never from the upload a second time.
+ */
+async function encodeSizes(input: Buffer | string): Promise<Pick<ProcessedPhoto, 'display' | 'thumb'>> {
+  const edge = (size: PhotoSize) => ({
+    width: PHOTO_SIZES[size],
+    height: PHOTO_SIZES[size],
+    fit: 'inside' as const,
+    withoutEnlargement: true,
+  });
+  const { data, info } = await sharp(input, inputOptions())
+    // Applies the EXIF orientation to the pixels; the tag itself goes with the rest of the metadata.
+    .rotate()
+    .resize(edge('display'))
+    // JPEG has no alpha: a transparent PNG gets a white background rather than black.
+    .flatten({ background: '#ffffff' })
+    .toColourspace('srgb')
+    .raw({ depth: 'uchar' })
+    .toBuffer({ resolveWithObject: true });
+  const pixels = () =>
+    sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } });
+  const [display, thumb] = await Promise.all([
+    jpeg(pixels(), 'display'),
+    jpeg(pixels().resize(edge('thumb')), 'thumb'),
+  ]);
+  return { display, thumb };
 }
 
 /**
@@ -120,7 +152,38 @@ async function encode(input: Buffer, size: PhotoSize): Promise<EncodedSize> {
  * Throws ImageRejectedError for a file we refuse; anything else is our own failure.
  */
 export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
-  const sniffed = sniffFormat(input);
+  return processSource(input, input, () => Promise.resolve(createHash('sha256').update(input).digest('hex')));
+}
+
+/** Bytes enough for sniffFormat. */
+const HEAD_BYTES = 16;
+
+/**
+ * processPhoto for a file on disk (an upload's temp file): libvips reads the file itself and the
+ * hash streams over it, so the upload is never held in memory whole.
+ */
+export async function processPhotoFile(path: string): Promise<ProcessedPhoto> {
+  const head = Buffer.alloc(HEAD_BYTES);
+  const file = await open(path);
+  let length: number;
+  try {
+    ({ bytesRead: length } = await file.read(head, 0, HEAD_BYTES, 0));
+  } finally {
+    await file.close();
+  }
+  return processSource(path, head.subarray(0, length), async () => {
+    const hash = createHash('sha256');
+    await pipeline(createReadStream(path), hash);
+    return hash.digest('hex');
+  });
+}
+
+async function processSource(
+  input: Buffer | string,
+  head: Buffer,
+  contentHash: () => Promise<string>,
+): Promise<ProcessedPhoto> {
+  const sniffed = sniffFormat(head);
   if (sniffed === null) throw new ImageRejectedError('unsupported_type', TYPE_MESSAGE);
   if (sniffed === 'heif') {
     throw new ImageRejectedError(
@@ -149,14 +212,8 @@ export async function processPhoto(input: Buffer): Promise<ProcessedPhoto> {
     throw rejectFromSharp(new Error('pixel limit'));
 
   try {
-    const display = await encode(input, 'display');
-    const thumb = await encode(input, 'thumb');
-    return {
-      format: real,
-      contentHash: createHash('sha256').update(input).digest('hex'),
-      thumb,
-      display,
-    };
+    const [{ display, thumb }, hash] = await Promise.all([encodeSizes(input), contentHash()]);
+    return { format: real, contentHash: hash, thumb, display };
   } catch (error) {
     throw rejectFromSharp(error);
   }

@@ -12,6 +12,7 @@ import { describe, expect, it } from 'vitest';
 import {
   driftFor,
   mean7,
+  mean7Series,
   projectTo,
   rate14,
   rateGuidance,
@@ -175,6 +176,22 @@ describe('mean7 against a straightforward filter-and-mean (simple-statistics mea
           if (present.length < 4) expect(value, date).toBeNull();
           else expect(Math.abs(value! - mean(present)), date).toBeLessThan(1e-9);
         }
+      }),
+      { numRuns: 100 },
+    );
+  });
+
+  it('gives in one pass over a whole range, input in any order, the same means (simple-statistics mean)', () => {
+    fc.assert(
+      fc.property(weightSeries, fc.boolean(), (points, reversed) => {
+        const dates = daysOf(points);
+        const series = mean7Series(reversed ? [...points].reverse() : points, dates);
+        dates.forEach((date, i) => {
+          const from = shiftDate(date, -6);
+          const present = points.filter((p) => p.date >= from && p.date <= date).map((p) => p.kg);
+          if (present.length < 4) expect(series[i], date).toBeNull();
+          else expect(Math.abs(series[i]! - mean(present)), date).toBeLessThan(1e-9);
+        });
       }),
       { numRuns: 100 },
     );

@@ -82,9 +82,32 @@ export const MEAN7_MIN_POINTS = 4;
 
 /** Trailing 7-calendar-day mean ending on `date` of the weigh-ins present; null with fewer than 4. */
 export function mean7(points: readonly WeighInPoint[], date: string): number | null {
-  const from = shiftDate(date, -6);
-  const inWindow = points.filter((p) => p.date >= from && p.date <= date);
-  return inWindow.length < MEAN7_MIN_POINTS ? null : mean(inWindow.map((p) => p.kg));
+  return mean7Series(points, [date])[0] ?? null;
+}
+
+/**
+ * mean7 for each of `dates` (ascending) in one pass: the window slides over the weigh-ins in date
+ * order instead of filtering all of them once per day, and each mean sums its window in that same
+ * order, so every value is the one mean7 gives for its date alone.
+ */
+export function mean7Series(points: readonly WeighInPoint[], dates: readonly string[]): (number | null)[] {
+  const ordered = sortedByDate(points);
+  const out: (number | null)[] = [];
+  let lo = 0;
+  let hi = 0;
+  for (const date of dates) {
+    const from = shiftDate(date, -6);
+    while (hi < ordered.length && ordered[hi]!.date <= date) hi += 1;
+    while (lo < hi && ordered[lo]!.date < from) lo += 1;
+    if (hi - lo < MEAN7_MIN_POINTS) {
+      out.push(null);
+      continue;
+    }
+    let sum = 0;
+    for (let i = lo; i < hi; i += 1) sum += ordered[i]!.kg;
+    out.push(sum / (hi - lo));
+  }
+  return out;
 }
 
 // Rate and projection ---------------------------------------------------------------------------

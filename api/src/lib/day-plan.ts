@@ -107,3 +107,28 @@ export function plannedDay(
   if (!version) return null;
   return { versionNumber: version.number, ...versionDay(version, date, place) };
 }
+
+/**
+ * plannedDay for many dates of one athlete (a chart's range, a roster's week): each version's day
+ * entry (a day type of the weekday pattern, or one dated day) is resolved once and shared by every
+ * date it sets, so a 3-year chart resolves a handful of day types instead of 1,100 days, explanation
+ * texts (`basis`) included. The answer for each date is the one plannedDay gives for it alone.
+ */
+export function dayPlanner(
+  versions: readonly PlanVersionLike[],
+  place?: EventPlace,
+): (date: string) => PlannedDay | null {
+  const resolved = new Map<string, PlannedDay>();
+  return (date) => {
+    const version = versionInForce(versions, date);
+    if (!version) return null;
+    const entry = dayEntryFor(version.content, date);
+    const key = `${version.id}\u0000${entry.kind === 'date' ? `date:${date}` : `type:${entry.dayType.key}`}`;
+    let day = resolved.get(key);
+    if (!day) {
+      day = { versionNumber: version.number, ...versionDay(version, date, place) };
+      resolved.set(key, day);
+    }
+    return day;
+  };
+}

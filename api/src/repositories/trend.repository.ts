@@ -71,6 +71,28 @@ const params = (windows: readonly HistoryWindow[]) => [
   windows.map((w) => w.from),
   windows.map((w) => w.to),
 ];
+/** `params` and the outer dates `inWindows` reads as $4 and $5. */
+const boundedParams = (windows: readonly HistoryWindow[]) => [
+  ...params(windows),
+  windows.reduce((min, w) => (w.from < min ? w.from : min), windows[0]!.from),
+  windows.reduce((max, w) => (w.to > max ? w.to : max), windows[0]!.to),
+];
+/**
+ * The rows of `alias` inside the windows. The condition on the athletes' ids and the outer dates
+ * ($4 = the earliest `from`, $5 = the latest `to`) is what the (athlete_id, local_date) index
+ * answers, so only these athletes' rows near the windows are read (never other teams' rows);
+ * the join to the windows then keeps each athlete's own days.
+ */
+const inWindows = (alias: string) =>
+  `JOIN ${WINDOWS} ON p.athlete_id = ${alias}.athlete_id
+        WHERE ${alias}.athlete_id = ANY($1::uuid[]) AND ${alias}.local_date BETWEEN $4::date AND $5::date
+          AND ${alias}.local_date BETWEEN p.from_date AND p.to_date`;
+
+/**
+ * Earlier weigh-ins the trend before a window is summed over (see `weighIns`): 0.9⁴⁰⁰ ≈ 5·10⁻¹⁹,
+ * so a weigh-in further back moves a trend of up to 300 kg by less than 2·10⁻¹⁶ kg.
+ */
+export const BEFORE_TREND_WEIGH_INS = 400;
 
 /** Appends to the list under `key`, creating it. */
 function push<K, V>(map: Map<K, V[]>, key: K, value: V): void {
@@ -123,12 +145,13 @@ export class TrendRepository {
   }
 
   /**
-   * Weigh-ins in each window, and the trend before it computed in SQL from every earlier weigh-in
-   * in closed form: with T₁ = W₁ and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet),
-   * Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ. So a year of history is summed in the database instead
-   * of shipped row by row, and the smoothing goes on in memory from Tₙ exactly as if it had started
-   * at the first weigh-in. The exponent is capped at 5000 (0.9⁵⁰⁰⁰ ≈ 1e-229) so power() never
-   * underflows; terms that small change nothing.
+   * Weigh-ins in each window, and the trend before it computed in SQL in closed form: with T₁ = W₁
+   * and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet), Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ.
+   * A weigh-in k places before the last weighs (1−α)ᵏ, so only the last BEFORE_TREND_WEIGH_INS
+   * earlier weigh-ins are read per athlete through the (athlete_id, local_date) index (at most that
+   * many rows sorted, in memory; never the rest of the history); what is left out weighs at most 0.9⁴⁰⁰ ≈ 5·10⁻¹⁹ of
+   * the trend, below double precision, so the smoothing goes on in memory from Tₙ exactly as if it
+   * had started at the first weigh-in. With fewer earlier weigh-ins the oldest one read is W₁.
    */
   private async weighIns(
     windows: readonly HistoryWindow[],
@@ -142,26 +165,26 @@ export class TrendRepository {
       updated_at: Date;
     };
     const rows = await this.manager.query<Row[]>(
-      `WITH p AS (SELECT * FROM ${WINDOWS}),
-       earlier AS (
-         SELECT w.athlete_id, w.local_date, w.weight_kg, w.updated_at,
-                row_number() OVER (PARTITION BY w.athlete_id ORDER BY w.local_date) AS i,
-                count(*) OVER (PARTITION BY w.athlete_id) AS n
-           FROM weigh_ins w JOIN p ON p.athlete_id = w.athlete_id
-          WHERE w.local_date < p.from_date
-       )
-       SELECT athlete_id, 'before' AS kind, max(local_date)::text AS date,
-              sum(weight_kg * CASE WHEN i = 1 THEN power(1 - $4::float8, LEAST(n - 1, 5000))
-                                   ELSE $4::float8 * power(1 - $4::float8, LEAST(n - i, 5000)) END) AS trend_kg,
-              (array_agg(weight_kg ORDER BY local_date DESC))[1] AS kg,
-              (array_agg(updated_at ORDER BY local_date DESC))[1] AS updated_at
-         FROM earlier GROUP BY athlete_id
+      `SELECT p.athlete_id, 'before' AS kind, b.date, b.trend_kg, b.kg, b.updated_at
+         FROM ${WINDOWS}
+         CROSS JOIN LATERAL (
+           SELECT max(e.local_date)::text AS date,
+                  sum(e.weight_kg * CASE WHEN e.k = e.n - 1 AND e.n < $7 THEN power(1 - $6::float8, e.k)
+                                         ELSE $6::float8 * power(1 - $6::float8, e.k) END) AS trend_kg,
+                  (array_agg(e.weight_kg ORDER BY e.k))[1] AS kg,
+                  (array_agg(e.updated_at ORDER BY e.k))[1] AS updated_at
+             FROM (SELECT l.local_date, l.weight_kg, l.updated_at,
+                          row_number() OVER (ORDER BY l.local_date DESC) - 1 AS k,
+                          count(*) OVER () AS n
+                     FROM (SELECT w.local_date, w.weight_kg, w.updated_at FROM weigh_ins w
+                            WHERE w.athlete_id = p.athlete_id AND w.local_date < p.from_date
+                            ORDER BY w.local_date DESC LIMIT $7) l) e
+           HAVING count(*) > 0) b
        UNION ALL
        SELECT w.athlete_id, 'point', w.local_date::text, NULL, w.weight_kg, w.updated_at
-         FROM weigh_ins w JOIN p ON p.athlete_id = w.athlete_id
-        WHERE w.local_date BETWEEN p.from_date AND p.to_date
+         FROM weigh_ins w ${inWindows('w')}
        ORDER BY 1, 3`,
-      [...params(windows), TREND_ALPHA],
+      [...boundedParams(windows), TREND_ALPHA, BEFORE_TREND_WEIGH_INS],
     );
     const out = new Map<string, Pick<AthleteHistory, 'before' | 'weighIns'>>();
     for (const r of rows) {
@@ -190,10 +213,9 @@ export class TrendRepository {
       `SELECT m.athlete_id, m.local_date::text AS date, sum(m.energy_kcal) AS energy_kcal,
               sum(m.protein_g) AS protein_g, sum(m.carbohydrate_g) AS carbohydrate_g, sum(m.fat_g) AS fat_g,
               sum(m.sodium_mg) AS sodium_mg
-         FROM meal_entries m JOIN ${WINDOWS} ON p.athlete_id = m.athlete_id
-        WHERE m.local_date BETWEEN p.from_date AND p.to_date
+         FROM meal_entries m ${inWindows('m')}
         GROUP BY m.athlete_id, m.local_date`,
-      params(windows),
+      boundedParams(windows),
     );
     const out = new Map<string, Map<string, MealTotals>>();
     for (const r of rows) {
@@ -215,10 +237,9 @@ export class TrendRepository {
       { athlete_id: string; date: string; time: string; volume_ml: number }[]
     >(
       `SELECT f.athlete_id, f.local_date::text AS date, f.local_time AS time, f.volume_ml
-         FROM fluid_entries f JOIN ${WINDOWS} ON p.athlete_id = f.athlete_id
-        WHERE f.local_date BETWEEN p.from_date AND p.to_date
+         FROM fluid_entries f ${inWindows('f')}
         ORDER BY f.athlete_id, f.local_date, f.local_time`,
-      params(windows),
+      boundedParams(windows),
     );
     const out = new Map<string, FluidRow[]>();
     for (const r of rows) push(out, r.athlete_id, { date: r.date, time: r.time, volumeMl: r.volume_ml });
@@ -232,9 +253,8 @@ export class TrendRepository {
       { athlete_id: string; date: string; steps: number | null; cardio_minutes: number | null }[]
     >(
       `SELECT e.athlete_id, e.local_date::text AS date, e.steps, e.cardio_minutes
-         FROM evening_logs e JOIN ${WINDOWS} ON p.athlete_id = e.athlete_id
-        WHERE e.local_date BETWEEN p.from_date AND p.to_date`,
-      params(windows),
+         FROM evening_logs e ${inWindows('e')}`,
+      boundedParams(windows),
     );
     const out = new Map<string, Map<string, EveningFigures>>();
     for (const r of rows) {
@@ -259,10 +279,9 @@ export class TrendRepository {
     >(
       `SELECT s.athlete_id, s.id, s.local_date::text AS date, s.local_time AS time, s.symptoms, s.urgent,
               s.created_at
-         FROM symptom_reports s JOIN ${WINDOWS} ON p.athlete_id = s.athlete_id
-        WHERE s.local_date BETWEEN p.from_date AND p.to_date
+         FROM symptom_reports s ${inWindows('s')}
         ORDER BY s.athlete_id, s.local_date, s.local_time`,
-      params(windows),
+      boundedParams(windows),
     );
     const out = new Map<string, SymptomRow[]>();
     for (const r of rows) {
@@ -329,10 +348,9 @@ export class TrendRepository {
       }[]
     >(
       `SELECT f.athlete_id, f.id, f.local_date::text AS date, f.kind, f.message, f.symptom_report_id, f.created_at
-         FROM athlete_flags f JOIN ${WINDOWS} ON p.athlete_id = f.athlete_id
-        WHERE f.local_date BETWEEN p.from_date AND p.to_date
+         FROM athlete_flags f ${inWindows('f')}
         ORDER BY f.athlete_id, f.created_at`,
-      params(windows),
+      boundedParams(windows),
     );
     for (const r of rows) {
       push(out, r.athlete_id, {

@@ -1,6 +1,7 @@
-import { inReaderUnits, trendQuery, uuid } from '@driftmark/shared';
+import { inReaderUnits, trendDaysToColumns, trendQuery, uuid, type TrendResponse } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
+import { sendConditionalJson } from '../lib/conditional-json.js';
 import { readerOf } from '../lib/reader.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { dated, validate } from '../middleware/validate.js';
@@ -24,8 +25,10 @@ export function trendsRouter(): Router {
       // Flag texts are written in kg; each reader reads their own units.
       const { units } = readerOf(requireAuth(req).user, athlete);
       const flags = view.flags.map((f) => ({ ...f, message: inReaderUnits(f.message, units) }));
-      res.json({
-        data: { ...view, flags },
+      // Days go as columns (trendResponse); an unchanged range answers 304 to the client holding it.
+      const data: TrendResponse = { ...view, days: trendDaysToColumns(view.days), flags };
+      sendConditionalJson(req, res, {
+        data,
         abilities: { annotate: canOnAthlete(actor, 'annotate', target) },
       });
     },

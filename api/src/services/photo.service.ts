@@ -1,9 +1,8 @@
-import { readFile } from 'node:fs/promises';
 import { photoUploadFields } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import {
   ImageRejectedError,
-  processPhoto,
+  processPhotoFile,
   type ImageRejection,
   type ProcessedPhoto,
 } from '../adapters/images.js';
@@ -118,7 +117,7 @@ export class PhotoService {
     const processed: ProcessedPhoto[] = [];
     for (const [index, file] of files.entries()) {
       try {
-        processed.push(await processPhoto(await readFile(file.path)));
+        processed.push(await processPhotoFile(file.path));
       } catch (error) {
         if (!(error instanceof ImageRejectedError)) throw error;
         const message = `${displayName(file.originalName, index)} ${error.message}`;

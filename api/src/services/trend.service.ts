@@ -4,7 +4,7 @@ import { validationFailed } from '../errors.js';
 import {
   flagsFor,
   maintenanceEstimate,
-  mean7,
+  mean7Series,
   projectTo,
   rate14,
   rateGuidance,
@@ -14,7 +14,7 @@ import {
 } from '../lib/analysis.js';
 import { dayActuals } from '../lib/day-actuals.js';
 import { dayDrift } from '../lib/day-drift.js';
-import { plannedDay } from '../lib/day-plan.js';
+import { dayPlanner } from '../lib/day-plan.js';
 import { daysBetween, shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
 import { weekSpanInRange } from '../lib/weekly-dates.js';
@@ -67,27 +67,30 @@ function fluidsByDate(fluids: readonly FluidRow[]): Map<string, FluidRow[]> {
 export function trendDays(h: AthleteHistory, from: string, to: string, today: string): TrendDay[] {
   const weights = new Map(h.weighIns.map((w) => [w.date, w.kg]));
   const trend = trendByDate(h);
-  const points = rawPoints(h);
   const fluids = fluidsByDate(h.fluids);
+  const planFor = dayPlanner(h.versions);
+  const dates: string[] = [];
+  for (let date = from; date <= to; date = shiftDate(date, 1)) dates.push(date);
+  const means = mean7Series(rawPoints(h), dates);
   // The trend on `from`: the last one at or before it.
   let carried: number | null = h.before?.trendKg ?? null;
   for (const w of h.weighIns) if (w.date < from) carried = trend.get(w.date) ?? carried;
 
   const days: TrendDay[] = [];
-  for (let date = from; date <= to; date = shiftDate(date, 1)) {
+  for (const [i, date] of dates.entries()) {
     carried = trend.get(date) ?? carried;
     const meals = h.meals.get(date) ?? null;
     const dayFluids = fluids.get(date) ?? [];
     const fluidMl = dayFluids.length > 0 ? dayFluids.reduce((s, f) => s + f.volumeMl, 0) : null;
     const evening = h.evenings.get(date) ?? null;
     const actuals = dayActuals(meals, fluidMl, evening);
-    const plan = plannedDay(h.versions, date);
+    const plan = planFor(date);
     const { drift, breach } = dayDrift({ plan, actuals, fluids: dayFluids, date, today });
     days.push({
       date,
       weightKg: weights.get(date) ?? null,
       trendKg: carried,
-      mean7Kg: mean7(points, date),
+      mean7Kg: means[i] ?? null,
       actuals,
       targets: plan
         ? {

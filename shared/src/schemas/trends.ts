@@ -287,6 +287,189 @@ export const trendView = z.object({
 });
 export type TrendView = z.infer<typeof trendView>;
 
+// The trend as sent: its days as columns ------------------------------------------------------
+
+const column = <T extends z.ZodType>(item: T) => z.array(item);
+const numbers = column(z.number().nullable());
+
+/** One metric's drift entries over the range, a column per field; null on days without an entry. */
+export const driftColumns = z.object({
+  target: numbers,
+  actual: numbers,
+  diff: numbers,
+  relative: numbers,
+  tolerance: numbers,
+  kind: column(z.enum(TARGET_KINDS).nullable()),
+  onPlanMin: numbers,
+  onPlanMax: numbers,
+  /** Null: no drift entry for the metric that day (no target). */
+  state: column(z.enum(DRIFT_STATES).nullable()),
+});
+export type DriftColumns = z.infer<typeof driftColumns>;
+
+/**
+ * The trend's days as columns (index i is the range's i-th day): each field name is sent once
+ * instead of once per day, which is most of a 3-year answer's size. trendDaysFromColumns gives back
+ * exactly the TrendDay rows.
+ */
+export const trendDayColumns = z.object({
+  date: column(z.string()),
+  weightKg: numbers,
+  trendKg: numbers,
+  mean7Kg: numbers,
+  actuals: z.object({
+    energyKcal: numbers,
+    proteinG: numbers,
+    carbohydrateG: numbers,
+    fatG: numbers,
+    fluidMl: numbers,
+    sodiumMg: numbers,
+    steps: numbers,
+    cardioMinutes: numbers,
+  }),
+  /** The day's targets; `versionNumber` null: no plan that day (targets null). */
+  targets: z.object({
+    energyKcal: numbers,
+    proteinG: numbers,
+    carbohydrateG: numbers,
+    fatG: numbers,
+    waterMl: numbers,
+    sodiumMg: numbers,
+    steps: numbers,
+    cardioMinutes: numbers,
+    fluidCutoff: column(z.object({ time: z.string(), allowanceMl: z.number() }).nullable()),
+    versionNumber: column(z.number().int().nullable()),
+  }),
+  /** Per metric with at least one entry in the range. */
+  drift: z.object(
+    Object.fromEntries(DRIFT_METRICS.map((m) => [m, driftColumns.optional()])) as Record<
+      DriftMetric,
+      z.ZodOptional<typeof driftColumns>
+    >,
+  ),
+  breach: column(cutoffBreach.nullable()),
+  countdown: column(z.object({ offset: z.number().int(), dayLabel: z.string() }).nullable()),
+});
+export type TrendDayColumns = z.infer<typeof trendDayColumns>;
+
+/** GET /api/athletes/:athleteId/trend answers this: the trend view with its days as columns. */
+export const trendResponse = trendView.extend({ days: trendDayColumns });
+export type TrendResponse = z.infer<typeof trendResponse>;
+
+const ACTUAL_FIELDS = [
+  'energyKcal',
+  'proteinG',
+  'carbohydrateG',
+  'fatG',
+  'fluidMl',
+  'sodiumMg',
+  'steps',
+  'cardioMinutes',
+] as const;
+const TARGET_FIELDS = [
+  'energyKcal',
+  'proteinG',
+  'carbohydrateG',
+  'fatG',
+  'waterMl',
+  'sodiumMg',
+  'steps',
+  'cardioMinutes',
+] as const;
+
+/** TrendDay rows → columns (the server's side). */
+export function trendDaysToColumns(days: readonly TrendDay[]): TrendDayColumns {
+  const pick = <T>(get: (d: TrendDay) => T): T[] => days.map(get);
+  const drift: TrendDayColumns['drift'] = {};
+  for (const metric of DRIFT_METRICS) {
+    const entries = days.map((d) => d.drift.find((e) => e.metric === metric) ?? null);
+    if (entries.every((e) => e === null)) continue;
+    const field = <T>(get: (e: DriftEntry) => T): (T | null)[] => entries.map((e) => (e ? get(e) : null));
+    drift[metric] = {
+      target: field((e) => e.target),
+      actual: field((e) => e.actual),
+      diff: field((e) => e.diff),
+      relative: field((e) => e.relative),
+      tolerance: field((e) => e.tolerance),
+      kind: field((e) => e.kind),
+      onPlanMin: field((e) => e.onPlan.min),
+      onPlanMax: field((e) => e.onPlan.max),
+      state: field((e) => e.state),
+    };
+  }
+  return {
+    date: pick((d) => d.date),
+    weightKg: pick((d) => d.weightKg),
+    trendKg: pick((d) => d.trendKg),
+    mean7Kg: pick((d) => d.mean7Kg),
+    actuals: Object.fromEntries(
+      ACTUAL_FIELDS.map((f) => [f, pick((d) => d.actuals[f])]),
+    ) as TrendDayColumns['actuals'],
+    targets: {
+      ...(Object.fromEntries(TARGET_FIELDS.map((f) => [f, pick((d) => d.targets?.[f] ?? null)])) as Omit<
+        TrendDayColumns['targets'],
+        'fluidCutoff' | 'versionNumber'
+      >),
+      fluidCutoff: pick((d) => d.targets?.fluidCutoff ?? null),
+      versionNumber: pick((d) => d.targets?.versionNumber ?? null),
+    },
+    drift,
+    breach: pick((d) => d.breach),
+    countdown: pick((d) => d.countdown),
+  };
+}
+
+/** Columns → the TrendDay rows they were made from (the web's side), drift in DRIFT_METRICS order. */
+export function trendDaysFromColumns(c: TrendDayColumns): TrendDay[] {
+  return c.date.map((date, i) => {
+    const at = <T>(values: readonly T[]): T => values[i] as T;
+    const versionNumber = at(c.targets.versionNumber);
+    const drift: DriftEntry[] = [];
+    for (const metric of DRIFT_METRICS) {
+      const m = c.drift[metric];
+      const state = m ? at(m.state) : null;
+      if (!m || state === null) continue;
+      drift.push({
+        metric,
+        target: at(m.target) as number,
+        actual: at(m.actual),
+        diff: at(m.diff),
+        relative: at(m.relative),
+        tolerance: at(m.tolerance) as number,
+        kind: at(m.kind) as TargetKind,
+        onPlan: { min: at(m.onPlanMin), max: at(m.onPlanMax) },
+        state,
+      });
+    }
+    return {
+      date,
+      weightKg: at(c.weightKg),
+      trendKg: at(c.trendKg),
+      mean7Kg: at(c.mean7Kg),
+      actuals: Object.fromEntries(ACTUAL_FIELDS.map((f) => [f, at(c.actuals[f])])) as TrendDay['actuals'],
+      targets:
+        versionNumber === null
+          ? null
+          : {
+              ...(Object.fromEntries(TARGET_FIELDS.map((f) => [f, at(c.targets[f])])) as Omit<
+                NonNullable<TrendDay['targets']>,
+                'fluidCutoff' | 'versionNumber'
+              >),
+              fluidCutoff: at(c.targets.fluidCutoff),
+              versionNumber,
+            },
+      drift,
+      breach: at(c.breach),
+      countdown: at(c.countdown),
+    };
+  });
+}
+
+/** The trend answer read back as a TrendView (rows per day). */
+export function trendViewFromResponse(response: TrendResponse): TrendView {
+  return { ...response, days: trendDaysFromColumns(response.days) };
+}
+
 // Roster and review queue ----------------------------------------------------------------------
 
 export const PHASES = ['countdown', 'dieting', 'maintaining', 'regaining', 'no_plan'] as const;

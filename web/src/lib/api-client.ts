@@ -157,10 +157,13 @@ async function readJson(response: Response): Promise<unknown> {
 
 /**
  * Calls the Driftmark API with the session cookie, sends and reads JSON and raises ApiError for
- * anything but a 2xx. Returns the parsed body.
+ * anything but a 2xx (or a 304 when `ifNoneMatch` was sent). Returns the response and its parsed body.
  */
-async function requestRaw(path: string, options: RawOptions = {}): Promise<unknown> {
-  const { method = 'GET', body, signal, redirectOn401 = shouldRedirectOn401(path) } = options;
+async function send(
+  path: string,
+  options: RawOptions & { ifNoneMatch?: string },
+): Promise<{ response: Response; parsed: unknown }> {
+  const { method = 'GET', body, signal, redirectOn401 = shouldRedirectOn401(path), ifNoneMatch } = options;
   let response: Response;
   try {
     response = await fetch(path, {
@@ -169,6 +172,7 @@ async function requestRaw(path: string, options: RawOptions = {}): Promise<unkno
       headers: {
         Accept: 'application/json',
         ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+        ...(ifNoneMatch === undefined ? {} : { 'If-None-Match': ifNoneMatch }),
       },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal,
@@ -183,7 +187,7 @@ async function requestRaw(path: string, options: RawOptions = {}): Promise<unkno
   }
 
   const parsed = await readJson(response);
-  if (!response.ok) {
+  if (!response.ok && !(response.status === 304 && ifNoneMatch !== undefined)) {
     const error = parseErrorBody(response.status, parsed);
     // A session that ended says so once (the cookie goes with that answer): remember why for sign-in.
     const reason = response.status === 401 ? noteSessionEnd(error.code) : null;
@@ -192,8 +196,16 @@ async function requestRaw(path: string, options: RawOptions = {}): Promise<unkno
     }
     throw error;
   }
-  return parsed;
+  return { response, parsed };
 }
+
+async function requestRaw(path: string, options: RawOptions = {}): Promise<unknown> {
+  return (await send(path, options)).parsed;
+}
+
+/** What a conditional GET answers: the same as before (304), or new data with its tag. */
+export type ConditionalResult<T> =
+  { notModified: true } | { notModified: false; data: T; etag: string | null };
 
 /** An API call whose `data` is all the caller needs. */
 export async function apiRequest<T>(path: string, options: RequestOptions = {}): Promise<T> {
@@ -205,6 +217,16 @@ export const api = {
   /** GET keeping the `abilities` map beside `data`. */
   getWithAbilities: async <T>(path: string, signal?: AbortSignal) =>
     unwrapWithAbilities<T>(await requestRaw(path, { signal })),
+  /** GET sending `etag` (when known) as If-None-Match: a 304 means the data held is still current. */
+  getConditional: async <T>(
+    path: string,
+    etag: string | undefined,
+    signal?: AbortSignal,
+  ): Promise<ConditionalResult<T>> => {
+    const { response, parsed } = await send(path, { signal, ifNoneMatch: etag });
+    if (response.status === 304) return { notModified: true };
+    return { notModified: false, data: unwrapData<T>(parsed), etag: response.headers.get('ETag') };
+  },
   post: <T>(path: string, body?: unknown) => apiRequest<T>(path, { method: 'POST', body }),
   /** POST keeping the `meta` map beside `data`. */
   postWithMeta: async <T>(path: string, body?: unknown) =>
