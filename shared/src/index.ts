@@ -34,3 +34,5 @@ export * from './calendar.js';
 export * from './rules/day-verdicts.js';
 export * from './reader.js';
 export * from './rules/rate-verdict.js';
+export * from './body-composition.js';
+export * from './schemas/body-composition.js';

@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import type { Config } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
+import { BodyMeasurement } from '../entities/body-measurement.entity.js';
 import { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import { AthleteReview } from '../entities/athlete-review.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
@@ -67,6 +68,8 @@ export const ENTITIES = [
   // Weekly check-ins and e-mail notifications
   WeeklyCheckIn,
   NotificationSend,
+  // Body composition
+  BodyMeasurement,
 ];
 
 export function createDataSource(

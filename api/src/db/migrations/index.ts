@@ -7,6 +7,7 @@ import { AddMarksAndReviews1796175671267 } from './1796175671267-AddMarksAndRevi
 import { AddWeeklyCheckInsAndNotifications1796178387090 } from './1796178387090-AddWeeklyCheckInsAndNotifications.js';
 import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitCounters.js';
 import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
+import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -18,4 +19,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddWeeklyCheckInsAndNotifications1796178387090,
   AddRateLimitCounters1796190000000,
   OutboxSendingLease1796190000001,
+  AddBodyMeasurements1796190140000,
 ];
