@@ -14,6 +14,7 @@ import { requestLogging } from './middleware/request-logging.js';
 import { securityHeaders } from './middleware/security.js';
 import { webAppRouter } from './middleware/web-app.js';
 import { athletesRouter } from './routes/athletes.routes.js';
+import { bodyCompositionRouter } from './routes/body-composition.routes.js';
 import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
@@ -98,6 +99,8 @@ export function createApp(deps: {
   api.use('/athletes', plansRouter());
   // The trend, drift and flags over a range (/athletes/:athleteId/trend).
   api.use('/athletes', trendsRouter());
+  // Body-composition measurements and estimates (/athletes/:athleteId/body-composition, …/body-measurements).
+  api.use('/athletes', bodyCompositionRouter());
   // The days as CSV and the end of the coaching (/athletes/:athleteId/days.csv, …/end-coaching).
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());

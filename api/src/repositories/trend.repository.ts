@@ -127,10 +127,10 @@ export class TrendRepository {
    * in closed form: with T₁ = W₁ and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet),
    * Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ. So a year of history is summed in the database instead
    * of shipped row by row, and the smoothing goes on in memory from Tₙ exactly as if it had started
-   * at the first weigh-in. The exponent is capped at 5000 (0.9⁵⁰⁰⁰ ≈ 1e-229) so power() never
+   * at the first weigh-in (one statement; public for readers that need only the trend). The exponent is capped at 5000 (0.9⁵⁰⁰⁰ ≈ 1e-229) so power() never
    * underflows; terms that small change nothing.
    */
-  private async weighIns(
+  async weighIns(
     windows: readonly HistoryWindow[],
   ): Promise<Map<string, Pick<AthleteHistory, 'before' | 'weighIns'>>> {
     type Row = {
