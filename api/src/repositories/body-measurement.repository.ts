@@ -17,7 +17,10 @@ export type NewBodyMeasurement = Pick<
   | 'heightCm'
   | 'measuredBy'
   | 'enteredById'
->;
+> & {
+  /** Default: now (the database's). The seed passes the morning of the measurement's day. */
+  createdAt?: Date;
+};
 
 /** An athlete's body-composition measurements. */
 export class BodyMeasurementRepository {
@@ -40,7 +43,8 @@ export class BodyMeasurementRepository {
   }
 
   async insert(row: NewBodyMeasurement): Promise<string> {
-    const saved = await this.manager.save(BodyMeasurement, this.manager.create(BodyMeasurement, row));
+    const values = row.createdAt ? { ...row, updatedAt: row.createdAt } : row;
+    const saved = await this.manager.save(BodyMeasurement, this.manager.create(BodyMeasurement, values));
     return saved.id;
   }
 

@@ -1,5 +1,6 @@
 import type { SkinfoldSite } from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
+import { localInstant } from '../lib/local-time.js';
 import { BodyMeasurementRepository } from '../repositories/body-measurement.repository.js';
 import { addDays, localDate } from './calendar.js';
 import { DEMO_ATHLETES, type DemoSituation } from './demo-team.js';
@@ -40,9 +41,12 @@ export async function writeDemoBodyMeasurements(
     if (!athleteId || !list) continue;
     const seedDay = localDate(now, def.timeZone);
     for (const m of list) {
+      const localDate = addDays(seedDay, -m.daysBeforeSeed);
       await repo.insert({
         athleteId,
-        localDate: addDays(seedDay, -m.daysBeforeSeed),
+        localDate,
+        // Entered that morning, after the weigh-in, on the athlete's clock.
+        createdAt: localInstant(localDate, '08:30', def.timeZone),
         method: 'skinfold_3',
         densityEquation: 'siri',
         skinfoldsMm: m.skinfoldsMm,

@@ -12,6 +12,7 @@ import { Button } from '@/components/ui/button';
 import { controlClasses, FieldErrorText, useFieldError, useFieldIds } from '@/components/ui/field';
 import { CautionIcon, ErrorIcon, PlusIcon, TrashIcon } from '@/components/ui/icons';
 import { cn } from '@/lib/cn';
+import { formatDate } from '@/lib/format';
 import {
   emptyDayTargetsFormValues,
   liveDayTargets,
@@ -61,6 +62,8 @@ const MACRO_KINDS = [
   { value: 'pct', label: '% of energy' },
   { value: 'g_per_kg', label: 'g per kg' },
 ] as const;
+/** Protein may also be set per kg of lean mass (Helms 2014: 2.3–3.1 g/kg lean mass); the server refuses it on the others. */
+const PROTEIN_KINDS = [...MACRO_KINDS, { value: 'g_per_kg_lean', label: 'g per kg lean mass' }] as const;
 const WATER_KINDS = [
   { value: 'none', label: 'No target' },
   { value: 'ml', label: 'mL' },
@@ -73,6 +76,7 @@ const SUFFIX: Record<string, string> = {
   g: 'g',
   pct: '%',
   g_per_kg: 'g/kg',
+  g_per_kg_lean: 'g/kg lean',
   ml: 'mL',
   usual_plus: '± mL',
 };
@@ -158,6 +162,8 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
     const p = resolved[`${metric}Pct`];
     if (kind === 'g') return toTypedText(g, 0);
     if (kind === 'pct') return toTypedText(p, 0);
+    if (kind === 'g_per_kg_lean')
+      return g !== null && base.leanMassKg ? toTypedText(g / base.leanMassKg, 2) : '';
     return g !== null && base.weightKg ? toTypedText(g / base.weightKg, 2) : '';
   }
 
@@ -209,7 +215,7 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
         <MetricRow
           key={m}
           label={MACRO_LABEL[m]}
-          control={kindSelect(m, MACRO_LABEL[m], MACRO_KINDS)}
+          control={kindSelect(m, MACRO_LABEL[m], m === 'protein' ? PROTEIN_KINDS : MACRO_KINDS)}
           input={
             values[m].kind === 'none' ? null : (
               <NumberBox
@@ -398,8 +404,16 @@ function macroLive(
   if (kind !== 'g' && g !== null) parts.push(fig.grams(g));
   if (kind !== 'pct' && p !== null) parts.push(fig.pct(p));
   if (kind !== 'g_per_kg' && perKg !== null) parts.push(fig.perKg(perKg));
+  if (kind === 'g_per_kg_lean' && g !== null && b.leanMassKg != null) {
+    // Where the lean mass comes from, so the coach sees which measurement the grams follow.
+    parts.push(
+      `lean mass ${fig.kg(b.leanMassKg)}${b.leanMassDate ? ` (${formatDate(b.leanMassDate)})` : ''}`,
+    );
+  }
   if (parts.length) return `= ${parts.join(' · ')}`;
   if (kind === 'g_per_kg') return hasBaseline ? 'No recent body weight' : "× the athlete's weight";
+  if (kind === 'g_per_kg_lean')
+    return hasBaseline ? 'No lean mass yet: enter skinfolds on the Body tab' : "× the athlete's lean mass";
   if (kind === 'pct') return 'Needs an energy target';
   return null;
 }
