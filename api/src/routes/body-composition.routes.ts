@@ -34,7 +34,8 @@ export function bodyCompositionRouter(): Router {
   router.post(
     '/:athleteId/body-measurements',
     authenticate(),
-    validate({ params: athleteParams, body: dated(createBodyMeasurementRequest, { date: 'past' }) }),
+    // The window here; "not after today" is the athlete's own today, which the service checks.
+    validate({ params: athleteParams, body: dated(createBodyMeasurementRequest, { date: 'any' }) }),
     async (req, res) => {
       const { actor, athlete } = await loadAthlete(req, 'measure');
       const measurement = await new BodyCompositionService(req.ctx).create(actor, athlete, req.body);
