@@ -163,7 +163,7 @@ describe('protein per kg of lean mass in the plan', () => {
     expect(day.status).toBe(200);
     const targets = day.body.data.targets.targets;
     expect(targets.proteinG).toBeCloseTo(151.737, 2);
-    expect(targets.basis.protein).toBe(`2.5 g/kg lean mass × 60.7 kg lean mass, measured ${DAY4}`);
+    expect(targets.basis.protein).toBe(`2.5 g/kg × 60.7 kg lean mass, measured ${DAY4}`);
   });
 });
 

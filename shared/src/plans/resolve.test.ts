@@ -147,7 +147,7 @@ describe('resolveTargets', () => {
     const high = resolveTargets(day({ protein: { kind: 'g_per_kg_lean', perKg: 3.1 } }), lean);
     expect(low.proteinG).toBeCloseTo(156.4, 6);
     expect(high.proteinG).toBeCloseTo(210.8, 6);
-    expect(low.basis.protein).toBe('2.3 g/kg lean mass × 68 kg lean mass, measured 2026-11-20');
+    expect(low.basis.protein).toBe('2.3 g/kg × 68 kg lean mass, measured 2026-11-20');
     // Without a measurement it stays unresolved (validatePlanContent reports it).
     expect(
       resolveTargets(day({ protein: { kind: 'g_per_kg_lean', perKg: 2.5 } }), baseline).proteinG,

@@ -96,8 +96,7 @@ export function resolveTargets(
       if (baseline.leanMassKg != null) {
         grams[macro] = t.perKg * baseline.leanMassKg;
         const when = baseline.leanMassDate ? `, measured ${baseline.leanMassDate}` : '';
-        basis[macro] =
-          `${fmt(t.perKg, 2)} g/kg lean mass × ${fmt(baseline.leanMassKg, 1)} kg lean mass${when}`;
+        basis[macro] = `${fmt(t.perKg, 2)} g/kg × ${fmt(baseline.leanMassKg, 1)} kg lean mass${when}`;
       }
     } else if (baseline.weightKg != null) {
       grams[macro] = t.perKg * baseline.weightKg;

@@ -12,7 +12,6 @@ import { Button } from '@/components/ui/button';
 import { controlClasses, FieldErrorText, useFieldError, useFieldIds } from '@/components/ui/field';
 import { CautionIcon, ErrorIcon, PlusIcon, TrashIcon } from '@/components/ui/icons';
 import { cn } from '@/lib/cn';
-import { formatDate } from '@/lib/format';
 import {
   emptyDayTargetsFormValues,
   liveDayTargets,
@@ -76,7 +75,8 @@ const SUFFIX: Record<string, string> = {
   g: 'g',
   pct: '%',
   g_per_kg: 'g/kg',
-  g_per_kg_lean: 'g/kg lean',
+  // The box is narrow: the unit says g/kg, the box's label says of what.
+  g_per_kg_lean: 'g/kg',
   ml: 'mL',
   usual_plus: '± mL',
 };
@@ -220,7 +220,7 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
             values[m].kind === 'none' ? null : (
               <NumberBox
                 name={`${name}.${m}.value`}
-                label={`${MACRO_LABEL[m]}, ${SUFFIX[values[m].kind]}`}
+                label={`${MACRO_LABEL[m]}, ${values[m].kind === 'g_per_kg_lean' ? 'g/kg lean mass' : SUFFIX[values[m].kind]}`}
                 suffix={SUFFIX[values[m].kind]}
               />
             )
@@ -403,13 +403,10 @@ function macroLive(
   const parts: string[] = [];
   if (kind !== 'g' && g !== null) parts.push(fig.grams(g));
   if (kind !== 'pct' && p !== null) parts.push(fig.pct(p));
+  // Which lean mass the grams follow (its date is in the version's basis).
+  if (kind === 'g_per_kg_lean' && g !== null && b.leanMassKg != null)
+    parts.push(`lean ${fig.kg(b.leanMassKg)}`);
   if (kind !== 'g_per_kg' && perKg !== null) parts.push(fig.perKg(perKg));
-  if (kind === 'g_per_kg_lean' && g !== null && b.leanMassKg != null) {
-    // Where the lean mass comes from, so the coach sees which measurement the grams follow.
-    parts.push(
-      `lean mass ${fig.kg(b.leanMassKg)}${b.leanMassDate ? ` (${formatDate(b.leanMassDate)})` : ''}`,
-    );
-  }
   if (parts.length) return `= ${parts.join(' · ')}`;
   if (kind === 'g_per_kg') return hasBaseline ? 'No recent body weight' : "× the athlete's weight";
   if (kind === 'g_per_kg_lean')

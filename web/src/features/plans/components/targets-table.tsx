@@ -118,7 +118,9 @@ export function TargetsTable({
                 <td className={num}>
                   {r ? macro(r.proteinG, r.proteinPct) : <Dash />}
                   {r?.basis.protein ? (
-                    <span className="block text-xs text-ink-faint">{r.basis.protein}</span>
+                    <span className="block min-w-40 text-xs whitespace-normal text-ink-faint">
+                      {r.basis.protein}
+                    </span>
                   ) : null}
                 </td>
                 <td className={num}>{r ? macro(r.carbohydrateG, r.carbohydratePct) : <Dash />}</td>
