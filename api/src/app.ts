@@ -16,6 +16,7 @@ import { securityHeaders } from './middleware/security.js';
 import { webAppRouter } from './middleware/web-app.js';
 import { athletesRouter } from './routes/athletes.routes.js';
 import { cutSettingsRouter, cutsRouter } from './routes/cuts.routes.js';
+import { bodyCompositionRouter } from './routes/body-composition.routes.js';
 import { authRouter } from './routes/auth.routes.js';
 import { checkInsRouter } from './routes/check-ins.routes.js';
 import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js';
@@ -120,6 +121,8 @@ export function createApp(deps: {
   api.use('/athletes', trendsRouter());
   // Making weight: the weigh-in's record and the cut plan (/athletes/:athleteId/cut, …/weigh-in, …/cut-plans).
   api.use('/athletes', cutsRouter());
+  // Body-composition measurements and estimates (/athletes/:athleteId/body-composition, …/body-measurements).
+  api.use('/athletes', bodyCompositionRouter());
   // The days as CSV and the end of the coaching (/athletes/:athleteId/days.csv, …/end-coaching).
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());

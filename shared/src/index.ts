@@ -38,3 +38,5 @@ export * from './reader.js';
 export * from './rules/rate-verdict.js';
 export * from './rules/weight-cut.js';
 export * from './schemas/cuts.js';
+export * from './body-composition.js';
+export * from './schemas/body-composition.js';

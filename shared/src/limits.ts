@@ -88,5 +88,15 @@ export const LIMITS = {
   photoMaxPixels: 50_000_000,
   photoTypes: ['image/jpeg', 'image/png', 'image/webp', 'image/avif'],
   poseName: { min: 1, max: 60 },
+
+  // Body composition (plausibility only, common practice, no source).
+  /** One skinfold, mm (calipers read to about 60–80 mm). */
+  skinfoldMm: { min: 1, max: 90 },
+  /** Neck, waist and hip circumferences, cm. */
+  neckCm: { min: 20, max: 70 },
+  waistCm: { min: 40, max: 200 },
+  hipCm: { min: 50, max: 200 },
+  /** Who took the measurement ("Coach Sam", "self"). */
+  measuredBy: { min: 1, max: 80 },
   posesPerTeam: 40,
 } as const;

@@ -53,6 +53,7 @@ describe('invitation to athlete home', () => {
     await page.getByLabel('Female').check();
     await page.getByLabel('Birth date').fill('1997-08-21');
     await page.getByLabel('Height (cm)').fill('168');
+    await page.getByLabel(/Current weight/).fill('64.8');
     await page.getByLabel(/Usual daily water/).fill('2800');
     await page.getByLabel(/Usual daily energy/).fill('2050');
     await page.getByLabel('Goal').selectOption('lose');

@@ -57,6 +57,7 @@ const intake = {
   sex: 'male',
   birthDate: '1990-01-01',
   heightCm: 180,
+  currentWeightKg: 78,
   usualWaterMl: 3000,
   usualEnergyKcal: 2600,
   goal: 'maintain',

@@ -28,6 +28,7 @@ const intake = (overrides: Record<string, unknown> = {}) => ({
   sex: 'female',
   birthDate: '1996-02-29',
   heightCm: 166,
+  currentWeightKg: 61,
   usualWaterMl: 2800,
   usualEnergyKcal: 2050,
   goal: 'lose',

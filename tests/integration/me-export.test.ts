@@ -100,6 +100,7 @@ describe('GET /api/me/export', () => {
         'marks.json',
         'weekly-check-ins.json',
         'flags.json',
+        'body-composition.json',
         'photos.json',
       ]),
     );

@@ -107,6 +107,9 @@ const ACCESS: Record<string, Cell> = {
   'GET /api/athletes/:athleteId/cut': ATHLETE_ROWS,
   'PUT /api/athletes/:athleteId/weigh-in': STAFF_ON_ATHLETE,
   'POST /api/athletes/:athleteId/cut-plans': STAFF_ON_ATHLETE,
+  'GET /api/athletes/:athleteId/body-composition': ATHLETE_ROWS,
+  'POST /api/athletes/:athleteId/body-measurements': ATHLETE_ROWS,
+  'DELETE /api/athletes/:athleteId/body-measurements/:measurementId': ATHLETE_ROWS,
   'GET /api/athletes/:athleteId/days.csv': ATHLETE_ROWS,
   'POST /api/athletes/:athleteId/end-coaching': STAFF_ON_ATHLETE,
   'GET /api/countdown-templates': TEAM_STAFF,
@@ -150,6 +153,22 @@ interface World {
   };
 }
 
+/** A 7-site skinfold measurement (every site, so it suits either sex). */
+const measurementBody = {
+  date: TODAY,
+  method: 'skinfold_7',
+  skinfoldsMm: {
+    chest: 8,
+    midaxillary: 10,
+    triceps: 12,
+    subscapular: 14,
+    abdomen: 20,
+    suprailiac: 15,
+    thigh: 18,
+  },
+  measuredBy: 'Coach',
+};
+
 let t: TestApp;
 let routes: AppRoute[];
 let w: World;
@@ -177,6 +196,7 @@ beforeAll(async () => {
     .send({ metric: 'weight', fromDate: TODAY, toDate: TODAY, note: 'Access mark' });
   const template = await coachAgent.post('/api/countdown-templates').send(templateBody());
   const version = await coachAgent.post(`${a}/plan/versions`).send(versionBody(TODAY, planContent()));
+  const measurement = await coachAgent.post(`${a}/body-measurements`).send(measurementBody);
   const invitation = await coachAgent
     .post('/api/invitations')
     .send({ email: 'invitee@example.test', name: 'Invitee', role: 'athlete' });
@@ -186,6 +206,7 @@ beforeAll(async () => {
     ids: {
       athleteId: athlete.athlete.id,
       markId: mark.body.data.id,
+      measurementId: measurement.body.data?.id ?? randomUUID(),
       templateId: template.body.data.id,
       versionId: version.body.data?.id ?? version.body.data?.version?.id ?? randomUUID(),
       id: invitation.body.data?.id ?? randomUUID(),
@@ -235,6 +256,7 @@ function bodyFor(key: string): object | undefined {
       sex: 'female',
       birthDate: '1996-04-12',
       heightCm: 165,
+      currentWeightKg: 60,
       usualWaterMl: 3000,
       usualEnergyKcal: 2100,
       goal: 'lose',
@@ -300,6 +322,7 @@ function bodyFor(key: string): object | undefined {
     },
     'POST /api/weekly-check-ins/:checkInId/reply': { body: 'Reply' },
     'PATCH /api/athletes/:athleteId/check-in-day': { weekday: 'mon' },
+    'POST /api/athletes/:athleteId/body-measurements': measurementBody,
     'PUT /api/team/check-in-questions': { questions: [] },
     'PUT /api/me/notifications': { enabled: {}, reminderHour: null },
   };

@@ -34,6 +34,7 @@ import { seedDemo, SeedRefusedError } from '../../api/src/seed/seed-demo.js';
 import { planDemoHistory } from '../../api/src/seed/seed-history.js';
 import { planDemoMarks } from '../../api/src/seed/seed-marks.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
+import { DEMO_BODY_MEASUREMENTS } from '../../api/src/seed/seed-body-composition.js';
 
 let t: TestApp;
 const seededAt = new Date('2026-12-01T11:30:00Z');
@@ -295,6 +296,32 @@ describe('seedDemo', () => {
     const e3 = await agent.get(`/api/athletes/${me.body.data.athleteId}/days/2026-12-02`);
     expect(e3.body.data.cautions.map((c: { code: string }) => c.code)).toEqual(['countdown', 'carb_load']);
     expect(e3.body.data.cautions[1].acknowledgedAt).not.toBeNull();
+  });
+
+  it("gives Hannah's coach her skinfolds placed before the seed day, each with % fat and lean mass", async () => {
+    const def = DEMO_ATHLETES.find((d) => d.key === 'long_diet')!;
+    const coach = await signedIn(t.app, 'coach@driftmark.test', DEMO_PASSWORD);
+    const [athlete] = await t.dataSource.query<{ id: string }[]>(
+      'SELECT a.id FROM athletes a JOIN users u ON u.id = a.user_id WHERE u.email = $1',
+      [def.email],
+    );
+    const res = await coach.get(`/api/athletes/${athlete!.id}/body-composition`);
+    expect(res.status).toBe(200);
+    const today = localDate(seededAt, def.timeZone);
+    const placed = DEMO_BODY_MEASUREMENTS.long_diet!;
+    expect(res.body.data.measurements.map((m: { date: string }) => m.date)).toEqual(
+      placed.map((m) => addDays(today, -m.daysBeforeSeed)),
+    );
+    for (const m of res.body.data.measurements) {
+      expect(m.estimate.equation).toBe('Jackson, Pollock & Ward 3-site, Siri');
+      expect(m.leanMassKg).toBeGreaterThan(0);
+    }
+    // The sums fall over the diet, and so does the estimate.
+    const pcts = res.body.data.measurements.map(
+      (m: { estimate: { fatPercent: number } }) => m.estimate.fatPercent,
+    );
+    expect([...pcts].sort((a, b) => b - a)).toEqual(pcts);
+    expect(res.body.data.latestLeanMass.date).toBe(addDays(today, -1));
   });
 
   it('pins marks on the demo charts: one athlete reply waits for the coach, the countdown athlete has unread marks', async () => {

@@ -2,6 +2,7 @@ import 'reflect-metadata';
 import { DataSource, type Logger as TypeOrmLogger } from 'typeorm';
 import type { Config } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
+import { BodyMeasurement } from '../entities/body-measurement.entity.js';
 import { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import { AthleteReview } from '../entities/athlete-review.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
@@ -72,6 +73,8 @@ export const ENTITIES = [
   // Making weight
   CutPlan,
   CutPlanAcknowledgement,
+  // Body composition
+  BodyMeasurement,
 ];
 
 /** Statements this process has sent through TypeORM, counted only when `countStatements` is on. */

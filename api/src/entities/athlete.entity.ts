@@ -67,6 +67,10 @@ export class Athlete extends BaseRecord {
   @Column({ name: 'height_cm', type: 'double precision', nullable: true })
   heightCm: number | null;
 
+  /** Body weight the athlete gave at intake, kg: the plan's weight until weigh-ins exist. */
+  @Column({ name: 'intake_weight_kg', type: 'double precision', nullable: true })
+  intakeWeightKg: number | null;
+
   @Column({ name: 'usual_water_ml', type: 'double precision', nullable: true })
   usualWaterMl: number | null;
 

@@ -25,6 +25,8 @@ export const ATHLETE_ACTIONS = [
   'completeIntake',
   /** Write the athlete's plan (new versions, countdowns); reading it is `read`. */
   'plan',
+  /** Enter or remove body-composition measurements: the athlete and the staff working on them. */
+  'measure',
 ] as const;
 export type AthleteAction = (typeof ATHLETE_ACTIONS)[number];
 
@@ -48,13 +50,13 @@ export function athleteRelationship(actor: Actor, target: AthleteTarget): Athlet
 }
 
 const RULES: Record<AthleteRelationship, readonly AthleteAction[]> = {
-  self: ['read', 'update', 'log', 'completeIntake'],
+  self: ['read', 'update', 'log', 'completeIntake', 'measure'],
   otherAthlete: [],
-  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan'],
-  assignedCoach: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan'],
+  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan', 'measure'],
+  assignedCoach: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan', 'measure'],
   // A coach or assistant the athlete is shared with works on them (the plan included) but never
   // deletes, re-shares or ends the coaching.
-  sharedStaff: ['read', 'update', 'annotate', 'plan'],
+  sharedStaff: ['read', 'update', 'annotate', 'plan', 'measure'],
   unrelatedStaff: [],
   otherTeam: [],
 };

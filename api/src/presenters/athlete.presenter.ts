@@ -17,6 +17,7 @@ export function presentAthleteProfile(
     sex: a.sex,
     birthDate: a.birthDate,
     heightCm: a.heightCm,
+    intakeWeightKg: a.intakeWeightKg,
     usualWaterMl: a.usualWaterMl,
     usualEnergyKcal: a.usualEnergyKcal,
     goal: a.goal,

@@ -14,6 +14,7 @@ export type AthleteChanges = Partial<
     | 'sex'
     | 'birthDate'
     | 'heightCm'
+    | 'intakeWeightKg'
     | 'usualWaterMl'
     | 'usualEnergyKcal'
     | 'goal'

@@ -148,12 +148,12 @@ export class TrendRepository {
    * Weigh-ins in each window, and the trend before it computed in SQL in closed form: with T₁ = W₁
    * and Tᵢ = Tᵢ₋₁ + α(Wᵢ − Tᵢ₋₁) (Walker, The Hacker's Diet), Tₙ = (1−α)ⁿ⁻¹·W₁ + Σᵢ₌₂ⁿ α(1−α)ⁿ⁻ⁱ·Wᵢ.
    * A weigh-in k places before the last weighs (1−α)ᵏ, so only the last BEFORE_TREND_WEIGH_INS
-   * earlier weigh-ins are read per athlete through the (athlete_id, local_date) index (at most that
+   * earlier weigh-ins are read per athlete through the (athlete_id, local_date) index (public for readers that need only the trend; at most that
    * many rows sorted, in memory; never the rest of the history); what is left out weighs at most 0.9⁴⁰⁰ ≈ 5·10⁻¹⁹ of
    * the trend, below double precision, so the smoothing goes on in memory from Tₙ exactly as if it
    * had started at the first weigh-in. With fewer earlier weigh-ins the oldest one read is W₁.
    */
-  private async weighIns(
+  async weighIns(
     windows: readonly HistoryWindow[],
   ): Promise<Map<string, Pick<AthleteHistory, 'before' | 'weighIns'>>> {
     type Row = {

@@ -33,6 +33,11 @@ export class WeighInRepository {
     );
   }
 
+  /** Whether the athlete has ever weighed in. */
+  existsFor(athleteId: string): Promise<boolean> {
+    return this.manager.existsBy(WeighIn, { athleteId });
+  }
+
   /**
    * Inserts the day's weigh-in or replaces it (one statement, so two at once cannot both insert);
    * returns the stored row.

@@ -43,7 +43,7 @@ export async function loadAthleteById(req: Request, athleteId: string, action: A
     sharedWithUserIds,
   };
   authorizeAthlete(actor, action, target);
-  if (action === 'log' && athlete.status === 'ended') {
+  if ((action === 'log' || action === 'measure') && athlete.status === 'ended') {
     throw forbidden(
       'Your coaching has ended: you can still read and export your history, but not log new days.',
     );

@@ -41,6 +41,7 @@ const DAY_TABLES: readonly { table: string; timed: boolean; uniqueDate: boolean 
   { table: 'evening_logs', timed: false, uniqueDate: true },
   { table: 'athlete_flags', timed: false, uniqueDate: false },
   { table: 'condition_photos', timed: false, uniqueDate: true },
+  { table: 'body_measurements', timed: false, uniqueDate: false },
 ];
 
 /** Every `date` column this moves (`table.column`); the integration test checks none is missing. */

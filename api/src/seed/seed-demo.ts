@@ -32,6 +32,7 @@ import { createRandom } from './random.js';
 import { refreshDemoDates, type RefreshWarn } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoMarks } from './seed-marks.js';
+import { writeDemoBodyMeasurements } from './seed-body-composition.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 import { writeDemoWeekly } from './seed-weekly.js';
 
@@ -164,6 +165,8 @@ export async function seedDemo(
       await writeDemoCheckIns(manager, plans, athleteIds);
       await writeDemoPlans(manager, plans, ids, now);
       await writeDemoMarks(manager, plans, ids, now);
+      const ownerName = DEMO_STAFF.find((s) => s.email === DEMO_OWNER_EMAIL)?.name ?? 'Coach';
+      await writeDemoBodyMeasurements(manager, ids, now, ownerName);
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }
@@ -245,6 +248,8 @@ async function writeDemoTeam(
       coachId: owner.id,
       status: 'active' as const,
       ...resolveDemoAthlete(def, now),
+      // The weight given at intake: the first morning of the generated history.
+      intakeWeightKg: def.history.startWeightKg,
       intakeCompletedAt: intakeAt,
     });
     athleteIds.set(def.key, athlete.id);

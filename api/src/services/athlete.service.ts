@@ -26,6 +26,7 @@ export class AthleteService {
         sex: input.sex,
         birthDate: input.birthDate,
         heightCm: input.heightCm,
+        intakeWeightKg: input.currentWeightKg,
         usualWaterMl: input.usualWaterMl,
         usualEnergyKcal: input.usualEnergyKcal,
         goal: input.goal,

@@ -20,6 +20,7 @@ const ARCHIVE_TABLES = {
   'plans.json': ['plan_versions', 'guardrail_acknowledgements'],
   'weekly-check-ins.json': ['weekly_check_ins'],
   'flags.json': ['athlete_flags'],
+  'body-composition.json': ['body_measurements'],
 } as const;
 
 type Row = Record<string, unknown>;
@@ -46,7 +47,7 @@ type ArchiveDeps = {
 
 /**
  * The athlete's data archive: a zip of JSON files (profile, days with every entry, plans, marks
- * with their replies, weekly check-ins, flags, photos) and the photo files themselves under
+ * with their replies, weekly check-ins, flags, body-composition measurements, photos) and the photo files themselves under
  * `photos/`. Built in memory of the rows, streamed out as the zip is written.
  */
 export class DataArchiveService {

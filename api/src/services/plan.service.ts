@@ -38,6 +38,7 @@ import { CountdownTemplateRepository } from '../repositories/countdown-template.
 import { PlanRepository, type PlanVersionWithAuthor } from '../repositories/plan.repository.js';
 import { TeamRepository } from '../repositories/team.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
+import { bodyMeasurementViews, latestLeanMass } from './body-composition.service.js';
 
 /** Weigh-ins the baseline trend weight is taken over, in days up to and including today. */
 export const TREND_WINDOW_DAYS = 60;
@@ -60,7 +61,8 @@ interface Situation {
 /**
  * The athlete's figures relative targets resolve against, as of `today`: usual water and energy
  * and sex from the profile, weight = the EWMA trend of the weigh-ins of the last 60 days
- * (Walker, The Hacker's Diet), null without any.
+ * (Walker, The Hacker's Diet) or, while the athlete has never weighed in, the intake's weight;
+ * lean mass = the latest body-composition measurement's (from its day's trend weight).
  */
 export async function currentBaseline(
   manager: EntityManager,
@@ -68,12 +70,24 @@ export async function currentBaseline(
   today: string,
 ): Promise<PlanBaseline> {
   const from = shiftDate(today, -(TREND_WINDOW_DAYS - 1));
-  const weights = await new WeighInRepository(manager).listBetween(athlete.id, from, today);
+  const weighIns = new WeighInRepository(manager);
+  const [weights, measurements] = await Promise.all([
+    weighIns.listBetween(athlete.id, from, today),
+    bodyMeasurementViews(manager, athlete),
+  ]);
+  let weightKg = trendWeightKg(weights);
+  // The intake's weight stands in only until the first weigh-in ever (not after a long gap).
+  const fromIntake =
+    weightKg === null && athlete.intakeWeightKg !== null && !(await weighIns.existsFor(athlete.id));
+  if (fromIntake) weightKg = athlete.intakeWeightKg;
+  const lean = latestLeanMass(measurements, today);
   return {
     usualWaterMl: athlete.usualWaterMl,
     usualEnergyKcal: athlete.usualEnergyKcal,
-    weightKg: trendWeightKg(weights),
+    weightKg,
+    ...(fromIntake ? { weightFromIntake: true } : {}),
     sex: athlete.sex,
+    ...(lean ? { leanMassKg: lean.kg, leanMassDate: lean.date } : {}),
   };
 }
 

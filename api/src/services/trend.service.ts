@@ -42,10 +42,32 @@ export function rawPoints(h: AthleteHistory): WeighInPoint[] {
  * same numbers as smoothing every weigh-in from the first (Walker, The Hacker's Diet: Tᵢ depends on
  * the past only through Tᵢ₋₁).
  */
-export function trendByDate(h: AthleteHistory): Map<string, number> {
+export function trendByDate(h: Pick<AthleteHistory, 'before' | 'weighIns'>): Map<string, number> {
   const seeded: WeighInPoint[] = h.weighIns.map((w) => ({ date: w.date, kg: w.kg }));
   if (h.before) seeded.unshift({ date: h.before.date, kg: h.before.trendKg });
   return new Map(trendSeries(seeded).map((t) => [t.date, t.trendKg]));
+}
+
+/**
+ * The trend on each of `dates`: the smoothed trend after the last weigh-in on or before the date,
+ * carried over unweighed days (from the trend before the window when there is one, never from
+ * invented points); null before the first weigh-in. The trend table, the charts and the body
+ * composition's masses all read the day's trend here.
+ */
+export function trendCarriedOn(
+  h: Pick<AthleteHistory, 'before' | 'weighIns'>,
+  dates: readonly string[],
+): Map<string, number | null> {
+  const trend = [...trendByDate(h)];
+  const out = new Map<string, number | null>();
+  let carried: number | null = h.before?.trendKg ?? null;
+  let i = 0;
+  for (const date of [...new Set(dates)].sort()) {
+    // YYYY-MM-DD strings compare in calendar order; the trend's dates ascend.
+    while (i < trend.length && trend[i]![0] <= date) carried = trend[i++]![1];
+    out.set(date, carried);
+  }
+  return out;
 }
 
 /** Fluids per date. */
@@ -66,19 +88,15 @@ function fluidsByDate(fluids: readonly FluidRow[]): Map<string, FluidRow[]> {
  */
 export function trendDays(h: AthleteHistory, from: string, to: string, today: string): TrendDay[] {
   const weights = new Map(h.weighIns.map((w) => [w.date, w.kg]));
-  const trend = trendByDate(h);
   const fluids = fluidsByDate(h.fluids);
   const planFor = dayPlanner(h.versions);
   const dates: string[] = [];
   for (let date = from; date <= to; date = shiftDate(date, 1)) dates.push(date);
   const means = mean7Series(rawPoints(h), dates);
-  // The trend on `from`: the last one at or before it.
-  let carried: number | null = h.before?.trendKg ?? null;
-  for (const w of h.weighIns) if (w.date < from) carried = trend.get(w.date) ?? carried;
+  const trendOn = trendCarriedOn(h, dates);
 
   const days: TrendDay[] = [];
   for (const [i, date] of dates.entries()) {
-    carried = trend.get(date) ?? carried;
     const meals = h.meals.get(date) ?? null;
     const dayFluids = fluids.get(date) ?? [];
     const fluidMl = dayFluids.length > 0 ? dayFluids.reduce((s, f) => s + f.volumeMl, 0) : null;
@@ -89,7 +107,7 @@ export function trendDays(h: AthleteHistory, from: string, to: string, today: st
     days.push({
       date,
       weightKg: weights.get(date) ?? null,
-      trendKg: carried,
+      trendKg: trendOn.get(date) ?? null,
       mean7Kg: means[i] ?? null,
       actuals,
       targets: plan

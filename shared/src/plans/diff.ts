@@ -135,6 +135,7 @@ function macroFigure(m: MacroTarget | null): Figure | null {
   if (!m) return null;
   if (m.kind === 'g') return [fmt(m.g, 1), 'g'];
   if (m.kind === 'pct') return [fmt(m.pct, 1), '%'];
+  if (m.kind === 'g_per_kg_lean') return [fmt(m.perKg, 2), 'g/kg lean mass'];
   return [fmt(m.perKg, 2), 'g/kg'];
 }
 

@@ -140,6 +140,28 @@ describe('resolveTargets', () => {
     expect(r.energyKcal).toBeNull();
   });
 
+  it('g per kg of lean mass uses the latest measured lean mass (Helms 2014, JISSN 11:20: 2.3–3.1 g/kg)', () => {
+    // REFERENCES.md §4 Helms check: LBM 68 kg → 156.4–210.8 g protein.
+    const lean = { ...baseline, leanMassKg: 68, leanMassDate: '2026-11-20' };
+    const low = resolveTargets(day({ protein: { kind: 'g_per_kg_lean', perKg: 2.3 } }), lean);
+    const high = resolveTargets(day({ protein: { kind: 'g_per_kg_lean', perKg: 3.1 } }), lean);
+    expect(low.proteinG).toBeCloseTo(156.4, 6);
+    expect(high.proteinG).toBeCloseTo(210.8, 6);
+    expect(low.basis.protein).toBe('2.3 g/kg × 68 kg lean mass, measured 2026-11-20');
+    // Without a measurement it stays unresolved (validatePlanContent reports it).
+    expect(
+      resolveTargets(day({ protein: { kind: 'g_per_kg_lean', perKg: 2.5 } }), baseline).proteinG,
+    ).toBeNull();
+  });
+
+  it('g per kg of body weight says when the weight is the intake’s', () => {
+    const r = resolveTargets(day({ protein: { kind: 'g_per_kg', perKg: 2 } }), {
+      ...baseline,
+      weightFromIntake: true,
+    });
+    expect(r.basis.protein).toBe('2 g/kg × 80 kg (intake weight, no weigh-in yet)');
+  });
+
   it('water: mL, usual + mL (a water-load day at usual + 1 L — common practice, no source), usual × factor', () => {
     expect(resolveTargets(day({ water: { kind: 'ml', ml: 3500 } }), baseline).waterMl).toBe(3500);
     const load = resolveTargets(day({ water: { kind: 'usual_plus', ml: 1000 } }), baseline);

@@ -92,9 +92,16 @@ export function resolveTargets(
         grams[macro] = gramsFromShare(energyKcal, t.pct, macro);
         basis[macro] = `${fmt(t.pct, 1)} % of ${fmt(energyKcal)} kcal`;
       }
+    } else if (t.kind === 'g_per_kg_lean') {
+      if (baseline.leanMassKg != null) {
+        grams[macro] = t.perKg * baseline.leanMassKg;
+        const when = baseline.leanMassDate ? `, measured ${baseline.leanMassDate}` : '';
+        basis[macro] = `${fmt(t.perKg, 2)} g/kg × ${fmt(baseline.leanMassKg, 1)} kg lean mass${when}`;
+      }
     } else if (baseline.weightKg != null) {
       grams[macro] = t.perKg * baseline.weightKg;
-      basis[macro] = `${fmt(t.perKg, 2)} g/kg × ${fmt(baseline.weightKg, 1)} kg`;
+      const source = baseline.weightFromIntake ? ' (intake weight, no weigh-in yet)' : '';
+      basis[macro] = `${fmt(t.perKg, 2)} g/kg × ${fmt(baseline.weightKg, 1)} kg${source}`;
     }
   }
 

@@ -239,6 +239,25 @@ describe('validatePlanContent: baseline figures', () => {
   });
 });
 
+describe('validatePlanContent: protein per kg of lean mass', () => {
+  it('needs a measured lean mass, and is for protein only', () => {
+    const c = withTraining(
+      day({
+        protein: { kind: 'g_per_kg_lean', perKg: 2.5 },
+        fat: { kind: 'g_per_kg_lean', perKg: 1 },
+      }),
+    );
+    expect(validatePlanContent(c, baseline)).toEqual({
+      'dayTypes.0.targets.protein':
+        'No lean mass yet (a body-composition measurement with a trend weight on its day); enter grams or g/kg instead',
+      'dayTypes.0.targets.fat': 'Grams per kg of lean mass is for protein; use grams, a share or g/kg',
+    });
+    expect(validatePlanContent(c, { ...baseline, leanMassKg: 60 })).toEqual({
+      'dayTypes.0.targets.fat': 'Grams per kg of lean mass is for protein; use grams, a share or g/kg',
+    });
+  });
+});
+
 describe('validateTemplate', () => {
   const template = (days: TemplateRequest['days']): TemplateRequest => ({
     name: 'Show week',

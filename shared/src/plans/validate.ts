@@ -119,6 +119,18 @@ function dayTargetErrors(
         );
       }
     }
+    if (targets.protein?.kind === 'g_per_kg_lean' && baseline.leanMassKg == null) {
+      add(
+        `${prefix}.protein`,
+        'No lean mass yet (a body-composition measurement with a trend weight on its day); enter grams or g/kg instead',
+      );
+    }
+  }
+
+  for (const macro of ['carbohydrate', 'fat'] as const) {
+    if (targets[macro]?.kind === 'g_per_kg_lean') {
+      add(`${prefix}.${macro}`, 'Grams per kg of lean mass is for protein; use grams, a share or g/kg');
+    }
   }
 
   for (const macro of MACROS) {

@@ -37,6 +37,8 @@ const intakeFields = z.object({
   birthDate: isoDate,
   /** Standing height, cm. */
   heightCm: inRange(LIMITS.heightCm.min, LIMITS.heightCm.max, 'Height', 'cm'),
+  /** Body weight today, kg: the plan's weight until the first weigh-in. */
+  currentWeightKg: inRange(LIMITS.weightKg.min, LIMITS.weightKg.max, 'Current weight', 'kg'),
   /** Usual daily fluid intake, mL. */
   usualWaterMl: inRange(LIMITS.usualWaterMl.min, LIMITS.usualWaterMl.max, 'Usual water', 'mL'),
   /** Usual daily energy intake, kcal. */
@@ -126,6 +128,8 @@ export const athleteProfile = z.object({
   sex: z.enum(SEXES).nullable(),
   birthDate: z.string().nullable(),
   heightCm: z.number().nullable(),
+  /** The weight given at intake, kg (the plan's weight until the first weigh-in). */
+  intakeWeightKg: z.number().nullable(),
   usualWaterMl: z.number().nullable(),
   usualEnergyKcal: z.number().nullable(),
   goal: z.enum(GOALS).nullable(),

@@ -71,11 +71,19 @@ export const energyTarget = z.discriminatedUnion('kind', [
 ]);
 export type EnergyTarget = z.infer<typeof energyTarget>;
 
-/** One macro: grams, a share of the day's energy (%), or grams per kg of body weight. */
+/**
+ * One macro: grams, a share of the day's energy (%), grams per kg of body weight, or (protein only)
+ * grams per kg of lean mass from the latest body-composition measurement (Helms, Aragon & Fitschen
+ * 2014, JISSN 11:20: 2.3–3.1 g/kg of lean mass in a diet).
+ */
 export const macroTarget = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('g'), g: num(0, PLAN_LIMITS.macroG.max, 'Grams', ' g') }),
   z.object({ kind: z.literal('pct'), pct: num(0, 100, 'Share', ' %') }),
   z.object({ kind: z.literal('g_per_kg'), perKg: num(0, PLAN_LIMITS.macroGPerKg.max, 'Grams per kg') }),
+  z.object({
+    kind: z.literal('g_per_kg_lean'),
+    perKg: num(0, PLAN_LIMITS.macroGPerKg.max, 'Grams per kg of lean mass'),
+  }),
 ]);
 export type MacroTarget = z.infer<typeof macroTarget>;
 
@@ -255,9 +263,21 @@ export type PlanContent = z.infer<typeof planContent>;
 export const planBaseline = z.object({
   usualWaterMl: z.number().nullable(),
   usualEnergyKcal: z.number().nullable(),
-  /** Latest trend weight (or the latest weigh-in when too few), kg. */
+  /**
+   * Latest trend weight (or the latest weigh-in when too few), kg; before the athlete's first
+   * weigh-in, the weight they gave at intake (`weightFromIntake`).
+   */
   weightKg: z.number().nullable(),
+  /** True when `weightKg` is the intake's weight (no weigh-in yet). Absent in older versions. */
+  weightFromIntake: z.boolean().optional(),
   sex: z.enum(SEXES).nullable(),
+  /**
+   * Lean (fat-free) mass of the latest body-composition measurement, kg, from that day's trend
+   * weight; what g/kg-of-lean-mass targets resolve against. Absent in older versions.
+   */
+  leanMassKg: z.number().nullable().optional(),
+  /** The date of that measurement. */
+  leanMassDate: z.string().nullable().optional(),
 });
 export type PlanBaseline = z.infer<typeof planBaseline>;
 

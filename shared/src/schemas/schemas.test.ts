@@ -15,6 +15,7 @@ const validIntake = {
   sex: 'female',
   birthDate: '1996-04-12',
   heightCm: 165,
+  currentWeightKg: 62,
   usualWaterMl: 3000,
   usualEnergyKcal: 2100,
   goal: 'lose',
@@ -41,8 +42,13 @@ describe('intakeRequest', () => {
   });
 
   it('names the field for implausible values', () => {
-    const r = intakeRequest.safeParse({ ...validIntake, heightCm: 20, usualWaterMl: -5 });
-    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'usualWaterMl']));
+    const r = intakeRequest.safeParse({
+      ...validIntake,
+      heightCm: 20,
+      usualWaterMl: -5,
+      currentWeightKg: 400,
+    });
+    expect(fieldsOf(r)).toEqual(expect.arrayContaining(['heightCm', 'usualWaterMl', 'currentWeightKg']));
   });
 
   it('requires the acknowledgement to be ticked', () => {

@@ -4,6 +4,7 @@ import { createBrowserRouter, Outlet, ScrollRestoration } from 'react-router';
 import { athleteQueryOptions } from '@/features/athletes/api/get-athlete';
 import { rosterQueryOptions } from '@/features/athletes/api/get-roster';
 import { meQueryOptions } from '@/features/auth/api/get-me';
+import { bodyCompositionQueryOptions } from '@/features/body-composition/api/get-body-composition';
 import { dayQueryOptions } from '@/features/check-ins/api/get-day';
 import { mailListQueryOptions } from '@/features/dev-inbox/api/get-mail-list';
 import { invitationsQueryOptions } from '@/features/invitations/api/get-invitations';
@@ -144,6 +145,11 @@ export const router = createBrowserRouter([
                     loader: prefetchOwnProfile,
                   },
                   {
+                    path: 'athlete/body',
+                    lazy: page(() => import('./routes/athlete-body'), 'AthleteBodyRoute'),
+                    loader: prefetchOwnProfile,
+                  },
+                  {
                     path: 'athlete/trends',
                     lazy: page(() => import('./routes/athlete-trends'), 'AthleteTrendsRoute'),
                     loader: prefetchOwnTrends,
@@ -204,6 +210,18 @@ export const router = createBrowserRouter([
                   {
                     path: 'athletes/:athleteId/photos',
                     lazy: page(() => import('./routes/coach-athlete-photos'), 'CoachAthletePhotosRoute'),
+                  },
+                  {
+                    path: 'athletes/:athleteId/body',
+                    lazy: page(() => import('./routes/coach-athlete-body'), 'CoachAthleteBodyRoute'),
+                    loader: ({ params }) =>
+                      prefetchWhen(
+                        (me) => isStaffRole(me.role),
+                        () => {
+                          void queryClient.prefetchQuery(athleteQueryOptions(params.athleteId ?? ''));
+                          void queryClient.prefetchQuery(bodyCompositionQueryOptions(params.athleteId ?? ''));
+                        },
+                      )(),
                   },
                   {
                     path: 'athletes/:athleteId/weekly',

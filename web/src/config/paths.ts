@@ -22,6 +22,7 @@ export const paths = {
   coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
   athletePhotos: '/athlete/photos',
+  athleteBody: '/athlete/body',
   /** The athlete's own weight chart, rate, adherence and their coach's marks. */
   athleteTrends: '/athlete/trends',
   athleteHistory: '/athlete/history',
@@ -33,6 +34,7 @@ export const paths = {
   coachAthlete: (athleteId: string, date?: string) =>
     `/coach/athletes/${encodeURIComponent(athleteId)}${date ? `?date=${encodeURIComponent(date)}` : ''}`,
   coachAthletePhotos: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/photos`,
+  coachAthleteBody: (athleteId: string) => `/coach/athletes/${encodeURIComponent(athleteId)}/body`,
   /** An athlete's charts over a range (2 weeks, 6 weeks, season), with the day table and the marks. */
   coachAthleteTrends: (athleteId: string, range?: string) =>
     `/coach/athletes/${encodeURIComponent(athleteId)}/trends${range ? `?range=${encodeURIComponent(range)}` : ''}`,

@@ -8,6 +8,7 @@ import { AddWeeklyCheckInsAndNotifications1796178387090 } from './1796178387090-
 import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitCounters.js';
 import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
 import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
+import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -20,4 +21,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddRateLimitCounters1796190000000,
   OutboxSendingLease1796190000001,
   AddWeightCuts1796200000000,
+  AddBodyMeasurements1796190140000,
 ];

@@ -1,10 +1,11 @@
 import { useCallback, useMemo, useState } from 'react';
 import { useSearchParams } from 'react-router';
 import { Alert } from '@/components/ui/alert';
-import { Button } from '@/components/ui/button';
+import { Button, ButtonLink } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { Skeleton } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
 import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { useToday } from '@/features/check-ins/components/use-clock';
 import { useMarks } from '@/features/marks/api/list-marks';
@@ -71,6 +72,11 @@ export function AthleteTrendsRoute() {
       <PageHeader
         title="Trends"
         description="Your weight trend against your plan, and notes from your coach."
+        actions={
+          <ButtonLink to={paths.athleteBody} variant="secondary" size="sm">
+            Body composition
+          </ButtonLink>
+        }
         className="mb-4"
       />
       <RangePicker value={range} onChange={setRange} className="mb-4 flex w-full [&>button]:flex-1" />

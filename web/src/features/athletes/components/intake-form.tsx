@@ -193,6 +193,15 @@ export function IntakeForm({ athleteId, profile, defaults, onSaved }: IntakeForm
           />
         )}
         <TextField
+          name="currentWeight"
+          label={`Current weight (${weightLabel})`}
+          suffix={weightLabel}
+          hint="Today's weight on your usual scale; your plan uses it until your first weigh-in."
+          required
+          {...decimalInput}
+          inputClassName="tabular-nums"
+        />
+        <TextField
           name="usualWater"
           label={`Usual daily water (${volumeLabel})`}
           suffix={volumeLabel}

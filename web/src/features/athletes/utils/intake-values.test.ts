@@ -22,6 +22,7 @@ const metric: IntakeFormValues = {
   heightCm: '168',
   heightFt: '',
   heightIn: '',
+  currentWeight: '64.8',
   usualWater: '2800',
   usualEnergyKcal: '2050',
   goal: 'lose',
@@ -45,6 +46,7 @@ const imperial: IntakeFormValues = {
   heightIn: '6',
   usualWater: '96',
   weighInLimit: '139',
+  currentWeight: '143',
 };
 
 describe('parseTypedNumber', () => {
@@ -63,6 +65,7 @@ describe('toIntakeRequest', () => {
     expect(numberErrors).toEqual({});
     expect(request).toMatchObject({
       heightCm: 168,
+      currentWeightKg: 64.8,
       usualWaterMl: 2800,
       usualEnergyKcal: 2050,
       weighInLimitKg: 63,
@@ -77,6 +80,8 @@ describe('toIntakeRequest', () => {
     expect(request.heightCm).toBeCloseTo(167.64, 10);
     expect(request.usualWaterMl).toBeCloseTo(2839.058838, 5);
     expect(request.weighInLimitKg).toBeCloseTo(63.04933943, 7);
+    // 143 lb × 0.45359237 = 64.86370891 kg
+    expect(request.currentWeightKg).toBeCloseTo(64.86370891, 7);
   });
 
   it('drops every event field when there is no event', () => {
@@ -137,6 +142,7 @@ describe('switching units', () => {
       heightFt: '5',
       heightIn: '6.1', // 168 cm = 66.14 in
       weighInLimit: '138.9', // 63 kg = 138.89 lb
+      currentWeight: '142.9', // 64.8 kg = 142.86 lb
       usualWater: '94.7', // 2800 mL = 94.68 fl oz
     });
     expect(convertForUnitChange(imperial, { weightUnit: 'kg', volumeUnit: 'ml' })).toEqual({
@@ -144,6 +150,7 @@ describe('switching units', () => {
       heightFt: '',
       heightIn: '',
       weighInLimit: '63', // 139 lb = 63.05 kg
+      currentWeight: '64.9', // 143 lb = 64.86 kg
       usualWater: '2839',
     });
   });
@@ -160,6 +167,7 @@ describe('initialIntakeValues', () => {
     sex: 'male',
     birthDate: '1990-01-01',
     heightCm: 180,
+    intakeWeightKg: 82,
     usualWaterMl: 3000,
     usualEnergyKcal: 2600,
     goal: 'maintain',
@@ -191,6 +199,7 @@ describe('initialIntakeValues', () => {
       heightFt: '5',
       heightIn: '10.9',
       usualWater: '101.4',
+      currentWeight: '180.8', // 82 kg = 180.78 lb
     });
     expect(v.eventTime).toBe('');
     expect(v.safetyAcknowledged).toBe(false);

@@ -37,6 +37,8 @@ export interface IntakeFormValues {
   /** Used with lb: feet and inches. */
   heightFt: string;
   heightIn: string;
+  /** Body weight today, in kg or lb (weightUnit). */
+  currentWeight: string;
   /** In mL or fl oz (volumeUnit). */
   usualWater: string;
   usualEnergyKcal: string;
@@ -97,11 +99,13 @@ export function toIntakeRequest(v: IntakeFormValues): IntakeConversion {
     heightCm = read('heightCm', v.heightCm);
   }
 
+  const weight = read('currentWeight', v.currentWeight);
   const water = read('usualWater', v.usualWater);
   const request: Record<string, unknown> = {
     sex: v.sex || undefined,
     birthDate: optionalText(v.birthDate),
     heightCm,
+    currentWeightKg: weight === undefined ? undefined : weightToKg(weight, v.weightUnit),
     usualWaterMl: water === undefined ? undefined : volumeToMl(water, v.volumeUnit),
     usualEnergyKcal: read('usualEnergyKcal', v.usualEnergyKcal),
     goal: v.goal || undefined,
@@ -136,6 +140,8 @@ export function formFieldFor(path: string, weightUnit: WeightUnit): IntakeFormFi
       return 'usualWater';
     case 'weighInLimitKg':
       return 'weighInLimit';
+    case 'currentWeightKg':
+      return 'currentWeight';
     default:
       return FORM_FIELDS.has(path as IntakeFormField) ? (path as IntakeFormField) : null;
   }
@@ -150,6 +156,7 @@ const FORM_FIELDS = new Set<IntakeFormField>([
   'heightCm',
   'heightFt',
   'heightIn',
+  'currentWeight',
   'usualWater',
   'usualEnergyKcal',
   'goal',
@@ -173,9 +180,11 @@ function feetInches(totalInches: number): string {
   return `${feet} ft ${inches} in`;
 }
 
+type RangePath = 'heightCm' | 'usualWaterMl' | 'weighInLimitKg' | 'currentWeightKg';
+
 /** The plausible ranges in the athlete's own units, for messages they can act on. */
 export function rangeInUnits(
-  path: 'heightCm' | 'usualWaterMl' | 'weighInLimitKg',
+  path: RangePath,
   units: { weightUnit: WeightUnit; volumeUnit: VolumeUnit },
 ): { min: string; max: string } | null {
   if (path === 'heightCm' && heightInFeet(units.weightUnit)) {
@@ -190,7 +199,7 @@ export function rangeInUnits(
       max: `${floor1(mlToFlOz(LIMITS.usualWaterMl.max))} fl oz`,
     };
   }
-  if (path === 'weighInLimitKg' && units.weightUnit === 'lb') {
+  if ((path === 'weighInLimitKg' || path === 'currentWeightKg') && units.weightUnit === 'lb') {
     return {
       min: `${ceil1(weightFromKg(LIMITS.weightKg.min, 'lb'))} lb`,
       max: `${floor1(weightFromKg(LIMITS.weightKg.max, 'lb'))} lb`,
@@ -199,10 +208,11 @@ export function rangeInUnits(
   return null;
 }
 
-const RANGE_SUBJECT: Record<'heightCm' | 'usualWaterMl' | 'weighInLimitKg', string> = {
+const RANGE_SUBJECT: Record<RangePath, string> = {
   heightCm: 'Height',
   usualWaterMl: 'Usual water',
   weighInLimitKg: 'Weigh-in limit',
+  currentWeightKg: 'Current weight',
 };
 
 /**
@@ -215,11 +225,12 @@ export function messageInUnits(
   message: string,
   units: { weightUnit: WeightUnit; volumeUnit: VolumeUnit },
 ): string {
-  if (path !== 'heightCm' && path !== 'usualWaterMl' && path !== 'weighInLimitKg') return message;
-  const range = rangeInUnits(path, units);
+  if (!(path in RANGE_SUBJECT)) return message;
+  const rangePath = path as RangePath;
+  const range = rangeInUnits(rangePath, units);
   if (!range) return message;
-  if (type === 'too_small') return `${RANGE_SUBJECT[path]} must be at least ${range.min}`;
-  if (type === 'too_big') return `${RANGE_SUBJECT[path]} must be at most ${range.max}`;
+  if (type === 'too_small') return `${RANGE_SUBJECT[rangePath]} must be at least ${range.min}`;
+  if (type === 'too_big') return `${RANGE_SUBJECT[rangePath]} must be at most ${range.max}`;
   return message;
 }
 
@@ -249,6 +260,10 @@ export function convertForUnitChange(
     const limit = parseTypedNumber(v.weighInLimit);
     if (limit !== undefined && Number.isFinite(limit)) {
       out.weighInLimit = toTypedText(weightFromKg(weightToKg(limit, v.weightUnit), next.weightUnit), 1);
+    }
+    const weight = parseTypedNumber(v.currentWeight);
+    if (weight !== undefined && Number.isFinite(weight)) {
+      out.currentWeight = toTypedText(weightFromKg(weightToKg(weight, v.weightUnit), next.weightUnit), 1);
     }
   }
   if (next.volumeUnit !== v.volumeUnit) {
@@ -280,6 +295,8 @@ export function initialIntakeValues(
     sex: profile?.sex ?? '',
     birthDate: profile?.birthDate ?? '',
     ...height,
+    currentWeight:
+      profile?.intakeWeightKg != null ? toTypedText(weightFromKg(profile.intakeWeightKg, weightUnit), 1) : '',
     usualWater:
       profile?.usualWaterMl != null
         ? toTypedText(volumeFromMl(profile.usualWaterMl, volumeUnit), volumeUnit === 'ml' ? 0 : 1)

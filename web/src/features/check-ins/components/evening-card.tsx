@@ -17,7 +17,7 @@ import { TextField } from '@/components/ui/text-field';
 import { formatNumber } from '@/lib/format';
 import { useSaveEvening } from '../api/save-evening';
 import { eveningFormValues, toEveningRequest, type EveningFormValues } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { CheckInCard, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 

@@ -20,7 +20,7 @@ import { useDeleteFluid } from '../api/delete-fluid';
 import { useUpdateFluid } from '../api/update-fluid';
 import { createClientIdKeeper } from '../utils/client-id';
 import { fluidFormValues, toFluidRequest, withoutClientId, type FluidFormValues } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { displayVolume, quickVolumeLabel, quickVolumes } from '../utils/units';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';

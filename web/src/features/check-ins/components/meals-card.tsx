@@ -14,7 +14,7 @@ import { useUpdateMeal } from '../api/update-meal';
 import { createClientIdKeeper } from '../utils/client-id';
 import { foodPortionPreview, macroEnergyPreview } from '../utils/energy';
 import { mealFormValues, toMealRequest, withoutClientId, type MealFormValues } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';

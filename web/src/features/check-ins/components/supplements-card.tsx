@@ -17,7 +17,7 @@ import {
   withoutClientId,
   type SupplementFormValues,
 } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
 import { AddEntry, ConfirmDelete, EditableEntries } from './entry-row';

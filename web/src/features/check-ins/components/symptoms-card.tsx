@@ -27,7 +27,7 @@ import {
   withoutClientId,
   type SymptomFormValues,
 } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { hasUrgentSymptom } from '../utils/symptoms';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';

@@ -19,7 +19,7 @@ import { TextField } from '@/components/ui/text-field';
 import { useDeleteWeighIn } from '../api/delete-weigh-in';
 import { useSaveWeighIn } from '../api/save-weigh-in';
 import { toWeighInRequest, weighInFormValues, type WeighInFormValues } from '../utils/form-values';
-import { createRequestResolver } from '../utils/resolver';
+import { createRequestResolver } from '@/lib/request-resolver';
 import { displayWeight } from '../utils/units';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';

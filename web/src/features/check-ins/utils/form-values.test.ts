@@ -19,7 +19,7 @@ import {
   type MealFormValues,
 } from './form-values';
 import { NOT_A_NUMBER } from './numbers';
-import { createRequestResolver } from './resolver';
+import { createRequestResolver } from '../../../lib/request-resolver';
 
 const opts = { fields: {}, shouldUseNativeValidation: false } as never;
 

@@ -61,6 +61,8 @@ const MACRO_KINDS = [
   { value: 'pct', label: '% of energy' },
   { value: 'g_per_kg', label: 'g per kg' },
 ] as const;
+/** Protein may also be set per kg of lean mass (Helms 2014: 2.3–3.1 g/kg lean mass); the server refuses it on the others. */
+const PROTEIN_KINDS = [...MACRO_KINDS, { value: 'g_per_kg_lean', label: 'g per kg lean mass' }] as const;
 const WATER_KINDS = [
   { value: 'none', label: 'No target' },
   { value: 'ml', label: 'mL' },
@@ -73,6 +75,8 @@ const SUFFIX: Record<string, string> = {
   g: 'g',
   pct: '%',
   g_per_kg: 'g/kg',
+  // The box is narrow: the unit says g/kg, the box's label says of what.
+  g_per_kg_lean: 'g/kg',
   ml: 'mL',
   usual_plus: '± mL',
 };
@@ -158,6 +162,8 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
     const p = resolved[`${metric}Pct`];
     if (kind === 'g') return toTypedText(g, 0);
     if (kind === 'pct') return toTypedText(p, 0);
+    if (kind === 'g_per_kg_lean')
+      return g !== null && base.leanMassKg ? toTypedText(g / base.leanMassKg, 2) : '';
     return g !== null && base.weightKg ? toTypedText(g / base.weightKg, 2) : '';
   }
 
@@ -209,12 +215,12 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
         <MetricRow
           key={m}
           label={MACRO_LABEL[m]}
-          control={kindSelect(m, MACRO_LABEL[m], MACRO_KINDS)}
+          control={kindSelect(m, MACRO_LABEL[m], m === 'protein' ? PROTEIN_KINDS : MACRO_KINDS)}
           input={
             values[m].kind === 'none' ? null : (
               <NumberBox
                 name={`${name}.${m}.value`}
-                label={`${MACRO_LABEL[m]}, ${SUFFIX[values[m].kind]}`}
+                label={`${MACRO_LABEL[m]}, ${values[m].kind === 'g_per_kg_lean' ? 'g/kg lean mass' : SUFFIX[values[m].kind]}`}
                 suffix={SUFFIX[values[m].kind]}
               />
             )
@@ -397,9 +403,14 @@ function macroLive(
   const parts: string[] = [];
   if (kind !== 'g' && g !== null) parts.push(fig.grams(g));
   if (kind !== 'pct' && p !== null) parts.push(fig.pct(p));
+  // Which lean mass the grams follow (its date is in the version's basis).
+  if (kind === 'g_per_kg_lean' && g !== null && b.leanMassKg != null)
+    parts.push(`lean ${fig.kg(b.leanMassKg)}`);
   if (kind !== 'g_per_kg' && perKg !== null) parts.push(fig.perKg(perKg));
   if (parts.length) return `= ${parts.join(' · ')}`;
   if (kind === 'g_per_kg') return hasBaseline ? 'No recent body weight' : "× the athlete's weight";
+  if (kind === 'g_per_kg_lean')
+    return hasBaseline ? 'No lean mass yet: enter skinfolds on the Body tab' : "× the athlete's lean mass";
   if (kind === 'pct') return 'Needs an energy target';
   return null;
 }

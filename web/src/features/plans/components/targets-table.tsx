@@ -115,7 +115,14 @@ export function TargetsTable({
                   </td>
                 ))}
                 <td className={num}>{r?.energyKcal != null ? fig.kcal(r.energyKcal) : <Dash />}</td>
-                <td className={num}>{r ? macro(r.proteinG, r.proteinPct) : <Dash />}</td>
+                <td className={num}>
+                  {r ? macro(r.proteinG, r.proteinPct) : <Dash />}
+                  {r?.basis.protein ? (
+                    <span className="block min-w-40 text-xs whitespace-normal text-ink-faint">
+                      {r.basis.protein}
+                    </span>
+                  ) : null}
+                </td>
                 <td className={num}>{r ? macro(r.carbohydrateG, r.carbohydratePct) : <Dash />}</td>
                 <td className={num}>{r ? macro(r.fatG, r.fatPct) : <Dash />}</td>
                 <td className={num}>

@@ -116,11 +116,20 @@ export function VersionContent({ version: v }: { version: PlanVersionView }) {
             </dd>
           </div>
           <div className="flex gap-1.5">
-            <dt className="text-ink-faint">Trend weight</dt>
+            <dt className="text-ink-faint">{baseline.weightFromIntake ? 'Intake weight' : 'Trend weight'}</dt>
             <dd className="font-medium text-ink tabular-nums">
               {baseline.weightKg !== null ? `${baseline.weightKg.toFixed(1)} kg` : 'not known'}
             </dd>
           </div>
+          {baseline.leanMassKg != null ? (
+            <div className="flex gap-1.5">
+              <dt className="text-ink-faint">Lean mass</dt>
+              <dd className="font-medium text-ink tabular-nums">
+                {fig.kg(baseline.leanMassKg)}
+                {baseline.leanMassDate ? ` (${formatDate(baseline.leanMassDate, 'short')})` : ''}
+              </dd>
+            </div>
+          ) : null}
         </dl>
         <p className="mt-1 text-xs text-ink-faint">
           The athlete&apos;s figures when this version was saved; its targets resolve against them.

@@ -91,6 +91,7 @@ function macroValue(t: MacroTarget | null): DayTargetsFormValues['protein'] {
   if (!t) return { kind: 'none', value: '' };
   if (t.kind === 'g') return { kind: 'g', value: toTypedText(t.g, 1) };
   if (t.kind === 'pct') return { kind: 'pct', value: toTypedText(t.pct, 1) };
+  if (t.kind === 'g_per_kg_lean') return { kind: 'g_per_kg_lean', value: toTypedText(t.perKg, 2) };
   return { kind: 'g_per_kg', value: toTypedText(t.perKg, 2) };
 }
 
@@ -172,6 +173,7 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
     if (kind === 'g') return { kind: 'g', g: n(path, value) };
     if (kind === 'pct') return { kind: 'pct', pct: n(path, value) };
     if (kind === 'g_per_kg') return { kind: 'g_per_kg', perKg: n(path, value) };
+    if (kind === 'g_per_kg_lean') return { kind: 'g_per_kg_lean', perKg: n(path, value) };
     return null;
   };
   const water: WaterTarget | null =

@@ -10,6 +10,8 @@ export const kcal = (n: number) => `${formatNumber(n, 0)}${NBSP}kcal`;
 export const grams = (n: number) => `${formatNumber(n, 0)}${NBSP}g`;
 export const pct = (n: number) => `${formatNumber(n, 0)}${NBSP}%`;
 export const perKg = (n: number) => `${formatNumber(n, 2)}${NBSP}g/kg`;
+export const perKgLean = (n: number) => `${formatNumber(n, 2)}${NBSP}g/kg lean mass`;
+export const kg = (n: number) => `${formatNumber(n, 1)}${NBSP}kg`;
 export const ml = (n: number) => `${formatNumber(n, 0)}${NBSP}mL`;
 export const mg = (n: number) => `${formatNumber(n, 0)}${NBSP}mg`;
 export const factor = (n: number) => `×${NBSP}${formatNumber(n, 2)}`;

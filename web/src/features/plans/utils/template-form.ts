@@ -25,6 +25,7 @@ const kcal = (n: number) => `${formatNumber(n, 0)}${NBSP}kcal`;
 const grams = (n: number) => `${formatNumber(n, 0)}${NBSP}g`;
 const pct = (n: number) => `${formatNumber(n, 0)}${NBSP}%`;
 const perKg = (n: number) => `${formatNumber(n, 2)}${NBSP}g/kg`;
+const perKgLean = (n: number) => `${formatNumber(n, 2)}${NBSP}g/kg lean mass`;
 const ml = (n: number) => `${formatNumber(n, 0)}${NBSP}mL`;
 const mg = (n: number) => `${formatNumber(n, 0)}${NBSP}mg`;
 const factor = (n: number) => `×${NBSP}${formatNumber(n, 2)}`;
@@ -229,7 +230,7 @@ export function describeTargets(t: DayTargets): string[] {
     const m = t[key];
     if (!m) continue;
     out.push(
-      `${label} ${m.kind === 'g' ? grams(m.g) : m.kind === 'pct' ? `${pct(m.pct)} of energy` : perKg(m.perKg)}`,
+      `${label} ${m.kind === 'g' ? grams(m.g) : m.kind === 'pct' ? `${pct(m.pct)} of energy` : m.kind === 'g_per_kg_lean' ? perKgLean(m.perKg) : perKg(m.perKg)}`,
     );
   }
   if (t.water) {

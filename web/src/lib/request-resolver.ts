@@ -1,7 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { FieldError, FieldErrors, FieldValues, Resolver } from 'react-hook-form';
 import type { z } from 'zod';
-import type { Conversion } from './form-values';
+
+/** Typed form values turned into a request body, with the boxes whose text is not a number. */
+export interface RequestConversion<F extends string> {
+  request: Record<string, unknown>;
+  numberErrors: Partial<Record<F, string>>;
+}
 
 /**
  * A react-hook-form resolver that validates with a shared zod schema: the typed values are first
@@ -11,7 +16,7 @@ import type { Conversion } from './form-values';
  */
 export function createRequestResolver<V extends FieldValues, R>(
   schema: z.ZodType<R>,
-  convert: (values: V) => Conversion<Extract<keyof V, string>>,
+  convert: (values: V) => RequestConversion<Extract<keyof V, string>>,
 ): Resolver<V, unknown, R> {
   const schemaResolver = zodResolver(schema as never) as unknown as Resolver<
     Record<string, unknown>,
