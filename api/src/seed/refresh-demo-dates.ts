@@ -52,6 +52,8 @@ export const SHIFTED_DATE_COLUMNS: readonly string[] = [
   'marks.from_date',
   'marks.to_date',
   'weekly_check_ins.due_date',
+  'cut_plans.start_date',
+  'cut_plans.weigh_in_date',
 ];
 
 /** The weekdays in order, for moving a check-in weekday along with the dates. */
@@ -175,6 +177,22 @@ export async function refreshDemoDates(
     `created_at = ${at('created_at')}`,
     `updated_at = ${at('updated_at')}`,
   ]);
+  // Cut plans and their acknowledgements (reached through their plan).
+  await update('cut_plans', [
+    'start_date = t.start_date + s.n',
+    'weigh_in_date = t.weigh_in_date + s.n',
+    `created_at = ${at('created_at')}`,
+    `updated_at = ${at('updated_at')}`,
+  ]);
+  await update(
+    'cut_plan_acknowledgements',
+    [
+      `acknowledged_at = ${at('acknowledged_at')}`,
+      `created_at = ${at('created_at')}`,
+      `updated_at = ${at('updated_at')}`,
+    ],
+    'EXISTS (SELECT 1 FROM cut_plans c WHERE c.id = t.cut_plan_id AND c.athlete_id = s.athlete_id)',
+  );
   // Marks and their threads: replies and reads reach the athlete through their mark.
   await update('marks', [
     'from_date = t.from_date + s.n',
