@@ -18,7 +18,7 @@ import {
   withoutClientId,
   type MealFormValues,
 } from './form-values';
-import { NOT_A_NUMBER } from './numbers';
+import { NOT_A_NUMBER } from '../../../lib/number-reader';
 import { createRequestResolver } from '../../../lib/request-resolver';
 
 const opts = { fields: {}, shouldUseNativeValidation: false } as never;

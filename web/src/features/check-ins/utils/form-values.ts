@@ -12,7 +12,7 @@ import {
   type WeighInTag,
   type WeightUnit,
 } from '@driftmark/shared';
-import { numberReader } from './numbers';
+import { numberReader } from '../../../lib/number-reader';
 import { volumeInputText, weightInputText } from './units';
 
 /*

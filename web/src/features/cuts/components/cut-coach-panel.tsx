@@ -6,6 +6,7 @@ import type { WeightUnit } from '@driftmark/shared';
 import { useCut } from '../api/get-cut';
 import { LimitGap, PlanFigures, RecoveryChecklist } from './cut-figures';
 import { CutPlanBuilder } from './cut-plan-builder';
+import { WeighInEventForm } from './weigh-in-event-form';
 
 /** Making weight on the coach's athlete page: shown only when the athlete's event is a weigh-in. */
 export function CutCoachPanel({
@@ -38,23 +39,26 @@ export function CutCoachPanel({
         <p className="text-sm text-ink-muted">No cut plan yet.</p>
       )}
       {cut.data.abilities.plan ? (
-        <BuilderDetails hasPlan={view.plan !== null}>
-          <CutPlanBuilder athleteId={athleteId} today={today} />
-        </BuilderDetails>
+        <>
+          <Details summary="Weigh-in details" open={false}>
+            <WeighInEventForm athleteId={athleteId} weighIn={view.weighIn} unit={unit} />
+          </Details>
+          <Details summary={view.plan ? 'New cut plan' : 'Build a cut plan'} open={view.plan === null}>
+            <CutPlanBuilder athleteId={athleteId} today={today} unit={unit} />
+          </Details>
+        </>
       ) : null}
       <p className="text-sm text-ink-muted">{view.caution}</p>
     </Card>
   );
 }
 
-/** Open at first when there is no plan yet, and left as it is after a save (the notice stays in view). */
-function BuilderDetails({ hasPlan, children }: { hasPlan: boolean; children: ReactNode }) {
-  const [openAtFirst] = useState(!hasPlan);
+/** Open or shut as it first rendered, then left as the coach sets it (a save's notice stays in view). */
+function Details({ summary, open, children }: { summary: string; open: boolean; children: ReactNode }) {
+  const [openAtFirst] = useState(open);
   return (
     <details className="rounded-md border border-line p-4" open={openAtFirst}>
-      <summary className="cursor-pointer font-semibold text-ink">
-        {hasPlan ? 'New cut plan' : 'Build a cut plan'}
-      </summary>
+      <summary className="cursor-pointer font-semibold text-ink">{summary}</summary>
       <div className="mt-4">{children}</div>
     </details>
   );

@@ -3,7 +3,10 @@ import {
   CUT_PATHS,
   createCutPlanRequest,
   parseTypedNumber,
+  WEIGHT_UNIT_LABELS,
+  weightToKg,
   type CreateCutPlanRequest,
+  type WeightUnit,
 } from '@driftmark/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
@@ -23,20 +26,31 @@ function readNumber(value: unknown): number {
   return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
 }
 
+/** A weight box read in the coach's unit and handed on in kg (the API takes kg only). */
+function readWeightKg(unit: WeightUnit) {
+  return (value: unknown): number => {
+    const n = readNumber(value);
+    return Number.isNaN(n) ? n : weightToKg(n, unit);
+  };
+}
+
 type Pending = { values: CreateCutPlanRequest; warnings: [string, string][] };
 
 /**
  * The coach builds the cut plan with the athlete: the chronic part (start, weight before the last
- * days, equal kg or equal %) and the acute days. The server checks it; warnings it names come back
+ * days, equal kg or equal %) and the acute days; weights are typed in the coach's unit and sent in kg. The server checks it; warnings it names come back
  * to be read and acknowledged one by one before the plan is saved.
  */
 export function CutPlanBuilder({
   athleteId,
   today,
+  unit,
   onSaved,
 }: {
   athleteId: string;
   today: string;
+  /** The coach's weight unit: the weight boxes are typed in it. */
+  unit: WeightUnit;
   onSaved?: () => void;
 }) {
   const [pending, setPending] = useState<Pending | null>(null);
@@ -48,6 +62,7 @@ export function CutPlanBuilder({
     defaultValues: { startDate: today, acuteDays: 3, path: 'linear', notes: null, acknowledgedKeys: [] },
   });
   const number = { setValueAs: readNumber };
+  const weight = { setValueAs: readWeightKg(unit) };
 
   async function submit(values: CreateCutPlanRequest, keys: string[]) {
     setSaved(false);
@@ -82,21 +97,21 @@ export function CutPlanBuilder({
         <TextField
           name="startKg"
           label="Weight at the start"
-          suffix="kg"
+          suffix={WEIGHT_UNIT_LABELS[unit]}
           inputMode="decimal"
           autoComplete="off"
           required
-          registerOptions={number}
+          registerOptions={weight}
           inputClassName="tabular-nums"
         />
         <TextField
           name="preAcuteKg"
           label="Weight before the last days"
-          suffix="kg"
+          suffix={WEIGHT_UNIT_LABELS[unit]}
           inputMode="decimal"
           autoComplete="off"
           required
-          registerOptions={number}
+          registerOptions={weight}
           inputClassName="tabular-nums"
         />
         <TextField
