@@ -3,7 +3,7 @@ import { daysFromToday, openSession, screenshot, signIn, type Session } from './
 
 // The coach opens Aroha (a weigh-in in 10 days, 63.0 kg limit), reads that she is projected over the
 // limit, builds a cut plan whose last days take off more than 5 % of body mass, acknowledges that
-// warning and saves; Aroha sees today's weight to stay on the plan on her Today screen.
+// warning and saves (after saving the weigh-in's details through the panel's form); Aroha sees today's weight to stay on the plan on her Today screen.
 describe('making weight', () => {
   let desktop: Session;
   let phone: Session;
@@ -43,6 +43,29 @@ describe('making weight', () => {
     await screenshot(page, 'making-weight-roster-1280');
     await page.goBack();
     await page.getByRole('region', { name: 'Making weight' }).waitFor();
+  });
+
+  it('saves the weigh-in details through the panel’s form', async () => {
+    const { page } = desktop;
+    const panel = page.getByRole('region', { name: 'Making weight' });
+    await panel.getByText('Weigh-in details', { exact: true }).click();
+    const form = panel.getByRole('form', { name: 'Weigh-in details' });
+    // The demo record, in the coach's unit (kg): 63 kg limit, day before at 18:00, competition 09:30.
+    await expect(form.getByLabel('Class limit').inputValue()).resolves.toBe('63');
+    await expect(form.getByLabel('Competition time').inputValue()).resolves.toBe('09:30');
+    await form.getByLabel('Competition time').fill('10:30');
+    await form.getByLabel('Usual weight').fill('67.8');
+    await form.getByRole('button', { name: 'Save weigh-in details' }).click();
+    await panel.getByText('Weigh-in details saved.').waitFor();
+    // The boxes now show the server's record; the limit, left as it was, still reads 63.0 kg.
+    const saved = panel.getByRole('form', { name: 'Weigh-in details' });
+    await expect(saved.getByLabel('Competition time').inputValue()).resolves.toBe('10:30');
+    await expect(saved.getByLabel('Usual weight').inputValue()).resolves.toBe('67.8');
+    await expect(panel.innerText()).resolves.toMatch(/63\.0\s?kg \(138\.9\s?lb\)/);
+    await screenshot(page, 'making-weight-details-1280');
+    await page.setViewportSize({ width: 375, height: 812 });
+    await screenshot(page, 'making-weight-details-375');
+    await page.setViewportSize({ width: 1280, height: 860 });
   });
 
   it('builds a cut plan and acknowledges the acute-share warning', async () => {
