@@ -2,9 +2,7 @@ import {
   CUT_PATH_LABELS,
   CUT_PATHS,
   createCutPlanRequest,
-  parseTypedNumber,
   WEIGHT_UNIT_LABELS,
-  weightToKg,
   type CreateCutPlanRequest,
   type WeightUnit,
 } from '@driftmark/shared';
@@ -20,19 +18,7 @@ import { TextArea } from '@/components/ui/text-area';
 import { TextField } from '@/components/ui/text-field';
 import { isApiError } from '@/lib/api-client';
 import { useCreateCutPlan } from '../api/create-cut-plan';
-
-function readNumber(value: unknown): number {
-  if (typeof value === 'number') return value;
-  return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
-}
-
-/** A weight box read in the coach's unit and handed on in kg (the API takes kg only). */
-function readWeightKg(unit: WeightUnit) {
-  return (value: unknown): number => {
-    const n = readNumber(value);
-    return Number.isNaN(n) ? n : weightToKg(n, unit);
-  };
-}
+import { readNumber, readWeightKg } from '../utils/plan-numbers';
 
 type Pending = { values: CreateCutPlanRequest; warnings: [string, string][] };
 
