@@ -38,6 +38,39 @@ describe('parseErrorBody', () => {
     });
   });
 
+  it('keeps the warnings of a guardrails_unacknowledged body that match the shared schema, and only for that code', () => {
+    const warning = {
+      key: 'sodium_low:type:rest',
+      code: 'sodium_low',
+      severity: 'warning',
+      scope: { kind: 'day_type', key: 'rest' },
+      message: 'Rest day: sodium 1,200 mg is below 1,500 mg.',
+      source: 'NASEM 2019, doi:10.17226/25353',
+      field: null,
+    };
+    const error = parseErrorBody(409, {
+      error: {
+        code: 'guardrails_unacknowledged',
+        message: 'One guardrail warning needs your acknowledgement before this can be saved.',
+        fields: { [warning.key]: warning.message },
+        warnings: [warning, { key: 'broken' }, 'not a warning'],
+      },
+    });
+    expect(error.fields).toEqual({ [warning.key]: warning.message });
+    expect(error.warnings).toEqual([warning]);
+    // Tolerant of its absence (an older server) and of a malformed value.
+    expect(
+      parseErrorBody(409, { error: { code: 'guardrails_unacknowledged', message: 'x' } }).warnings,
+    ).toEqual([]);
+    expect(
+      parseErrorBody(409, { error: { code: 'guardrails_unacknowledged', message: 'x', warnings: {} } })
+        .warnings,
+    ).toEqual([]);
+    expect(
+      parseErrorBody(409, { error: { code: 'conflict', message: 'x', warnings: [warning] } }).warnings,
+    ).toEqual([]);
+  });
+
   it('passes the sign-in message through unchanged', () => {
     const error = parseErrorBody(401, {
       error: { code: 'invalid_credentials', message: 'E-mail or password is incorrect.' },

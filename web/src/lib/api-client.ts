@@ -1,4 +1,4 @@
-import type { ErrorCode } from '@driftmark/shared';
+import { unacknowledgedWarning, type ErrorCode, type UnacknowledgedWarning } from '@driftmark/shared';
 import { noteSessionEnd, type SessionEndReason } from './session-end';
 
 /** Codes the client adds for failures that never reached (or never came back from) the API. */
@@ -11,6 +11,8 @@ export class ApiError extends Error {
   readonly code: ErrorCode | ClientErrorCode;
   /** Field path (dot-joined, as the API sends it) → message, for validation_failed. */
   readonly fields: Record<string, string>;
+  /** For guardrails_unacknowledged: the server's warnings, whole; empty when the body had none. */
+  readonly warnings: UnacknowledgedWarning[];
   readonly requestId: string | undefined;
 
   constructor(init: {
@@ -18,12 +20,14 @@ export class ApiError extends Error {
     code: ErrorCode | ClientErrorCode;
     message: string;
     fields?: Record<string, string>;
+    warnings?: UnacknowledgedWarning[];
     requestId?: string;
   }) {
     super(init.message);
     this.status = init.status;
     this.code = init.code;
     this.fields = init.fields ?? {};
+    this.warnings = init.warnings ?? [];
     this.requestId = init.requestId;
   }
 }
@@ -57,6 +61,15 @@ function stringFields(value: unknown): Record<string, string> | undefined {
   return out;
 }
 
+/** The warnings the body carries that match the shared schema; others (or none) are left out. */
+function parseWarnings(value: unknown): UnacknowledgedWarning[] | undefined {
+  if (!Array.isArray(value)) return undefined;
+  return value.flatMap((item) => {
+    const parsed = unacknowledgedWarning.safeParse(item);
+    return parsed.success ? [parsed.data] : [];
+  });
+}
+
 /**
  * Turns a failed response (status and parsed body, or undefined when the body was not JSON) into an
  * ApiError. Pure, so the mapping can be tested without a network.
@@ -75,6 +88,7 @@ export function parseErrorBody(status: number, body: unknown): ApiError {
     code: error.code as ErrorCode,
     message: typeof error.message === 'string' && error.message ? error.message : fallback.message,
     fields: stringFields(error.fields),
+    warnings: error.code === 'guardrails_unacknowledged' ? parseWarnings(error.warnings) : undefined,
     requestId: typeof error.requestId === 'string' ? error.requestId : undefined,
   });
 }
