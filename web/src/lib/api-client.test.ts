@@ -38,37 +38,16 @@ describe('parseErrorBody', () => {
     });
   });
 
-  it('keeps the warnings of a guardrails_unacknowledged body that match the shared schema, and only for that code', () => {
-    const warning = {
-      key: 'sodium_low:type:rest',
-      code: 'sodium_low',
-      severity: 'warning',
-      scope: { kind: 'day_type', key: 'rest' },
-      message: 'Rest day: sodium 1,200 mg is below 1,500 mg.',
-      source: 'NASEM 2019, doi:10.17226/25353',
-      field: null,
-    };
-    const error = parseErrorBody(409, {
-      error: {
-        code: 'guardrails_unacknowledged',
-        message: 'One guardrail warning needs your acknowledgement before this can be saved.',
-        fields: { [warning.key]: warning.message },
-        warnings: [warning, { key: 'broken' }, 'not a warning'],
-      },
+  it('keeps the warnings of a guardrails_unacknowledged body as sent, and only for that code', () => {
+    const warnings = [{ key: 'sodium_low:type:rest', severity: 'warning' }, 'not a warning'];
+    const body = (code: string, extra: Record<string, unknown>) => ({
+      error: { code, message: 'x', ...extra },
     });
-    expect(error.fields).toEqual({ [warning.key]: warning.message });
-    expect(error.warnings).toEqual([warning]);
-    // Tolerant of its absence (an older server) and of a malformed value.
-    expect(
-      parseErrorBody(409, { error: { code: 'guardrails_unacknowledged', message: 'x' } }).warnings,
-    ).toEqual([]);
-    expect(
-      parseErrorBody(409, { error: { code: 'guardrails_unacknowledged', message: 'x', warnings: {} } })
-        .warnings,
-    ).toEqual([]);
-    expect(
-      parseErrorBody(409, { error: { code: 'conflict', message: 'x', warnings: [warning] } }).warnings,
-    ).toEqual([]);
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', { warnings })).warnings).toEqual(warnings);
+    // Tolerant of its absence (an older server) and of a value that is not a list.
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', {})).warnings).toEqual([]);
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', { warnings: {} })).warnings).toEqual([]);
+    expect(parseErrorBody(409, body('conflict', { warnings })).warnings).toEqual([]);
   });
 
   it('passes the sign-in message through unchanged', () => {

@@ -1,4 +1,4 @@
-import { unacknowledgedWarning, type ErrorCode, type UnacknowledgedWarning } from '@driftmark/shared';
+import type { ErrorCode } from '@driftmark/shared';
 import { noteSessionEnd, type SessionEndReason } from './session-end';
 
 /** Codes the client adds for failures that never reached (or never came back from) the API. */
@@ -11,8 +11,12 @@ export class ApiError extends Error {
   readonly code: ErrorCode | ClientErrorCode;
   /** Field path (dot-joined, as the API sends it) → message, for validation_failed. */
   readonly fields: Record<string, string>;
-  /** For guardrails_unacknowledged: the server's warnings, whole; empty when the body had none. */
-  readonly warnings: UnacknowledgedWarning[];
+  /**
+   * For guardrails_unacknowledged: the server's warnings as sent (empty when the body had none).
+   * Read them through `unacknowledgedWarning` (shared) where they are used: parsing them here would
+   * put zod on the first route.
+   */
+  readonly warnings: readonly unknown[];
   readonly requestId: string | undefined;
 
   constructor(init: {
@@ -20,7 +24,7 @@ export class ApiError extends Error {
     code: ErrorCode | ClientErrorCode;
     message: string;
     fields?: Record<string, string>;
-    warnings?: UnacknowledgedWarning[];
+    warnings?: readonly unknown[];
     requestId?: string;
   }) {
     super(init.message);
@@ -61,15 +65,6 @@ function stringFields(value: unknown): Record<string, string> | undefined {
   return out;
 }
 
-/** The warnings the body carries that match the shared schema; others (or none) are left out. */
-function parseWarnings(value: unknown): UnacknowledgedWarning[] | undefined {
-  if (!Array.isArray(value)) return undefined;
-  return value.flatMap((item) => {
-    const parsed = unacknowledgedWarning.safeParse(item);
-    return parsed.success ? [parsed.data] : [];
-  });
-}
-
 /**
  * Turns a failed response (status and parsed body, or undefined when the body was not JSON) into an
  * ApiError. Pure, so the mapping can be tested without a network.
@@ -88,7 +83,10 @@ export function parseErrorBody(status: number, body: unknown): ApiError {
     code: error.code as ErrorCode,
     message: typeof error.message === 'string' && error.message ? error.message : fallback.message,
     fields: stringFields(error.fields),
-    warnings: error.code === 'guardrails_unacknowledged' ? parseWarnings(error.warnings) : undefined,
+    warnings:
+      error.code === 'guardrails_unacknowledged' && Array.isArray(error.warnings)
+        ? error.warnings
+        : undefined,
     requestId: typeof error.requestId === 'string' ? error.requestId : undefined,
   });
 }

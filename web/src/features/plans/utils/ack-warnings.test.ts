@@ -1,7 +1,7 @@
 import { CUT_SOURCES, type CutWarningView, type GuardrailWarning } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
 import { ApiError, parseErrorBody } from '../../../lib/api-client';
-import { unacknowledgedFromError, type AckWarning } from './ack-warnings';
+import { judgedWarnings, unacknowledgedFromError, type AckWarning } from './ack-warnings';
 
 // Warnings shaped as the server sends them (messages and sources shortened fixture text).
 const sodium: GuardrailWarning = {
@@ -102,6 +102,23 @@ describe('unacknowledgedFromError', () => {
     expect(unacknowledgedFromError(refusal([sodium, lossRate], false), known)).toEqual([
       known[0],
       { key: lossRate.key, message: lossRate.message, source: '', severity: 'strong', where: null },
+    ]);
+  });
+
+  it('leaves out an item of `warnings` the shared schema does not accept', () => {
+    const error = parseErrorBody(409, {
+      error: {
+        code: 'guardrails_unacknowledged',
+        message: 'x',
+        fields: { [sodium.key]: sodium.message, [fluid.key]: fluid.message },
+        warnings: [sodium, { key: fluid.key, severity: 'severe' }, 'not a warning'],
+      },
+    });
+    expect(judgedWarnings(error)).toEqual([sodium]);
+    // The one the server did not send whole: shown from `fields` at the higher severity.
+    expect(unacknowledgedFromError(error, [])?.map((w) => [w.key, w.severity, w.source])).toEqual([
+      [sodium.key, 'warning', sodium.source],
+      [fluid.key, 'strong', ''],
     ]);
   });
 

@@ -1,5 +1,5 @@
-import type { GuardrailWarning } from '@driftmark/shared';
-import { isApiError } from '../../../lib/api-client';
+import { unacknowledgedWarning, type GuardrailWarning, type UnacknowledgedWarning } from '@driftmark/shared';
+import { isApiError, type ApiError } from '../../../lib/api-client';
 
 /** A warning as the acknowledgement step lists it. */
 export interface AckWarning {
@@ -39,7 +39,7 @@ export function unacknowledgedFromError(
 ): AckWarning[] | null {
   if (!isApiError(error) || error.code !== 'guardrails_unacknowledged') return null;
   const byKey = new Map(known.map((w) => [w.key, w]));
-  const judged = new Map(error.warnings.map((w) => [w.key, w]));
+  const judged = new Map(judgedWarnings(error).map((w) => [w.key, w]));
   const fromServer = Object.entries(error.fields).map(([key, message]): AckWarning => {
     const w = judged.get(key);
     if (w) {
@@ -51,4 +51,12 @@ export function unacknowledgedFromError(
   // Keep the ones already ticked in the list too: the save sends every current key.
   const serverKeys = new Set(fromServer.map((w) => w.key));
   return [...known.filter((w) => !serverKeys.has(w.key)), ...fromServer];
+}
+
+/** The 409's `warnings` that match the shared schema; any other item is left out. */
+export function judgedWarnings(error: ApiError): UnacknowledgedWarning[] {
+  return error.warnings.flatMap((item) => {
+    const parsed = unacknowledgedWarning.safeParse(item);
+    return parsed.success ? [parsed.data] : [];
+  });
 }
