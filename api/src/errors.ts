@@ -1,17 +1,21 @@
-import { ERROR_CODES, type ErrorCode } from '@driftmark/shared';
+import { ERROR_CODES, type ErrorCode, type UnacknowledgedWarning } from '@driftmark/shared';
 
 /** An error the API means to send: a stable code, its HTTP status, a message for people. */
 export class AppError extends Error {
   readonly status: number;
+  /** Only for `guardrails_unacknowledged` (see `guardrailsUnacknowledged`): the warnings, whole. */
+  readonly warnings?: UnacknowledgedWarning[];
 
   constructor(
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string>,
+    extra?: { warnings: UnacknowledgedWarning[] },
   ) {
     super(message);
     this.name = 'AppError';
     this.status = ERROR_CODES[code];
+    if (extra && code === 'guardrails_unacknowledged') this.warnings = extra.warnings;
   }
 }
 
@@ -35,3 +39,20 @@ export const conflict = (message: string, fields?: Record<string, string>): AppE
 
 export const tokenInvalid = (message = 'This link is no longer valid. Ask for a new one.'): AppError =>
   new AppError('token_invalid', message);
+
+/**
+ * A save refused because these warnings are not acknowledged (409): `fields` keeps key → message
+ * for older clients, `warnings` carries each one as the server judged it (severity, source, scope).
+ */
+export const guardrailsUnacknowledged = (
+  missing: readonly UnacknowledgedWarning[],
+  noun = 'guardrail warning',
+): AppError =>
+  new AppError(
+    'guardrails_unacknowledged',
+    missing.length === 1
+      ? `One ${noun} needs your acknowledgement before this can be saved.`
+      : `${missing.length} ${noun}s need your acknowledgement before this can be saved.`,
+    Object.fromEntries(missing.map((w) => [w.key, w.message])),
+    { warnings: [...missing] },
+  );

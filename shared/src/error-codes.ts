@@ -1,6 +1,8 @@
+import type { UnacknowledgedWarning } from './schemas/guardrail-refusal.js';
+
 /**
  * Stable, snake_case error codes carried in every error body:
- * `{ "error": { "code", "message", "fields"?, "requestId"? } }`.
+ * `{ "error": { "code", "message", "fields"?, "warnings"?, "requestId"? } }`.
  */
 export const ERROR_CODES = {
   validation_failed: 400,
@@ -14,7 +16,10 @@ export const ERROR_CODES = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
-  /** A save met guardrail warnings the coach has not acknowledged; `fields` lists them by key. */
+  /**
+   * A save met guardrail warnings the coach has not acknowledged: `fields` lists them by key → message,
+   * `warnings` carries each one whole (severity, source, scope).
+   */
   guardrails_unacknowledged: 409,
   /** The request body did not arrive in time (a stalled or trickling client). */
   request_timeout: 408,
@@ -35,6 +40,8 @@ export interface ErrorBody {
     message: string;
     /** Field path (dot-joined, e.g. `event.date`) → message. */
     fields?: Record<string, string>;
+    /** Only with `guardrails_unacknowledged`: the server's warnings that were not acknowledged. */
+    warnings?: UnacknowledgedWarning[];
     requestId?: string;
   };
 }

@@ -38,5 +38,6 @@ export * from './reader.js';
 export * from './rules/rate-verdict.js';
 export * from './rules/weight-cut.js';
 export * from './schemas/cuts.js';
+export * from './schemas/guardrail-refusal.js';
 export * from './body-composition.js';
 export * from './schemas/body-composition.js';

@@ -3,7 +3,7 @@
  * cut page, the roster and the review queue, cut plans with their acknowledgements, and the
  * coach's e-mail the first time the projection is over the limit. Real PostgreSQL, pinned clock.
  */
-import { cutView, rosterRow, reviewQueueItem } from '@driftmark/shared';
+import { cutView, cutWarningView, rosterRow, reviewQueueItem } from '@driftmark/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
@@ -195,7 +195,7 @@ describe('cut plans', () => {
     ...overrides,
   });
 
-  it('refuses an unacknowledged acute share above 5 % (409, fields by key), then stores the acknowledgement', async () => {
+  it('refuses an unacknowledged acute share above 5 % (409, by key and whole), then stores the acknowledgement', async () => {
     // 66.5 → 63: 3.5 kg = 5.26 % of 66.5 kg; the chronic part 66.8 → 66.5 kg over 11 days is
     // 0.19 kg a week, no rate warning.
     const plan = body({ startKg: 66.8 });
@@ -203,6 +203,12 @@ describe('cut plans', () => {
     expect(refused.status).toBe(409);
     expect(refused.body.error.code).toBe('guardrails_unacknowledged');
     expect(Object.keys(refused.body.error.fields)).toEqual(['acute_share']);
+    // The warning whole, as the server judged it: an acute share above the team's 5 % is strong.
+    const judged = cutWarningView.array().parse(refused.body.error.warnings);
+    expect(judged.map((w) => [w.key, w.severity, w.message])).toEqual([
+      ['acute_share', 'strong', refused.body.error.fields.acute_share],
+    ]);
+    expect(judged[0]!.source).toMatch(/\S/);
     expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
 
     const saved = await coachAgent

@@ -1,6 +1,7 @@
 import {
   GUARDRAIL_DEFAULTS,
   dayView,
+  guardrailWarning,
   planVersionView,
   planView,
   type GuardrailWarning,
@@ -324,12 +325,24 @@ describe('guardrails on save', () => {
       'sodium_low:type:rest',
     ]);
     expect(res.body.error.fields['sodium_low:type:rest']).toMatch(/1,200 mg/);
+    // The same warnings whole, as the server judged them: the web renders these, it does not guess.
+    const judged = guardrailWarning.array().parse(res.body.error.warnings);
+    expect(judged.map((w) => [w.key, w.code, w.severity, w.scope]).sort()).toEqual([
+      ['diuretic:type:training', 'diuretic', 'strong', { kind: 'day_type', key: 'training' }],
+      ['sodium_low:type:rest', 'sodium_low', 'warning', { kind: 'day_type', key: 'rest' }],
+    ]);
+    expect(judged.find((w) => w.code === 'sodium_low')!.source).toMatch(/NASEM/);
+    expect(judged.find((w) => w.code === 'diuretic')!.source).not.toBe('');
+    for (const w of judged) expect(res.body.error.fields[w.key]).toBe(w.message);
     expect(await planRows(t.dataSource)).toEqual(before);
 
     // One acknowledged, one not: still refused, naming only the missing one.
     const partly = await create(versionBody(TODAY, risky(), { acknowledgedKeys: ['sodium_low:type:rest'] }));
     expect(partly.status).toBe(409);
     expect(Object.keys(partly.body.error.fields)).toEqual(['diuretic:type:training']);
+    expect(partly.body.error.warnings.map((w: GuardrailWarning) => w.key)).toEqual([
+      'diuretic:type:training',
+    ]);
     expect(await planRows(t.dataSource)).toEqual(before);
   });
 

@@ -139,13 +139,14 @@ export function sendError(req: Request, res: Response, err: unknown): void {
       code: appError.code,
       message: appError.message,
       ...(appError.fields && Object.keys(appError.fields).length > 0 ? { fields: appError.fields } : {}),
+      ...(appError.warnings ? { warnings: appError.warnings } : {}),
       ...(requestId ? { requestId } : {}),
     },
   };
   res.status(appError.status).json(body);
 }
 
-/** The one place errors become responses: `{ error: { code, message, fields?, requestId } }`. */
+/** The one place errors become responses: `{ error: { code, message, fields?, warnings?, requestId } }`. */
 export function errorHandler(): ErrorRequestHandler {
   return (err: unknown, req, res, next) => {
     if (res.headersSent) {

@@ -21,7 +21,7 @@ import {
   type WeighInEventView,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
-import { AppError, conflict, notFound, validationFailed } from '../errors.js';
+import { conflict, guardrailsUnacknowledged, notFound, validationFailed } from '../errors.js';
 import { localDateTime } from '../lib/local-time.js';
 import type { Actor } from '../policies/actor.js';
 import { presentCutPlan } from '../presenters/cut.presenter.js';
@@ -182,7 +182,7 @@ export class CutService {
 
   /**
    * Saves a cut plan for the athlete's weigh-in: refused (409 `guardrails_unacknowledged`, fields by
-   * key) while any of its warnings is not acknowledged; stored with one acknowledgement per warning.
+   * key, warnings whole) while any of its warnings is not acknowledged; stored with one acknowledgement per warning.
    */
   async createPlan(actor: Actor, athlete: AthleteWithPeople, input: CreateCutPlanRequest): Promise<CutView> {
     const event = weighInEventOf(athlete);
@@ -198,15 +198,7 @@ export class CutService {
     const today = localDateTime(this.deps.clock(), athlete.user.timeZone).date;
     const warnings = cutFigures(shapeOf(shapeInput), thresholdPct, today).warnings;
     const missing = warnings.filter((w) => !input.acknowledgedKeys.includes(w.key));
-    if (missing.length > 0) {
-      throw new AppError(
-        'guardrails_unacknowledged',
-        missing.length === 1
-          ? 'One warning needs your acknowledgement before this can be saved.'
-          : `${missing.length} warnings need your acknowledgement before this can be saved.`,
-        Object.fromEntries(missing.map((w) => [w.key, w.message])),
-      );
-    }
+    if (missing.length > 0) throw guardrailsUnacknowledged(missing, 'warning');
     const at = this.deps.clock();
     await this.deps.dataSource.transaction((manager) =>
       new CutPlanRepository(manager).create(

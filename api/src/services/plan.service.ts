@@ -26,7 +26,7 @@ import {
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import { AppError, conflict, notFound, validationFailed } from '../errors.js';
+import { conflict, guardrailsUnacknowledged, notFound, validationFailed } from '../errors.js';
 import { shiftDate } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
 import { trendWeightKg } from '../lib/analysis.js';
@@ -118,20 +118,13 @@ function contentErrors(content: PlanContent, baseline: PlanBaseline): Record<str
 const pastMessage = (today: string) =>
   `Choose today (${today}) or a later day: past days keep the plan they had`;
 
-/** Refuses with 409 when a current warning is not in `acknowledgedKeys`; fields name each by key. */
+/** Refuses with 409 when a current warning is not in `acknowledgedKeys`, naming each one whole. */
 function assertAcknowledged(
   warnings: readonly GuardrailWarning[],
   acknowledgedKeys: readonly string[],
 ): void {
   const missing = unacknowledged(warnings, acknowledgedKeys);
-  if (missing.length === 0) return;
-  throw new AppError(
-    'guardrails_unacknowledged',
-    missing.length === 1
-      ? 'One guardrail warning needs your acknowledgement before this can be saved.'
-      : `${missing.length} guardrail warnings need your acknowledgement before this can be saved.`,
-    Object.fromEntries(missing.map((w) => [w.key, w.message])),
-  );
+  if (missing.length > 0) throw guardrailsUnacknowledged(missing);
 }
 
 export class PlanService {

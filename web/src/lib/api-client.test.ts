@@ -38,6 +38,18 @@ describe('parseErrorBody', () => {
     });
   });
 
+  it('keeps the warnings of a guardrails_unacknowledged body as sent, and only for that code', () => {
+    const warnings = [{ key: 'sodium_low:type:rest', severity: 'warning' }, 'not a warning'];
+    const body = (code: string, extra: Record<string, unknown>) => ({
+      error: { code, message: 'x', ...extra },
+    });
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', { warnings })).warnings).toEqual(warnings);
+    // Tolerant of its absence (an older server) and of a value that is not a list.
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', {})).warnings).toEqual([]);
+    expect(parseErrorBody(409, body('guardrails_unacknowledged', { warnings: {} })).warnings).toEqual([]);
+    expect(parseErrorBody(409, body('conflict', { warnings })).warnings).toEqual([]);
+  });
+
   it('passes the sign-in message through unchanged', () => {
     const error = parseErrorBody(401, {
       error: { code: 'invalid_credentials', message: 'E-mail or password is incorrect.' },

@@ -11,6 +11,12 @@ export class ApiError extends Error {
   readonly code: ErrorCode | ClientErrorCode;
   /** Field path (dot-joined, as the API sends it) → message, for validation_failed. */
   readonly fields: Record<string, string>;
+  /**
+   * For guardrails_unacknowledged: the server's warnings as sent (empty when the body had none).
+   * Read them through `unacknowledgedWarning` (shared) where they are used: parsing them here would
+   * put zod on the first route.
+   */
+  readonly warnings: readonly unknown[];
   readonly requestId: string | undefined;
 
   constructor(init: {
@@ -18,12 +24,14 @@ export class ApiError extends Error {
     code: ErrorCode | ClientErrorCode;
     message: string;
     fields?: Record<string, string>;
+    warnings?: readonly unknown[];
     requestId?: string;
   }) {
     super(init.message);
     this.status = init.status;
     this.code = init.code;
     this.fields = init.fields ?? {};
+    this.warnings = init.warnings ?? [];
     this.requestId = init.requestId;
   }
 }
@@ -75,6 +83,10 @@ export function parseErrorBody(status: number, body: unknown): ApiError {
     code: error.code as ErrorCode,
     message: typeof error.message === 'string' && error.message ? error.message : fallback.message,
     fields: stringFields(error.fields),
+    warnings:
+      error.code === 'guardrails_unacknowledged' && Array.isArray(error.warnings)
+        ? error.warnings
+        : undefined,
     requestId: typeof error.requestId === 'string' ? error.requestId : undefined,
   });
 }

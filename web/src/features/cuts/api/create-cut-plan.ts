@@ -3,7 +3,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { cutKeys } from './keys';
 
-/** POST /api/athletes/:athleteId/cut-plans: 409 `guardrails_unacknowledged` lists warnings by key. */
+/** POST /api/athletes/:athleteId/cut-plans: 409 `guardrails_unacknowledged` lists warnings by key and whole. */
 export function createCutPlan(athleteId: string, body: CreateCutPlanRequest): Promise<CutView> {
   return api.post<CutView>(`/api/athletes/${encodeURIComponent(athleteId)}/cut-plans`, body);
 }

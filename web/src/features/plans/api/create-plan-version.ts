@@ -5,7 +5,8 @@ import { afterPlanWrite, planPath, type PlanWriteOptions } from './plan-cache';
 
 /**
  * POST /api/athletes/:athleteId/plan/versions: saves a new version. Every current guardrail warning
- * must be in `acknowledgedKeys`, else 409 guardrails_unacknowledged with the missing ones in `fields`.
+ * must be in `acknowledgedKeys`, else 409 guardrails_unacknowledged with the missing ones in `fields`
+ * (key → message) and whole in `warnings`.
  */
 export function createPlanVersion(
   athleteId: string,

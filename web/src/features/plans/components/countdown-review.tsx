@@ -7,15 +7,10 @@ import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
 import { formatDate } from '@/lib/format';
 import * as fig from '../utils/figures';
+import { toAckWarnings, unacknowledgedFromError, type AckWarning } from '../utils/ack-warnings';
 import { scopeLabel } from '../utils/scope-label';
 import { TargetsTable } from './targets-table';
-import {
-  toAckWarnings,
-  unacknowledgedFromError,
-  useAcknowledgements,
-  WarningChecklist,
-  type AckWarning,
-} from './warning-checklist';
+import { useAcknowledgements, WarningChecklist } from './warning-checklist';
 
 interface CountdownReviewProps {
   preview: CountdownPreview;
@@ -58,7 +53,7 @@ export function CountdownReview({
     try {
       await onConfirm({ acknowledgedKeys: [...acks.ticked], reason: reasonText || undefined });
     } catch (e) {
-      const again = unacknowledgedFromError(e, list);
+      const again = unacknowledgedFromError(e, list, (w) => scopeLabel(w, preview.content));
       if (again) {
         setList(again);
         acks.clear(Object.keys(isApiError(e) ? e.fields : {}));

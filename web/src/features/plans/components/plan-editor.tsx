@@ -58,15 +58,10 @@ import {
   type PlanContentFormValues,
   type PlanFormValues,
 } from '../utils/plan-form';
+import { toAckWarnings, unacknowledgedFromError, type AckWarning } from '../utils/ack-warnings';
 import { scopeLabel } from '../utils/scope-label';
 import { DayTargetsFields } from './day-targets-fields';
-import {
-  toAckWarnings,
-  unacknowledgedFromError,
-  useAcknowledgements,
-  WarningChecklist,
-  type AckWarning,
-} from './warning-checklist';
+import { useAcknowledgements, WarningChecklist } from './warning-checklist';
 
 type PlanForm = UseFormReturn<PlanFormValues, unknown, CreatePlanVersionRequest>;
 
@@ -804,7 +799,7 @@ function SaveReview({
     try {
       await create.mutateAsync({ ...pending.request, acknowledgedKeys: [...acks.ticked] });
     } catch (error) {
-      const again = unacknowledgedFromError(error, list);
+      const again = unacknowledgedFromError(error, list, (w) => scopeLabel(w, pending.request.content));
       if (again) {
         setList(again);
         acks.clear(Object.keys(isApiError(error) ? error.fields : {}));

@@ -1,55 +1,7 @@
-import type { GuardrailWarning } from '@driftmark/shared';
 import { useMemo, useState } from 'react';
 import { Badge } from '@/components/ui/badge';
-import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
-
-/** A warning as the acknowledgement step lists it. */
-export interface AckWarning {
-  key: string;
-  message: string;
-  /** Empty when only the server's key and message are known (a 409 listing new warnings). */
-  source: string;
-  severity: GuardrailWarning['severity'];
-  /** Where it applies ("Rest day", "Sat 5 Dec 2026", "Whole plan"). */
-  where: string | null;
-}
-
-export function toAckWarnings(
-  warnings: readonly GuardrailWarning[],
-  where: (w: GuardrailWarning) => string | null,
-): AckWarning[] {
-  return warnings.map((w) => ({
-    key: w.key,
-    message: w.message,
-    source: w.source,
-    severity: w.severity,
-    // A day's or day type's message already opens with its name; only plan-wide ones need a label.
-    where: w.scope.kind === 'plan' ? where(w) : null,
-  }));
-}
-
-/**
- * After a 409 guardrails_unacknowledged: the server's list (`fields`: key → message), keeping what
- * is already known of each warning. Null for any other error.
- */
-export function unacknowledgedFromError(error: unknown, known: readonly AckWarning[]): AckWarning[] | null {
-  if (!isApiError(error) || error.code !== 'guardrails_unacknowledged') return null;
-  const byKey = new Map(known.map((w) => [w.key, w]));
-  const fromServer = Object.entries(error.fields).map(
-    ([key, message]): AckWarning =>
-      byKey.get(key) ?? {
-        key,
-        message,
-        source: '',
-        severity: key.startsWith('loss_rate_strong') || key.startsWith('diuretic') ? 'strong' : 'warning',
-        where: null,
-      },
-  );
-  // Keep the ones already ticked in the list too: the save sends every current key.
-  const serverKeys = new Set(fromServer.map((w) => w.key));
-  return [...known.filter((w) => !serverKeys.has(w.key)), ...fromServer];
-}
+import type { AckWarning } from '../utils/ack-warnings';
 
 /** Ticks per warning; a tick survives a new list only while its warning is still in it. */
 export function useAcknowledgements(warnings: readonly AckWarning[]) {
