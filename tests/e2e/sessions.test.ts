@@ -72,6 +72,9 @@ describe('signed-in devices and a session that ends', () => {
     const { page, context } = laptop;
     await page.goto('/athlete/trends');
     await page.getByRole('link', { name: 'History' }).first().waitFor();
+    // The trends page's own reads must be answered first: one still in flight when the cookie goes
+    // stale would end the session (and leave the page) before the click.
+    await page.waitForLoadState('networkidle');
     const [cookie] = (await context.cookies()).filter((c) => c.name === 'dm_session');
     expect(cookie).toBeDefined();
     await context.addCookies([{ ...cookie!, value: 'a.stale.token' }]);
