@@ -1,5 +1,14 @@
 import { parseTypedNumber } from '@driftmark/shared';
 
+/**
+ * A form box's value as a number for a schema (`setValueAs`): typed text ("1 200", "1,200") by the
+ * shared rule; empty or not a number → NaN, which the schema refuses with its own message.
+ */
+export function readBoxNumber(value: unknown): number {
+  if (typeof value === 'number') return value;
+  return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
+}
+
 /** What a number box says when its text is not a number. */
 export const NOT_A_NUMBER = 'Enter a number, e.g. 72.5';
 

@@ -18,7 +18,8 @@ import { TextArea } from '@/components/ui/text-area';
 import { TextField } from '@/components/ui/text-field';
 import { isApiError } from '@/lib/api-client';
 import { useCreateCutPlan } from '../api/create-cut-plan';
-import { readNumber, readWeightKg } from '../utils/plan-numbers';
+import { readBoxNumber } from '@/lib/number-reader';
+import { readWeightKg } from '../utils/plan-numbers';
 
 type Pending = { values: CreateCutPlanRequest; warnings: [string, string][] };
 
@@ -47,7 +48,7 @@ export function CutPlanBuilder({
     resolver: zodResolver(createCutPlanRequest),
     defaultValues: { startDate: today, acuteDays: 3, path: 'linear', notes: null, acknowledgedKeys: [] },
   });
-  const number = { setValueAs: readNumber };
+  const number = { setValueAs: readBoxNumber };
   const weight = { setValueAs: readWeightKg(unit) };
 
   async function submit(values: CreateCutPlanRequest, keys: string[]) {

@@ -1,10 +1,4 @@
-import {
-  GUARDRAIL_DEFAULTS,
-  guardrailFloors,
-  parseTypedNumber,
-  SEXES,
-  type GuardrailFloors,
-} from '@driftmark/shared';
+import { GUARDRAIL_DEFAULTS, guardrailFloors, SEXES, type GuardrailFloors } from '@driftmark/shared';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
@@ -14,16 +8,11 @@ import { Form, SubmitButton } from '@/components/ui/form';
 import { Skeleton } from '@/components/ui/spinner';
 import { TextField } from '@/components/ui/text-field';
 import { formatNumber, NBSP } from '@/lib/format';
+import { readBoxNumber } from '@/lib/number-reader';
 import { useGuardrails } from '../api/get-guardrails';
 import { useUpdateGuardrails } from '../api/update-guardrails';
 
 const SEX_LABELS: Record<(typeof SEXES)[number], string> = { female: 'Women', male: 'Men' };
-
-/** A typed number ("1 200", "1,200") for the schema; empty or not a number → NaN (the schema says so). */
-function readNumber(value: unknown): number {
-  if (typeof value === 'number') return value;
-  return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
-}
 
 const kcal = (n: number) => `${formatNumber(n)}${NBSP}kcal`;
 const ml = (n: number) => `${formatNumber(n)}${NBSP}mL`;
@@ -155,7 +144,7 @@ function FloorsEditor({ floors, onSaved }: { floors: GuardrailFloors; onSaved?: 
       onSaved?.();
     },
   });
-  const number = { setValueAs: readNumber };
+  const number = { setValueAs: readBoxNumber };
 
   return (
     <Form
