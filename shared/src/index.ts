@@ -41,3 +41,6 @@ export * from './schemas/cuts.js';
 export * from './schemas/guardrail-refusal.js';
 export * from './body-composition.js';
 export * from './schemas/body-composition.js';
+export * from './meal-nutrients.js';
+export * from './schemas/meal-plans.js';
+export * from './meal-plans/totals.js';

@@ -6,7 +6,7 @@ import type { MealEntry } from '../entities/meal-entry.entity.js';
 import type { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import type { SymptomReport } from '../entities/symptom-report.entity.js';
 import type { WeighIn } from '../entities/weigh-in.entity.js';
-import { sumNutrients } from '../lib/meal-nutrients.js';
+import { sumNutrients } from '@driftmark/shared';
 
 type Of<K extends keyof DayView> = DayView[K];
 

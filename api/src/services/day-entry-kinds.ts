@@ -22,7 +22,7 @@ import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
 import { presentFluid, presentMeal, presentSupplement, presentSymptom } from '../presenters/day.presenter.js';
-import { foodMealNutrients, macroMealNutrients, type Per100g } from '../lib/meal-nutrients.js';
+import { foodMealNutrients, macroMealNutrients, type Per100g } from '@driftmark/shared';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { AthleteFlagRepository } from '../repositories/athlete-flag.repository.js';
 import { resolveFood } from './food.service.js';

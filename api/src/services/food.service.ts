@@ -2,7 +2,7 @@ import type { CreateFoodRequest, FoodView } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { findReferenceFood, listReferenceFoods } from '../adapters/reference-foods.js';
 import { compareByRelevance, nameMatches, searchWords } from '../lib/food-search.js';
-import type { Per100g } from '../lib/meal-nutrients.js';
+import type { Per100g } from '@driftmark/shared';
 import type { Actor } from '../policies/actor.js';
 import { presentReferenceFood, presentTeamFood, teamFoodEnergyKcal } from '../presenters/food.presenter.js';
 import { FoodRepository } from '../repositories/food.repository.js';

@@ -158,6 +158,7 @@ export function resolveTargets(
     supplements: targets.supplements,
     eventTimed: eventTimedItems(targets.supplements, clock?.event ?? null, clock?.athleteTimeZone ?? null),
     note: targets.note,
+    meals: targets.meals ?? [],
     basis,
   };
 }

@@ -287,3 +287,35 @@ export function adherenceOf(states: Iterable<DriftState>): {
   }
   return { targetDays, loggedDays, onPlanDays, adherence: loggedDays === 0 ? null : onPlanDays / loggedDays };
 }
+
+/**
+ * Adherence to the meal plan: planned meals logged against planned, an at-least target with a
+ * tolerance of a quarter of the planned meals (common practice, no source): with four meals, one
+ * missed is on plan, two drifting, three off plan; with three, one missed is drifting.
+ */
+export const MEAL_PLAN_ADHERENCE_RULE = {
+  kind: 'at_least' as const,
+  tolerancePct: 25,
+  source: `Planned meals logged of planned, a quarter of them short still on plan: ${COMMON_PRACTICE}`,
+};
+
+/**
+ * The day's meal-plan adherence: null without planned meals; `in_progress` on the athlete's today;
+ * `not_logged` on a finished day without any meal logged at all; otherwise judged by the rule above.
+ */
+export function mealPlanAdherence(input: {
+  planned: number;
+  logged: number;
+  anyMealLogged: boolean;
+  inProgress: boolean;
+}): { planned: number; logged: number; state: DriftState; source: string } | null {
+  const { planned, logged } = input;
+  if (planned === 0) return null;
+  const { kind, tolerancePct, source } = MEAL_PLAN_ADHERENCE_RULE;
+  const state: DriftState = input.inProgress
+    ? 'in_progress'
+    : !input.anyMealLogged
+      ? 'not_logged'
+      : judge(kind, logged - planned, pctOf(planned, tolerancePct));
+  return { planned, logged, state, source };
+}

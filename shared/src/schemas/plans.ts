@@ -3,6 +3,7 @@ import { clockTime, isoDate, text, uuid } from './common.js';
 import { LIMITS } from '../limits.js';
 import { EVENT_TYPES } from '../vocabulary.js';
 import { SEXES } from './athletes.js';
+import { plannedMeals } from './meal-plans.js';
 
 /**
  * Plans, countdown templates and guardrails. A plan is a series of versions; each version holds
@@ -185,6 +186,8 @@ export const dayTargets = z.object({
     .max(PLAN_LIMITS.supplementsPerDay, `At most ${PLAN_LIMITS.supplementsPerDay} items`),
   /** A note the athlete reads with the day's targets. */
   note: text('Note', { max: PLAN_LIMITS.note }).nullable(),
+  /** The day's meal plan: meals at clock times with foods and quantities. Absent in older versions. */
+  meals: plannedMeals.optional(),
 });
 export type DayTargets = z.infer<typeof dayTargets>;
 
@@ -322,6 +325,8 @@ export const resolvedTargets = z.object({
     }),
   ),
   note: z.string().nullable(),
+  /** The day's planned meals (absent before meal plans existed). */
+  meals: plannedMeals.optional(),
   /** How each relative figure was reached, by metric ("usual water 3000 mL + 1000 mL"). */
   basis: z.record(z.string(), z.string()),
 });

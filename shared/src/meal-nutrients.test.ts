@@ -1,4 +1,4 @@
-import { kcalToKj, kjToKcal } from '@driftmark/shared';
+import { kcalToKj, kjToKcal } from './nutrition.js';
 import { describe, expect, it } from 'vitest';
 import { foodMealNutrients, macroMealNutrients, sumNutrients } from './meal-nutrients.js';
 

@@ -1,4 +1,4 @@
-import { atwaterKcal } from '@driftmark/shared';
+import { atwaterKcal } from './nutrition.js';
 
 /** What a meal entry stores: grams as eaten and the energy they carry. */
 export interface MealNutrients {
