@@ -27,6 +27,7 @@ import { foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
+import { mealPlansRouter, plannedMealsRouter } from './routes/meal-plans.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
 import { meSessionsRouter } from './routes/me-sessions.routes.js';
@@ -115,6 +116,8 @@ export function createApp(deps: {
   api.use('/athletes', athletesRouter());
   // An athlete's days and entries (/athletes/:athleteId/days/…, /athletes/:athleteId/fluids/:entryId …).
   api.use('/athletes', checkInsRouter());
+  // Logging a planned meal of the day's meal plan (/athletes/:athleteId/days/:date/planned-meals/:mealId).
+  api.use('/athletes', plannedMealsRouter());
   // The plan, its versions and countdowns (/athletes/:athleteId/plan…).
   api.use('/athletes', plansRouter());
   // The trend, drift and flags over a range (/athletes/:athleteId/trend).
@@ -127,6 +130,8 @@ export function createApp(deps: {
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
+  // Meal-plan quantity fitting (/meal-plans/fit).
+  api.use('/meal-plans', mealPlansRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
   api.use(photosRouter());
   // Marks on an athlete's charts (/athletes/:athleteId/marks) and single marks (/marks/:markId…).

@@ -59,6 +59,13 @@ export class MealEntry extends ClientDayEntry {
   @Column({ name: 'energy_kcal', type: 'double precision' })
   energyKcal: number;
 
+  /**
+   * The planned meal this entry logs (its id in the day's meal plan), or null. No foreign key: the
+   * meal lives in a plan version's content.
+   */
+  @Column({ name: 'planned_meal_id', type: 'uuid', nullable: true })
+  plannedMealId: string | null;
+
   /** Sodium as eaten, mg: typed with macros, or the food's per-100 g value × quantity / 100; null when unknown. */
   @Column({ name: 'sodium_mg', type: 'double precision', nullable: true })
   sodiumMg: number | null;

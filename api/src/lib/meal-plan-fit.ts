@@ -10,7 +10,15 @@ import {
   type PlannedPer100g,
   type Tolerances,
 } from '@driftmark/shared';
-import loadHighs from 'highs';
+import * as highsModule from 'highs';
+import type { LegacyHighs } from 'highs';
+
+// The package's types read as CommonJS under NodeNext (the loader at `.default.default`) while
+// Node loads its ES build (the loader at `.default`); take whichever is the function.
+type HighsLoader = () => Promise<LegacyHighs>;
+const highsExports = highsModule as unknown as { default: HighsLoader | { default: HighsLoader } };
+const loadHighs: HighsLoader =
+  typeof highsExports.default === 'function' ? highsExports.default : highsExports.default.default;
 
 /*
  * "Fit the quantities" as a mixed-integer linear programme, solved by HiGHS (highs on npm, the
@@ -47,9 +55,9 @@ const METRICS: readonly { metric: Metric; target: keyof FitTargets; per100g: key
 /** Excess beyond a tolerance weighs this much more than the deviation within it. */
 const EXCESS_WEIGHT = 1000;
 
-let highsPromise: ReturnType<typeof loadHighs> | null = null;
+let highsPromise: Promise<LegacyHighs> | null = null;
 /** The WebAssembly module, instantiated once per process. */
-function highs(): ReturnType<typeof loadHighs> {
+function highs(): Promise<LegacyHighs> {
   highsPromise ??= loadHighs();
   return highsPromise;
 }

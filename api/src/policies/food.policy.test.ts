@@ -21,13 +21,13 @@ const N = false;
 
 // prettier-ignore
 const EXPECTED: Record<ActorName, Record<FoodAction, boolean>> = {
-  'owner of the team':       { read: Y, create: Y },
-  'coach of the team':       { read: Y, create: Y },
-  'assistant of the team':   { read: Y, create: N },
-  'athlete of the team':     { read: Y, create: N },
-  'owner of another team':   { read: N, create: N },
-  'coach of another team':   { read: N, create: N },
-  'athlete of another team': { read: N, create: N },
+  'owner of the team':       { read: Y, create: Y, plan_meals: Y },
+  'coach of the team':       { read: Y, create: Y, plan_meals: Y },
+  'assistant of the team':   { read: Y, create: N, plan_meals: N },
+  'athlete of the team':     { read: Y, create: N, plan_meals: N },
+  'owner of another team':   { read: N, create: N, plan_meals: N },
+  'coach of another team':   { read: N, create: N, plan_meals: N },
+  'athlete of another team': { read: N, create: N, plan_meals: N },
 };
 
 describe('food policy', () => {

@@ -11,12 +11,14 @@ export const FOOD_ACTIONS = [
   'read',
   /** Add a team food. */
   'create',
+  /** Fit a meal plan's quantities from the list's foods (planning is staff work). */
+  'plan_meals',
 ] as const;
 export type FoodAction = (typeof FOOD_ACTIONS)[number];
 
 const RULES: Record<Actor['role'], readonly FoodAction[]> = {
-  owner: ['read', 'create'],
-  coach: ['read', 'create'],
+  owner: ['read', 'create', 'plan_meals'],
+  coach: ['read', 'create', 'plan_meals'],
   assistant: ['read'],
   athlete: ['read'],
 };

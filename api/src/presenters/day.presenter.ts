@@ -50,6 +50,7 @@ export function presentMeal(m: MealEntry): Of<'meals'>[number] {
     alcoholG: m.alcoholG,
     sodiumMg: m.sodiumMg,
     energyKcal: m.energyKcal,
+    plannedMealId: m.plannedMealId ?? null,
   };
 }
 
@@ -118,6 +119,8 @@ export interface DayParts {
   plan: Pick<DayView, 'targets' | 'countdown' | 'cautions'>;
   /** Drift against the targets and the cut-off breach, worked out by the day service. */
   judged: Pick<DayView, 'drift' | 'cutoff' | 'breach' | 'timingBreaches'>;
+  /** The meal plan with what was logged of it, worked out by the day service. */
+  mealPlan: DayView['mealPlan'];
 }
 
 /** Everything logged on one day, with the fluid and meal totals. */
@@ -144,6 +147,7 @@ export function presentDay(p: DayParts): DayView {
     cutoff: p.judged.cutoff,
     breach: p.judged.breach,
     timingBreaches: p.judged.timingBreaches,
+    mealPlan: p.mealPlan,
   };
 }
 

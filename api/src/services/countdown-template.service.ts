@@ -1,5 +1,5 @@
 import { validateTemplate, type TemplateRequest, type TemplateView } from '@driftmark/shared';
-import type { DataSource } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import { notFound, validationFailed } from '../errors.js';
 import type { Actor } from '../policies/actor.js';
 import { presentTemplate } from '../presenters/plan.presenter.js';
@@ -7,18 +7,32 @@ import {
   CountdownTemplateRepository,
   type TemplateValues,
 } from '../repositories/countdown-template.repository.js';
+import { withPlannedFoods } from './meal-plan.service.js';
 
 type TemplateDeps = { dataSource: DataSource };
 
-/** The stored form of a request: rules beyond the zod shape checked, days ordered by offset. */
-function templateValues(input: TemplateRequest): TemplateValues {
+/**
+ * The stored form of a request: rules beyond the zod shape checked, planned foods filled from the
+ * team's food list, days ordered by offset.
+ */
+async function templateValues(
+  manager: EntityManager,
+  teamId: string,
+  input: TemplateRequest,
+): Promise<TemplateValues> {
   const errors = validateTemplate(input);
   if (Object.keys(errors).length > 0) throw validationFailed(errors);
+  const targets = await withPlannedFoods(
+    manager,
+    teamId,
+    input.days.map((d, i) => ({ path: `days.${i}.targets`, targets: d.targets })),
+  );
+  const days = input.days.map((d, i) => ({ ...d, targets: targets[i] ?? d.targets }));
   return {
     name: input.name,
     eventType: input.eventType,
     description: input.description || null,
-    days: [...input.days].sort((a, b) => a.offset - b.offset),
+    days: days.sort((a, b) => a.offset - b.offset),
   };
 }
 
@@ -42,7 +56,7 @@ export class CountdownTemplateService {
 
   async create(actor: Actor, input: TemplateRequest): Promise<TemplateView> {
     const id = await this.repo.create({
-      ...templateValues(input),
+      ...(await templateValues(this.deps.dataSource.manager, actor.teamId, input)),
       teamId: actor.teamId,
       createdById: actor.userId,
     });
@@ -51,7 +65,7 @@ export class CountdownTemplateService {
 
   /** Replaces a template; versions already applied keep the days they were given. */
   async update(teamId: string, id: string, input: TemplateRequest): Promise<TemplateView> {
-    const values = templateValues(input);
+    const values = await templateValues(this.deps.dataSource.manager, teamId, input);
     await this.repo.update(id, teamId, values);
     return this.get(teamId, id);
   }

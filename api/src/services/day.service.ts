@@ -15,6 +15,7 @@ import { SymptomReport } from '../entities/symptom-report.entity.js';
 import { validationFailed } from '../errors.js';
 import { dayActuals, mealTotals } from '../lib/day-actuals.js';
 import { dayDrift } from '../lib/day-drift.js';
+import { dayMealPlan } from '../lib/day-meal-plan.js';
 import { versionDay, type EventPlace } from '../lib/day-plan.js';
 import { daysBetween } from '../lib/dates.js';
 import { localDateTime } from '../lib/local-time.js';
@@ -146,7 +147,14 @@ export async function loadDayView(
           meals.map((m) => ({ time: m.localTime, energyKcal: m.energyKcal })),
         )
       : [];
+  const mealPlan = dayMealPlan({
+    planned: inForce?.meals ?? [],
+    logged: meals.map((m) => ({ id: m.id, plannedMealId: m.plannedMealId })),
+    date,
+    today,
+  });
   return presentDay({
+    mealPlan,
     athleteId: athlete.id,
     date,
     timeZone,

@@ -39,6 +39,7 @@ import { PlanRepository, type PlanVersionWithAuthor } from '../repositories/plan
 import { TeamRepository } from '../repositories/team.repository.js';
 import { WeighInRepository } from '../repositories/weigh-in.repository.js';
 import { bodyMeasurementViews, latestLeanMass } from './body-composition.service.js';
+import { contentWithPlannedFoods } from './meal-plan.service.js';
 
 /** Weigh-ins the baseline trend weight is taken over, in days up to and including today. */
 export const TREND_WINDOW_DAYS = 60;
@@ -231,12 +232,13 @@ export class PlanService {
     const errors = contentErrors(input.content, s.baseline);
     if (input.effectiveFrom < s.today) errors.effectiveFrom = pastMessage(s.today);
     if (Object.keys(errors).length > 0) throw validationFailed(errors);
-    const warnings = checkGuardrails(input.content, this.guardrailContext(athlete, s, input.content));
+    const content = await contentWithPlannedFoods(this.manager, athlete.teamId, input.content);
+    const warnings = checkGuardrails(content, this.guardrailContext(athlete, s, content));
     assertAcknowledged(warnings, input.acknowledgedKeys);
     return this.save(actor, athlete, s, {
       effectiveFrom: input.effectiveFrom,
       reason: input.reason,
-      content: input.content,
+      content,
       warnings,
     });
   }

@@ -4,6 +4,7 @@ import { CYCLE_PHASES, FLUID_KINDS, WEIGH_IN_TAGS } from './check-ins.js';
 import { VOLUME_UNITS, WEIGHT_UNITS } from '../units.js';
 import { countdownDay, dayCaution, dayTargetsInForce } from './plans.js';
 import { cutoffBreach, cutoffStatus, driftEntry } from './trends.js';
+import { dayMealPlan } from './meal-plans.js';
 
 /** How a value was typed, kept so it comes back exactly as typed. */
 const entered = <U extends readonly [string, ...string[]]>(units: U) =>
@@ -43,6 +44,8 @@ export const mealView = z.object({
   /** Sodium, mg (from the food list, or typed with macros); null when unknown. */
   sodiumMg: z.number().nullable(),
   energyKcal: z.number(),
+  /** The planned meal of the day's meal plan this entry logs, or null. */
+  plannedMealId: z.uuid().nullable(),
 });
 
 export const supplementView = z.object({
@@ -121,6 +124,8 @@ export const dayView = z.object({
   cautions: z.array(dayCaution),
   /** Drift per metric against the targets (empty without a plan); `in_progress` on the athlete's today. */
   drift: z.array(driftEntry),
+  /** The day's meal plan (its version's, like the targets) with what was logged of it; null without one. */
+  mealPlan: dayMealPlan.nullable(),
   /** Fluids after the day's cut-off against its allowance (null without a cut-off). */
   cutoff: cutoffStatus.nullable(),
   /** Fluids after the cut-off beyond the allowance, if any. */
