@@ -1,10 +1,12 @@
 import { toTypedText } from '@driftmark/shared';
 import {
   ATWATER_KCAL_PER_G,
+  DEFAULT_TOLERANCES,
   PLAN_LIMITS,
   resolveTargets,
   type PlanBaseline,
   type ResolvedTargets,
+  type Tolerances,
 } from '@driftmark/shared';
 import { useMemo, type ReactNode } from 'react';
 import { useFieldArray, useFormContext, useWatch, type Control, type FieldValues } from 'react-hook-form';
@@ -23,6 +25,7 @@ import {
   type Macro,
 } from '../utils/day-targets-form';
 import * as fig from '../utils/figures';
+import { MealPlanFields } from './meal-plan-fields';
 
 export interface DayTargetsFieldsProps<V extends FieldValues, TContext = unknown, TTransformed = V> {
   /**
@@ -48,6 +51,8 @@ export interface DayTargetsFieldsProps<V extends FieldValues, TContext = unknown
   label: string;
   /** A countdown day (or template day): supplements may be timed before the event. */
   eventTimes?: boolean;
+  /** The plan's tolerances, for judging the meal plan (the defaults in a template). */
+  tolerances?: Tolerances;
 }
 
 const ENERGY_KINDS = [
@@ -108,13 +113,15 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
   disabled = false,
   label,
   eventTimes = false,
+  tolerances,
 }: DayTargetsFieldsProps<V, TContext, TTransformed>) {
   const c = control as unknown as Control<FieldValues>;
   const { register, setValue } = useFormContext();
   const watched = useWatch({ control: c, name }) as DayTargetsFormValues | undefined;
   const values = watched ?? emptyDayTargetsFormValues();
   const base = baseline ?? NO_BASELINE;
-  const resolved = useMemo(() => safeResolve(liveDayTargets(values), base), [values, base]);
+  const live = useMemo(() => liveDayTargets(values), [values]);
+  const resolved = useMemo(() => safeResolve(live, base), [live, base]);
   const hasBaseline = Boolean(baseline);
 
   const warningsFor = (head: string) => warnings.filter((w) => w.field?.split('.')[0] === head);
@@ -132,6 +139,7 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
     'cardioMinutes',
     'supplements',
     'note',
+    'meals',
   ]);
   const dayWide = warnings.filter((w) => !w.field || !heads.has(w.field.split('.')[0] ?? ''));
 
@@ -362,6 +370,13 @@ export function DayTargetsFields<V extends FieldValues, TContext = unknown, TTra
       {warningsFor('supplements').length > 0 ? <WarningLines warnings={warningsFor('supplements')} /> : null}
 
       <NoteBox name={`${name}.note`} />
+
+      <MealPlanFields
+        name={name}
+        meals={live.meals ?? []}
+        resolved={resolved}
+        tolerances={tolerances ?? DEFAULT_TOLERANCES}
+      />
     </fieldset>
   );
 }

@@ -55,6 +55,7 @@ import {
   PLAN_MESSAGE_FIELD,
   TOLERANCE_KEYS,
   warningsFor,
+  toPlanContent,
   type PlanContentFormValues,
   type PlanFormValues,
 } from '../utils/plan-form';
@@ -129,6 +130,8 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
   const check = useCheckPlan(athleteId);
   const [pending, setPending] = useState<PendingSave | null>(null);
   const content = useWatch({ control: form.control, name: 'content' }) as PlanContentFormValues;
+  // The tolerances as typed so far (defaults for a box not yet a number), for judging meal plans.
+  const liveTolerances = toPlanContent(content, true).content.tolerances;
   const { isDirty, errors } = useFormState({ control: form.control });
   const errorsIn = (part: 'dayTypes' | 'dates', i: number) => Boolean(errors.content?.[part]?.[i]);
   useUnsavedChangesGuard(isDirty);
@@ -287,6 +290,7 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
                       issues={issuesFor(checks.issues, 'dayTypes', i)}
                       warnings={warningsFor(checks.warnings, 'dayTypes', i, content.dayTypes[i]?.key ?? '')}
                       label={`Targets for ${content.dayTypes[i]?.name || 'this day type'}`}
+                      tolerances={liveTolerances}
                     />
                   </Disclosure>
                 ))}
@@ -395,6 +399,7 @@ export function PlanEditor({ athleteId, plan, linkedKeys, onSaved }: PlanEditorP
                           warnings={warningsFor(checks.warnings, 'dates', i, d.date)}
                           label={`Targets for ${d.date}`}
                           eventTimes={d.countdownOffset !== null}
+                          tolerances={liveTolerances}
                         />
                       </Disclosure>
                     );

@@ -8,6 +8,7 @@ import type {
   ScheduleItem,
   WaterTarget,
 } from '@driftmark/shared';
+import { liveMeals, mealFormValues, toPlannedMeals, type MealFormValues } from './meal-plan-form';
 
 /*
  * A DayTargets as the coach types it: each metric's kind chosen from a list and its figure as text,
@@ -54,6 +55,8 @@ export interface DayTargetsFormValues {
   cardioMinutes: string;
   supplements: SupplementFormValues[];
   note: string;
+  /** The day's meal plan (absent in forms built before meal plans existed). */
+  meals?: MealFormValues[];
 }
 
 export const NOT_A_NUMBER = 'Enter a number, e.g. 2400';
@@ -131,6 +134,7 @@ export function dayTargetsFormValues(t: DayTargets): DayTargetsFormValues {
       beforeEventHours: (s.minutesBeforeEvent ?? []).map((m) => toTypedText(m / 60, 2)).join(', '),
     })),
     note: t.note ?? '',
+    ...(t.meals && t.meals.length > 0 ? { meals: t.meals.map(mealFormValues) } : {}),
   };
 }
 
@@ -203,6 +207,7 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
     };
   });
   const note = v.note.trim();
+  const meals = toPlannedMeals(v.meals ?? [], read);
 
   return {
     targets: {
@@ -234,6 +239,7 @@ export function toDayTargets(v: DayTargetsFormValues): TargetsConversion {
       cardioMinutes: optional('cardioMinutes', v.cardioMinutes),
       supplements,
       note: note === '' ? null : note,
+      ...(meals.length > 0 ? { meals } : {}),
     },
     numberErrors,
   };
@@ -291,6 +297,7 @@ export function liveDayTargets(v: DayTargetsFormValues): DayTargets {
           ? { minutesBeforeEvent: s.minutesBeforeEvent.filter((m) => usable(m) && m >= 0) }
           : {}),
       })),
+    ...(targets.meals ? { meals: liveMeals(targets.meals) } : {}),
   };
 }
 
@@ -315,6 +322,15 @@ export function targetsFormPath(path: string): string {
   if (head === 'foodCutoff')
     return second === 'allowanceKcal' ? 'foodCutoff.allowanceKcal' : 'foodCutoff.time';
   if (head === 'fluidCap') return second === 'after' ? 'fluidCap.after' : 'fluidCap.maxMl';
+  if (head === 'meals') {
+    // meals.0.foods.1.quantityG → the quantity box; a meal's name and time are their own boxes.
+    const [, , , food, field] = parts;
+    if (third === 'foods' && food !== undefined) {
+      const box = field === 'quantityG' || field === undefined || field === 'foodId' ? 'quantity' : field;
+      return `meals.${second}.foods.${food}.${box}`;
+    }
+    return third === 'time' || third === 'name' ? `meals.${second}.${third}` : `meals.${second}.name`;
+  }
   if (head === 'supplements') {
     if (second === undefined) return 'supplements';
     const field =
