@@ -4,6 +4,7 @@ import type { DayCardProps } from './day-card-props';
 import { EveningCard } from './evening-card';
 import { FluidsCard } from './fluids-card';
 import { MealsCard } from './meals-card';
+import { PlannedMealsCard } from './planned-meals-card';
 import { SupplementsCard } from './supplements-card';
 import { SymptomsCard } from './symptoms-card';
 import { WeighInCard } from './weigh-in-card';
@@ -24,6 +25,7 @@ export function DayEntryCards({ layout, previous, onUrgent, ...props }: DayEntry
     <div className={cn(layout === 'grid' ? 'grid items-start gap-4 lg:grid-cols-2' : 'space-y-4')}>
       <WeighInCard {...props} />
       <FluidsCard {...props} />
+      <PlannedMealsCard {...props} />
       <MealsCard {...props} />
       <SupplementsCard {...props} previous={previous} />
       <EveningCard {...props} />
