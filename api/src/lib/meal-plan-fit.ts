@@ -52,6 +52,13 @@ const METRICS: readonly { metric: Metric; target: keyof FitTargets; per100g: key
   { metric: 'fat', target: 'fatG', per100g: 'fatG' },
 ];
 
+/**
+ * The search stops once the proposal is within a fifth of a tolerance (summed over the targets) of
+ * the best the relaxation allows, or after 2 s: many near-equal proposals exist and proving the very
+ * best among them can take HiGHS far longer without changing what the coach sees.
+ */
+const SOLVER_OPTIONS = { output_flag: false, mip_abs_gap: 0.2, time_limit: 2 } as const;
+
 /** Excess beyond a tolerance weighs this much more than the deviation within it. */
 const EXCESS_WEIGHT = 1000;
 
@@ -147,8 +154,10 @@ export async function fitQuantities(
       'End',
     ].join('\n');
     const solver = await highs();
-    const result = solver.solve(lp, { output_flag: false });
-    if (result.Status !== 'Optimal') throw new Error(`Meal-plan fit ended with status ${result.Status}`);
+    const result = solver.solve(lp, SOLVER_OPTIONS);
+    // A time limit still leaves the best proposal found; only no proposal at all is an error.
+    const usable = result.Status === 'Optimal' || (result.Status === 'Time limit reached' && result.Columns['n0']);
+    if (!usable) throw new Error(`Meal-plan fit ended with status ${result.Status}`);
     steps = foods.map((_, i) => Math.round(result.Columns[`n${i}`]?.Primal ?? 0));
   }
 

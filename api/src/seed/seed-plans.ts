@@ -6,6 +6,7 @@ import type { EntityManager } from 'typeorm';
 import { CountdownTemplateRepository } from '../repositories/countdown-template.repository.js';
 import { PlanRepository } from '../repositories/plan.repository.js';
 import { TeamRepository } from '../repositories/team.repository.js';
+import { withDemoMealPlans } from './demo-meal-plans.js';
 import { DEMO_TEMPLATES, planDemoVersions, type DemoTemplateKey, type SeededTemplate } from './demo-plans.js';
 import type { DemoHistoryPlan } from './seed-history.js';
 
@@ -35,7 +36,12 @@ export async function writeDemoPlans(
   for (const { def, history } of plans) {
     const athleteId = ids.athleteIds.get(def.key);
     if (!athleteId) throw new Error(`No athlete for ${def.key}`);
-    for (const v of planDemoVersions({ def, history, now, floors, templates })) {
+    const versions = await withDemoMealPlans(
+      def.key,
+      def.history.seed,
+      planDemoVersions({ def, history, now, floors, templates }),
+    );
+    for (const v of versions) {
       await planRepo.insertVersion({
         athleteId,
         effectiveFrom: v.effectiveFrom,
