@@ -1,8 +1,23 @@
-import type { Page } from 'playwright-core';
+import path from 'node:path';
+import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openSession, screenshot, signIn, type Session } from './support/browser.js';
 
 const ENERGY_ROW = 'ul[aria-label="Targets and progress"] li[data-metric="energy"]';
+
+/** A screenshot of one part of the page (beside the full-page ones), to look at it closely. */
+async function partShot(part: Locator, name: string): Promise<void> {
+  await part.screenshot({ path: path.join(process.env.E2E_SCREENSHOT_DIR ?? 'screenshots', `${name}.png`) });
+}
+
+/** Opens the plan editor's disclosure of a day type (the first one may already be open). */
+async function openDayType(page: Page, name: string): Promise<void> {
+  const details = page.locator('details', { has: page.locator('summary', { hasText: name }) }).first();
+  await details.waitFor();
+  if (!(await details.evaluate((el) => (el as HTMLDetailsElement).open))) {
+    await details.locator('summary').first().click();
+  }
+}
 
 async function energyRow(page: Page): Promise<string> {
   await page.locator(ENERGY_ROW).waitFor();
@@ -36,7 +51,7 @@ describe('meal plans: fit, save, log in one tap', () => {
     await page.getByRole('link', { name: 'Plan', exact: true }).click();
     await page.getByRole('heading', { name: 'This week' }).waitFor();
 
-    await page.locator('summary', { hasText: 'Diet day' }).first().click();
+    await openDayType(page, 'Diet day');
     const meals = page
       .getByRole('group', { name: 'Targets for Diet day' })
       .getByRole('region', { name: 'Meal plan' });
@@ -51,6 +66,7 @@ describe('meal plans: fit, save, log in one tap', () => {
     await meals.getByText('Fitted: every target is within its tolerance.').waitFor();
     await expect(verdicts.innerText()).resolves.not.toMatch(/Drifting|Off plan/);
     await screenshot(page, 'meal-plan-editor-1280');
+    await partShot(meals, 'meal-plan-editor-section-1280');
 
     await page.getByLabel('Reason').fill('Meal plan refitted to the diet day');
     await page.getByRole('button', { name: 'Review and save' }).click();
@@ -79,6 +95,7 @@ describe('meal plans: fit, save, log in one tap', () => {
     const after = await energyRow(page);
     await expect(card.getByLabel('Meal plan adherence').innerText()).resolves.not.toBe(adherenceBefore);
     await screenshot(page, 'meal-plan-today-375');
+    await partShot(card, 'meal-plan-today-card-375');
 
     // The coach's page of the athlete reads the same day from the server.
     await coach.page.goto(`/coach/athletes/${athleteId}`);
@@ -94,9 +111,13 @@ describe('meal plans: fit, save, log in one tap', () => {
       await narrow.page.waitForURL('**/coach**');
       await narrow.page.goto(`/coach/athletes/${athleteId}/plan`);
       await narrow.page.getByRole('heading', { name: 'This week' }).waitFor();
-      await narrow.page.locator('summary', { hasText: 'Diet day' }).first().click();
+      await openDayType(narrow.page, 'Diet day');
       await narrow.page.getByRole('region', { name: 'Meal plan' }).first().waitFor();
       await screenshot(narrow.page, 'meal-plan-editor-375');
+      await partShot(
+        narrow.page.getByRole('region', { name: 'Meal plan' }).first(),
+        'meal-plan-editor-section-375',
+      );
     } finally {
       await narrow.close();
     }

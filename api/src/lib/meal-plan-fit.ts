@@ -156,7 +156,8 @@ export async function fitQuantities(
     const solver = await highs();
     const result = solver.solve(lp, SOLVER_OPTIONS);
     // A time limit still leaves the best proposal found; only no proposal at all is an error.
-    const usable = result.Status === 'Optimal' || (result.Status === 'Time limit reached' && result.Columns['n0']);
+    const usable =
+      result.Status === 'Optimal' || (result.Status === 'Time limit reached' && result.Columns['n0']);
     if (!usable) throw new Error(`Meal-plan fit ended with status ${result.Status}`);
     steps = foods.map((_, i) => Math.round(result.Columns[`n${i}`]?.Primal ?? 0));
   }

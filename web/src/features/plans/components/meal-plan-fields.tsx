@@ -227,8 +227,8 @@ function MealCard({
   const totals = meal ? plannedMealTotals(meal) : null;
   return (
     <div className="rounded-md border border-line p-3" data-testid="planned-meal">
-      <div className="flex flex-wrap items-end gap-2">
-        <label className="min-w-0 flex-1 text-xs font-medium text-ink-muted">
+      <div className="grid grid-cols-[1fr_auto] items-end gap-2 sm:grid-cols-[1fr_8rem_auto]">
+        <label className="col-span-2 min-w-0 text-xs font-medium text-ink-muted sm:col-span-1">
           Meal
           <input
             id={nameIds.inputId}
@@ -237,7 +237,7 @@ function MealCard({
             {...register(`${path}.name`)}
           />
         </label>
-        <label className="w-28 text-xs font-medium text-ink-muted">
+        <label className="text-xs font-medium text-ink-muted">
           Time
           <input
             type="time"
@@ -264,7 +264,7 @@ function MealCard({
       </ul>
       <FieldErrorText id={`${nameIds.errorId}-foods`} error={foodsError} />
 
-      <div className="mt-2 flex flex-wrap items-center justify-between gap-2">
+      <div className="mt-3 flex flex-col gap-2 sm:flex-row sm:items-center sm:justify-between">
         <AddFood onChoose={(f) => foods.append(plannedFoodRow(f))} />
         {totals ? (
           <p className="text-sm text-ink-muted tabular-nums" aria-label="Meal totals">
@@ -291,32 +291,32 @@ function FoodRow({
   const values = getValues(path) as MealFormValues['foods'][number] | undefined;
   const label = values?.name ?? 'Food';
   const bound = (key: 'minG' | 'maxG' | 'stepG', text: string) => (
-    <label className="flex items-center gap-1 text-xs text-ink-muted">
+    <label className="block text-[0.6875rem] font-medium text-ink-muted">
       {text}
       <input
         inputMode="decimal"
         autoComplete="off"
         placeholder={key === 'minG' ? '0' : key === 'maxG' ? '400' : '5'}
         aria-label={`${label}: ${text.toLowerCase()} grams for the fit`}
-        className={cn(controlClasses, 'w-16 border-line py-1 text-right text-xs tabular-nums')}
+        className={cn(controlClasses, 'mt-0.5 border-line px-2 py-1 text-right text-xs tabular-nums')}
         {...register(`${path}.${key}`)}
       />
     </label>
   );
   const grams = food?.quantityG ?? typedBound(values?.quantity ?? '') ?? 0;
   return (
-    <li className="grid grid-cols-[1fr_auto_auto] items-start gap-2">
+    <li className="grid grid-cols-[1fr_auto_auto] items-start gap-2 border-t border-line pt-2 first:border-t-0 first:pt-0">
       <div className="min-w-0">
-        <p className="truncate text-sm font-medium text-ink">{label}</p>
+        <p className="text-sm font-medium break-words text-ink">{label}</p>
         <p className="text-xs text-ink-faint tabular-nums">
           {values
             ? `${formatNumber((values.per100g.energyKcal * grams) / 100, 0)}${NBSP}kcal · P ${formatNumber((values.per100g.proteinG * grams) / 100, 0)}${NBSP}g`
             : null}
         </p>
-        <div className="mt-1 flex flex-wrap gap-2">
-          {bound('minG', 'Min')}
-          {bound('maxG', 'Max')}
-          {bound('stepG', 'Step')}
+        <div className="mt-1 grid max-w-[13.5rem] grid-cols-3 gap-1.5" aria-label="Bounds for the fit">
+          {bound('minG', 'Min g')}
+          {bound('maxG', 'Max g')}
+          {bound('stepG', 'Step g')}
         </div>
       </div>
       <div className="w-24">
@@ -366,7 +366,7 @@ function AddFood({ onChoose }: { onChoose: (food: FoodView) => void }) {
   const search = usePlanFoodSearch(term);
   const results = term.trim().length >= 2 ? (search.data ?? []) : [];
   return (
-    <div className="relative min-w-0 flex-1 sm:max-w-xs">
+    <div className="relative w-full min-w-0 sm:max-w-xs">
       <label htmlFor={inputId} className="sr-only">
         Add a food
       </label>
