@@ -297,7 +297,7 @@ function FoodRow({
         inputMode="decimal"
         autoComplete="off"
         placeholder={key === 'minG' ? '0' : key === 'maxG' ? '400' : '5'}
-        aria-label={`${label}: ${text.toLowerCase()} grams for the fit`}
+        aria-label={`${label}: ${text.toLowerCase()} for the fit`}
         className={cn(controlClasses, 'mt-0.5 border-line px-2 py-1 text-right text-xs tabular-nums')}
         {...register(`${path}.${key}`)}
       />
