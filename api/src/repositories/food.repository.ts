@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import { Food } from '../entities/food.entity.js';
 
 export type NewFood = Pick<
@@ -26,6 +26,11 @@ export class FoodRepository {
 
   findInTeam(id: string, teamId: string): Promise<Food | null> {
     return this.manager.findOneBy(Food, { id, teamId });
+  }
+
+  /** The team's foods among `ids`, in one statement. */
+  findManyInTeam(ids: readonly string[], teamId: string): Promise<Food[]> {
+    return this.manager.findBy(Food, { id: In([...ids]), teamId });
   }
 
   /** Team foods whose name holds every word (any order, any case), at most `limit`, by name. */

@@ -1,5 +1,6 @@
-import type { CreateFoodRequest, FoodView } from '@driftmark/shared';
+import type { CreateFoodRequest, FoodPortion, FoodView } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
+import { findEverydayFood } from '../adapters/everyday-foods.js';
 import { findReferenceFood, listReferenceFoods } from '../adapters/reference-foods.js';
 import { compareByRelevance, nameMatches, searchWords } from '../lib/food-search.js';
 import type { Per100g } from '../lib/meal-nutrients.js';
@@ -7,14 +8,16 @@ import type { Actor } from '../policies/actor.js';
 import { presentReferenceFood, presentTeamFood, teamFoodEnergyKcal } from '../presenters/food.presenter.js';
 import { FoodRepository } from '../repositories/food.repository.js';
 
-/** A food resolved for a meal entry: what the entry keeps of it. */
+/** A food resolved for a meal item: what the item keeps of it. */
 export interface ResolvedFood {
   id: string;
   name: string;
   per100g: Per100g;
+  portions: readonly FoodPortion[];
 }
 
 const REFERENCE_PREFIX = 'ifct:';
+const EVERYDAY_PREFIX = 'dm:';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
@@ -26,26 +29,50 @@ export async function resolveFood(
   teamId: string,
   foodId: string,
 ): Promise<ResolvedFood | null> {
-  if (foodId.toLowerCase().startsWith(REFERENCE_PREFIX)) {
-    const ref = await findReferenceFood(foodId.slice(REFERENCE_PREFIX.length));
-    return ref ? { id: ref.id, name: ref.name, per100g: ref.per100g } : null;
+  return (await resolveFoods(manager, teamId, [foodId])).get(foodId.toLowerCase()) ?? null;
+}
+
+/**
+ * Foods of the team's list by id, keyed by the lower-cased id; ids the team has no food for are
+ * left out. Team foods are read in one statement, whatever their number.
+ */
+export async function resolveFoods(
+  manager: EntityManager,
+  teamId: string,
+  foodIds: readonly string[],
+): Promise<Map<string, ResolvedFood>> {
+  const found = new Map<string, ResolvedFood>();
+  const teamIds: string[] = [];
+  for (const raw of new Set(foodIds.map((id) => id.toLowerCase()))) {
+    if (raw.startsWith(REFERENCE_PREFIX)) {
+      const ref = await findReferenceFood(raw.slice(REFERENCE_PREFIX.length));
+      if (ref) found.set(raw, { id: ref.id, name: ref.name, per100g: ref.per100g, portions: [] });
+    } else if (raw.startsWith(EVERYDAY_PREFIX)) {
+      const own = findEverydayFood(raw);
+      if (own) found.set(raw, { id: own.id, name: own.name, per100g: own.per100g, portions: own.portions });
+    } else if (UUID.test(raw)) {
+      teamIds.push(raw);
+    }
   }
-  if (!UUID.test(foodId)) return null;
-  const food = await new FoodRepository(manager).findInTeam(foodId.toLowerCase(), teamId);
-  if (!food) return null;
-  return {
-    id: food.id,
-    name: food.name,
-    per100g: {
-      energyKcal: teamFoodEnergyKcal(food),
-      proteinG: food.proteinG,
-      carbohydrateG: food.carbohydrateG,
-      fatG: food.fatG,
-      fibreG: food.fibreG,
-      alcoholG: food.alcoholG,
-      sodiumMg: food.sodiumMg,
-    },
-  };
+  if (teamIds.length > 0) {
+    for (const food of await new FoodRepository(manager).findManyInTeam(teamIds, teamId)) {
+      found.set(food.id.toLowerCase(), {
+        id: food.id,
+        name: food.name,
+        per100g: {
+          energyKcal: teamFoodEnergyKcal(food),
+          proteinG: food.proteinG,
+          carbohydrateG: food.carbohydrateG,
+          fatG: food.fatG,
+          fibreG: food.fibreG,
+          alcoholG: food.alcoholG,
+          sodiumMg: food.sodiumMg,
+        },
+        portions: [],
+      });
+    }
+  }
+  return found;
 }
 
 type FoodDeps = { dataSource: DataSource };
