@@ -43,4 +43,41 @@ export class MealItemRepository {
     const raw = result.raw as Record<string, unknown>[];
     return rows.map((row, i) => Object.assign(row, { id: raw[i]?.id as string }));
   }
+
+  /**
+   * How often each food was logged (meals eaten) since `since` across the team, and by the athlete whose user is
+   * `userId` (0 for staff), with when that athlete last logged it: one statement, the most used 500.
+   */
+  async usage(
+    teamId: string,
+    userId: string,
+    since: Date,
+  ): Promise<Map<string, { mine: number; team: number; lastMineAt: number | null }>> {
+    const rows = await this.manager.query<
+      { food_id: string; mine: number; team: number; last_mine_at: Date | null }[]
+    >(
+      `SELECT lower(i.food_id) AS food_id,
+              count(*) FILTER (WHERE a.user_id = $2)::int AS mine,
+              count(*)::int AS team,
+              max(e.logged_at) FILTER (WHERE a.user_id = $2) AS last_mine_at
+         FROM meal_entry_items i
+         JOIN meal_entries e ON e.id = i.meal_entry_id
+         JOIN athletes a ON a.id = i.athlete_id
+        WHERE a.team_id = $1 AND e.logged_at >= $3
+        GROUP BY lower(i.food_id)
+        ORDER BY mine DESC, team DESC
+        LIMIT 500`,
+      [teamId, userId, since],
+    );
+    return new Map(
+      rows.map((r) => [
+        r.food_id,
+        {
+          mine: r.mine,
+          team: r.team,
+          lastMineAt: r.last_mine_at ? new Date(r.last_mine_at).getTime() : null,
+        },
+      ]),
+    );
+  }
 }

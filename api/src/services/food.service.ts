@@ -1,11 +1,18 @@
 import type { CreateFoodRequest, FoodPortion, FoodView } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
-import { findEverydayFood } from '../adapters/everyday-foods.js';
+import { findEverydayFood, listEverydayFoods } from '../adapters/everyday-foods.js';
 import { findReferenceFood, listReferenceFoods } from '../adapters/reference-foods.js';
-import { compareByRelevance, nameMatches, searchWords } from '../lib/food-search.js';
+import { indexFood, rankFoods, type IndexedFood, type SearchableFood } from '../lib/food-search.js';
+import { MealItemRepository } from '../repositories/meal-item.repository.js';
 import type { Per100g } from '../lib/meal-nutrients.js';
 import type { Actor } from '../policies/actor.js';
-import { presentReferenceFood, presentTeamFood, teamFoodEnergyKcal } from '../presenters/food.presenter.js';
+import {
+  preparationOf,
+  presentEverydayFood,
+  presentReferenceFood,
+  presentTeamFood,
+  teamFoodEnergyKcal,
+} from '../presenters/food.presenter.js';
 import { FoodRepository } from '../repositories/food.repository.js';
 
 /** A food resolved for a meal item: what the item keeps of it. */
@@ -75,28 +82,72 @@ export async function resolveFoods(
   return found;
 }
 
-type FoodDeps = { dataSource: DataSource };
+type FoodDeps = { dataSource: DataSource; clock: () => Date };
+
+/** How far back use counts for ranking: 180 days (common practice, no source). */
+const USAGE_WINDOW_DAYS = 180;
+
+type Candidate = SearchableFood & { view: () => FoodView };
+
+/** Our everyday foods and the reference table, indexed for search once. */
+let fixedFoods: Promise<IndexedFood<Candidate>[]> | null = null;
+function indexedFixedFoods(): Promise<IndexedFood<Candidate>[]> {
+  fixedFoods ??= listReferenceFoods()
+    .then((reference) => [
+      ...listEverydayFoods().map((f) =>
+        indexFood<Candidate>({
+          id: f.id,
+          name: f.name,
+          terms: f.terms,
+          preparation: f.preparation,
+          source: 'everyday',
+          view: () => presentEverydayFood(f),
+        }),
+      ),
+      ...reference.map((f) =>
+        indexFood<Candidate>({
+          id: f.id,
+          name: f.name,
+          preparation: preparationOf(f.name),
+          source: 'reference',
+          view: () => presentReferenceFood(f),
+        }),
+      ),
+    ])
+    .catch((err: unknown) => {
+      fixedFoods = null;
+      throw err;
+    });
+  return fixedFoods;
+}
 
 export class FoodService {
   constructor(private readonly deps: FoodDeps) {}
 
   /**
-   * The team's foods, then reference foods, whose names hold every word of `q` (any order, any
-   * case); at most `limit` in all. An empty query lists from the start of each.
+   * The foods answering `q` (the team's, our everyday foods, the reference table), best first,
+   * ranked by how well they match and by how often this athlete and the team log them; at most
+   * `limit`. An empty query lists the recent and frequent foods first (`lib/food-search.ts`).
    */
   async search(actor: Actor, q: string | undefined, limit: number): Promise<FoodView[]> {
-    const words = searchWords(q);
-    const team = await new FoodRepository(this.deps.dataSource.manager).search(actor.teamId, words, limit);
-    team.sort(compareByRelevance(words));
-    const room = limit - team.length;
-    const reference =
-      room > 0
-        ? (await listReferenceFoods())
-            .filter((f) => nameMatches(f.name, words))
-            .sort(compareByRelevance(words))
-            .slice(0, room)
-        : [];
-    return [...team.map(presentTeamFood), ...reference.map(presentReferenceFood)];
+    const manager = this.deps.dataSource.manager;
+    const now = this.deps.clock();
+    const since = new Date(now.getTime() - USAGE_WINDOW_DAYS * 86_400_000);
+    const [teamFoods, usage, fixed] = await Promise.all([
+      new FoodRepository(manager).listForTeam(actor.teamId),
+      new MealItemRepository(manager).usage(actor.teamId, actor.userId, since),
+      indexedFixedFoods(),
+    ]);
+    const team = teamFoods.map((f) =>
+      indexFood<Candidate>({
+        id: f.id.toLowerCase(),
+        name: f.name,
+        preparation: preparationOf(f.name),
+        source: 'team',
+        view: () => presentTeamFood(f),
+      }),
+    );
+    return rankFoods(q, [...team, ...fixed], usage, limit, now.getTime()).map((f) => f.view());
   }
 
   async create(actor: Actor, input: CreateFoodRequest): Promise<FoodView> {
