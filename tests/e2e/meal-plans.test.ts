@@ -14,7 +14,7 @@ async function partShot(part: Locator, name: string): Promise<void> {
 async function openDayType(page: Page, name: string): Promise<void> {
   const details = page.locator('details', { has: page.locator('summary', { hasText: name }) }).first();
   await details.waitFor();
-  if (!(await details.evaluate((el) => (el as HTMLDetailsElement).open))) {
+  if (!(await details.evaluate((el) => (el as unknown as { open: boolean }).open))) {
     await details.locator('summary').first().click();
   }
 }

@@ -21,7 +21,7 @@
  */
 import { createRequire } from 'node:module';
 import { atwaterKcal, KJ_PER_KCAL } from '@driftmark/shared';
-import type { Per100g } from '@driftmark/shared';
+import type { Per100g } from '../lib/meal-nutrients.js';
 
 /** One row of the table, the columns we use. */
 export interface IfctRow {

@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import { In, type EntityManager } from 'typeorm';
 import { Food } from '../entities/food.entity.js';
 
 export type NewFood = Pick<
@@ -14,9 +14,6 @@ export type NewFood = Pick<
   | 'createdById'
 >;
 
-/** `%`, `_` and `\` taken literally inside an ILIKE pattern. */
-const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
-
 export class FoodRepository {
   constructor(private readonly manager: EntityManager) {}
 
@@ -28,12 +25,13 @@ export class FoodRepository {
     return this.manager.findOneBy(Food, { id, teamId });
   }
 
-  /** Team foods whose name holds every word (any order, any case), at most `limit`, by name. */
-  search(teamId: string, words: readonly string[], limit: number): Promise<Food[]> {
-    const qb = this.manager.createQueryBuilder(Food, 'f').where('f.team_id = :teamId', { teamId });
-    words.forEach((w, i) => {
-      qb.andWhere(`f.name ILIKE :w${i} ESCAPE '\\'`, { [`w${i}`]: `%${likeEscape(w)}%` });
-    });
-    return qb.orderBy('lower(f.name)', 'ASC').addOrderBy('f.id', 'ASC').limit(limit).getMany();
+  /** The team's foods among `ids`, in one statement. */
+  findManyInTeam(ids: readonly string[], teamId: string): Promise<Food[]> {
+    return this.manager.findBy(Food, { id: In([...ids]), teamId });
+  }
+
+  /** The team's foods, at most 5,000 (search matches them in memory, by the one rule). */
+  listForTeam(teamId: string): Promise<Food[]> {
+    return this.manager.find(Food, { where: { teamId }, order: { name: 'ASC', id: 'ASC' }, take: 5000 });
   }
 }

@@ -1,14 +1,10 @@
 import {
-  foodMealNutrients,
-  logPlannedMealRequest,
-  sumNutrients,
   versionInForce,
   type DayTargets,
   type FitMealPlanRequest,
   type LogPlannedMealRequest,
   type MealPlanFit,
   type PlanContent,
-  type PlannedMeal,
   type PlannedPer100g,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -18,11 +14,11 @@ import { versionDay } from '../lib/day-plan.js';
 import { localDateTime } from '../lib/local-time.js';
 import { fitAnswer, fitQuantities, type FitFood } from '../lib/meal-plan-fit.js';
 import type { Actor } from '../policies/actor.js';
-import { presentMeal } from '../presenters/day.presenter.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { PlanRepository } from '../repositories/plan.repository.js';
-import { CheckInService, type EntryResult } from './check-in.service.js';
-import type { EntryKind } from './day-entry-kinds.js';
+import { DayEntryRepository } from '../repositories/day-entry.repository.js';
+import type { EntryResult } from './check-in.service.js';
+import { logMealFromItems } from './meal-log.service.js';
 import { resolveFood, type ResolvedFood } from './food.service.js';
 
 type Deps = { dataSource: DataSource; clock: () => Date };
@@ -106,59 +102,6 @@ export async function contentWithPlannedFoods(
   };
 }
 
-type PlannedMealInput = LogPlannedMealRequest & { time: string };
-
-/**
- * Logging a planned meal as one meal entry named after it. Stop-gap until meal entries hold
- * several foods: the entry is a macros meal carrying the sums of its foods as eaten (each food's
- * per-100 g values from the food list × grams / 100, `foodMealNutrients`), with the planned
- * meal's id so the day counts it toward the meal plan.
- */
-function plannedMealKind(meal: PlannedMeal): EntryKind<MealEntry, PlannedMealInput> {
-  return {
-    path: 'meals',
-    plural: 'meals',
-    present: presentMeal,
-    entity: MealEntry,
-    schema: logPlannedMealRequest.required({ time: true }),
-    columns: async (input, ctx) => {
-      const wanted = input.foods ?? meal.foods.map((f) => ({ foodId: f.foodId, quantityG: f.quantityG }));
-      const foods = await foodsById(
-        ctx.manager,
-        ctx.athlete.teamId,
-        wanted.map((f) => f.foodId),
-      );
-      const errors: Record<string, string> = {};
-      const eaten = wanted.flatMap((f, i) => {
-        const food = foods.get(f.foodId.toLowerCase());
-        if (!food) {
-          errors[`foods.${i}.foodId`] = 'Choose a food from the list';
-          return [];
-        }
-        return [foodMealNutrients(food.per100g, f.quantityG)];
-      });
-      if (Object.keys(errors).length > 0) throw validationFailed(errors);
-      const total = sumNutrients(eaten);
-      return {
-        name: meal.name,
-        source: 'macros',
-        foodId: null,
-        foodName: null,
-        quantityG: null,
-        proteinG: total.proteinG,
-        carbohydrateG: total.carbohydrateG,
-        fatG: total.fatG,
-        fibreG: total.fibreG,
-        alcoholG: total.alcoholG,
-        energyKcal: total.energyKcal,
-        sodiumMg: total.sodiumMg,
-        plannedMealId: meal.id,
-      };
-    },
-    asInput: () => ({}),
-  };
-}
-
 export class MealPlanService {
   constructor(private readonly deps: Deps) {}
 
@@ -179,11 +122,22 @@ export class MealPlanService {
     if (!meal) throw notFound();
     const now = localDateTime(this.deps.clock(), athlete.user.timeZone);
     const time = input.time ?? (date === now.date && meal.time > now.time ? now.time : meal.time);
-    return new CheckInService(this.deps).createEntry(plannedMealKind(meal), athlete, date, {
+    const foods = input.foods ?? meal.foods.map((f) => ({ foodId: f.foodId, quantityG: f.quantityG }));
+    // The athlete's own way of logging a meal of foods (same checks, nutrients as eaten, limits,
+    // client-id idempotency); a bad food answers 400 naming `items.<i>.<field>`.
+    const result = await logMealFromItems(this.deps, athlete, date, {
       clientId: input.clientId,
       time,
-      ...(input.foods ? { foods: input.foods } : {}),
+      name: meal.name,
+      items: foods.map((f) => ({ foodId: f.foodId, quantityG: f.quantityG })),
     });
+    if (result.entry.plannedMealId !== meal.id) {
+      await new DayEntryRepository(manager, MealEntry).updateForAthlete(result.entry.id, athlete.id, {
+        plannedMealId: meal.id,
+      });
+      result.entry.plannedMealId = meal.id;
+    }
+    return result;
   }
 
   /** Proposes quantities for the chosen foods (see lib/meal-plan-fit.ts); 400 for a food the team has not. */

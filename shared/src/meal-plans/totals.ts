@@ -1,6 +1,6 @@
 import type { DayActuals } from '../rules/day-verdicts.js';
 import { dayVerdicts } from '../rules/day-verdicts.js';
-import { foodMealNutrients } from '../meal-nutrients.js';
+import { nutrientsAsEaten } from '../meal-items.js';
 import type { MealPlanTotals, PlannedPer100g } from '../schemas/meal-plans.js';
 
 /** A food and its grams: what a planned meal's totals are made of. */
@@ -13,7 +13,7 @@ import type { DriftEntry } from '../schemas/trends.js';
 
 /** One planned food's energy and macros: its per-100 g values × grams / 100 (the meal-entry rule). */
 export function plannedFoodTotals(food: FoodAmount): MealPlanTotals {
-  const n = foodMealNutrients({ ...food.per100g, fibreG: null }, food.quantityG);
+  const n = nutrientsAsEaten({ ...food.per100g, fibreG: null }, food.quantityG);
   return {
     energyKcal: n.energyKcal,
     proteinG: n.proteinG,

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { DRIFT_STATES } from '../vocabulary.js';
 import { clockTime, text, uuid } from './common.js';
+import { foodRef } from './check-ins.js';
 import { driftEntry } from './trends.js';
 
 /**
@@ -40,13 +41,8 @@ const grams = (what: string, min: number, max: number) =>
     .min(min, `${what} must be at least ${min} g`)
     .max(max, `${what} must be at most ${max} g`);
 
-/** A team food (uuid) or a reference food (`ifct:<code>`), as meal entries name foods. */
-export const plannedFoodId = z
-  .string({ error: 'Choose a food' })
-  .regex(
-    /^(ifct:[A-Z]\d{3}|[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})$/i,
-    'Choose a food from the list',
-  );
+/** A food of the food list, named as meal items name it. */
+export const plannedFoodId = foodRef;
 
 /** One food of a planned meal. */
 export const plannedFood = z.object({

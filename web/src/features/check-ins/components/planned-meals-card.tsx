@@ -146,9 +146,8 @@ function PlannedMealRow({
             <div key={`${f.food.id}-${i}`} className="space-y-2">
               {f.swapping ? (
                 <FoodPicker
-                  chosen={null}
-                  onChoose={(food: FoodView | null) =>
-                    food && setEditing(editing.map((e, j) => (j === i ? { ...e, food, swapping: false } : e)))
+                  onChoose={(food: FoodView) =>
+                    setEditing(editing.map((e, j) => (j === i ? { ...e, food, swapping: false } : e)))
                   }
                 />
               ) : (
