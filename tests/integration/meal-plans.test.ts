@@ -205,8 +205,10 @@ describe('logging a planned meal', () => {
       .post(`${base}/days/${YESTERDAY}/planned-meals/${BREAKFAST}`)
       .send({ clientId });
     expect(res.status).toBe(201);
-    // Named after the planned meal, at its planned time, the foods' sums as eaten.
+    // A meal of foods named after the planned meal, at its planned time, the foods as eaten.
+    expect(res.body.data.items.map((i: { quantityG: number }) => i.quantityG)).toEqual([100]);
     expect(res.body.data).toMatchObject({
+      source: 'foods',
       name: 'Breakfast',
       time: '08:00',
       energyKcal: 320,
@@ -241,6 +243,7 @@ describe('logging a planned meal', () => {
     });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({ time: '13:30', energyKcal: 560, carbohydrateG: 120, proteinG: 20 });
+    expect(res.body.data.items).toHaveLength(2);
   });
 
   it('logged today before its planned time, it takes the athlete’s clock now', async () => {
