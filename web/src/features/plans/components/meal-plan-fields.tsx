@@ -313,11 +313,6 @@ function FoodRow({
             ? `${formatNumber((values.per100g.energyKcal * grams) / 100, 0)}${NBSP}kcal · P ${formatNumber((values.per100g.proteinG * grams) / 100, 0)}${NBSP}g`
             : null}
         </p>
-        <div className="mt-1 grid max-w-[13.5rem] grid-cols-3 gap-1.5" aria-label="Bounds for the fit">
-          {bound('minG', 'Min g')}
-          {bound('maxG', 'Max g')}
-          {bound('stepG', 'Step g')}
-        </div>
       </div>
       <div className="w-24">
         <div className="relative">
@@ -351,6 +346,15 @@ function FoodRow({
         onClick={onRemove}
         aria-label={`Remove ${label}`}
       />
+      <div
+        className="col-span-3 grid max-w-[15rem] grid-cols-3 gap-1.5"
+        role="group"
+        aria-label={`${label}: bounds for the fit`}
+      >
+        {bound('minG', 'Min g')}
+        {bound('maxG', 'Max g')}
+        {bound('stepG', 'Step g')}
+      </div>
     </li>
   );
 }
