@@ -94,6 +94,7 @@ describe('the day view', () => {
       flags: [],
       photos: [],
       targets: null,
+      mealPlan: null,
       countdown: null,
       cautions: [],
       drift: [],
