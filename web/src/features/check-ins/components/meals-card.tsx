@@ -125,6 +125,7 @@ function foodFromEntry(entry: DayView['meals'][number]): FoodView | null {
     id: entry.food.id,
     name: entry.food.name,
     source: entry.food.id.startsWith('ifct:') ? 'reference' : 'team',
+    barcode: null,
     per100g: {
       energyKcal: entry.energyKcal * f,
       listedEnergyKcal: null,
