@@ -121,17 +121,15 @@ describe('label foods: per 100 g and per serving', () => {
   it('warns, and still saves, when the printed energy is more than 10 % off the macros', async () => {
     const agent = await as(coach);
     // 450 kcal printed; 4·30 + 4·35 + 9·12 = 368 kcal → +22.3 %.
-    const res = await agent
-      .post('/api/foods/label')
-      .send({
-        ...per100g,
-        name: 'Caramel bar',
-        energy: 450,
-        proteinG: 30,
-        carbohydrateG: 35,
-        fatG: 12,
-        fibreG: null,
-      });
+    const res = await agent.post('/api/foods/label').send({
+      ...per100g,
+      name: 'Caramel bar',
+      energy: 450,
+      proteinG: 30,
+      carbohydrateG: 35,
+      fatG: 12,
+      fibreG: null,
+    });
     expect(res.status).toBe(201);
     expect(res.body.data.labelCheck.atwaterKcal).toBe(368);
     expect(res.body.data.labelCheck.differencePct).toBeCloseTo(22.283, 2);
