@@ -48,7 +48,7 @@ export function CutCoachPanel({
               ? { kg: view.figures.acute.kg, pct: view.figures.acute.pct, days: view.plan.acuteDays }
               : null
           }
-          plannedLabel="The plan in force, last days"
+          plannedLabel={view.plan ? 'The plan in force, last days' : 'No plan in force yet'}
           unit={unit}
           canNote={cut.data.abilities.noteRehearsal === true}
           today={today}

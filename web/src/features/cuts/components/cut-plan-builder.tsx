@@ -12,7 +12,7 @@ import {
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import type { z } from 'zod';
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Form, SubmitButton } from '@/components/ui/form';
@@ -86,8 +86,7 @@ export function CutPlanBuilder({
       practiceWeighInDate: null,
     },
   });
-  const preAcuteKg = form.watch('preAcuteKg');
-  const acuteDays = form.watch('acuteDays');
+  const [preAcuteKg, acuteDays] = useWatch({ control: form.control, name: ['preAcuteKg', 'acuteDays'] });
   // The same shared rule the server uses for a plan's acute share (kg and %; the verdict stays the server's).
   const planned =
     typeof preAcuteKg === 'number' && Number.isFinite(preAcuteKg) && preAcuteKg > 0
@@ -206,6 +205,7 @@ export function CutPlanBuilder({
           unit={unit}
           canNote={canNote}
           today={today}
+          compact
         />
       ) : null}
       {pending ? (

@@ -35,6 +35,7 @@ export function RehearsalRecord({
   unit,
   canNote,
   today,
+  compact = false,
 }: {
   athleteId: string;
   rehearsal: RehearsalView;
@@ -44,6 +45,8 @@ export function RehearsalRecord({
   unit: WeightUnit;
   canNote: boolean;
   today: string;
+  /** Only the comparison (the builder): the days and their notes are the panel's. */
+  compact?: boolean;
 }) {
   const r = rehearsal;
   const symptoms = r.days.flatMap((d) => d.symptoms.map((s) => ({ date: d.date, ...s })));
@@ -104,6 +107,29 @@ export function RehearsalRecord({
           </dd>
         </div>
       </dl>
+      {compact ? null : (
+        <RehearsalDays athleteId={athleteId} rehearsal={r} unit={unit} canNote={canNote} today={today} />
+      )}
+    </section>
+  );
+}
+
+/** Each day of the practice run: weight, loss, what was done, symptoms; and the note form. */
+function RehearsalDays({
+  athleteId,
+  rehearsal: r,
+  unit,
+  canNote,
+  today,
+}: {
+  athleteId: string;
+  rehearsal: RehearsalView;
+  unit: WeightUnit;
+  canNote: boolean;
+  today: string;
+}) {
+  return (
+    <>
       {r.planned.steps ? (
         <p className="text-sm">
           <span className="text-ink-faint">What the plan set for the last days: </span>
@@ -163,7 +189,7 @@ export function RehearsalRecord({
         </table>
       </div>
       {canNote ? <DayNoteForm athleteId={athleteId} rehearsal={r} today={today} /> : null}
-    </section>
+    </>
   );
 }
 
