@@ -366,9 +366,23 @@ describe('practice runs (rehearsals)', () => {
     expect(r.days[2]!.symptoms).toEqual([
       { time: '19:40', labels: ['Headache', 'Very dark urine'], urgent: false },
     ]);
+    expect(r.underWay).toBe(false);
     // The athlete reads the same record.
     const mine = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
     expect(mine.rehearsal!.achieved!.kg).toBeCloseTo(1.8, 6);
+  });
+
+  it('is under way on its days, and takes no note for a day still ahead', async () => {
+    const { rehearsal } = await rehearse();
+    // Back on 13 Nov, the one acute day between the start and the practice weigh-in.
+    now = new Date('2026-11-13T10:00:00Z');
+    const view = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    expect(view.rehearsal!.underWay).toBe(true);
+    const ahead = await athleteAgent
+      .put(`${plans()}/${rehearsal!.planId}/note`)
+      .send({ date: '2026-11-14', note: 'Not yet' });
+    expect(ahead.status).toBe(400);
+    expect(Object.keys(ahead.body.error.fields)).toEqual(['date']);
   });
 
   it('stays beside the next cut’s plan, which is the one in force', async () => {

@@ -46,6 +46,7 @@ export function presentRehearsal(
   figures: RehearsalFigures,
   notes: readonly RehearsalNoteWithAuthor[],
   symptoms: readonly SymptomRow[],
+  today: string,
 ): RehearsalView {
   const planned = acuteShare(plan.preAcuteKg, plan.limitKg, plan.thresholdPct);
   const noteOn = new Map(notes.map((n) => [n.localDate, n]));
@@ -67,6 +68,7 @@ export function presentRehearsal(
           .map((s) => ({ time: s.time, labels: s.symptoms.map((k) => SYMPTOM_LABELS[k]), urgent: s.urgent })),
       };
     }),
+    underWay: figures.days.some((d) => d.date === today),
     achieved: figures.achieved,
     regained: figures.regained,
   };

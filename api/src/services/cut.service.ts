@@ -166,7 +166,7 @@ export class CutService {
       figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
       thresholdPct,
       recovery: recoveryOf(event, plan, today, athlete.user.timeZone),
-      rehearsal: rehearsal ? await this.rehearsalRecord(rehearsal) : null,
+      rehearsal: rehearsal ? await this.rehearsalRecord(rehearsal, today) : null,
       caution: CUT_CAUTION,
     };
   }
@@ -176,7 +176,7 @@ export class CutService {
    * the practice weigh-in and the regain mornings after (shared rehearsalFigures over the weigh-ins
    * the trend reads), the day notes and the symptom reports of those days.
    */
-  async rehearsalRecord(plan: CutPlan): Promise<RehearsalView> {
+  async rehearsalRecord(plan: CutPlan, today: string): Promise<RehearsalView> {
     const window = {
       athleteId: plan.athleteId,
       from: preAcuteDate(plan),
@@ -192,7 +192,7 @@ export class CutService {
       weighInDate: plan.weighInDate,
       weighIns: days?.weighIns ?? [],
     });
-    return presentRehearsal(plan, figures, notes, days?.symptoms ?? []);
+    return presentRehearsal(plan, figures, notes, days?.symptoms ?? [], today);
   }
 
   /**
@@ -216,7 +216,7 @@ export class CutService {
     if (input.date > today) throw validationFailed({ date: 'Write a day’s note on the day or after it' });
     if (input.note) await repo.setNote(plan, input.date, input.note, actor.userId);
     else await repo.removeNote(plan.id, input.date);
-    return this.rehearsalRecord(plan);
+    return this.rehearsalRecord(plan, today);
   }
 
   /** Sets the weigh-in's record on the athlete (the event must already be a dated weigh-in). */

@@ -236,6 +236,8 @@ export const rehearsalView = z.object({
   ),
   /** Start morning to the practice weigh-in; null without both weights. */
   achieved: z.object({ fromKg: z.number(), toKg: z.number(), kg: z.number(), pct: z.number() }).nullable(),
+  /** The athlete's today is one of the rehearsal's days: it is under way, and Today shows it. */
+  underWay: z.boolean(),
   /** Back on by each morning after: kg, % of the weigh-in weight, share of the loss. */
   regained: z.array(
     z.object({ date: z.string(), kg: z.number(), pct: z.number(), shareOfLossPct: z.number().nullable() }),

@@ -222,7 +222,7 @@ export function CutPlanBuilder({
                       setChecked((c) => (e.target.checked ? [...c, w.key] : c.filter((k) => k !== w.key)))
                     }
                   />
-                  <span className="space-y-1">
+                  <span className="min-w-0 flex-1 space-y-1">
                     {w.severity ? (
                       <CutWarningText warning={{ ...w, severity: w.severity }} />
                     ) : (

@@ -1,5 +1,5 @@
 import type { CutWarningView } from '@driftmark/shared';
-import { Badge } from '@/components/ui/badge';
+import { cn } from '@/lib/cn';
 
 /** How each of the server's severities reads: what the coach must do for it. */
 export const CUT_SEVERITY_LABELS: Record<CutWarningView['severity'], string> = {
@@ -15,10 +15,16 @@ export function CutWarningText({
   warning: Pick<CutWarningView, 'severity' | 'message' | 'source' | 'stopSigns'>;
 }) {
   return (
-    <span className="block space-y-1">
-      <Badge tone={warning.severity === 'warning' ? 'caution' : 'off-plan'}>
+    <span className="block min-w-0 space-y-1 break-words">
+      {/* A badge's look, but free to wrap on a phone: the labels are longer than a badge's word. */}
+      <span
+        className={cn(
+          'inline-block rounded-md px-2.5 py-0.5 text-xs font-semibold',
+          warning.severity === 'warning' ? 'bg-caution-soft text-caution' : 'bg-off-plan-soft text-off-plan',
+        )}
+      >
         {CUT_SEVERITY_LABELS[warning.severity]}
-      </Badge>
+      </span>
       <span className="block text-sm text-ink">{warning.message}</span>
       {warning.source ? <span className="block text-xs text-ink-muted">Source: {warning.source}</span> : null}
       {warning.stopSigns ? (

@@ -136,57 +136,57 @@ function RehearsalDays({
           {r.planned.steps}
         </p>
       ) : null}
-      <div className="overflow-x-auto">
-        <table className="w-full min-w-[34rem] text-left text-sm">
-          <caption className="sr-only">Each day of the practice run</caption>
-          <thead className="text-ink-faint">
-            <tr>
-              <th scope="col" className="py-1 pr-3 font-normal">
-                Day
-              </th>
-              <th scope="col" className="py-1 pr-3 font-normal">
-                Weight
-              </th>
-              <th scope="col" className="py-1 pr-3 font-normal">
-                Lost that day
-              </th>
-              <th scope="col" className="py-1 font-normal">
-                What was done · symptoms
-              </th>
-            </tr>
-          </thead>
-          <tbody className="divide-y divide-line">
-            {r.days.map((d) => (
-              <tr key={d.date} className="align-top">
-                <th scope="row" className="py-1.5 pr-3 font-medium">
-                  {formatDate(d.date, 'short')}
-                  <span className="block text-xs font-normal text-ink-muted">{STAGE_LABELS[d.stage]}</span>
-                </th>
-                <td className="py-1.5 pr-3 tabular-nums">{d.kg === null ? '—' : formatWeight(d.kg, unit)}</td>
-                <td className="py-1.5 pr-3 tabular-nums">
-                  {d.lostKg === null || d.lostPct === null
-                    ? '—'
-                    : `${formatWeight(d.lostKg, unit)} · ${pct(d.lostPct)}`}
-                </td>
-                <td className="py-1.5">
-                  {d.note ? (
-                    <span className="block">
-                      {d.note.text} <span className="text-xs text-ink-muted">({d.note.by})</span>
-                    </span>
-                  ) : null}
-                  {d.symptoms.map((s) => (
-                    <span
-                      key={s.time}
-                      className={s.urgent ? 'block font-semibold text-off-plan' : 'block text-caution'}
-                    >
-                      {s.labels.join(', ')} at {s.time.slice(0, 5)}
-                    </span>
-                  ))}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+      <div>
+        <div
+          aria-hidden="true"
+          className="hidden gap-x-3 border-b border-line pb-1 text-sm text-ink-faint sm:grid sm:grid-cols-[8rem_5.5rem_8.5rem_1fr]"
+        >
+          <span>Day</span>
+          <span>Weight</span>
+          <span>Lost that day</span>
+          <span>What was done · symptoms</span>
+        </div>
+        <ol aria-label="Each day of the practice run" className="divide-y divide-line text-sm">
+          {r.days.map((d) => (
+            <li
+              key={d.date}
+              className="grid grid-cols-[7rem_1fr] gap-x-3 gap-y-1 py-2 sm:grid-cols-[8rem_5.5rem_8.5rem_1fr]"
+            >
+              <span className="font-medium">
+                {formatDate(d.date, 'short')}
+                <span className="block text-xs font-normal text-ink-muted">{STAGE_LABELS[d.stage]}</span>
+              </span>
+              <span className="tabular-nums">
+                {d.kg === null ? 'No weigh-in' : formatWeight(d.kg, unit)}
+                {d.lostKg !== null && d.lostPct !== null ? (
+                  <span className="block text-ink-muted sm:hidden">
+                    lost {formatWeight(d.lostKg, unit)} · {pct(d.lostPct)}
+                  </span>
+                ) : null}
+              </span>
+              <span className="hidden tabular-nums sm:block">
+                {d.lostKg === null || d.lostPct === null
+                  ? '—'
+                  : `${formatWeight(d.lostKg, unit)} · ${pct(d.lostPct)}`}
+              </span>
+              <span className="col-span-2 min-w-0 sm:col-span-1">
+                {d.note ? (
+                  <span className="block">
+                    {d.note.text} <span className="text-xs text-ink-muted">({d.note.by})</span>
+                  </span>
+                ) : null}
+                {d.symptoms.map((s) => (
+                  <span
+                    key={s.time}
+                    className={s.urgent ? 'block font-semibold text-off-plan' : 'block text-caution'}
+                  >
+                    {s.labels.join(', ')} at {s.time.slice(0, 5)}
+                  </span>
+                ))}
+              </span>
+            </li>
+          ))}
+        </ol>
       </div>
       {canNote ? <DayNoteForm athleteId={athleteId} rehearsal={r} today={today} /> : null}
     </>
@@ -204,8 +204,10 @@ function DayNoteForm({
   today: string;
 }) {
   const days = rehearsal.days.filter((d) => d.date <= today);
-  const [date, setDate] = useState(days[0]?.date ?? '');
-  const [text, setText] = useState(days[0]?.note?.text ?? '');
+  // The latest day so far: the one most likely being written about.
+  const latest = days[days.length - 1];
+  const [date, setDate] = useState(latest?.date ?? '');
+  const [text, setText] = useState(latest?.note?.text ?? '');
   const [saved, setSaved] = useState(false);
   const save = useSaveRehearsalNote(athleteId, rehearsal.planId);
   if (days.length === 0) return null;
