@@ -76,6 +76,8 @@ export const LIMITS = {
   warningKey: { max: 120 },
   /** What the acute part of a cut consists of (free text). */
   cutNotes: { max: 2000 },
+  /** What was done on one day of a practice cut (free text). */
+  rehearsalNote: { max: 1000 },
   /** Days of acute loss before a weigh-in a cut plan may hold. */
   cutAcuteDays: { min: 0, max: 14 },
   /** The team's acute-share threshold, % of body mass. */

@@ -107,6 +107,8 @@ const ACCESS: Record<string, Cell> = {
   'GET /api/athletes/:athleteId/cut': ATHLETE_ROWS,
   'PUT /api/athletes/:athleteId/weigh-in': STAFF_ON_ATHLETE,
   'POST /api/athletes/:athleteId/cut-plans': STAFF_ON_ATHLETE,
+  // The athlete writes rehearsal day notes too (the athlete policy's noteRehearsal).
+  'PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note': ATHLETE_ROWS,
   'GET /api/athletes/:athleteId/body-composition': ATHLETE_ROWS,
   'POST /api/athletes/:athleteId/body-measurements': ATHLETE_ROWS,
   'DELETE /api/athletes/:athleteId/body-measurements/:measurementId': ATHLETE_ROWS,
@@ -309,6 +311,7 @@ function bodyFor(key: string): object | undefined {
       notes: null,
       acknowledgedKeys: [],
     },
+    'PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note': { date: TODAY, note: 'Low-residue food' },
     'POST /api/athletes/:athleteId/shares': { userId: w.assistantUser.id },
     'PUT /api/athletes/:athleteId/days/:date/weigh-in': weighInBody(),
     'PUT /api/athletes/:athleteId/days/:date/evening': eveningBody(),

@@ -10,6 +10,7 @@ import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLe
 import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
 import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
 import { AddFoodLabels1796210000000 } from './1796210000000-AddFoodLabels.js';
+import { AddCutRehearsals1796220000000 } from './1796220000000-AddCutRehearsals.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -24,4 +25,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddWeightCuts1796200000000,
   AddBodyMeasurements1796190140000,
   AddFoodLabels1796210000000,
+  AddCutRehearsals1796220000000,
 ];

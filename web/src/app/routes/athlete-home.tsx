@@ -56,7 +56,7 @@ export function AthleteHomeRoute() {
       </header>
       <div className="space-y-4">
         <WeeklyDueBanner athleteId={athleteId} href={paths.athleteWeekly} />
-        {athleteId ? <CutTodayCard athleteId={athleteId} unit={me.units.weight} /> : null}
+        {athleteId ? <CutTodayCard athleteId={athleteId} unit={me.units.weight} today={today} /> : null}
         <DayCheckIn
           athleteId={athleteId}
           date={today}

@@ -3,7 +3,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, type WithAbilities } from '@/lib/api-client';
 import { cutKeys } from './keys';
 
-export type CutAbilities = { plan: boolean };
+export type CutAbilities = { plan: boolean; noteRehearsal: boolean };
 
 /** GET /api/athletes/:athleteId/cut: the weigh-in, the projection against its limit, the cut plan. */
 export function getCut(athleteId: string, signal?: AbortSignal): Promise<WithAbilities<CutView>> {
