@@ -1,4 +1,4 @@
-/** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP fake, the server. */
+/** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP and S3 fakes, the server. */
 import path from 'node:path';
 import { isBuildFresh, recordBuild, type BuildCheck } from './fingerprint.js';
 import { fail, log, seconds, warn } from './log.js';
@@ -14,6 +14,7 @@ import {
   type ServiceExit,
 } from './proc.js';
 import { API_RESTART, nextRestart, type RestartPolicy } from './restart-policy.js';
+import { s3FakeEnv } from './s3-fake.js';
 
 export const DEMO_PASSWORD = 'driftmark-demo';
 export const DEMO_ACCOUNTS = [
@@ -117,32 +118,22 @@ export interface RunningSmtpFake {
   url: string;
 }
 
-/** Starts scripts/src/smtp-fake.ts on the first free port at or after `preferredPort`. */
-export async function startSmtpFake(options: {
-  preferredPort: number;
-  captureDir: string;
-  logFile?: string;
-  exclude?: number[];
-  /** Delay before each 250 answer (see SmtpFakeOptions.answerDelayMs). */
-  answerDelayMs?: number;
-}): Promise<RunningSmtpFake> {
-  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
-  const service = startService(
-    'smtp-fake',
-    node,
-    ['--import', 'tsx', repoPath('scripts', 'src', 'smtp-fake.ts')],
-    {
-      env: {
-        ...process.env,
-        SMTP_PORT: String(port),
-        SMTP_HOST: '127.0.0.1',
-        MAIL_CAPTURE_DIR: options.captureDir,
-        SMTP_ANSWER_DELAY_MS: String(options.answerDelayMs ?? 0),
-      },
-      ipc: true,
-      logFile: options.logFile,
-    },
-  );
+/**
+ * Starts `scripts/src/<script>.ts` with an IPC channel and waits for its `{ type: 'ready' }` message
+ * (the SMTP and S3 fakes); stops it and throws when none comes within 20 s.
+ */
+async function startReadyService(
+  name: string,
+  script: string,
+  env: NodeJS.ProcessEnv,
+  logFile: string | undefined,
+  what: string,
+): Promise<Service> {
+  const service = startService(name, node, ['--import', 'tsx', repoPath('scripts', 'src', script)], {
+    env,
+    ipc: true,
+    logFile,
+  });
   const ready = await new Promise<boolean>((resolve) => {
     const timer = setTimeout(() => resolve(false), 20_000);
     service.child.on('message', (message: { type?: string }) => {
@@ -158,12 +149,66 @@ export async function startSmtpFake(options: {
   });
   if (!ready) {
     await service.stop('SIGKILL');
-    throw new Error(
-      `The SMTP fake did not start on port ${port}${options.logFile ? ` (see ${options.logFile})` : ''}.`,
-    );
+    throw new Error(`${what} did not start${logFile ? ` (see ${logFile})` : ''}.`);
   }
   service.child.channel?.unref();
+  return service;
+}
+
+/** Starts scripts/src/smtp-fake.ts on the first free port at or after `preferredPort`. */
+export async function startSmtpFake(options: {
+  preferredPort: number;
+  captureDir: string;
+  logFile?: string;
+  exclude?: number[];
+  /** Delay before each 250 answer (see SmtpFakeOptions.answerDelayMs). */
+  answerDelayMs?: number;
+}): Promise<RunningSmtpFake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const env = {
+    ...process.env,
+    SMTP_PORT: String(port),
+    SMTP_HOST: '127.0.0.1',
+    MAIL_CAPTURE_DIR: options.captureDir,
+    SMTP_ANSWER_DELAY_MS: String(options.answerDelayMs ?? 0),
+  };
+  const what = `The SMTP fake on port ${port}`;
+  const service = await startReadyService('smtp-fake', 'smtp-fake.ts', env, options.logFile, what);
   return { service, port, url: `smtp://127.0.0.1:${port}` };
+}
+
+export interface RunningS3Fake {
+  service: Service;
+  port: number;
+  /** `http://127.0.0.1:<port>` */
+  endpoint: string;
+  /** S3_ENDPOINT, S3_REGION, S3_FORCE_PATH_STYLE and the keys pointing at this fake (no bucket). */
+  env: Record<string, string>;
+}
+
+/**
+ * Starts scripts/src/s3-fake.ts (s3rver) on the first free port at or after `preferredPort`, its
+ * buckets under `directory`, with `buckets` created.
+ */
+export async function startS3Fake(options: {
+  preferredPort: number;
+  directory: string;
+  buckets?: string[];
+  logFile?: string;
+  exclude?: number[];
+}): Promise<RunningS3Fake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const env = {
+    ...process.env,
+    S3_FAKE_PORT: String(port),
+    S3_FAKE_HOST: '127.0.0.1',
+    S3_FAKE_DIR: options.directory,
+    S3_FAKE_BUCKETS: (options.buckets ?? []).join(','),
+  };
+  const what = `The S3 fake on port ${port}`;
+  const service = await startReadyService('s3-fake', 's3-fake.ts', env, options.logFile, what);
+  const endpoint = `http://127.0.0.1:${port}`;
+  return { service, port, endpoint, env: s3FakeEnv(endpoint) };
 }
 
 /** Polls GET <baseUrl>/api/health until it answers 200; fails early when the server process exits. */
