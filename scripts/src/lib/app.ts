@@ -89,11 +89,11 @@ export async function buildWorkspace(
 export async function apiCli(
   command: string,
   env: NodeJS.ProcessEnv,
-  options: { source?: boolean } = {},
+  options: { source?: boolean; args?: string[] } = {},
 ): Promise<void> {
   const args = options.source
-    ? ['--import', 'tsx', repoPath('api', 'src', 'cli.ts'), command]
-    : [repoPath('api', 'dist', 'cli.js'), command];
+    ? ['--import', 'tsx', repoPath('api', 'src', 'cli.ts'), command, ...(options.args ?? [])]
+    : [repoPath('api', 'dist', 'cli.js'), command, ...(options.args ?? [])];
   const childEnv = options.source ? { ...env, TSX_TSCONFIG_PATH: repoPath('api', 'tsconfig.json') } : env;
   await timed(
     `api ${command} (${env.APP_MODE ?? 'no APP_MODE'}, ${databaseName(env.DATABASE_URL)})`,
@@ -209,6 +209,34 @@ export async function startS3Fake(options: {
   const service = await startReadyService('s3-fake', 's3-fake.ts', env, options.logFile, what);
   const endpoint = `http://127.0.0.1:${port}`;
   return { service, port, endpoint, env: s3FakeEnv(endpoint) };
+}
+
+/** The bucket the scripts make in the local S3 fake. */
+export const LOCAL_BUCKET = 'driftmark-photos';
+
+/**
+ * The photo store of a run on this machine (`npm start`, `npm run photos:migrate`): nothing to add
+ * for the folder (the default) or for a bucket the environment names itself (S3_BUCKET set); when
+ * PHOTO_STORAGE=s3 (or `needBucket`) names none, the S3 fake is started with its buckets under
+ * `<data>/s3-fake` and the returned variables point at its bucket `driftmark-photos`.
+ */
+export async function localPhotoStore(options: {
+  dataRoot: string;
+  needBucket?: boolean;
+  exclude?: number[];
+}): Promise<{ env: Record<string, string>; fake?: RunningS3Fake }> {
+  const wantsBucket = options.needBucket || process.env.PHOTO_STORAGE === 's3';
+  if (!wantsBucket || process.env.S3_BUCKET) return { env: {} };
+  const directory = path.join(options.dataRoot, 's3-fake');
+  const fake = await startS3Fake({
+    preferredPort: 4569,
+    directory,
+    buckets: [LOCAL_BUCKET],
+    exclude: options.exclude,
+    logFile: path.join(options.dataRoot, 's3-fake.log'),
+  });
+  log(`S3 fake on ${fake.endpoint}, bucket ${LOCAL_BUCKET} in ${relative(directory)}`);
+  return { env: { ...fake.env, S3_BUCKET: LOCAL_BUCKET }, fake };
 }
 
 /** Polls GET <baseUrl>/api/health until it answers 200; fails early when the server process exits. */
