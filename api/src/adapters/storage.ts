@@ -3,8 +3,7 @@ import { createReadStream } from 'node:fs';
 import { mkdir, readdir, readFile, rename, rm, stat, unlink, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import type { Readable } from 'node:stream';
-import type { StorageConfig } from '../config.js';
-import { S3Storage } from './s3-storage.js';
+import type { S3Settings, StorageConfig } from '../config.js';
 
 /** A stored object opened for reading. */
 export interface StoredObject {
@@ -268,8 +267,59 @@ export class LocalFolderStorage implements SweepableStorage {
   }
 }
 
+/**
+ * The bucket's adapter (`S3Storage`), loaded on first use: the AWS SDK costs a server that keeps
+ * its photos in the folder half a second at start and about 25 MB.
+ */
+class LazyS3Storage implements SweepableStorage {
+  readonly shared = true;
+  private adapter: Promise<SweepableStorage> | undefined;
+
+  constructor(private readonly settings: S3Settings) {}
+
+  get location(): string {
+    return `s3://${this.settings.bucket}`;
+  }
+
+  private load(): Promise<SweepableStorage> {
+    this.adapter ??= import('./s3-storage.js').then(({ S3Storage }) => S3Storage.fromSettings(this.settings));
+    return this.adapter;
+  }
+
+  async put(key: string, data: Buffer, contentType: string): Promise<void> {
+    return (await this.load()).put(key, data, contentType);
+  }
+  async stage(key: string, data: Buffer, contentType: string): Promise<void> {
+    return (await this.load()).stage(key, data, contentType);
+  }
+  async publish(key: string): Promise<void> {
+    return (await this.load()).publish(key);
+  }
+  async get(key: string): Promise<StoredObject | null> {
+    return (await this.load()).get(key);
+  }
+  async delete(key: string): Promise<void> {
+    return (await this.load()).delete(key);
+  }
+  async exists(key: string): Promise<boolean> {
+    return (await this.load()).exists(key);
+  }
+  async *list(): AsyncGenerator<ListedObject | StrayObject> {
+    yield* (await this.load()).list();
+  }
+  async removeStray(name: string): Promise<void> {
+    return (await this.load()).removeStray(name);
+  }
+  async readMark(): Promise<string | null> {
+    return (await this.load()).readMark();
+  }
+  async writeMark(text: string): Promise<void> {
+    return (await this.load()).writeMark(text);
+  }
+}
+
 /** One S3 adapter (one client, one connection pool) per settings object, not one per request. */
-const s3Adapters = new WeakMap<object, S3Storage>();
+const s3Adapters = new WeakMap<object, LazyS3Storage>();
 
 /** The store `kind` names: the uploads folder, or the bucket of the S3 settings. */
 export function storageOf(config: StorageConfig, kind: StorageConfig['photoStorage']): SweepableStorage {
@@ -277,7 +327,7 @@ export function storageOf(config: StorageConfig, kind: StorageConfig['photoStora
   if (!config.s3) throw new Error('S3_BUCKET: is required for the S3 photo store');
   let adapter = s3Adapters.get(config.s3);
   if (!adapter) {
-    adapter = S3Storage.fromSettings(config.s3);
+    adapter = new LazyS3Storage(config.s3);
     s3Adapters.set(config.s3, adapter);
   }
   return adapter;
