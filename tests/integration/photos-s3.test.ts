@@ -6,8 +6,9 @@
 import { createHash } from 'node:crypto';
 import { readdirSync } from 'node:fs';
 import type { Readable } from 'node:stream';
+import JSZip from 'jszip';
 import sharp from 'sharp';
-import request, { type Agent } from 'supertest';
+import request, { type Agent, type Response } from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { newStorageKey } from '../../api/src/adapters/storage.js';
 import { S3Storage } from '../../api/src/adapters/s3-storage.js';
@@ -126,6 +127,28 @@ describe('photos in an S3 bucket', () => {
     expect((await agent.delete(`/api/photos/${photo!.id}`)).status).toBe(204);
     expect(await photoNames()).toEqual([]);
     expect((await agent.get(photo!.urls.display)).status).toBe(404);
+  });
+
+  it('puts the files from the bucket into the athlete’s data archive', async () => {
+    const agent = await as(athlete.user);
+    const res = await upload(agent, [{ data: await jpeg(64, 48), name: 'a.jpg' }]);
+    expect(res.status).toBe(201);
+    const row = await new PhotoRepository(t.dataSource.manager).findById(res.body.data[0].id);
+    const archive = await agent
+      .get('/api/me/export')
+      .buffer(true)
+      .parse(((answer: Response, done: (err: Error | null, body: Buffer) => void) => {
+        const chunks: Buffer[] = [];
+        answer.on('data', (c: Buffer) => chunks.push(c));
+        answer.on('end', () => done(null, Buffer.concat(chunks)));
+      }) as never);
+    expect(archive.status).toBe(200);
+    const zip = await JSZip.loadAsync(archive.body as Buffer);
+    const listed = JSON.parse(await zip.file('photos.json')!.async('string')) as {
+      condition_photos: { file: string }[];
+    };
+    const file = await zip.file(listed.condition_photos[0]!.file)!.async('nodebuffer');
+    expect(sha256(file)).toBe(sha256(await readAll((await storage.get(row!.displayKey))!.stream)));
   });
 
   it('removes the staged objects when writing the rows fails', async () => {
