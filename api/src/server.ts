@@ -9,7 +9,7 @@ import { closePasswordPool } from './lib/passwords.js';
 import { createLogger } from './logger.js';
 import { sweepUploadTemp, uploadsSettled } from './middleware/upload.js';
 import { databaseIdentity, sweepPhotoStorage } from './services/photo-sweep.service.js';
-import { LocalFolderStorage } from './adapters/storage.js';
+import { createStorage } from './adapters/storage.js';
 import { trackHttpServer } from './lib/http-drain.js';
 import { installProcessErrorHandlers } from './process-errors.js';
 
@@ -41,10 +41,13 @@ async function main(): Promise<void> {
   const startedAt = new Date();
   const dataSource = createDataSource(config, { countStatements: config.statementCountHeader });
   await dataSource.initialize();
-  // Files and rows agree before the first request: whatever a kill left behind is settled now.
-  const storage = new LocalFolderStorage(config.uploadsDir);
+  // Files and rows agree before the first request: whatever a kill left behind is settled now. A
+  // bucket is shared with other instances, whose uploads may be running: there only files older
+  // than any request can be are touched now, the rest by the periodic sweep.
+  const storage = createStorage(config);
   const database = databaseIdentity(config.databaseUrl);
-  await sweepPhotoStorage({ dataSource, storage, database, before: startedAt, logger });
+  const startCutoff = storage.shared ? new Date(startedAt.getTime() - REQUEST_TIMEOUT_MS) : startedAt;
+  await sweepPhotoStorage({ dataSource, storage, database, before: startCutoff, logger });
   const tempFolders = await sweepUploadTemp();
   if (tempFolders > 0) logger.info({ tempFolders }, 'upload temp folders of ended processes removed');
   // Later, files staged by a process that died without a restart here: any upload is long over.
