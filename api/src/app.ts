@@ -60,6 +60,9 @@ export function createApp(deps: {
   app.set('etag', false);
   // Path params and query strings are validated per route with zod; keep the query parser simple.
   app.set('query parser', 'simple');
+  // Behind a TLS proxy (several instances behind one origin), the client's address comes from
+  // X-Forwarded-For, believed only from the hops TRUST_PROXY names; rate limits key on it.
+  app.set('trust proxy', config.trustProxy);
 
   app.use(requestLogging(logger));
   if (config.statementCountHeader) {

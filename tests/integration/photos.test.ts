@@ -762,19 +762,25 @@ describe('files and rows after a kill', () => {
 
   it('empties the upload temp folders of processes that are gone and keeps those of running ones', async () => {
     const root = path.dirname(uploadTempDir());
+    const host = os.hostname();
     // Above Linux's largest pid_max (2^22), so no process can have it.
-    const gone = path.join(root, '4194399');
+    const gone = path.join(root, `${host}-4194399`);
     mkdirSync(path.join(gone, 'a-killed-upload'), { recursive: true });
     writeFileSync(path.join(gone, 'a-killed-upload', 'x.upload'), 'partial');
-    const running = path.join(root, String(process.ppid));
+    const running = path.join(root, `${host}-${process.ppid}`);
     const madeRunning = !existsSync(running);
     mkdirSync(running, { recursive: true });
+    // Another host's instance sharing the temp folder: its process ids mean nothing here.
+    const otherHost = path.join(root, `another-host.test-4194399`);
+    mkdirSync(otherHost, { recursive: true });
     try {
       expect(await sweepUploadTemp()).toBeGreaterThanOrEqual(1);
       expect(existsSync(gone)).toBe(false);
       expect(existsSync(running)).toBe(true);
+      expect(existsSync(otherHost)).toBe(true);
     } finally {
       if (madeRunning) rmSync(running, { recursive: true, force: true });
+      rmSync(otherHost, { recursive: true, force: true });
     }
   });
 });
