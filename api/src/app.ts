@@ -28,6 +28,7 @@ import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
+import { openApiRouter } from './routes/openapi.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
 import { meSessionsRouter } from './routes/me-sessions.routes.js';
 import { meRouter } from './routes/me.routes.js';
@@ -103,6 +104,8 @@ export function createApp(deps: {
     next();
   });
   api.use('/health', healthRouter());
+  // The OpenAPI description of this router (/openapi.json), for staff.
+  api.use(openApiRouter());
   api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
   // The signed-in devices (/me/sessions…).

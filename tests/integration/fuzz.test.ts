@@ -7,7 +7,7 @@ import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
 import { fluidBody } from './check-ins-helpers.js';
 import { templateBody } from './plans-helpers.js';
-import { appRoutes, routeKey, schemaOf, type AppRoute } from './routes.js';
+import { appRoutes, routeKey, schemaOf, type AppRoute } from '../../api/src/lib/route-table.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**

@@ -50,7 +50,11 @@ async function startProxy(ports: number[]): Promise<Proxy> {
   const server = http.createServer((req, res) => {
     const index = next++ % ports.length;
     const client = (req.headers[CLIENT] as string | undefined) ?? req.socket.remoteAddress ?? '127.0.0.1';
-    const headers = { ...req.headers, 'x-forwarded-for': client, 'x-forwarded-proto': 'http' };
+    const headers: http.OutgoingHttpHeaders = {
+      ...req.headers,
+      'x-forwarded-for': client,
+      'x-forwarded-proto': 'http',
+    };
     delete headers[CLIENT];
     const upstream = http.request(
       { host: '127.0.0.1', port: ports[index], method: req.method, path: req.url, headers },

@@ -1,4 +1,10 @@
-import { createCutPlanRequest, cutSettingsRequest, uuid, weighInEventRequest } from '@driftmark/shared';
+import {
+  createCutPlanRequest,
+  cutSettingsRequest,
+  uuid,
+  weighInEventRequest,
+  cutView,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
@@ -8,6 +14,7 @@ import { authorizeTeam } from '../policies/team.policy.js';
 import { TeamRepository } from '../repositories/team.repository.js';
 import { CutService } from '../services/cut.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 
@@ -18,16 +25,23 @@ const athleteParams = z.object({ athleteId: uuid });
 export function cutsRouter(): Router {
   const router = Router();
 
-  router.get('/:athleteId/cut', authenticate(), validate({ params: athleteParams }), async (req, res) => {
-    const { actor, athlete, target } = await loadAthlete(req, 'read');
-    res.json({
-      data: await new CutService(req.ctx).getCut(athlete),
-      abilities: { plan: canOnAthlete(actor, 'plan', target) },
-    });
-  });
+  router.get(
+    '/:athleteId/cut',
+    responds({ summary: 'The weigh-in’s record and the cut plan', data: cutView, abilities: true }),
+    authenticate(),
+    validate({ params: athleteParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      res.json({
+        data: await new CutService(req.ctx).getCut(athlete),
+        abilities: { plan: canOnAthlete(actor, 'plan', target) },
+      });
+    },
+  );
 
   router.put(
     '/:athleteId/weigh-in',
+    responds({ summary: 'Set the weigh-in’s details (limit, timing, time)', data: cutView }),
     authenticate(),
     validate({ params: athleteParams, body: weighInEventRequest }),
     async (req, res) => {
@@ -38,6 +52,11 @@ export function cutsRouter(): Router {
 
   router.post(
     '/:athleteId/cut-plans',
+    responds({
+      summary: 'Save a cut plan (409 until its warnings are acknowledged)',
+      status: 201,
+      data: cutView,
+    }),
     authenticate(),
     validate({ params: athleteParams, body: dated(createCutPlanRequest, { startDate: 'any' }) }),
     async (req, res) => {
@@ -52,12 +71,21 @@ export function cutsRouter(): Router {
 /** PUT /api/team/cut-settings: the team's acute-share threshold (owner). */
 export function cutSettingsRouter(): Router {
   const router = Router();
-  router.put('/cut-settings', authenticate(), validate({ body: cutSettingsRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
-    const teams = new TeamRepository(req.ctx.dataSource.manager);
-    await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
-    res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
-  });
+  router.put(
+    '/cut-settings',
+    responds({
+      summary: 'Set the team’s acute-share threshold',
+      data: z.object({ acuteSharePct: z.number() }),
+    }),
+    authenticate(),
+    validate({ body: cutSettingsRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
+      const teams = new TeamRepository(req.ctx.dataSource.manager);
+      await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
+      res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
+    },
+  );
   return router;
 }

@@ -1,10 +1,11 @@
-import { createFoodRequest, text } from '@driftmark/shared';
+import { createFoodRequest, text, foodView } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
 import { authorizeFoods, foodAbilities } from '../policies/food.policy.js';
 import { FoodService } from '../services/food.service.js';
+import { responds } from '../middleware/responds.js';
 
 /** Most foods one search returns. */
 const MAX_LIMIT = 50;
@@ -25,22 +26,33 @@ const foodsQuery = z.object({
 export function foodsRouter(): Router {
   const router = Router();
 
-  router.get('/', authenticate(), async (req, res) => {
-    // Parsed here rather than by validate(): `limit` becomes a number, which Express's query type
-    // cannot hold. A bad query still answers 400 with fields.
-    const { q, limit } = foodsQuery.parse(req.query);
-    const { actor } = requireAuth(req);
-    const target = { teamId: actor.teamId };
-    authorizeFoods(actor, 'read', target);
-    const foods = await new FoodService(req.ctx).search(actor, q, limit);
-    res.json({ data: foods, abilities: foodAbilities(actor, target) });
-  });
+  router.get(
+    '/',
+    responds({ summary: 'Search the reference and team foods', data: z.array(foodView), abilities: true }),
+    authenticate(),
+    async (req, res) => {
+      // Parsed here rather than by validate(): `limit` becomes a number, which Express's query type
+      // cannot hold. A bad query still answers 400 with fields.
+      const { q, limit } = foodsQuery.parse(req.query);
+      const { actor } = requireAuth(req);
+      const target = { teamId: actor.teamId };
+      authorizeFoods(actor, 'read', target);
+      const foods = await new FoodService(req.ctx).search(actor, q, limit);
+      res.json({ data: foods, abilities: foodAbilities(actor, target) });
+    },
+  );
 
-  router.post('/', authenticate(), validate({ body: createFoodRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeFoods(actor, 'create', { teamId: actor.teamId });
-    res.status(201).json({ data: await new FoodService(req.ctx).create(actor, req.body) });
-  });
+  router.post(
+    '/',
+    responds({ summary: 'Add a team food', status: 201, data: foodView }),
+    authenticate(),
+    validate({ body: createFoodRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeFoods(actor, 'create', { teamId: actor.teamId });
+      res.status(201).json({ data: await new FoodService(req.ctx).create(actor, req.body) });
+    },
+  );
 
   return router;
 }
