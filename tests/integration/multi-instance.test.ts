@@ -112,8 +112,18 @@ beforeAll(async () => {
     SESSION_STAFF_IDLE_HOURS: '87600',
     SESSION_STAFF_MAX_DAYS: '3650',
   };
-  // Both start at once: their start sweeps, catch-up ticks and workers run side by side.
-  instances = await Promise.all([spawnServer(env, 'pinned'), spawnServer(env, 'pinned')]);
+  // Both start at once: their start sweeps, catch-up ticks and workers run side by side. Each is
+  // kept as soon as it listens, so one that fails to start does not leave the other running.
+  const starting = [spawnServer(env, 'pinned'), spawnServer(env, 'pinned')].map((p) =>
+    p.then((instance) => {
+      instances.push(instance);
+      return instance;
+    }),
+  );
+  const started = await Promise.allSettled(starting);
+  const failed = started.find((r) => r.status === 'rejected');
+  if (failed) throw failed.reason;
+  instances.sort((a, b) => a.port - b.port);
   proxy = await startProxy(instances.map((i) => i.port));
 }, 120_000);
 

@@ -21,6 +21,8 @@ export const paths = {
   coachHome: '/coach',
   coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
+  /** The API reference for staff (read from GET /api/openapi.json). */
+  coachApiReference: '/coach/api',
   athletePhotos: '/athlete/photos',
   athleteBody: '/athlete/body',
   /** The athlete's own weight chart, rate, adherence and their coach's marks. */

@@ -2,6 +2,7 @@ import { ROLE_LABELS } from '@driftmark/shared';
 import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
 import {
+  CodeIcon,
   CountdownIcon,
   EnvelopeIcon,
   FlagIcon,
@@ -37,6 +38,9 @@ export function StaffShell() {
           </SidebarNavLink>
           <SidebarNavLink to={paths.settings} icon={<SlidersIcon />}>
             Settings
+          </SidebarNavLink>
+          <SidebarNavLink to={paths.coachApiReference} icon={<CodeIcon />}>
+            API reference
           </SidebarNavLink>
         </SidebarNav>
       }
