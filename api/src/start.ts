@@ -8,7 +8,7 @@ import { closePasswordPool } from './lib/passwords.js';
 import type { Logger } from './logger.js';
 import { sweepUploadTemp, uploadsSettled } from './middleware/upload.js';
 import { databaseIdentity, sweepPhotoStorage } from './services/photo-sweep.service.js';
-import { LocalFolderStorage } from './adapters/storage.js';
+import { createStorage } from './adapters/storage.js';
 import { trackHttpServer } from './lib/http-drain.js';
 import { withStagingPaused } from './lib/staging-lock.js';
 
@@ -40,10 +40,11 @@ export async function startServer(
   const dataSource = createDataSource(config, { countStatements: config.statementCountHeader });
   await dataSource.initialize();
   // Files and rows agree before the first request: whatever a kill left behind is settled now.
-  const storage = new LocalFolderStorage(config.uploadsDir);
+  const storage = createStorage(config);
   const database = databaseIdentity(config.databaseUrl);
-  // With the staging lock held: another instance sharing the folder may be mid-upload, and its
-  // staged files are not a dead process's (lib/staging-lock.ts).
+  // With the staging lock held: another instance sharing the folder or bucket may be mid-upload,
+  // and its staged files are not a dead process's (lib/staging-lock.ts); so the cut-off can be
+  // this start, for a bucket too.
   await withStagingPaused(dataSource, () =>
     sweepPhotoStorage({ dataSource, storage, database, before: startedAt, logger }),
   );

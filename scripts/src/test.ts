@@ -14,8 +14,10 @@ import {
   buildShared,
   buildWorkspace,
   startBuiltServer,
+  startS3Fake,
   startSmtpFake,
   waitForHealth,
+  type RunningS3Fake,
   type RunningSmtpFake,
 } from './lib/app.js';
 import { ensureChromium } from './lib/chromium.js';
@@ -183,6 +185,28 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   }
 }
 
+/**
+ * The integration files against the test database, with the S3 fake running: the photo files that
+ * test the bucket (`photos-s3`, `photos-migrate`) make their own buckets in it (S3_* point at it;
+ * PHOTO_STORAGE stays unset, so every other file uses a folder).
+ */
+async function integrationStage(env: NodeJS.ProcessEnv): Promise<void> {
+  const scratch = mkdtempSync(path.join(os.tmpdir(), 'driftmark-s3-fake-'));
+  let s3: RunningS3Fake | undefined;
+  try {
+    s3 = await startS3Fake({
+      preferredPort: 4569,
+      directory: scratch,
+      logFile: path.join(reportsDir, 'integration-s3-fake.log'),
+    });
+    running.push(s3.service);
+    await vitest('integration', { ...env, ...s3.env });
+  } finally {
+    await s3?.service.stop('SIGTERM', 5000);
+    rmSync(scratch, { recursive: true, force: true });
+  }
+}
+
 /** The reliability run with small counts (`npm run test:reliability` runs the full one). */
 async function reliabilityStage(): Promise<void> {
   const results = await runReliability(
@@ -251,8 +275,8 @@ async function main(): Promise<number> {
     unit: { name: 'unit', describe: 'vitest run --project unit', run: () => vitest('unit') },
     integration: {
       name: 'integration',
-      describe: 'vitest run --project integration (driftmark_test)',
-      run: () => vitest('integration', integrationEnv()),
+      describe: 'vitest run --project integration (driftmark_test, the S3 fake)',
+      run: () => integrationStage(integrationEnv()),
     },
     'migration-check': {
       name: 'migration-check',

@@ -1,11 +1,12 @@
 /**
  * Two API instances (separate processes, the server's own start) on one PostgreSQL database and
- * one photo folder, behind a small proxy written here that hands requests to them in turn, as a
+ * one photo bucket in the S3 fake, behind a small proxy written here that hands requests to them in turn, as a
  * load balancer in front of several instances would. Nothing another instance needs may live in a
  * process's memory: a session made on one works on the other, a write on one is read on the other,
  * every e-mail (the scheduler's and the events') goes out exactly once with both workers running,
  * and the sign-in limit holds at the same count whichever instance answers.
  */
+import { readdirSync } from 'node:fs';
 import { mkdtemp, rm } from 'node:fs/promises';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
@@ -14,6 +15,7 @@ import path from 'node:path';
 import sharp from 'sharp';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { S3Settings } from '../../api/src/config.js';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { readAllCapturedMail, startSmtpFake, type SmtpFake } from '../../scripts/src/lib/smtp-fake.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
@@ -22,6 +24,7 @@ import { createCoach } from '../factories/users.js';
 import { fluidBody } from './check-ins-helpers.js';
 import { buildTestApp, sessionCookie, type TestApp } from './setup/app.js';
 import { APP_ORIGIN } from './setup/config.js';
+import { bucketNames, emptyBucket, freshTestBucket } from './setup/s3.js';
 import { eventually, spawnServer, type SpawnedServer } from './setup/spawned-server.js';
 
 /** The instances' pinned "now": a Tuesday evening, past every reminder hour of the UTC athlete. */
@@ -81,6 +84,7 @@ let t: TestApp;
 let smtp: SmtpFake;
 let captureDir: string;
 let uploadsDir: string;
+let bucket: S3Settings;
 let instances: SpawnedServer[] = [];
 let proxy: Proxy;
 let coach: User;
@@ -97,10 +101,14 @@ beforeAll(async () => {
 
   captureDir = await mkdtemp(path.join(os.tmpdir(), 'dm-multi-mail-'));
   uploadsDir = await mkdtemp(path.join(os.tmpdir(), 'dm-multi-uploads-'));
+  bucket = await freshTestBucket('multi-instance');
   smtp = await startSmtpFake({ port: 0, captureDir });
   const env = {
     PINNED_NOW: NOW,
     SMTP_URL: `smtp://127.0.0.1:${smtp.port}`,
+    // Photos in one bucket of the S3 fake (its endpoint and keys come from the test runner).
+    PHOTO_STORAGE: 's3',
+    S3_BUCKET: bucket.bucket,
     UPLOADS_DIR: uploadsDir,
     // The proxy on this machine names the client; rate limits key on that address.
     TRUST_PROXY: 'loopback',
@@ -134,6 +142,7 @@ afterAll(async () => {
     await instance.exited;
   }
   await smtp?.close();
+  if (bucket) await emptyBucket(bucket);
   await t?.close();
   for (const dir of [captureDir, uploadsDir]) if (dir) await rm(dir, { recursive: true, force: true });
 });
@@ -176,7 +185,7 @@ describe('two instances behind one origin', () => {
     expect(after.body.error.code).toBe('session_revoked');
   });
 
-  it('serves from one instance the photo uploaded through the other', async () => {
+  it('serves from one instance the photo uploaded through the other, both on one bucket', async () => {
     const agent = client();
     await agent.post('/api/auth/sign-in').send({ email: athlete.user.email, password: FACTORY_PASSWORD });
     const data = await sharp({ create: { width: 64, height: 48, channels: 3, background: '#3a6ea5' } })
@@ -200,6 +209,11 @@ describe('two instances behind one origin', () => {
     const gallery = await agent.get(`/api/athletes/${athlete.athlete.id}/photos`);
     expect(gallery.status).toBe(200);
     expect(gallery.body.data).toHaveLength(1);
+    // The files are in the bucket (published, nothing pending), none in the instances' folder.
+    const [row] = await t.dataSource.query('SELECT thumb_key, display_key FROM condition_photos');
+    expect(await bucketNames(bucket)).toEqual(expect.arrayContaining([row.thumb_key, row.display_key]));
+    expect((await bucketNames(bucket)).filter((name: string) => name.includes('pending'))).toEqual([]);
+    expect(readdirSync(uploadsDir)).toEqual([]);
   });
 
   it('holds the sign-in limit across both instances at the count one instance allows', async () => {

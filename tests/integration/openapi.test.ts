@@ -4,6 +4,7 @@
  * parameters, query, body and success answer; and real answers of the read routes parse with the
  * response schemas the description was made from.
  */
+import type { Request } from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import type { User } from '../../api/src/entities/user.entity.js';
@@ -43,7 +44,8 @@ interface Description {
   components: { schemas: Record<string, JsonSchema> };
 }
 
-const asOf = { ctx: { clock: () => now } };
+/** The request a date-dependent schema is taken as of (only its clock is read). */
+const asOf = { ctx: { clock: () => now } } as unknown as Partial<Request>;
 const apiRoutes = () => appRoutes(t.app).filter((r) => r.path.startsWith('/api/'));
 
 /** The keys of an object schema (zod), or null for anything else. */

@@ -10,7 +10,7 @@ import bcrypt from 'bcryptjs';
 import { CONSENTS } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { createStorage, type StorageAdapter } from '../adapters/storage.js';
-import { configSchema, type AppMode } from '../config.js';
+import { loadStorageConfig, type AppMode } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { Consent } from '../entities/consent.entity.js';
@@ -52,8 +52,8 @@ export interface SeedDemoOptions {
   /** Defaults to APP_MODE from the environment. */
   appMode?: AppMode | string;
   /**
-   * Where the placeholder photos are stored; defaults to the uploads folder (UPLOADS_DIR, as the
-   * server reads it). null seeds no photos.
+   * Where the placeholder photos are stored; defaults to the photo store the server reads
+   * (PHOTO_STORAGE: the UPLOADS_DIR folder or the S3 bucket). null seeds no photos.
    */
   storage?: StorageAdapter | null;
   /**
@@ -125,10 +125,7 @@ export async function seedDemo(
   }
   const now = options.now ?? new Date();
 
-  const storage =
-    options.storage === undefined
-      ? createStorage({ uploadsDir: configSchema.shape.UPLOADS_DIR.parse(process.env.UPLOADS_DIR) })
-      : options.storage;
+  const storage = options.storage === undefined ? createStorage(loadStorageConfig()) : options.storage;
 
   if (await ownerExists(dataSource.manager)) {
     const movedDays = await dataSource.transaction(async (manager) => {

@@ -26,7 +26,7 @@ import { findTeamPose } from './pose.service.js';
 
 type PhotoDeps = {
   dataSource: DataSource;
-  config: Pick<Config, 'uploadsDir'>;
+  config: Pick<Config, 'photoStorage' | 'uploadsDir' | 's3'>;
   logger: Logger;
   /** Defaults to the uploads folder; tests pass their own to provoke failures. */
   storage?: StorageAdapter;
