@@ -85,7 +85,7 @@ let smtp: SmtpFake;
 let captureDir: string;
 let uploadsDir: string;
 let bucket: S3Settings;
-let instances: SpawnedServer[] = [];
+const instances: SpawnedServer[] = [];
 let proxy: Proxy;
 let coach: User;
 let athlete: CreatedAthlete;
