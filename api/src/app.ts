@@ -28,6 +28,7 @@ import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
+import { openApiRouter } from './routes/openapi.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
 import { meSessionsRouter } from './routes/me-sessions.routes.js';
 import { meRouter } from './routes/me.routes.js';
@@ -60,6 +61,9 @@ export function createApp(deps: {
   app.set('etag', false);
   // Path params and query strings are validated per route with zod; keep the query parser simple.
   app.set('query parser', 'simple');
+  // Behind a TLS proxy (several instances behind one origin), the client's address comes from
+  // X-Forwarded-For, believed only from the hops TRUST_PROXY names; rate limits key on it.
+  app.set('trust proxy', config.trustProxy);
 
   app.use(requestLogging(logger));
   if (config.statementCountHeader) {
@@ -100,6 +104,8 @@ export function createApp(deps: {
     next();
   });
   api.use('/health', healthRouter());
+  // The OpenAPI description of this router (/openapi.json), for staff.
+  api.use(openApiRouter());
   api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
   // The signed-in devices (/me/sessions…).

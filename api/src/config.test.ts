@@ -112,6 +112,20 @@ describe('loadConfig', () => {
     expect(c.extraOrigins).toEqual(['http://127.0.0.1:5173', 'http://localhost:5173']);
   });
 
+  it('reads TRUST_PROXY as a hop count or a list of proxy addresses, refusing anything else', () => {
+    expect(loadConfig(base).trustProxy).toBe(false);
+    expect(loadConfig({ ...base, TRUST_PROXY: '' }).trustProxy).toBe(false);
+    expect(loadConfig({ ...base, TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ ...base, TRUST_PROXY: 'loopback, 10.0.0.0/8,fd00::1' }).trustProxy).toEqual([
+      'loopback',
+      '10.0.0.0/8',
+      'fd00::1',
+    ]);
+    for (const bad of ['yes', '10.0.0.0/33', '10.0.0.1/8/8', 'proxy.example.test', ',']) {
+      expect(problemsOf({ ...base, TRUST_PROXY: bad })).toMatch(/TRUST_PROXY: must be a number of proxies/);
+    }
+  });
+
   it('treats empty variables as unset', () => {
     const c = loadConfig({ ...base, PORT: '', SMTP_URL: '', MAIL_CAPTURE_DIR: '' });
     expect(c.port).toBe(3000);

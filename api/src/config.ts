@@ -1,3 +1,4 @@
+import { isIP } from 'node:net';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { z } from 'zod';
@@ -37,6 +38,44 @@ const origin = z
   }, 'must be an origin such as http://127.0.0.1:3000 (scheme, host and port only)')
   .transform((s) => new URL(s).origin);
 
+/** Express's names for address ranges (`proxy-addr`), accepted in TRUST_PROXY beside addresses. */
+const PROXY_RANGE_NAMES = ['loopback', 'linklocal', 'uniquelocal'];
+
+/**
+ * TRUST_PROXY: unset, no proxy (the client address is the connection's); a whole number, that many
+ * proxies in front; otherwise a comma list of proxy addresses, CIDR ranges or Express's range names.
+ */
+const trustProxy = optionalString.pipe(
+  z
+    .string()
+    .optional()
+    .transform((v, ctx): number | string[] | false => {
+      if (v === undefined) return false;
+      if (/^\d+$/.test(v.trim())) return Number(v.trim());
+      const parts = v
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean);
+      const bad = parts.find((p) => {
+        const [address, bits, ...rest] = p.split('/');
+        if (PROXY_RANGE_NAMES.includes(p)) return false;
+        const family = isIP(address ?? '');
+        if (family === 0 || rest.length > 0) return true;
+        if (bits === undefined) return false;
+        const n = Number(bits);
+        return !/^\d+$/.test(bits) || n > (family === 4 ? 32 : 128);
+      });
+      if (bad !== undefined || parts.length === 0) {
+        ctx.addIssue({
+          code: 'custom',
+          message: `must be a number of proxies, or addresses/CIDR ranges/loopback, comma-separated (${JSON.stringify(bad ?? v)})`,
+        });
+        return z.NEVER;
+      }
+      return parts;
+    }),
+);
+
 const HOUR_MS = 3_600_000;
 const DAY_MS = 24 * HOUR_MS;
 
@@ -59,6 +98,7 @@ export const configSchema = z.object({
     z.coerce.number({ error: 'must be a number' }).int('must be a whole number').min(0).max(65535),
   ),
   APP_ORIGIN: z.preprocess((v) => (v === '' ? undefined : v), origin.optional()),
+  TRUST_PROXY: trustProxy,
   EXTRA_ORIGINS: optionalString.pipe(
     z
       .string()
@@ -251,6 +291,11 @@ export interface Config {
   appOrigin: string;
   /** Further origins allowed by the CSRF check (e.g. the Vite dev server). */
   extraOrigins: string[];
+  /**
+   * Express's `trust proxy`: which hops in front may name the client in X-Forwarded-For (the
+   * address rate limits and the devices list use). false: none, the connection's address.
+   */
+  trustProxy: number | string[] | false;
   databaseUrl: string;
   jwtSecret: string;
   smtpUrl?: string;
@@ -307,6 +352,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     port: e.PORT,
     appOrigin: e.APP_ORIGIN ?? `http://127.0.0.1:${e.PORT}`,
     extraOrigins: e.EXTRA_ORIGINS,
+    trustProxy: e.TRUST_PROXY,
     databaseUrl: e.DATABASE_URL,
     jwtSecret: e.JWT_SECRET,
     ...(e.SMTP_URL ? { smtpUrl: e.SMTP_URL } : {}),

@@ -41,6 +41,8 @@ export * from './rules/rate-verdict.js';
 export * from './rules/weight-cut.js';
 export * from './schemas/cuts.js';
 export * from './schemas/guardrail-refusal.js';
+export * from './schemas/service.js';
+export * from './schemas/team.js';
 export * from './body-composition.js';
 export * from './schemas/body-composition.js';
 export * from './schemas/foods.js';

@@ -8,7 +8,7 @@ import { createCoach, createOwner } from '../factories/users.js';
 import { fluidBody } from './check-ins-helpers.js';
 import { templateBody } from './plans-helpers.js';
 import { startFoodProductsFake, type FoodProductsFake } from '../../scripts/src/lib/food-products-fake.js';
-import { appRoutes, routeKey, schemaOf, type AppRoute } from './routes.js';
+import { appRoutes, routeKey, schemaOf, type AppRoute } from '../../api/src/lib/route-table.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**

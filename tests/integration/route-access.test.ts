@@ -13,7 +13,7 @@ import {
   weighInBody,
 } from './check-ins-helpers.js';
 import { planContent, templateBody, versionBody } from './plans-helpers.js';
-import { appRoutes, routeKey, type AppRoute } from './routes.js';
+import { appRoutes, routeKey, type AppRoute } from '../../api/src/lib/route-table.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**
@@ -45,6 +45,8 @@ const TEAM_MANAGE: Actor[] = ['anonymous', 'athlete', 'otherAthlete', 'assistant
 
 const ACCESS: Record<string, Cell> = {
   'GET /api/health': 'public',
+  // The API's description, for staff (and their tools, signed in as them).
+  'GET /api/openapi.json': TEAM_STAFF,
   'POST /api/auth/sign-in': 'public',
   'POST /api/auth/sign-out': 'public',
   'POST /api/auth/forgot-password': 'public',

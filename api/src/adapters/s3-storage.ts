@@ -57,8 +57,6 @@ export function createS3Client(settings: S3Settings): S3Client {
  * its key, then the pending object is removed; `get` never sees a pending object.
  */
 export class S3Storage implements SweepableStorage {
-  readonly shared = true;
-
   constructor(
     private readonly client: S3Client,
     readonly bucket: string,

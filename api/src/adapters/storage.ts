@@ -55,11 +55,6 @@ export interface StrayObject {
 export interface SweepableStorage extends StorageAdapter {
   /** Where it is, for logs: the folder's path or `s3://bucket`. */
   readonly location: string;
-  /**
-   * Whether other processes on other machines write here too (a bucket): the start sweep then
-   * leaves recent objects alone, as they may belong to an upload running elsewhere.
-   */
-  readonly shared: boolean;
   /** Every object and staged object, with its key (strays without one). */
   list(): AsyncGenerator<ListedObject | StrayObject>;
   removeStray(name: string): Promise<void>;
@@ -126,7 +121,6 @@ function isMissing(error: unknown): boolean {
  */
 export class LocalFolderStorage implements SweepableStorage {
   readonly root: string;
-  readonly shared = false;
 
   constructor(root: string) {
     this.root = path.resolve(root);
@@ -272,7 +266,6 @@ export class LocalFolderStorage implements SweepableStorage {
  * its photos in the folder half a second at start and about 25 MB.
  */
 class LazyS3Storage implements SweepableStorage {
-  readonly shared = true;
   private adapter: Promise<SweepableStorage> | undefined;
 
   constructor(private readonly settings: S3Settings) {}

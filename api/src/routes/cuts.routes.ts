@@ -4,6 +4,7 @@ import {
   rehearsalNoteRequest,
   uuid,
   weighInEventRequest,
+  cutView,
 } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
@@ -14,6 +15,7 @@ import { authorizeTeam } from '../policies/team.policy.js';
 import { TeamRepository } from '../repositories/team.repository.js';
 import { CutService } from '../services/cut.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const cutPlanParams = z.object({ athleteId: uuid, cutPlanId: uuid });
@@ -26,19 +28,26 @@ const cutPlanParams = z.object({ athleteId: uuid, cutPlanId: uuid });
 export function cutsRouter(): Router {
   const router = Router();
 
-  router.get('/:athleteId/cut', authenticate(), validate({ params: athleteParams }), async (req, res) => {
-    const { actor, athlete, target } = await loadAthlete(req, 'read');
-    res.json({
-      data: await new CutService(req.ctx).getCut(athlete),
-      abilities: {
-        plan: canOnAthlete(actor, 'plan', target),
-        noteRehearsal: canOnAthlete(actor, 'noteRehearsal', target),
-      },
-    });
-  });
+  router.get(
+    '/:athleteId/cut',
+    responds({ summary: 'The weigh-in’s record and the cut plan', data: cutView, abilities: true }),
+    authenticate(),
+    validate({ params: athleteParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      res.json({
+        data: await new CutService(req.ctx).getCut(athlete),
+        abilities: {
+          plan: canOnAthlete(actor, 'plan', target),
+          noteRehearsal: canOnAthlete(actor, 'noteRehearsal', target),
+        },
+      });
+    },
+  );
 
   router.put(
     '/:athleteId/weigh-in',
+    responds({ summary: 'Set the weigh-in’s details (limit, timing, time)', data: cutView }),
     authenticate(),
     validate({ params: athleteParams, body: weighInEventRequest }),
     async (req, res) => {
@@ -49,6 +58,11 @@ export function cutsRouter(): Router {
 
   router.post(
     '/:athleteId/cut-plans',
+    responds({
+      summary: 'Save a cut plan (409 until its warnings are acknowledged)',
+      status: 201,
+      data: cutView,
+    }),
     authenticate(),
     validate({
       params: athleteParams,
@@ -79,12 +93,21 @@ export function cutsRouter(): Router {
 /** PUT /api/team/cut-settings: the team's acute-share threshold (owner). */
 export function cutSettingsRouter(): Router {
   const router = Router();
-  router.put('/cut-settings', authenticate(), validate({ body: cutSettingsRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
-    const teams = new TeamRepository(req.ctx.dataSource.manager);
-    await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
-    res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
-  });
+  router.put(
+    '/cut-settings',
+    responds({
+      summary: 'Set the team’s acute-share threshold',
+      data: z.object({ acuteSharePct: z.number() }),
+    }),
+    authenticate(),
+    validate({ body: cutSettingsRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
+      const teams = new TeamRepository(req.ctx.dataSource.manager);
+      await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
+      res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
+    },
+  );
   return router;
 }

@@ -1,4 +1,11 @@
-import { barcodeLookupRequest, createFoodRequest, labelFoodRequest, text, uuid } from '@driftmark/shared';
+import {
+  barcodeLookupRequest,
+  createFoodRequest,
+  foodView,
+  labelFoodRequest,
+  text,
+  uuid,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
@@ -13,6 +20,7 @@ import {
 import { presentTeamFood } from '../presenters/food.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { FoodService } from '../services/food.service.js';
+import { responds } from '../middleware/responds.js';
 import { loadAthlete } from './athletes.routes.js';
 
 const foodParams = z.object({ foodId: uuid });
@@ -37,22 +45,33 @@ const foodsQuery = z.object({
 export function foodsRouter(): Router {
   const router = Router();
 
-  router.get('/', authenticate(), async (req, res) => {
-    // Parsed here rather than by validate(): `limit` becomes a number, which Express's query type
-    // cannot hold. A bad query still answers 400 with fields.
-    const { q, limit } = foodsQuery.parse(req.query);
-    const { actor } = requireAuth(req);
-    const target = { teamId: actor.teamId };
-    authorizeFoods(actor, 'read', target);
-    const foods = await new FoodService(req.ctx).search(actor, q, limit);
-    res.json({ data: foods, abilities: foodAbilities(actor, target) });
-  });
+  router.get(
+    '/',
+    responds({ summary: 'Search the reference and team foods', data: z.array(foodView), abilities: true }),
+    authenticate(),
+    async (req, res) => {
+      // Parsed here rather than by validate(): `limit` becomes a number, which Express's query type
+      // cannot hold. A bad query still answers 400 with fields.
+      const { q, limit } = foodsQuery.parse(req.query);
+      const { actor } = requireAuth(req);
+      const target = { teamId: actor.teamId };
+      authorizeFoods(actor, 'read', target);
+      const foods = await new FoodService(req.ctx).search(actor, q, limit);
+      res.json({ data: foods, abilities: foodAbilities(actor, target) });
+    },
+  );
 
-  router.post('/', authenticate(), validate({ body: createFoodRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeFoods(actor, 'create', { teamId: actor.teamId });
-    res.status(201).json({ data: await new FoodService(req.ctx).create(actor, req.body) });
-  });
+  router.post(
+    '/',
+    responds({ summary: 'Add a team food', status: 201, data: foodView }),
+    authenticate(),
+    validate({ body: createFoodRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeFoods(actor, 'create', { teamId: actor.teamId });
+      res.status(201).json({ data: await new FoodService(req.ctx).create(actor, req.body) });
+    },
+  );
 
   // A team food from a nutrition label (staff): stored per 100 g, the printed energy checked.
   router.post('/label', authenticate(), validate({ body: labelFoodRequest }), async (req, res) => {

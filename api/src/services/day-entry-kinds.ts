@@ -12,6 +12,10 @@ import {
   type SupplementEntryRequest,
   type Symptom,
   type SymptomReportRequest,
+  fluidView,
+  mealView,
+  supplementView,
+  symptomView,
 } from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
@@ -57,12 +61,15 @@ export interface EntryKind<E extends ClientDayEntry, I extends { clientId: strin
   meta?(entry: E): Record<string, string> | undefined;
   /** The entry as the day view lists it: what a write answers with. */
   present(entry: E): unknown;
+  /** The shape `present` gives (shared), for the API description. */
+  view: z.ZodType;
 }
 
 export const fluidKind: EntryKind<FluidEntry, FluidEntryRequest> = {
   path: 'fluids',
   plural: 'fluid entries',
   present: presentFluid,
+  view: fluidView,
   entity: FluidEntry,
   schema: fluidEntryRequest,
   columns: async (input) => ({
@@ -109,6 +116,7 @@ export const mealKind: EntryKind<MealEntry, MealEntryRequest> = {
   path: 'meals',
   plural: 'meals',
   present: presentMeal,
+  view: mealView,
   entity: MealEntry,
   schema: mealEntryRequest,
   columns: async (input, ctx) => {
@@ -152,6 +160,7 @@ export const supplementKind: EntryKind<SupplementEntry, SupplementEntryRequest> 
   path: 'supplements',
   plural: 'supplement entries',
   present: presentSupplement,
+  view: supplementView,
   entity: SupplementEntry,
   schema: supplementEntryRequest,
   columns: async (input) => ({
@@ -175,6 +184,7 @@ export const symptomKind: EntryKind<SymptomReport, SymptomReportRequest> = {
   path: 'symptoms',
   plural: 'symptom reports',
   present: presentSymptom,
+  view: symptomView,
   entity: SymptomReport,
   schema: symptomReportRequest,
   columns: async (input) => {

@@ -203,6 +203,11 @@ export const router = createBrowserRouter([
                     ),
                   },
                   {
+                    path: 'api',
+                    // No loader: its query module would land in the entry chunk the first routes load.
+                    lazy: page(() => import('./routes/coach-api-reference'), 'CoachApiReferenceRoute'),
+                  },
+                  {
                     path: 'athletes/:athleteId',
                     lazy: page(() => import('./routes/coach-athlete'), 'CoachAthleteRoute'),
                     loader: ({ params }) =>

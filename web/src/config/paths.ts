@@ -21,6 +21,8 @@ export const paths = {
   coachHome: '/coach',
   coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
+  /** The API reference for staff (read from GET /api/openapi.json). */
+  coachApiReference: '/coach/api',
   athletePhotos: '/athlete/photos',
   /** The athlete adds a packaged food: barcode (camera, photo or typed) or nutrition label. */
   athleteFoodNew: '/athlete/foods/new',

@@ -3,6 +3,7 @@ import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
 import {
   BowlIcon,
+  CodeIcon,
   CountdownIcon,
   EnvelopeIcon,
   FlagIcon,
@@ -43,6 +44,9 @@ export function StaffShell() {
           )}
           <SidebarNavLink to={paths.settings} icon={<SlidersIcon />}>
             Settings
+          </SidebarNavLink>
+          <SidebarNavLink to={paths.coachApiReference} icon={<CodeIcon />}>
+            API reference
           </SidebarNavLink>
         </SidebarNav>
       }
