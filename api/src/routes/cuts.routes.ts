@@ -2,6 +2,7 @@ import {
   createCutPlanRequest,
   cutSettingsRequest,
   rehearsalNoteRequest,
+  rehearsalView,
   uuid,
   weighInEventRequest,
   cutView,
@@ -77,6 +78,7 @@ export function cutsRouter(): Router {
   // What was done on a rehearsal day: the athlete or the staff on them (`noteRehearsal`).
   router.put(
     '/:athleteId/cut-plans/:cutPlanId/note',
+    responds({ summary: 'Write or clear the note of one rehearsal day', data: rehearsalView }),
     authenticate(),
     validate({ params: cutPlanParams, body: dated(rehearsalNoteRequest, { date: 'past' }) }),
     async (req, res) => {

@@ -3,6 +3,7 @@ import {
   createFoodRequest,
   foodView,
   labelFoodRequest,
+  labelFoodResult,
   text,
   uuid,
 } from '@driftmark/shared';
@@ -74,33 +75,45 @@ export function foodsRouter(): Router {
   );
 
   // A team food from a nutrition label (staff): stored per 100 g, the printed energy checked.
-  router.post('/label', authenticate(), validate({ body: labelFoodRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeFoods(actor, 'create', { teamId: actor.teamId });
-    const owner = { teamId: actor.teamId, athleteId: null };
-    res.status(201).json({ data: await new FoodService(req.ctx).createFromLabel(actor, owner, req.body) });
-  });
+  router.post(
+    '/label',
+    responds({ summary: 'Add a team food from a nutrition label', status: 201, data: labelFoodResult }),
+    authenticate(),
+    validate({ body: labelFoodRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeFoods(actor, 'create', { teamId: actor.teamId });
+      const owner = { teamId: actor.teamId, athleteId: null };
+      res.status(201).json({ data: await new FoodService(req.ctx).createFromLabel(actor, owner, req.body) });
+    },
+  );
 
   // One team or personal food by id: a personal food only for its athlete and the staff who read them.
-  router.get('/:foodId', authenticate(), validate({ params: foodParams }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    const food = await new FoodService(req.ctx).findById(req.params.foodId as string);
-    if (!food) throw notFound();
-    const target: FoodTarget = { teamId: food.teamId, athlete: null };
-    if (food.athleteId) {
-      const found = await new AthleteRepository(req.ctx.dataSource.manager).findForAccess(food.athleteId);
-      if (!found) throw notFound();
-      const { athlete, sharedWithUserIds } = found;
-      target.athlete = {
-        userId: athlete.userId,
-        teamId: athlete.teamId,
-        coachId: athlete.coachId,
-        sharedWithUserIds,
-      };
-    }
-    authorizeReadFood(actor, target);
-    res.json({ data: presentTeamFood(food), abilities: {} });
-  });
+  router.get(
+    '/:foodId',
+    responds({ summary: 'One team or personal food', data: foodView, abilities: true }),
+    authenticate(),
+    validate({ params: foodParams }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const food = await new FoodService(req.ctx).findById(req.params.foodId as string);
+      if (!food) throw notFound();
+      const target: FoodTarget = { teamId: food.teamId, athlete: null };
+      if (food.athleteId) {
+        const found = await new AthleteRepository(req.ctx.dataSource.manager).findForAccess(food.athleteId);
+        if (!found) throw notFound();
+        const { athlete, sharedWithUserIds } = found;
+        target.athlete = {
+          userId: athlete.userId,
+          teamId: athlete.teamId,
+          coachId: athlete.coachId,
+          sharedWithUserIds,
+        };
+      }
+      authorizeReadFood(actor, target);
+      res.json({ data: presentTeamFood(food), abilities: {} });
+    },
+  );
 
   return router;
 }
@@ -114,6 +127,7 @@ export function athleteFoodsRouter(): Router {
 
   router.post(
     '/:athleteId/foods',
+    responds({ summary: 'Add a personal food from a nutrition label', status: 201, data: labelFoodResult }),
     authenticate(),
     validate({ params: athleteParams, body: labelFoodRequest }),
     async (req, res) => {
@@ -125,6 +139,12 @@ export function athleteFoodsRouter(): Router {
 
   router.post(
     '/:athleteId/foods/barcode',
+    responds({
+      summary: 'Find a packaged food by its barcode and keep it as a personal food',
+      status: 201,
+      data: labelFoodResult,
+      also: { status: 200, data: labelFoodResult, summary: 'The athlete already had this product' },
+    }),
     authenticate(),
     validate({ params: athleteParams, body: barcodeLookupRequest }),
     async (req, res) => {
