@@ -3,7 +3,14 @@
  * cut page, the roster and the review queue, cut plans with their acknowledgements, and the
  * coach's e-mail the first time the projection is over the limit. Real PostgreSQL, pinned clock.
  */
-import { cutView, cutWarningView, rosterRow, reviewQueueItem } from '@driftmark/shared';
+import {
+  cutSettingsView,
+  cutView,
+  cutWarningView,
+  rosterRow,
+  reviewQueueItem,
+  type RecoveryView,
+} from '@driftmark/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
@@ -306,5 +313,129 @@ describe('the recovery checklist on the weigh-in day', () => {
     expect(r.slots).toHaveLength(16);
     expect(r.slots[0]).toMatchObject({ date: '2026-12-11', time: '05:00' });
     expect(r.slots[15]).toMatchObject({ date: '2026-12-11', time: '20:00' });
+  });
+});
+
+describe('ticking the recovery checklist', () => {
+  /** The plan of the test above (3.5 kg lost, 16 slots), then the weigh-in day at 12:00 UTC. */
+  async function weighInDay() {
+    await coachAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send({
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      path: 'linear',
+      notes: null,
+      acknowledgedKeys: ['acute_share'],
+    });
+    now = new Date('2026-12-11T12:00:00Z');
+    return cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+  }
+  const day = (date: string) => `/api/athletes/${a.athlete.id}/days/${date}`;
+  const fluidBody = (slot: RecoveryView['slots'][number], time = '12:00') => ({
+    clientId: slot.fluid.clientId,
+    time,
+    volume: slot.fluid.volumeMl,
+    unit: 'ml',
+    kind: 'other',
+  });
+
+  it('gives each item a fixed client id and the amount it logs (5.25 L / 16 slots → 330 mL)', async () => {
+    const r = await weighInDay();
+    expect(r.slots[0]!.fluid).toMatchObject({ volumeMl: 330, logged: null });
+    // First hour: 1.0 g/kg × 63 kg = 63 g, the band's floor (Burke 2011, from memory).
+    expect(r.slots[0]!.carbohydrate).toMatchObject({ carbohydrateG: 63, logged: null });
+    const ids = r.slots.flatMap((s) => [s.fluid.clientId, s.carbohydrate.clientId]);
+    expect(new Set(ids).size).toBe(32);
+    const again = cutView.parse((await coachAgent.get(cutUrl())).body.data).recovery!;
+    expect(again.slots.map((s) => s.fluid.clientId)).toEqual(r.slots.map((s) => s.fluid.clientId));
+  });
+
+  it('logs a fluid entry once however often it is ticked; the coach sees it done; unticking removes it', async () => {
+    const slot = (await weighInDay()).slots[0]!;
+    const first = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot));
+    expect(first.status).toBe(201);
+    const repeat = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot, '12:01'));
+    expect(repeat.status).toBe(200);
+    expect(repeat.body.data.id).toBe(first.body.data.id);
+    expect(await t.dataSource.query('SELECT volume_ml FROM fluid_entries')).toEqual([{ volume_ml: 330 }]);
+
+    const seen = await coachAgent.get(cutUrl());
+    expect(seen.body.abilities).toEqual({ plan: true, log: false });
+    expect(cutView.parse(seen.body.data).recovery!.slots[0]!.fluid.logged).toEqual({
+      entryId: first.body.data.id,
+      date: '2026-12-11',
+      time: '12:00',
+    });
+    const dayView = await coachAgent.get(day('2026-12-11'));
+    expect(dayView.body.data.fluidTotalMl).toBe(330);
+
+    expect(
+      (await athleteAgent.delete(`/api/athletes/${a.athlete.id}/fluids/${first.body.data.id}`)).status,
+    ).toBe(204);
+    const after = cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+    expect(after.slots[0]!.fluid.logged).toBeNull();
+    // Ticked again with the same client id: a new entry.
+    expect((await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(201);
+  });
+
+  it('logs the carbohydrate item as a meal of its grams', async () => {
+    const slot = (await weighInDay()).slots[1]!;
+    const res = await athleteAgent.post(`${day('2026-12-11')}/meals`).send({
+      clientId: slot.carbohydrate.clientId,
+      time: '12:00',
+      name: slot.carbohydrate.mealName,
+      source: 'macros',
+      proteinG: 0,
+      carbohydrateG: slot.carbohydrate.carbohydrateG,
+      fatG: 0,
+    });
+    expect(res.status).toBe(201);
+    const r = cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+    expect(r.slots[1]!.carbohydrate.logged).toMatchObject({ entryId: res.body.data.id, time: '12:00' });
+    expect(r.slots[1]!.fluid.logged).toBeNull();
+    // 63 g × 4 kcal/g (Atwater).
+    expect((await athleteAgent.get(day('2026-12-11'))).body.data.totals.energyKcal).toBeCloseTo(252, 6);
+  });
+
+  it('is the athlete’s own log: the coach gets 403, another athlete 404, and nothing is written', async () => {
+    const slot = (await weighInDay()).slots[0]!;
+    const other = await createAthlete(t.dataSource, { coach });
+    const otherAgent = await signedIn(t.app, other.user.email, FACTORY_PASSWORD);
+    expect((await coachAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(403);
+    expect((await otherAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(404);
+    expect(await t.dataSource.query('SELECT id FROM fluid_entries')).toEqual([]);
+    const ticked = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot));
+    const url = `/api/athletes/${a.athlete.id}/fluids/${ticked.body.data.id}`;
+    expect((await coachAgent.delete(url)).status).toBe(403);
+    expect((await otherAgent.delete(url)).status).toBe(404);
+    expect(await t.dataSource.query('SELECT count(*)::int AS n FROM fluid_entries')).toEqual([{ n: 1 }]);
+  });
+});
+
+describe('the team’s acute-share threshold', () => {
+  it('answers the default 5 % with its source and what 7 % means; the owner sets it, a coach reads it', async () => {
+    const read = await coachAgent.get('/api/team/cut-settings');
+    expect(read.status).toBe(200);
+    expect(read.body.abilities).toEqual({ manage: false });
+    expect(cutSettingsView.parse(read.body.data)).toMatchObject({
+      acuteSharePct: 5,
+      defaultPct: 5,
+      severePct: 7,
+    });
+    expect(read.body.data.source).toMatch(/Barley et al\. 2018/);
+    expect(read.body.data.severeSource).toMatch(/common practice, no source/);
+    expect((await coachAgent.put('/api/team/cut-settings').send({ acuteSharePct: 6 })).status).toBe(403);
+
+    const owner = await createOwner(t.dataSource, { teamId: coach.teamId });
+    const ownerAgent = await signedIn(t.app, owner.email, FACTORY_PASSWORD);
+    const bad = await ownerAgent.put('/api/team/cut-settings').send({ acuteSharePct: 12 });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['acuteSharePct']);
+    const set = await ownerAgent.put('/api/team/cut-settings').send({ acuteSharePct: 4.5 });
+    expect(set.body.data).toMatchObject({ acuteSharePct: 4.5, defaultPct: 5 });
+    expect((await ownerAgent.get('/api/team/cut-settings')).body.abilities).toEqual({ manage: true });
+    expect((await athleteAgent.get('/api/team/cut-settings')).status).toBe(403);
   });
 });

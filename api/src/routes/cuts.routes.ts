@@ -4,9 +4,9 @@ import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
-import { authorizeTeam } from '../policies/team.policy.js';
+import { authorizeTeam, canOnTeam } from '../policies/team.policy.js';
 import { TeamRepository } from '../repositories/team.repository.js';
-import { CutService } from '../services/cut.service.js';
+import { CutService, cutSettingsOf } from '../services/cut.service.js';
 import { loadAthlete } from './athletes.routes.js';
 
 const athleteParams = z.object({ athleteId: uuid });
@@ -14,6 +14,7 @@ const athleteParams = z.object({ athleteId: uuid });
 /**
  * Making weight under /api/athletes/:athleteId: the weigh-in's record and the cut plan. Reading is
  * the athlete policy's `read` (the athlete too); writing is `plan` (coach, owner, shared staff).
+ * `abilities.log` says whether the reader may tick the recovery checklist (the athlete's own log).
  */
 export function cutsRouter(): Router {
   const router = Router();
@@ -22,7 +23,7 @@ export function cutsRouter(): Router {
     const { actor, athlete, target } = await loadAthlete(req, 'read');
     res.json({
       data: await new CutService(req.ctx).getCut(athlete),
-      abilities: { plan: canOnAthlete(actor, 'plan', target) },
+      abilities: { plan: canOnAthlete(actor, 'plan', target), log: canOnAthlete(actor, 'log', target) },
     });
   });
 
@@ -49,15 +50,27 @@ export function cutsRouter(): Router {
   return router;
 }
 
-/** PUT /api/team/cut-settings: the team's acute-share threshold (owner). */
+/**
+ * GET /api/team/cut-settings (staff, as the guardrail floors) and PUT (owner): the team's
+ * acute-share threshold, answered with the default and the sources beside it.
+ */
 export function cutSettingsRouter(): Router {
   const router = Router();
+  router.get('/cut-settings', authenticate(), async (req, res) => {
+    const { actor } = requireAuth(req);
+    const team = { id: actor.teamId };
+    authorizeTeam(actor, { kind: 'viewGuardrails' }, team);
+    res.json({
+      data: await cutSettingsOf(new TeamRepository(req.ctx.dataSource.manager), actor.teamId),
+      abilities: { manage: canOnTeam(actor, { kind: 'manageSettings' }, team) },
+    });
+  });
   router.put('/cut-settings', authenticate(), validate({ body: cutSettingsRequest }), async (req, res) => {
     const { actor } = requireAuth(req);
     authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
     const teams = new TeamRepository(req.ctx.dataSource.manager);
     await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
-    res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
+    res.json({ data: await cutSettingsOf(teams, actor.teamId) });
   });
   return router;
 }

@@ -26,8 +26,11 @@ export type WeighInTiming = (typeof WEIGH_IN_TIMINGS)[number];
 export const ACUTE_SHARE_DEFAULT_PCT = 5;
 /**
  * Above this acute share the plan needs a second acknowledgement and the athlete sees the
- * stop-and-seek-care signs. Common practice, no source: no position statement giving a numeric
- * limit was confirmed (REFERENCES §7: "No numeric 'safe %' limit for acute loss was confirmed").
+ * stop-and-seek-care signs. The 7 % itself is common practice, no source. Burke LM, Slater GJ,
+ * Matthews JJ, Langan-Evans C, Horswill CA (2021) "ACSM Expert Consensus Statement on Weight Loss
+ * in Weight-Category Sports", Curr Sports Med Rep 20:199–217, recommends against rapid and
+ * unhealthy weight-loss methods but gives no numeric limit; no numeric safe % was confirmed
+ * (REFERENCES §7).
  */
 export const ACUTE_SHARE_SEVERE_PCT = 7;
 /**
@@ -49,6 +52,11 @@ export const RECOVERY_CARB = {
   perHourGPerKg: { min: 1.0, max: 1.2 },
   perDayGPerKg: { min: 5, max: 10 },
 } as const;
+/** What the severe line means, as the team settings and the plan builder say it. */
+export const ACUTE_SHARE_SEVERE_MEANING =
+  `Above ${ACUTE_SHARE_SEVERE_PCT} % of body mass a cut plan needs a second acknowledgement, with a ` +
+  'physician involved, and the athlete is shown the signs to stop and seek care. Losses this large ' +
+  'are where intravenous rehydration comes up; no numeric safe limit is published.';
 /** The last drink slot starts at least this long before competition: common practice, no source. */
 export const RECOVERY_LAST_DRINK_MINUTES_BEFORE = 60;
 
@@ -56,8 +64,14 @@ export const CUT_SOURCES = {
   chronicRate:
     'Helms, Aragon & Fitschen 2014, JISSN 11:20 (1 %/week); Garthe et al. 2011, IJSNEM 21:97–104 (1.4 %/week)',
   acuteShare:
-    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss; ' +
-    'the 7 % second acknowledgement is common practice, no source',
+    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss ' +
+    '(from memory, unconfirmed); Burke et al. 2021, ACSM Expert Consensus Statement on Weight Loss in ' +
+    'Weight-Category Sports, Curr Sports Med Rep 20:199–217, recommends against rapid and unhealthy loss ' +
+    'methods and gives no numeric limit: no numeric safe % confirmed',
+  acuteShareSevere:
+    'The 7 % second acknowledgement is common practice, no source; Burke et al. 2021 (ACSM Expert ' +
+    'Consensus Statement, Curr Sports Med Rep 20:199–217) recommends against rapid and unhealthy loss ' +
+    'methods and confirms no numeric limit',
   recovery:
     'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium); ' +
     'Reale, Slater & Burke 2017, Eur J Sport Sci 17:727–740 (the recovery window); carbohydrate bands ' +
@@ -294,6 +308,27 @@ export function recoveryTargets(input: {
   return { fluidL, carbohydrateG, carbohydrateGPerKg: perKg, slots };
 }
 
+/** The two items of a recovery slot: a drink (fluid entry) and carbohydrate (a meal). */
+export const RECOVERY_ITEM_KINDS = ['fluid', 'carbohydrate'] as const;
+export type RecoveryItemKind = (typeof RECOVERY_ITEM_KINDS)[number];
+
+/**
+ * What ticking a slot's items logs: the slot's fluid rounded to 10 mL, and the lower end of its
+ * carbohydrate band rounded to a whole gram (the target's floor met, the athlete may eat more and
+ * log it as any meal). Rounding and taking the floor: common practice, no source.
+ */
+export function recoveryItemAmounts(
+  slot: Pick<RecoveryTargets['slots'][number], 'fluidL' | 'carbohydrateG'>,
+): {
+  volumeMl: number;
+  carbohydrateG: number;
+} {
+  return {
+    volumeMl: Math.round((slot.fluidL * 1000) / 10) * 10,
+    carbohydrateG: Math.round(slot.carbohydrateG.min),
+  };
+}
+
 /** g/kg of carbohydrate from hour `a` to hour `b` after the weigh-in (RECOVERY_CARB). */
 function carbGPerKg(a: number, b: number, end: 'min' | 'max'): number {
   if (b <= a) return 0;
@@ -355,7 +390,7 @@ export function cutWarnings(
       message:
         `An acute loss above ${ACUTE_SHARE_SEVERE_PCT} % of body mass (${fixed(acute.pct, 1)} % here) needs a ` +
         'physician involved; the athlete is shown the signs to stop and seek care.',
-      source: CUT_SOURCES.acuteShare,
+      source: CUT_SOURCES.acuteShareSevere,
     });
   }
   return out;
