@@ -3,7 +3,8 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, type WithAbilities } from '@/lib/api-client';
 import { cutKeys } from './keys';
 
-export type CutAbilities = { plan: boolean };
+/** `plan`: build plans and edit the weigh-in; `log`: tick the recovery checklist (the athlete). */
+export type CutAbilities = { plan: boolean; log?: boolean };
 
 /** GET /api/athletes/:athleteId/cut: the weigh-in, the projection against its limit, the cut plan. */
 export function getCut(athleteId: string, signal?: AbortSignal): Promise<WithAbilities<CutView>> {

@@ -1,10 +1,27 @@
-import type { WeightUnit } from '@driftmark/shared';
+import type { VolumeUnit, WeightUnit } from '@driftmark/shared';
 import { Card, CardHeader } from '@/components/ui/card';
 import { useCut } from '../api/get-cut';
-import { LimitGap, PlanFigures, RecoveryChecklist } from './cut-figures';
+import { LimitGap, PlanFigures } from './cut-figures';
+import { RecoveryChecklist, type RecoveryToggle } from './recovery-checklist';
 
-/** The athlete's Today: the weight to stay on the cut plan, the projection, the cautions. */
-export function CutTodayCard({ athleteId, unit }: { athleteId: string; unit: WeightUnit }) {
+/**
+ * The athlete's Today: the weight to stay on the cut plan, the projection, the cautions, and on
+ * the weigh-in day the recovery checklist, ticked through `onToggle` (the app logs the entry).
+ */
+export function CutTodayCard({
+  athleteId,
+  unit,
+  volumeUnit,
+  now,
+  onToggle,
+}: {
+  athleteId: string;
+  unit: WeightUnit;
+  volumeUnit: VolumeUnit;
+  /** The athlete's clock now, HH:MM. */
+  now: string;
+  onToggle: RecoveryToggle;
+}) {
   const cut = useCut(athleteId);
   if (!cut.isSuccess) return null;
   const view = cut.data.data;
@@ -12,7 +29,12 @@ export function CutTodayCard({ athleteId, unit }: { athleteId: string; unit: Wei
   return (
     <Card className="space-y-4" aria-labelledby="cut-today-heading">
       <CardHeader id="cut-today-heading" title="Making weight" eyebrow="Your cut plan" />
-      <RecoveryChecklist cut={view} />
+      <RecoveryChecklist
+        cut={view}
+        volumeUnit={volumeUnit}
+        now={now}
+        onToggle={cut.data.abilities.log ? onToggle : undefined}
+      />
       <PlanFigures cut={view} unit={unit} />
       <LimitGap cut={view} unit={unit} />
       <p className="text-sm text-ink-muted">{view.caution}</p>
