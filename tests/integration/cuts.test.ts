@@ -339,11 +339,13 @@ describe('ticking the recovery checklist', () => {
     volume: slot.fluid.volumeMl,
     unit: 'ml',
     kind: 'other',
+    sodiumMg: slot.fluid.sodiumMg,
   });
 
   it('gives each item a fixed client id and the amount it logs (5.25 L / 16 slots → 330 mL)', async () => {
     const r = await weighInDay();
-    expect(r.slots[0]!.fluid).toMatchObject({ volumeMl: 330, logged: null });
+    // 0.33 L × 20 mmol/L × 22.99 mg/mmol (Sawka 2007, from memory) = 151.7 → 152 mg sodium.
+    expect(r.slots[0]!.fluid).toMatchObject({ volumeMl: 330, sodiumMg: 152, logged: null });
     // First hour: 1.0 g/kg × 63 kg = 63 g, the band's floor (Burke 2011, from memory).
     expect(r.slots[0]!.carbohydrate).toMatchObject({ carbohydrateG: 63, logged: null });
     const ids = r.slots.flatMap((s) => [s.fluid.clientId, s.carbohydrate.clientId]);
@@ -359,7 +361,9 @@ describe('ticking the recovery checklist', () => {
     const repeat = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot, '12:01'));
     expect(repeat.status).toBe(200);
     expect(repeat.body.data.id).toBe(first.body.data.id);
-    expect(await t.dataSource.query('SELECT volume_ml FROM fluid_entries')).toEqual([{ volume_ml: 330 }]);
+    expect(await t.dataSource.query('SELECT volume_ml, sodium_mg FROM fluid_entries')).toEqual([
+      { volume_ml: 330, sodium_mg: 152 },
+    ]);
 
     const seen = await coachAgent.get(cutUrl());
     expect(seen.body.abilities).toEqual({ plan: true, log: false });
@@ -370,6 +374,9 @@ describe('ticking the recovery checklist', () => {
     });
     const dayView = await coachAgent.get(day('2026-12-11'));
     expect(dayView.body.data.fluidTotalMl).toBe(330);
+    // The drink's sodium is the day's (no meal carries any).
+    expect(dayView.body.data.totals.sodiumMg).toBe(152);
+    expect(dayView.body.data.fluids[0].sodiumMg).toBe(152);
 
     expect(
       (await athleteAgent.delete(`/api/athletes/${a.athlete.id}/fluids/${first.body.data.id}`)).status,
@@ -397,6 +404,24 @@ describe('ticking the recovery checklist', () => {
     expect(r.slots[1]!.fluid.logged).toBeNull();
     // 63 g × 4 kcal/g (Atwater).
     expect((await athleteAgent.get(day('2026-12-11'))).body.data.totals.energyKcal).toBeCloseTo(252, 6);
+    // With a meal carrying 300 mg sodium and slot 0's drink (152 mg), the trend's day reads 452 mg
+    // (the day view and the trend sum the drinks' sodium alike).
+    await athleteAgent.post(`${day('2026-12-11')}/meals`).send({
+      clientId: '3b0f3a52-7c55-4f43-9a39-5d1f0e6c2a11',
+      time: '11:00',
+      name: 'Salted rice',
+      source: 'macros',
+      proteinG: 4,
+      carbohydrateG: 40,
+      fatG: 1,
+      sodiumMg: 300,
+    });
+    await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(r.slots[0]!));
+    const trend = await athleteAgent.get(`/api/athletes/${a.athlete.id}/trend?from=2026-12-11&to=2026-12-11`);
+    // The trend sends its days as columns: index 0 is 11 Dec.
+    expect(trend.body.data.days.actuals.sodiumMg).toEqual([452]);
+    expect(trend.body.data.days.actuals.fluidMl).toEqual([330]);
+    expect((await athleteAgent.get(day('2026-12-11'))).body.data.totals.sodiumMg).toBe(452);
   });
 
   it('is the athlete’s own log: the coach gets 403, another athlete 404, and nothing is written', async () => {

@@ -169,7 +169,7 @@ export function recoveryOf(
         ...at,
         fluidL: s.fluidL,
         carbohydrateG: s.carbohydrateG,
-        fluid: { ...item('fluid'), volumeMl: amounts.volumeMl },
+        fluid: { ...item('fluid'), volumeMl: amounts.volumeMl, sodiumMg: amounts.sodiumMg },
         carbohydrate: {
           ...item('carbohydrate'),
           carbohydrateG: amounts.carbohydrateG,

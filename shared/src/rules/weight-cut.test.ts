@@ -273,14 +273,17 @@ describe('the sources the acute-share warnings carry', () => {
 
 describe('what ticking a recovery slot logs', () => {
   it('rounds the fluid to 10 mL and takes the carbohydrate band’s floor in whole grams', () => {
-    // 5.25 L over 16 slots = 328.125 mL → 330 mL; 1.0–1.2 g/kg × 63 kg = 63–75.6 g → 63 g.
+    // 5.25 L over 16 slots = 328.125 mL → 330 mL; sodium 0.33 L × 20 mmol/L × 22.99 mg/mmol
+    // (Sawka 2007, from memory) = 151.7 → 152 mg; 1.0–1.2 g/kg × 63 kg = 63–75.6 g → 63 g.
     expect(recoveryItemAmounts({ fluidL: 5.25 / 16, carbohydrateG: { min: 63, max: 75.6 } })).toEqual({
       volumeMl: 330,
+      sodiumMg: 152,
       carbohydrateG: 63,
     });
-    // 0.3249 L → 320 mL (324.9 rounds down); 40.5 g → 41 g (half rounds up).
+    // 0.3249 L → 320 mL (324.9 rounds down), 0.32 × 459.8 = 147.1 → 147 mg; 40.5 g → 41 g (half up).
     expect(recoveryItemAmounts({ fluidL: 0.3249, carbohydrateG: { min: 40.5, max: 60 } })).toEqual({
       volumeMl: 320,
+      sodiumMg: 147,
       carbohydrateG: 41,
     });
   });

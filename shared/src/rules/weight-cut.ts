@@ -41,6 +41,12 @@ export const ACUTE_SHARE_SEVERE_PCT = 7;
  */
 export const RECOVERY_FLUID_L_PER_KG_LOST = 1.5;
 /**
+ * Sodium in the recovery fluid, mg per litre: the low end of the 20–30 mmol/L the ACSM position
+ * stand names for drinks (Sawka et al. 2007, MSSE 39:377–390; the range from memory, unconfirmed),
+ * at 22.99 mg per mmol (sodium's standard atomic weight, IUPAC): 20 × 22.99 = 459.8 mg/L.
+ */
+export const RECOVERY_SODIUM_MG_PER_L = 20 * 22.99;
+/**
  * Carbohydrate after the weigh-in, g per kg of body mass: 1.0–1.2 g/kg an hour for the first 4 h
  * (speedy refuelling), then the daily 5–10 g/kg pro rata for the rest of the window. Burke LM,
  * Hawley JA, Wong SH, Jeukendrup AE (2011) "Carbohydrates for training and competition", J Sports
@@ -73,7 +79,8 @@ export const CUT_SOURCES = {
     'Consensus Statement, Curr Sports Med Rep 20:199–217) recommends against rapid and unhealthy loss ' +
     'methods and confirms no numeric limit',
   recovery:
-    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium); ' +
+    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium at ' +
+    '20 mmol/L, the low end of its 20–30 mmol/L; both from memory, unconfirmed); ' +
     'Reale, Slater & Burke 2017, Eur J Sport Sci 17:727–740 (the recovery window); carbohydrate bands ' +
     'from Burke et al. 2011, J Sports Sci 29:S17–S27 (from memory)',
 } as const;
@@ -313,18 +320,22 @@ export const RECOVERY_ITEM_KINDS = ['fluid', 'carbohydrate'] as const;
 export type RecoveryItemKind = (typeof RECOVERY_ITEM_KINDS)[number];
 
 /**
- * What ticking a slot's items logs: the slot's fluid rounded to 10 mL, and the lower end of its
- * carbohydrate band rounded to a whole gram (the target's floor met, the athlete may eat more and
- * log it as any meal). Rounding and taking the floor: common practice, no source.
+ * What ticking a slot's items logs: the slot's fluid rounded to 10 mL with its sodium
+ * (RECOVERY_SODIUM_MG_PER_L, whole mg), and the lower end of its carbohydrate band rounded to a
+ * whole gram (the target's floor met, the athlete may eat more and log it as any meal). Rounding
+ * and taking the floor: common practice, no source.
  */
 export function recoveryItemAmounts(
   slot: Pick<RecoveryTargets['slots'][number], 'fluidL' | 'carbohydrateG'>,
 ): {
   volumeMl: number;
+  sodiumMg: number;
   carbohydrateG: number;
 } {
+  const volumeMl = Math.round((slot.fluidL * 1000) / 10) * 10;
   return {
-    volumeMl: Math.round((slot.fluidL * 1000) / 10) * 10,
+    volumeMl,
+    sodiumMg: Math.round((volumeMl / 1000) * RECOVERY_SODIUM_MG_PER_L),
     carbohydrateG: Math.round(slot.carbohydrateG.min),
   };
 }

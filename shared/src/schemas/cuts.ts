@@ -207,8 +207,8 @@ export const recoveryView = z.object({
       time: z.string(),
       fluidL: z.number(),
       carbohydrateG: z.object({ min: z.number(), max: z.number() }),
-      /** Ticking it logs a fluid entry of `volumeMl` through POST …/days/:date/fluids with `clientId`. */
-      fluid: recoveryItemView.extend({ volumeMl: z.number() }),
+      /** Ticking it logs a fluid entry of `volumeMl` with `sodiumMg` through POST …/days/:date/fluids with `clientId`. */
+      fluid: recoveryItemView.extend({ volumeMl: z.number(), sodiumMg: z.number() }),
       /** Ticking it logs a meal of `carbohydrateG` (macros) through POST …/days/:date/meals with `clientId`. */
       carbohydrate: recoveryItemView.extend({ carbohydrateG: z.number(), mealName: z.string() }),
     }),

@@ -9,6 +9,7 @@ import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitC
 import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
 import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
 import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
+import { AddFluidSodium1796210000000 } from './1796210000000-AddFluidSodium.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -22,4 +23,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   OutboxSendingLease1796190000001,
   AddWeightCuts1796200000000,
   AddBodyMeasurements1796190140000,
+  AddFluidSodium1796210000000,
 ];

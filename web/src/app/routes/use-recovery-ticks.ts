@@ -7,7 +7,7 @@ import type { RecoveryToggle } from '@/features/cuts/components/recovery-checkli
 
 /**
  * Ticking the recovery checklist through the check-in write path, logged like any day: a fluid
- * item posts a fluid entry, a carbohydrate item a meal of macros, each with the item's client id
+ * item posts a fluid entry with its sodium, a carbohydrate item a meal of macros, each with the item's client id
  * from the server (a double tap returns the first entry); unticking deletes the entry the server
  * names. Entries land on the athlete's `today` at the time given; the day cache then fetches the
  * day and what the app links to it (the checklist among them) again.
@@ -27,6 +27,7 @@ export function useRecoveryTicks(athleteId: string, today: string): RecoveryTogg
           volume: slot.fluid.volumeMl,
           unit: 'ml',
           kind: 'other',
+          sodiumMg: slot.fluid.sodiumMg,
         });
         await cache.entry(today, 'fluids', entry);
       }

@@ -122,7 +122,7 @@ export function RecoveryChecklist({
             <Item
               slot={s}
               kind="fluid"
-              label={`${formatVolume(s.fluid.volumeMl, volumeUnit)} fluid with sodium`}
+              label={`${formatVolume(s.fluid.volumeMl, volumeUnit)} fluid with ${formatNumber(s.fluid.sodiumMg)}${NBSP}mg sodium`}
               busy={busy === s.fluid.clientId}
               onToggle={onToggle ? () => void toggle(s, 'fluid') : undefined}
             />
