@@ -1,7 +1,6 @@
 import type { CutView, RecoveryItemKind, VolumeUnit } from '@driftmark/shared';
 import { useId, useState } from 'react';
 import { Alert } from '@/components/ui/alert';
-import { controlClasses } from '@/components/ui/field';
 import { ApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
 import { formatNumber, formatVolume, NBSP } from '@/lib/format';
@@ -87,7 +86,8 @@ export function RecoveryChecklist({
               type="time"
               value={time}
               onChange={(e) => setEdited(e.target.value || null)}
-              className={cn(controlClasses, 'w-36 border-line-strong tabular-nums')}
+              // The field's look without ui/field (react-hook-form stays off the Today route's first load).
+              className="block min-h-touch w-36 rounded-md border border-line-strong bg-surface px-3 py-2 text-base text-ink tabular-nums"
             />
           </div>
           {edited ? (
