@@ -100,6 +100,21 @@ describe('making weight', () => {
     await screenshot(page, 'making-weight-athlete-375');
   });
 
+  it('shows the head coach the team’s acute-share threshold with its default and source', async () => {
+    const { page } = desktop;
+    await page.goto('/settings');
+    const card = page.getByRole('region', { name: 'Making weight: acute share' });
+    const form = card.getByRole('form', { name: 'Acute share threshold' });
+    await expect(form.getByLabel('Acute share threshold').inputValue()).resolves.toBe('5');
+    await expect(card.innerText()).resolves.toMatch(/Default 5\s?%/);
+    await expect(card.innerText()).resolves.toMatch(/Barley et al\. 2018/);
+    await expect(card.innerText()).resolves.toMatch(/Above 7\s?%/);
+    await card.scrollIntoViewIfNeeded();
+    await screenshot(page, 'making-weight-settings-1280');
+    await page.goBack();
+    await page.getByRole('region', { name: 'Making weight' }).waitFor();
+  });
+
   describe('on the weigh-in day', () => {
     let athleteId = '';
     let eventDate = '';

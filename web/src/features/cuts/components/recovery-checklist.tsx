@@ -14,6 +14,9 @@ export type RecoveryToggle = (input: {
   time: string;
 }) => Promise<unknown>;
 
+/** Slots shown before "Show all": a long window (16 h: 16 slots) would bury the rest of the screen. */
+const FIRST_SLOTS = 6;
+
 const litres = (l: number) => `${formatNumber(l, 2)}${NBSP}L`;
 const band = (g: { min: number; max: number }) => `${formatNumber(g.min)}–${formatNumber(g.max)}${NBSP}g`;
 
@@ -40,7 +43,10 @@ export function RecoveryChecklist({
   const [edited, setEdited] = useState<string | null>(null);
   const [busy, setBusy] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  const [showAll, setShowAll] = useState(false);
   if (!r) return null;
+  const folded = !showAll && r.slots.length > FIRST_SLOTS + 1;
+  const slots = folded ? r.slots.slice(0, FIRST_SLOTS) : r.slots;
   const time = edited ?? now ?? '';
   const done = r.slots.reduce((n, s) => n + (s.fluid.logged ? 1 : 0) + (s.carbohydrate.logged ? 1 : 0), 0);
 
@@ -113,7 +119,7 @@ export function RecoveryChecklist({
         aria-label="Recovery checklist"
         className="divide-y divide-line rounded-md border border-line text-sm"
       >
-        {r.slots.map((s) => (
+        {slots.map((s) => (
           <li
             key={`${s.date} ${s.time}`}
             className="grid grid-cols-1 gap-1 px-3 py-2 sm:grid-cols-[4rem_1fr_1fr] sm:items-center sm:gap-3"
@@ -136,6 +142,18 @@ export function RecoveryChecklist({
           </li>
         ))}
       </ol>
+      {r.slots.length > FIRST_SLOTS + 1 ? (
+        <button
+          type="button"
+          aria-expanded={!folded}
+          className="min-h-touch text-sm font-semibold text-accent underline"
+          onClick={() => setShowAll(folded)}
+        >
+          {folded
+            ? `Show the other ${r.slots.length - FIRST_SLOTS} slots, to ${r.slots.at(-1)!.time}`
+            : `Show the first ${FIRST_SLOTS} slots only`}
+        </button>
+      ) : null}
       <p className="text-xs text-ink-muted">Source: {r.source}</p>
     </section>
   );
