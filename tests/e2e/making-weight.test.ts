@@ -108,7 +108,7 @@ describe('making weight', () => {
     await expect(form.getByLabel('Acute share threshold').inputValue()).resolves.toBe('5');
     await expect(card.innerText()).resolves.toMatch(/Default 5\s?%/);
     await expect(card.innerText()).resolves.toMatch(/Barley et al\. 2018/);
-    await expect(card.innerText()).resolves.toMatch(/Above 7\s?%/);
+    await expect(card.innerText()).resolves.toMatch(/What 7\s?% means/);
     await card.scrollIntoViewIfNeeded();
     await screenshot(page, 'making-weight-settings-1280');
     await page.goBack();

@@ -62,7 +62,7 @@ export const RECOVERY_CARB = {
 export const ACUTE_SHARE_SEVERE_MEANING =
   `Above ${ACUTE_SHARE_SEVERE_PCT} % of body mass a cut plan needs a second acknowledgement, with a ` +
   'physician involved, and the athlete is shown the signs to stop and seek care. Losses this large ' +
-  'are where intravenous rehydration comes up; no numeric safe limit is published.';
+  'are often spoken of as intravenous-rehydration territory; no numeric safe limit is published.';
 /** The last drink slot starts at least this long before competition: common practice, no source. */
 export const RECOVERY_LAST_DRINK_MINUTES_BEFORE = 60;
 

@@ -24,7 +24,7 @@ function ThresholdNote({ view }: { view: CutSettingsView }) {
         with the athlete. Source: {view.source}.
       </p>
       <p>
-        <span className="font-semibold text-ink">Above {pct(view.severePct)}.</span> {view.severeMeaning}{' '}
+        <span className="font-semibold text-ink">What {pct(view.severePct)} means.</span> {view.severeMeaning}{' '}
         Source: {view.severeSource}.
       </p>
       <p>
