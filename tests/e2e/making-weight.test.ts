@@ -3,7 +3,9 @@ import { baseUrl, daysFromToday, openSession, screenshot, signIn, type Session }
 
 // The coach opens Aroha (a weigh-in in 10 days, 63.0 kg limit), reads that she is projected over the
 // limit, builds a cut plan whose last days take off more than 5 % of body mass, acknowledges that
-// warning and saves (after saving the weigh-in's details through the panel's form); Aroha sees today's weight to stay on the plan on her Today screen.
+// warning and saves (after saving the weigh-in's details through the panel's form); Aroha's practice
+// run a month ago is shown beside the plan (what it took off, the regain, the symptoms, the notes);
+// Aroha sees today's weight to stay on the plan on her Today screen.
 // Then the coach moves the weigh-in to Aroha's today: she ticks a recovery item, the drink is on her
 // day, and the coach's panel shows it ticked; the weigh-in goes back to its date at the end.
 describe('making weight', () => {
@@ -34,6 +36,28 @@ describe('making weight', () => {
     );
     await expect(panel.innerText()).resolves.toMatch(/63\.0\s?kg \(138\.9\s?lb\)/);
     await screenshot(page, 'making-weight-coach-1280');
+  });
+
+  it('shows Aroha’s practice run: what it took off, the regain, the symptoms and each day’s notes', async () => {
+    const { page } = desktop;
+    const panel = page.getByRole('region', { name: 'Making weight' });
+    // The panel's full record first; the open builder below carries its own comparison.
+    const record = panel.getByRole('region', { name: /^Practice run: weigh-in/ }).first();
+    await record.waitFor();
+    // The demo's scripted run (seed-cuts.ts): about 2 kg, 3 % over 2 days; most of it back next morning.
+    await expect(record.getByTestId('rehearsal-achieved').innerText()).resolves.toMatch(
+      /^\d\.\d\s?kg · \d\.\d\s?% over 2 days/,
+    );
+    await expect(record.getByTestId('rehearsal-symptoms').innerText()).resolves.toMatch(
+      /Headache, Very dark urine/,
+    );
+    await expect(record.innerText()).resolves.toMatch(/Regained by the next morning\s+\d\.\d\s?kg/);
+    await record.getByText('Felt flat at randori', { exact: false }).waitFor();
+    await screenshot(page, 'making-weight-rehearsal-1280');
+    await page.setViewportSize({ width: 375, height: 812 });
+    await record.scrollIntoViewIfNeeded();
+    await screenshot(page, 'making-weight-rehearsal-375');
+    await page.setViewportSize({ width: 1280, height: 860 });
   });
 
   it('marks Aroha over the limit on the roster, with the gap and the days left', async () => {
@@ -79,11 +103,25 @@ describe('making weight', () => {
     await form.getByLabel('Weight at the start').fill('67.0');
     await form.getByLabel('Weight before the last days').fill('66.4');
     await form.getByLabel('Last days (acute part)').fill('3');
+    // Beside it, the rehearsal: the last days as typed against what the practice run achieved.
+    const beside = panel.getByRole('region', { name: /^Practice run: weigh-in/ }).last();
+    await expect(beside.getByTestId('rehearsal-planned').innerText()).resolves.toMatch(
+      /^3\.4\s?kg · 5\.1\s?% of body mass over 3 days/,
+    );
     await form.getByRole('button', { name: 'Check and save' }).click();
-    const warning = panel.getByText('Read these with the athlete before saving');
+    const warning = panel
+      .getByRole('status')
+      .filter({ hasText: 'Read these with the athlete before saving' });
     await warning.waitFor();
+    // Each warning with the server's severity and source.
+    await warning.getByText('Strong warning: needs acknowledgement').waitFor();
+    await expect(warning.innerText()).resolves.toMatch(/Source: Barley et al\. 2018/);
     await screenshot(page, 'making-weight-acknowledge-1280');
-    await panel.getByRole('checkbox').check();
+    await page.setViewportSize({ width: 375, height: 812 });
+    await warning.scrollIntoViewIfNeeded();
+    await screenshot(page, 'making-weight-acknowledge-375');
+    await page.setViewportSize({ width: 1280, height: 860 });
+    await warning.getByRole('checkbox').check();
     await panel.getByRole('button', { name: 'Acknowledge and save' }).click();
     await panel.getByText('Cut plan saved').waitFor();
     await panel.getByTestId('cut-today-kg').waitFor();

@@ -4,11 +4,14 @@
  * coach's e-mail the first time the projection is over the limit. Real PostgreSQL, pinned clock.
  */
 import {
+  CUT_SOURCES,
   cutSettingsView,
   cutView,
   cutWarningView,
+  rehearsalView,
   rosterRow,
   reviewQueueItem,
+  STOP_SIGNS_TEXT,
   type RecoveryView,
 } from '@driftmark/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
@@ -16,7 +19,7 @@ import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
-import { weighInBody } from './check-ins-helpers.js';
+import { symptomBody, weighInBody } from './check-ins-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 import { shift } from './trend-helpers.js';
 
@@ -244,6 +247,14 @@ describe('cut plans', () => {
       .send({ ...plan, acknowledgedKeys: ['acute_share'] });
     expect(once.status).toBe(409);
     expect(Object.keys(once.body.error.fields)).toEqual(['acute_share_severe']);
+    // Judged severe by the server, with its source and the signs the athlete will be shown.
+    const [severe] = cutWarningView.array().parse(once.body.error.warnings);
+    expect(severe).toMatchObject({
+      key: 'acute_share_severe',
+      severity: 'severe',
+      source: CUT_SOURCES.acuteShareSevere,
+    });
+    expect(severe!.stopSigns).toBe(STOP_SIGNS_TEXT);
     const twice = await coachAgent
       .post(`/api/athletes/${a.athlete.id}/cut-plans`)
       .send({ ...plan, acknowledgedKeys: ['acute_share', 'acute_share_severe'] });
@@ -280,6 +291,187 @@ describe('cut plans', () => {
       .send(body({ startKg: 66.8, acknowledgedKeys: ['acute_share'] }));
     expect(res.status).toBe(403);
     expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
+  });
+});
+
+describe('practice runs (rehearsals)', () => {
+  /**
+   * A practice weigh-in on 14 Nov after 2 acute days (the start morning 12 Nov), read to 16 Nov;
+   * weights invented and worked by hand:
+   *   12 Nov 66.0 start · 13 Nov 65.1, lost 0.9 = 0.9/66.0 = 1.363636 % · 14 Nov 64.2, lost 0.9 =
+   *   0.9/65.1 = 1.382488 %; start to weigh-in 1.8 kg = 1.8/66 = 2.727273 % ·
+   *   15 Nov 65.4, 1.2 kg back = 1.2/64.2 = 1.869159 %, 66.6667 % of the loss ·
+   *   16 Nov 65.8, 1.6 kg back = 2.492212 %, 88.8889 % of the loss.
+   * The plan: 67 → 66 kg from 1 Nov, 3 kg (3/66 = 4.545455 %) planned for the last days, no warning.
+   */
+  const rehearsalBody = {
+    startDate: '2026-11-01',
+    startKg: 67,
+    preAcuteKg: 66,
+    acuteDays: 2,
+    path: 'linear',
+    notes: 'Low-residue food for two days; fluid to thirst the last evening',
+    acknowledgedKeys: [],
+    practiceWeighInDate: '2026-11-14',
+  };
+  const weights: [string, number][] = [
+    ['2026-11-11', 66.2],
+    ['2026-11-12', 66.0],
+    ['2026-11-13', 65.1],
+    ['2026-11-14', 64.2],
+    ['2026-11-15', 65.4],
+    ['2026-11-16', 65.8],
+  ];
+  const plans = () => `/api/athletes/${a.athlete.id}/cut-plans`;
+
+  async function rehearse() {
+    for (const [date, weight] of weights) {
+      const res = await athleteAgent
+        .put(`/api/athletes/${a.athlete.id}/days/${date}/weigh-in`)
+        .send(weighInBody({ weight }));
+      expect(res.status).toBe(200);
+    }
+    const symptom = await athleteAgent
+      .post(`/api/athletes/${a.athlete.id}/days/2026-11-14/symptoms`)
+      .send(symptomBody(['headache', 'dark_urine'], { time: '19:40' }));
+    expect(symptom.status).toBe(201);
+    const res = await coachAgent.post(plans()).send(rehearsalBody);
+    expect(res.status).toBe(201);
+    return cutView.parse(res.body.data);
+  }
+
+  it('keeps a rehearsal out of force and shows its record: loss a day, total, regain, symptoms', async () => {
+    const view = await rehearse();
+    expect(view.plan).toBeNull();
+    const r = view.rehearsal!;
+    expect(r).toMatchObject({ weighInDate: '2026-11-14', preAcuteDate: '2026-11-12', limitKg: 63 });
+    expect(r.planned.acuteKg).toBeCloseTo(3, 10);
+    expect(r.planned.acutePct).toBeCloseTo(4.545455, 5);
+    expect(r.planned.steps).toBe(rehearsalBody.notes);
+    expect(r.days.map((d) => [d.date, d.stage, d.kg])).toEqual([
+      ['2026-11-12', 'start', 66.0],
+      ['2026-11-13', 'acute', 65.1],
+      ['2026-11-14', 'weigh_in', 64.2],
+      ['2026-11-15', 'after', 65.4],
+      ['2026-11-16', 'after', 65.8],
+    ]);
+    expect(r.days[1]!.lostKg).toBeCloseTo(0.9, 6);
+    expect(r.days[1]!.lostPct).toBeCloseTo(1.363636, 5);
+    expect(r.days[2]!.lostPct).toBeCloseTo(1.382488, 5);
+    expect(r.achieved!.kg).toBeCloseTo(1.8, 6);
+    expect(r.achieved!.pct).toBeCloseTo(2.727273, 5);
+    expect(r.regained.map((g) => [g.date, Number(g.kg.toFixed(6)), Number(g.pct.toFixed(5))])).toEqual([
+      ['2026-11-15', 1.2, 1.86916],
+      ['2026-11-16', 1.6, 2.49221],
+    ]);
+    expect(r.regained[0]!.shareOfLossPct).toBeCloseTo(66.6667, 3);
+    expect(r.days[2]!.symptoms).toEqual([
+      { time: '19:40', labels: ['Headache', 'Very dark urine'], urgent: false },
+    ]);
+    expect(r.underWay).toBe(false);
+    // The athlete reads the same record.
+    const mine = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    expect(mine.rehearsal!.achieved!.kg).toBeCloseTo(1.8, 6);
+  });
+
+  it('is under way on its days, and takes no note for a day still ahead', async () => {
+    const { rehearsal } = await rehearse();
+    // Back on 13 Nov, the one acute day between the start and the practice weigh-in.
+    now = new Date('2026-11-13T10:00:00Z');
+    const view = cutView.parse((await athleteAgent.get(cutUrl())).body.data);
+    expect(view.rehearsal!.underWay).toBe(true);
+    const ahead = await athleteAgent
+      .put(`${plans()}/${rehearsal!.planId}/note`)
+      .send({ date: '2026-11-14', note: 'Not yet' });
+    expect(ahead.status).toBe(400);
+    expect(Object.keys(ahead.body.error.fields)).toEqual(['date']);
+  });
+
+  it('stays beside the next cut’s plan, which is the one in force', async () => {
+    await rehearse();
+    const next = await coachAgent.post(plans()).send({
+      ...rehearsalBody,
+      practiceWeighInDate: null,
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      acknowledgedKeys: ['acute_share'],
+    });
+    expect(next.status).toBe(201);
+    const view = cutView.parse(next.body.data);
+    expect(view.plan).toMatchObject({ rehearsal: false, weighInDate: WEIGH_IN });
+    expect(view.rehearsal!.weighInDate).toBe('2026-11-14');
+  });
+
+  it('takes a day note from the coach and from the athlete, one a day, and removes an empty one', async () => {
+    const { rehearsal } = await rehearse();
+    const url = `${plans()}/${rehearsal!.planId}/note`;
+    expect((await coachAgent.put(url).send({ date: '2026-11-13', note: 'Low-residue food' })).status).toBe(
+      200,
+    );
+    const res = await athleteAgent.put(url).send({ date: '2026-11-14', note: 'Practice weigh-in at 18:00' });
+    expect(res.status).toBe(200);
+    const notes = rehearsalView
+      .parse(res.body.data)
+      .days.map((d) => [d.date, d.note?.text ?? null, d.note?.by ?? null]);
+    expect(notes.slice(1, 3)).toEqual([
+      ['2026-11-13', 'Low-residue food', coach.name],
+      ['2026-11-14', 'Practice weigh-in at 18:00', a.user.name],
+    ]);
+    const again = await coachAgent.put(url).send({ date: '2026-11-14', note: 'Weighed in at 18:05' });
+    expect(rehearsalView.parse(again.body.data).days[2]!.note).toMatchObject({
+      text: 'Weighed in at 18:05',
+      by: coach.name,
+    });
+    const cleared = await athleteAgent.put(url).send({ date: '2026-11-14', note: null });
+    expect(rehearsalView.parse(cleared.body.data).days[2]!.note).toBeNull();
+    expect(await t.dataSource.query('SELECT local_date FROM cut_rehearsal_notes')).toHaveLength(1);
+  });
+
+  it('answers 400 naming the field: a practice weigh-in not before the real one, a bad date, a day outside, a long note', async () => {
+    const late = await coachAgent.post(plans()).send({ ...rehearsalBody, practiceWeighInDate: WEIGH_IN });
+    expect(late.status).toBe(400);
+    expect(Object.keys(late.body.error.fields)).toEqual(['practiceWeighInDate']);
+    const bad = await coachAgent.post(plans()).send({ ...rehearsalBody, practiceWeighInDate: '2026-13-01' });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['practiceWeighInDate']);
+    expect(await t.dataSource.query('SELECT id FROM cut_plans')).toEqual([]);
+
+    const { rehearsal } = await rehearse();
+    const url = `${plans()}/${rehearsal!.planId}/note`;
+    for (const [body, field] of [
+      [{ date: '2026-11-20', note: 'x' }, 'date'],
+      [{ date: '14 Nov', note: 'x' }, 'date'],
+      [{ note: 'x' }, 'date'],
+      [{ date: '2026-11-13', note: 'x'.repeat(1001) }, 'note'],
+    ] as const) {
+      const res = await coachAgent.put(url).send(body);
+      expect(res.status, JSON.stringify(body)).toBe(400);
+      expect(res.body.error.code).toBe('validation_failed');
+      expect(Object.keys(res.body.error.fields)).toEqual([field]);
+    }
+    expect(await t.dataSource.query('SELECT id FROM cut_rehearsal_notes')).toEqual([]);
+  });
+
+  it('answers 404 for a plan that is not this athlete’s rehearsal, and to staff outside the athlete’s circle', async () => {
+    const { rehearsal } = await rehearse();
+    const inForce = await coachAgent.post(plans()).send({
+      ...rehearsalBody,
+      practiceWeighInDate: null,
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      acknowledgedKeys: ['acute_share'],
+    });
+    const planId = cutView.parse(inForce.body.data).plan!.id;
+    const note = { date: '2026-11-13', note: 'x' };
+    expect((await coachAgent.put(`${plans()}/${planId}/note`).send(note)).status).toBe(404);
+    const stranger = await createCoach(t.dataSource, { teamId: coach.teamId });
+    const strangerAgent = await signedIn(t.app, stranger.email, FACTORY_PASSWORD);
+    expect((await strangerAgent.put(`${plans()}/${rehearsal!.planId}/note`).send(note)).status).toBe(404);
+    expect(await t.dataSource.query('SELECT id FROM cut_rehearsal_notes')).toEqual([]);
   });
 });
 
@@ -366,7 +558,7 @@ describe('ticking the recovery checklist', () => {
     ]);
 
     const seen = await coachAgent.get(cutUrl());
-    expect(seen.body.abilities).toEqual({ plan: true, log: false });
+    expect(seen.body.abilities).toEqual({ plan: true, log: false, noteRehearsal: true });
     expect(cutView.parse(seen.body.data).recovery!.slots[0]!.fluid.logged).toEqual({
       entryId: first.body.data.id,
       date: '2026-12-11',

@@ -84,6 +84,7 @@ describe('GET /api/foods', () => {
       id: expect.any(String),
       name: 'Overnight oats, team recipe',
       source: 'team',
+      barcode: null,
       per100g: {
         energyKcal: 285,
         listedEnergyKcal: null,

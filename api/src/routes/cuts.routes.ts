@@ -1,4 +1,10 @@
-import { createCutPlanRequest, cutSettingsRequest, uuid, weighInEventRequest } from '@driftmark/shared';
+import {
+  createCutPlanRequest,
+  cutSettingsRequest,
+  rehearsalNoteRequest,
+  uuid,
+  weighInEventRequest,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
@@ -10,10 +16,12 @@ import { CutService, cutSettingsOf } from '../services/cut.service.js';
 import { loadAthlete } from './athletes.routes.js';
 
 const athleteParams = z.object({ athleteId: uuid });
+const cutPlanParams = z.object({ athleteId: uuid, cutPlanId: uuid });
 
 /**
  * Making weight under /api/athletes/:athleteId: the weigh-in's record and the cut plan. Reading is
- * the athlete policy's `read` (the athlete too); writing is `plan` (coach, owner, shared staff).
+ * the athlete policy's `read` (the athlete too); writing is `plan` (coach, owner, shared staff), and
+ * a rehearsal's day notes `noteRehearsal` (the athlete and those staff).
  * `abilities.log` says whether the reader may tick the recovery checklist (the athlete's own log).
  */
 export function cutsRouter(): Router {
@@ -23,7 +31,11 @@ export function cutsRouter(): Router {
     const { actor, athlete, target } = await loadAthlete(req, 'read');
     res.json({
       data: await new CutService(req.ctx).getCut(athlete),
-      abilities: { plan: canOnAthlete(actor, 'plan', target), log: canOnAthlete(actor, 'log', target) },
+      abilities: {
+        plan: canOnAthlete(actor, 'plan', target),
+        log: canOnAthlete(actor, 'log', target),
+        noteRehearsal: canOnAthlete(actor, 'noteRehearsal', target),
+      },
     });
   });
 
@@ -40,10 +52,26 @@ export function cutsRouter(): Router {
   router.post(
     '/:athleteId/cut-plans',
     authenticate(),
-    validate({ params: athleteParams, body: dated(createCutPlanRequest, { startDate: 'any' }) }),
+    validate({
+      params: athleteParams,
+      body: dated(createCutPlanRequest, { startDate: 'any', practiceWeighInDate: 'any' }),
+    }),
     async (req, res) => {
       const { actor, athlete } = await loadAthlete(req, 'plan');
       res.status(201).json({ data: await new CutService(req.ctx).createPlan(actor, athlete, req.body) });
+    },
+  );
+
+  // What was done on a rehearsal day: the athlete or the staff on them (`noteRehearsal`).
+  router.put(
+    '/:athleteId/cut-plans/:cutPlanId/note',
+    authenticate(),
+    validate({ params: cutPlanParams, body: dated(rehearsalNoteRequest, { date: 'past' }) }),
+    async (req, res) => {
+      const { actor, athlete } = await loadAthlete(req, 'noteRehearsal');
+      res.json({
+        data: await new CutService(req.ctx).setRehearsalNote(actor, athlete, req.params.cutPlanId, req.body),
+      });
     },
   );
 

@@ -33,6 +33,7 @@ import { refreshDemoDates, type RefreshWarn } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoMarks } from './seed-marks.js';
 import { writeDemoBodyMeasurements } from './seed-body-composition.js';
+import { writeDemoRehearsals } from './seed-cuts.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 import { writeDemoWeekly } from './seed-weekly.js';
 
@@ -167,6 +168,7 @@ export async function seedDemo(
       await writeDemoMarks(manager, plans, ids, now);
       const ownerName = DEMO_STAFF.find((s) => s.email === DEMO_OWNER_EMAIL)?.name ?? 'Coach';
       await writeDemoBodyMeasurements(manager, ids, now, ownerName);
+      await writeDemoRehearsals(manager, ids, now);
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }

@@ -14,8 +14,13 @@ import {
   recoveryItemAmounts,
   recoveryTargets,
   recoveryWindowHours,
+  REHEARSAL_REGAIN_MORNINGS,
+  rehearsalFigures,
   STOP_SIGNS_TEXT,
+  addDays,
   type CreateCutPlanRequest,
+  type RehearsalNoteRequest,
+  type RehearsalView,
   type CutFiguresView,
   type CutPlanShape,
   type CutSettingsView,
@@ -33,11 +38,13 @@ import { MealEntry } from '../entities/meal-entry.entity.js';
 import { localDateTime } from '../lib/local-time.js';
 import { recoveryClientId } from '../lib/recovery-client-id.js';
 import type { Actor } from '../policies/actor.js';
-import { presentCutPlan } from '../presenters/cut.presenter.js';
+import type { CutPlan } from '../entities/cut-plan.entity.js';
+import { presentCutPlan, presentRehearsal } from '../presenters/cut.presenter.js';
 import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { CutPlanRepository, type CutPlanWithAuthor } from '../repositories/cut-plan.repository.js';
 import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { TeamRepository } from '../repositories/team.repository.js';
+import { TrendRepository } from '../repositories/trend.repository.js';
 import { loadSnapshots } from './athlete-figures.service.js';
 import { notifyOverLimit } from './notify.service.js';
 
@@ -192,10 +199,11 @@ export class CutService {
   async getCut(athlete: AthleteWithPeople): Promise<CutView> {
     const now = this.deps.clock();
     const today = localDateTime(now, athlete.user.timeZone).date;
-    const [snapshots, plan, thresholdPct] = await Promise.all([
+    const [snapshots, plan, thresholdPct, rehearsal] = await Promise.all([
       loadSnapshots(this.manager, [athlete], now),
       new CutPlanRepository(this.manager).latest(athlete.id),
       new TeamRepository(this.manager).acuteSharePct(athlete.teamId),
+      new CutPlanRepository(this.manager).latestRehearsal(athlete.id),
     ]);
     const acks = plan ? await new CutPlanRepository(this.manager).acknowledgements(plan.id) : [];
     const event = weighInEventOf(athlete);
@@ -209,6 +217,7 @@ export class CutService {
       figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
       thresholdPct,
       recovery: recovery ? recoveryOf(event, plan, today, athlete.user.timeZone, links) : null,
+      rehearsal: rehearsal ? await this.rehearsalRecord(rehearsal, today) : null,
       caution: CUT_CAUTION,
     };
   }
@@ -232,6 +241,54 @@ export class CutService {
       [...fluids, ...meals].map((e) => [e.clientId, { entryId: e.id, date: e.localDate, time: e.localTime }]),
     );
     return { clientId, logged: (id) => byClientId.get(id) ?? null };
+  }
+
+  /**
+   * A practice run's record: each day's scale weight and loss from the start of its acute part to
+   * the practice weigh-in and the regain mornings after (shared rehearsalFigures over the weigh-ins
+   * the trend reads), the day notes and the symptom reports of those days.
+   */
+  async rehearsalRecord(plan: CutPlan, today: string): Promise<RehearsalView> {
+    const window = {
+      athleteId: plan.athleteId,
+      from: preAcuteDate(plan),
+      to: addDays(plan.weighInDate, REHEARSAL_REGAIN_MORNINGS),
+    };
+    const [history, notes] = await Promise.all([
+      new TrendRepository(this.manager).load([window]),
+      new CutPlanRepository(this.manager).notes(plan.id),
+    ]);
+    const days = history.get(plan.athleteId);
+    const figures = rehearsalFigures({
+      preAcuteDate: window.from,
+      weighInDate: plan.weighInDate,
+      weighIns: days?.weighIns ?? [],
+    });
+    return presentRehearsal(plan, figures, notes, days?.symptoms ?? [], today);
+  }
+
+  /**
+   * Writes (or, empty, removes) what was done on one day of a rehearsal: a day from the start of
+   * its acute part to the last regain morning, not after the athlete's today.
+   */
+  async setRehearsalNote(
+    actor: Actor,
+    athlete: AthleteWithPeople,
+    cutPlanId: string,
+    input: RehearsalNoteRequest,
+  ): Promise<RehearsalView> {
+    const repo = new CutPlanRepository(this.manager);
+    const plan = await repo.findRehearsal(athlete.id, cutPlanId);
+    if (!plan) throw notFound();
+    const from = preAcuteDate(plan);
+    const to = addDays(plan.weighInDate, REHEARSAL_REGAIN_MORNINGS);
+    const today = localDateTime(this.deps.clock(), athlete.user.timeZone).date;
+    if (input.date < from || input.date > to)
+      throw validationFailed({ date: `Choose a day of the rehearsal, ${from} to ${to}` });
+    if (input.date > today) throw validationFailed({ date: 'Write a day’s note on the day or after it' });
+    if (input.note) await repo.setNote(plan, input.date, input.note, actor.userId);
+    else await repo.removeNote(plan.id, input.date);
+    return this.rehearsalRecord(plan, today);
   }
 
   /** Sets the weigh-in's record on the athlete (the event must already be a dated weigh-in). */
@@ -259,7 +316,10 @@ export class CutService {
   async createPlan(actor: Actor, athlete: AthleteWithPeople, input: CreateCutPlanRequest): Promise<CutView> {
     const event = weighInEventOf(athlete);
     if (!event) throw conflict(NOT_A_WEIGH_IN);
-    const shapeInput = { ...input, weighInDate: event.date, limitKg: event.limitKg };
+    const practice = input.practiceWeighInDate;
+    if (practice !== null && practice >= event.date)
+      throw validationFailed({ practiceWeighInDate: `Must be before the weigh-in on ${event.date}` });
+    const shapeInput = { ...input, weighInDate: practice ?? event.date, limitKg: event.limitKg };
     if (input.startDate >= preAcuteDate(shapeInput))
       throw validationFailed({
         startDate: `Start before the last ${input.acuteDays} days before the weigh-in`,
@@ -276,7 +336,7 @@ export class CutService {
       new CutPlanRepository(manager).create(
         {
           athleteId: athlete.id,
-          weighInDate: event.date,
+          weighInDate: shapeInput.weighInDate,
           limitKg: event.limitKg,
           startDate: input.startDate,
           startKg: input.startKg,
@@ -285,6 +345,7 @@ export class CutService {
           path: input.path,
           thresholdPct,
           notes: input.notes,
+          rehearsal: practice !== null,
           createdById: actor.userId,
         },
         warnings.map((w) => ({

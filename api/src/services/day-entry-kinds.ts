@@ -107,7 +107,7 @@ async function mealFood(
       },
     };
   }
-  const food = await resolveFood(ctx.manager, ctx.athlete.teamId, foodId);
+  const food = await resolveFood(ctx.manager, ctx.athlete, foodId);
   if (!food) throw validationFailed({ foodId: 'Choose a food from the list' });
   return food;
 }

@@ -1,4 +1,5 @@
 import { addDays, daysBetween } from '../calendar.js';
+import { STOP_SIGNS_TEXT } from '../consents.js';
 import { zonedInstant } from '../plans/event-time.js';
 import { LOSS_RATE_STRONG_PCT_PER_WEEK, LOSS_RATE_WARNING_PCT_PER_WEEK } from '../plans/guardrails.js';
 
@@ -355,12 +356,19 @@ export const CUT_CAUTION =
   'acute weight loss was confirmed. The commission’s rules decide the weigh-in; agree any acute loss ' +
   'with a physician.';
 
-/** A cut-plan warning with its words and source; every one needs the coach's acknowledgement. */
+/**
+ * A cut-plan warning with its words and source; every one needs the coach's acknowledgement.
+ * Severity: `warning` (the chronic rate above 1 %/week), `strong` (acknowledged once: the chronic
+ * rate above 1.4 %/week, the acute share above the team threshold), `severe` (the second
+ * acknowledgement above ACUTE_SHARE_SEVERE_PCT, which carries the stop-and-seek-care signs).
+ */
 export interface CutWarning {
   key: 'chronic_rate' | 'acute_share' | 'acute_share_severe';
-  severity: 'warning' | 'strong';
+  severity: 'warning' | 'strong' | 'severe';
   message: string;
   source: string;
+  /** The signs to stop and seek care, shown with a severe warning; null otherwise. */
+  stopSigns: string | null;
 }
 
 const fixed = (n: number, digits: number) => n.toFixed(digits);
@@ -381,6 +389,7 @@ export function cutWarnings(
         `of body weight a week: faster than the 1 % a week advised` +
         (chronic.severity === 'strong' ? ' and above the 1.4 % a week at which lean mass suffered.' : '.'),
       source: CUT_SOURCES.chronicRate,
+      stopSigns: null,
     });
   }
   if (acute.severity !== 'none') {
@@ -392,16 +401,18 @@ export function cutWarnings(
         `team's ${fixed(thresholdPct, 1)} %: repeat-effort performance was still reduced 24 h after about 5 % ` +
         'rapid loss.',
       source: CUT_SOURCES.acuteShare,
+      stopSigns: null,
     });
   }
   if (acute.severity === 'severe') {
     out.push({
       key: 'acute_share_severe',
-      severity: 'strong',
+      severity: 'severe',
       message:
         `An acute loss above ${ACUTE_SHARE_SEVERE_PCT} % of body mass (${fixed(acute.pct, 1)} % here) needs a ` +
         'physician involved; the athlete is shown the signs to stop and seek care.',
       source: CUT_SOURCES.acuteShareSevere,
+      stopSigns: STOP_SIGNS_TEXT,
     });
   }
   return out;
@@ -414,4 +425,104 @@ export function limitGapSummary(gap: LimitGap, limitKg: number): string {
     return `Projected ${fixed(Math.abs(gap.overKg), 1)} kg under the ${fixed(limitKg, 1)} kg limit in ${days}`;
   const extra = gap.extraPctPerWeek === null ? '' : `; needs ${fixed(gap.extraPctPerWeek, 1)} %/week more`;
   return `Projected ${fixed(gap.overKg, 1)} kg over the ${fixed(limitKg, 1)} kg limit in ${days}${extra}`;
+}
+
+/**
+ * Mornings after a rehearsal's weigh-in whose weight is read as regain: the next morning and the
+ * one after (a day-before weigh-in's competition morning, and one more). Common practice, no source.
+ */
+export const REHEARSAL_REGAIN_MORNINGS = 2;
+
+/**
+ * Body mass lost from `fromKg` to `toKg`, % of `fromKg` ((pre − post) / pre × 100, the body-mass
+ * change of Sawka et al. 2007, ACSM position stand, MSSE 39:377–390; REFERENCES §5: 80 kg → 1.60 kg
+ * is 2 %). Negative when mass was gained.
+ */
+export function lossPct(fromKg: number, toKg: number): number {
+  return ((fromKg - toKg) / fromKg) * 100;
+}
+
+/** Where a day falls in a rehearsal. */
+export type RehearsalStage = 'start' | 'acute' | 'weigh_in' | 'after';
+
+export interface RehearsalDayFigures {
+  date: string;
+  stage: RehearsalStage;
+  /** That day's scale weight, kg; null when the athlete did not weigh in. */
+  kg: number | null;
+  /** Lost since the day before's weigh-in, kg (negative: gained); null without both weigh-ins. */
+  lostKg: number | null;
+  /** lostKg as % of the day before's weight. */
+  lostPct: number | null;
+}
+
+export interface RehearsalFigures {
+  days: RehearsalDayFigures[];
+  /**
+   * From the morning the acute days start to the weigh-in: kg and % of the start weight; null
+   * without a weigh-in on both days.
+   */
+  achieved: { fromKg: number; toKg: number; kg: number; pct: number } | null;
+  /**
+   * Each morning after the weigh-in with a weigh-in: kg back on since the weigh-in, % of the
+   * weigh-in weight, and the share of the rehearsal's loss it makes up (null without `achieved`).
+   */
+  regained: { date: string; kg: number; pct: number; shareOfLossPct: number | null }[];
+}
+
+/**
+ * A practice run's record from the athlete's scale weights (one a day): the day the acute part
+ * starts (its weight is the starting point), each acute day, the practice weigh-in, and the
+ * REHEARSAL_REGAIN_MORNINGS after it. Each day's loss is against the calendar day before; a day
+ * without a weigh-in leaves its own and the next day's loss empty rather than spanning the gap.
+ */
+export function rehearsalFigures(input: {
+  preAcuteDate: string;
+  weighInDate: string;
+  weighIns: readonly { date: string; kg: number }[];
+}): RehearsalFigures {
+  const kgOn = new Map(input.weighIns.map((w) => [w.date, w.kg]));
+  const last = addDays(input.weighInDate, REHEARSAL_REGAIN_MORNINGS);
+  const days: RehearsalDayFigures[] = [];
+  for (let date = input.preAcuteDate; date <= last; date = addDays(date, 1)) {
+    const stage: RehearsalStage =
+      date === input.preAcuteDate
+        ? 'start'
+        : date < input.weighInDate
+          ? 'acute'
+          : date === input.weighInDate
+            ? 'weigh_in'
+            : 'after';
+    const kg = kgOn.get(date) ?? null;
+    const before = kgOn.get(addDays(date, -1)) ?? null;
+    const paired = stage !== 'start' && stage !== 'after' && kg !== null && before !== null;
+    days.push({
+      date,
+      stage,
+      kg,
+      lostKg: paired ? before - kg : null,
+      lostPct: paired ? lossPct(before, kg) : null,
+    });
+  }
+  const fromKg = kgOn.get(input.preAcuteDate) ?? null;
+  const toKg = kgOn.get(input.weighInDate) ?? null;
+  const achieved =
+    fromKg !== null && toKg !== null && input.preAcuteDate < input.weighInDate
+      ? { fromKg, toKg, kg: fromKg - toKg, pct: lossPct(fromKg, toKg) }
+      : null;
+  const regained =
+    toKg === null
+      ? []
+      : days
+          .filter((d) => d.stage === 'after' && d.kg !== null)
+          .map((d) => {
+            const kg = d.kg! - toKg;
+            return {
+              date: d.date,
+              kg,
+              pct: (kg / toKg) * 100,
+              shareOfLossPct: achieved && achieved.kg > 0 ? (kg / achieved.kg) * 100 : null,
+            };
+          });
+  return { days, achieved, regained };
 }

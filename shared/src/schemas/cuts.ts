@@ -82,6 +82,11 @@ export const createCutPlanRequest = z.object({
   notes: text('Notes', LIMITS.cutNotes).nullable(),
   /** Warning keys the coach has read with the athlete and accepts; each current one must be listed. */
   acknowledgedKeys: z.array(text('Warning key', LIMITS.warningKey)).max(20).default([]),
+  /**
+   * A practice run: the date of the practice weigh-in (before the real one), which the plan aims at
+   * instead of the event's; null for the cut for the event itself.
+   */
+  practiceWeighInDate: isoDate.nullable().default(null),
 });
 export type CreateCutPlanRequest = z.infer<typeof createCutPlanRequest>;
 
@@ -119,9 +124,12 @@ const severity = z.enum(['none', 'warning', 'strong', 'severe']);
 export const cutWarningView = z.object({
   /** `acute_share` | `acute_share_severe` | `chronic_rate`. */
   key: z.string(),
-  severity: z.enum(['warning', 'strong']),
+  /** warning; strong (acknowledge once); severe (the second acknowledgement, with the stop signs). */
+  severity: z.enum(['warning', 'strong', 'severe']),
   message: z.string(),
   source: z.string(),
+  /** The signs to stop and seek care (severe only), else null. */
+  stopSigns: z.string().nullable(),
   /** Whether the plan must carry an acknowledgement of it. */
   needsAcknowledgement: z.boolean(),
 });
@@ -146,6 +154,10 @@ export type WeighInEventView = z.infer<typeof weighInEventView>;
 
 export const cutPlanView = z.object({
   id: z.string(),
+  /** A practice run: `weighInDate` is its practice weigh-in. */
+  rehearsal: z.boolean(),
+  /** The weigh-in the plan aims at (the event's, or the practice one). */
+  weighInDate: z.string(),
   startDate: z.string(),
   startKg: z.number(),
   preAcuteKg: z.number(),
@@ -217,6 +229,56 @@ export const recoveryView = z.object({
 });
 export type RecoveryView = z.infer<typeof recoveryView>;
 
+/** PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note: what was done on one rehearsal day. */
+export const rehearsalNoteRequest = z.object({
+  /** The rehearsal day (the athlete's date), from the start of its acute part to the last regain morning. */
+  date: isoDate,
+  /** What was done that day, in the writer's words; null or empty removes the note. */
+  note: text('Note', LIMITS.rehearsalNote).nullable(),
+});
+export type RehearsalNoteRequest = z.infer<typeof rehearsalNoteRequest>;
+
+/** A practice run's record (rules/weight-cut.ts rehearsalFigures), computed by the server. */
+export const rehearsalView = z.object({
+  planId: z.string(),
+  /** The practice weigh-in date. */
+  weighInDate: z.string(),
+  /** First day of the acute part (its morning weight is the starting point). */
+  preAcuteDate: z.string(),
+  limitKg: z.number(),
+  /** What the plan set for the last days: kg and % of the pre-acute weight, the days, the steps. */
+  planned: z.object({
+    acuteKg: z.number(),
+    acutePct: z.number(),
+    acuteDays: z.number().int(),
+    steps: z.string().nullable(),
+  }),
+  days: z.array(
+    z.object({
+      date: z.string(),
+      stage: z.enum(['start', 'acute', 'weigh_in', 'after']),
+      /** That morning's scale weight, kg. */
+      kg: z.number().nullable(),
+      /** Lost since the day before, kg and % of that weight. */
+      lostKg: z.number().nullable(),
+      lostPct: z.number().nullable(),
+      /** What was done that day, written by the coach or the athlete. */
+      note: z.object({ text: z.string(), by: z.string(), at: z.string() }).nullable(),
+      /** Symptom reports that day. */
+      symptoms: z.array(z.object({ time: z.string(), labels: z.array(z.string()), urgent: z.boolean() })),
+    }),
+  ),
+  /** Start morning to the practice weigh-in; null without both weights. */
+  achieved: z.object({ fromKg: z.number(), toKg: z.number(), kg: z.number(), pct: z.number() }).nullable(),
+  /** The athlete's today is one of the rehearsal's days: it is under way, and Today shows it. */
+  underWay: z.boolean(),
+  /** Back on by each morning after: kg, % of the weigh-in weight, share of the loss. */
+  regained: z.array(
+    z.object({ date: z.string(), kg: z.number(), pct: z.number(), shareOfLossPct: z.number().nullable() }),
+  ),
+});
+export type RehearsalView = z.infer<typeof rehearsalView>;
+
 /** GET /api/athletes/:athleteId/cut */
 export const cutView = z.object({
   athleteId: z.string(),
@@ -229,6 +291,8 @@ export const cutView = z.object({
   thresholdPct: z.number(),
   /** From the weigh-in day to the competition: the recovery checklist; null on other days. */
   recovery: recoveryView.nullable(),
+  /** The latest practice run's record, shown beside the plan; null without one. */
+  rehearsal: rehearsalView.nullable(),
   /** The evidence and the deferral every cut screen shows. */
   caution: z.string(),
 });

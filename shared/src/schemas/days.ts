@@ -164,13 +164,17 @@ export type DaySummary = z.infer<typeof daySummary>;
 export const foodView = z.object({
   id: z.string(),
   name: z.string(),
-  source: z.enum(['team', 'reference']),
+  /** The team's own food, the reference table, or the athlete's personal food (label or barcode). */
+  source: z.enum(['team', 'reference', 'personal']),
+  /** The product's barcode (EAN-13) for a food found by its barcode; null otherwise. */
+  barcode: z.string().nullable(),
   per100g: z.object({
     /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),
     /**
-     * The reference table's own listed energy when it differs from `energyKcal` by more than 5 %
-     * (the server decides); null otherwise, and for team foods.
+     * The energy the source prints when the server judged it off: the reference table's listed
+     * energy beyond 5 % of `energyKcal`, a label's printed energy beyond the label check's
+     * tolerance (shared/src/food-label.ts); null otherwise.
      */
     listedEnergyKcal: z.number().nullable(),
     proteinG: z.number(),

@@ -66,6 +66,7 @@ export function AthleteHomeRoute() {
             volumeUnit={me.units.volume}
             now={now}
             onToggle={tickRecovery}
+            today={today}
           />
         ) : null}
         <DayCheckIn

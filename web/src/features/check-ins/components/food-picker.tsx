@@ -118,12 +118,13 @@ export function FoodPicker({ chosen, onChoose, errorId, invalid }: FoodPickerPro
                 >
                   <span className="font-semibold text-ink">{food.name}</span>
                   <span className="text-xs text-ink-muted tabular-nums">
-                    {food.source === 'team' ? 'Team food · ' : ''}
+                    {food.source === 'team' ? 'Team food · ' : food.source === 'personal' ? 'My food · ' : ''}
                     {per100gLine(food)}
                   </span>
                   {food.per100g.listedEnergyKcal !== null ? (
                     <span className="text-xs text-ink-faint tabular-nums">
-                      Food table: {formatNumber(food.per100g.listedEnergyKcal, 0)}
+                      {food.source === 'reference' ? 'Food table' : 'Label'}:{' '}
+                      {formatNumber(food.per100g.listedEnergyKcal, 0)}
                       {NBSP}kcal
                     </span>
                   ) : null}

@@ -1,12 +1,14 @@
 import { mealEntryRequest, type DayView, type FoodView, type MealEntryRequest } from '@driftmark/shared';
 import { useMemo, useRef, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
+import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { FieldErrorText, useFieldError } from '@/components/ui/field';
 import { Form, SubmitButton } from '@/components/ui/form';
 import { BowlIcon } from '@/components/ui/icons';
 import { SegmentedField } from '@/components/ui/segmented-field';
 import { TextField } from '@/components/ui/text-field';
+import { paths } from '@/config/paths';
 import { formatEnergy, formatNumber, NBSP } from '@/lib/format';
 import { useCreateMeal } from '../api/create-meal';
 import { useDeleteMeal } from '../api/delete-meal';
@@ -125,6 +127,7 @@ function foodFromEntry(entry: DayView['meals'][number]): FoodView | null {
     id: entry.food.id,
     name: entry.food.name,
     source: entry.food.id.startsWith('ifct:') ? 'reference' : 'team',
+    barcode: null,
     per100g: {
       energyKcal: entry.energyKcal * f,
       listedEnergyKcal: null,
@@ -332,6 +335,9 @@ function FoodFields({
       <div>
         <FoodPicker chosen={food} onChoose={onChoose} errorId={errorId} invalid={Boolean(error)} />
         <FieldErrorText id={errorId} error={error} />
+        <p className="mt-2 text-sm">
+          <Link to={paths.athleteFoodNew}>Not in the list? Scan a barcode or copy a label</Link>
+        </p>
       </div>
       {food ? (
         <TextField

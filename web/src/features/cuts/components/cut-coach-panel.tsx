@@ -7,6 +7,7 @@ import { useCut } from '../api/get-cut';
 import { LimitGap, PlanFigures } from './cut-figures';
 import { CutPlanBuilder } from './cut-plan-builder';
 import { RecoveryChecklist } from './recovery-checklist';
+import { RehearsalRecord } from './rehearsal-record';
 import { WeighInEventForm } from './weigh-in-event-form';
 
 /** Making weight on the coach's athlete page: shown only when the athlete's event is a weigh-in. */
@@ -41,13 +42,35 @@ export function CutCoachPanel({
       ) : (
         <p className="text-sm text-ink-muted">No cut plan yet.</p>
       )}
+      {view.rehearsal ? (
+        <RehearsalRecord
+          athleteId={athleteId}
+          rehearsal={view.rehearsal}
+          planned={
+            view.figures && view.plan
+              ? { kg: view.figures.acute.kg, pct: view.figures.acute.pct, days: view.plan.acuteDays }
+              : null
+          }
+          plannedLabel={view.plan ? 'The plan in force, last days' : 'No plan in force yet'}
+          unit={unit}
+          canNote={cut.data.abilities.noteRehearsal === true}
+          today={today}
+        />
+      ) : null}
       {cut.data.abilities.plan ? (
         <>
           <Details summary="Weigh-in details" open={false}>
             <WeighInEventForm athleteId={athleteId} weighIn={view.weighIn} unit={unit} />
           </Details>
           <Details summary={view.plan ? 'New cut plan' : 'Build a cut plan'} open={view.plan === null}>
-            <CutPlanBuilder athleteId={athleteId} today={today} unit={unit} />
+            <CutPlanBuilder
+              athleteId={athleteId}
+              today={today}
+              unit={unit}
+              limitKg={view.weighIn.limitKg}
+              rehearsal={view.rehearsal}
+              canNote={cut.data.abilities.noteRehearsal === true}
+            />
           </Details>
         </>
       ) : null}

@@ -1,6 +1,7 @@
 import { kgToLb, type CutView, type WeightUnit } from '@driftmark/shared';
 import { Alert } from '@/components/ui/alert';
 import { formatNumber, formatWeight, NBSP } from '@/lib/format';
+import { CUT_SEVERITY_LABELS } from './cut-warning-item';
 
 /** A limit in both units, whichever the reader uses: "63.0 kg (138.9 lb)". */
 export function bothUnits(kg: number): string {
@@ -84,12 +85,7 @@ export function PlanFigures({ cut, unit }: { cut: CutView; unit: WeightUnit }) {
         </div>
       </dl>
       {f.warnings.map((w) => (
-        <Alert
-          key={w.key}
-          tone="caution"
-          title={w.severity === 'strong' ? 'Strong warning' : 'Warning'}
-          live={false}
-        >
+        <Alert key={w.key} tone="caution" title={CUT_SEVERITY_LABELS[w.severity]} live={false}>
           <p>{w.message}</p>
           <p className="mt-1 text-xs text-ink-muted">Source: {w.source}</p>
         </Alert>
