@@ -32,6 +32,8 @@ export const LIMITS = {
   // Daily check-in (SI units). Each refuses nonsense, not unusual days.
   /** One fluid entry, mL (30 L in one entry is refused). */
   fluidEntryMl: { min: 1, max: 5000 },
+  /** Sodium in one drink, mg: a plausibility bound, as the meal's (common practice, no source). */
+  fluidSodiumMg: { min: 0, max: 5000 },
   /** Grams per meal entry. */
   mealProteinG: { min: 0, max: 500 },
   mealCarbohydrateG: { min: 0, max: 1500 },

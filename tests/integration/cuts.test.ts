@@ -5,12 +5,14 @@
  */
 import {
   CUT_SOURCES,
+  cutSettingsView,
   cutView,
   cutWarningView,
   rehearsalView,
   rosterRow,
   reviewQueueItem,
   STOP_SIGNS_TEXT,
+  type RecoveryView,
 } from '@driftmark/shared';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { User } from '../../api/src/entities/user.entity.js';
@@ -250,7 +252,7 @@ describe('cut plans', () => {
     expect(severe).toMatchObject({
       key: 'acute_share_severe',
       severity: 'severe',
-      source: CUT_SOURCES.acuteShare,
+      source: CUT_SOURCES.acuteShareSevere,
     });
     expect(severe!.stopSigns).toBe(STOP_SIGNS_TEXT);
     const twice = await coachAgent
@@ -503,5 +505,154 @@ describe('the recovery checklist on the weigh-in day', () => {
     expect(r.slots).toHaveLength(16);
     expect(r.slots[0]).toMatchObject({ date: '2026-12-11', time: '05:00' });
     expect(r.slots[15]).toMatchObject({ date: '2026-12-11', time: '20:00' });
+  });
+});
+
+describe('ticking the recovery checklist', () => {
+  /** The plan of the test above (3.5 kg lost, 16 slots), then the weigh-in day at 12:00 UTC. */
+  async function weighInDay() {
+    await coachAgent.put(`/api/athletes/${a.athlete.id}/weigh-in`).send(record);
+    await coachAgent.post(`/api/athletes/${a.athlete.id}/cut-plans`).send({
+      startDate: '2026-11-27',
+      startKg: 66.8,
+      preAcuteKg: 66.5,
+      acuteDays: 3,
+      path: 'linear',
+      notes: null,
+      acknowledgedKeys: ['acute_share'],
+    });
+    now = new Date('2026-12-11T12:00:00Z');
+    return cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+  }
+  const day = (date: string) => `/api/athletes/${a.athlete.id}/days/${date}`;
+  const fluidBody = (slot: RecoveryView['slots'][number], time = '12:00') => ({
+    clientId: slot.fluid.clientId,
+    time,
+    volume: slot.fluid.volumeMl,
+    unit: 'ml',
+    kind: 'other',
+    sodiumMg: slot.fluid.sodiumMg,
+  });
+
+  it('gives each item a fixed client id and the amount it logs (5.25 L / 16 slots → 330 mL)', async () => {
+    const r = await weighInDay();
+    // 0.33 L × 20 mmol/L × 22.99 mg/mmol (Sawka 2007, from memory) = 151.7 → 152 mg sodium.
+    expect(r.slots[0]!.fluid).toMatchObject({ volumeMl: 330, sodiumMg: 152, logged: null });
+    // First hour: 1.0 g/kg × 63 kg = 63 g, the band's floor (Burke 2011, from memory).
+    expect(r.slots[0]!.carbohydrate).toMatchObject({ carbohydrateG: 63, logged: null });
+    const ids = r.slots.flatMap((s) => [s.fluid.clientId, s.carbohydrate.clientId]);
+    expect(new Set(ids).size).toBe(32);
+    const again = cutView.parse((await coachAgent.get(cutUrl())).body.data).recovery!;
+    expect(again.slots.map((s) => s.fluid.clientId)).toEqual(r.slots.map((s) => s.fluid.clientId));
+  });
+
+  it('logs a fluid entry once however often it is ticked; the coach sees it done; unticking removes it', async () => {
+    const slot = (await weighInDay()).slots[0]!;
+    const first = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot));
+    expect(first.status).toBe(201);
+    const repeat = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot, '12:01'));
+    expect(repeat.status).toBe(200);
+    expect(repeat.body.data.id).toBe(first.body.data.id);
+    expect(await t.dataSource.query('SELECT volume_ml, sodium_mg FROM fluid_entries')).toEqual([
+      { volume_ml: 330, sodium_mg: 152 },
+    ]);
+
+    const seen = await coachAgent.get(cutUrl());
+    expect(seen.body.abilities).toEqual({ plan: true, log: false, noteRehearsal: true });
+    expect(cutView.parse(seen.body.data).recovery!.slots[0]!.fluid.logged).toEqual({
+      entryId: first.body.data.id,
+      date: '2026-12-11',
+      time: '12:00',
+    });
+    const dayView = await coachAgent.get(day('2026-12-11'));
+    expect(dayView.body.data.fluidTotalMl).toBe(330);
+    // The drink's sodium is the day's (no meal carries any).
+    expect(dayView.body.data.totals.sodiumMg).toBe(152);
+    expect(dayView.body.data.fluids[0].sodiumMg).toBe(152);
+
+    expect(
+      (await athleteAgent.delete(`/api/athletes/${a.athlete.id}/fluids/${first.body.data.id}`)).status,
+    ).toBe(204);
+    const after = cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+    expect(after.slots[0]!.fluid.logged).toBeNull();
+    // Ticked again with the same client id: a new entry.
+    expect((await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(201);
+  });
+
+  it('logs the carbohydrate item as a meal of its grams', async () => {
+    const slot = (await weighInDay()).slots[1]!;
+    const res = await athleteAgent.post(`${day('2026-12-11')}/meals`).send({
+      clientId: slot.carbohydrate.clientId,
+      time: '12:00',
+      name: slot.carbohydrate.mealName,
+      source: 'macros',
+      proteinG: 0,
+      carbohydrateG: slot.carbohydrate.carbohydrateG,
+      fatG: 0,
+    });
+    expect(res.status).toBe(201);
+    const r = cutView.parse((await athleteAgent.get(cutUrl())).body.data).recovery!;
+    expect(r.slots[1]!.carbohydrate.logged).toMatchObject({ entryId: res.body.data.id, time: '12:00' });
+    expect(r.slots[1]!.fluid.logged).toBeNull();
+    // 63 g × 4 kcal/g (Atwater).
+    expect((await athleteAgent.get(day('2026-12-11'))).body.data.totals.energyKcal).toBeCloseTo(252, 6);
+    // With a meal carrying 300 mg sodium and slot 0's drink (152 mg), the trend's day reads 452 mg
+    // (the day view and the trend sum the drinks' sodium alike).
+    await athleteAgent.post(`${day('2026-12-11')}/meals`).send({
+      clientId: '3b0f3a52-7c55-4f43-9a39-5d1f0e6c2a11',
+      time: '11:00',
+      name: 'Salted rice',
+      source: 'macros',
+      proteinG: 4,
+      carbohydrateG: 40,
+      fatG: 1,
+      sodiumMg: 300,
+    });
+    await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(r.slots[0]!));
+    const trend = await athleteAgent.get(`/api/athletes/${a.athlete.id}/trend?from=2026-12-11&to=2026-12-11`);
+    // The trend sends its days as columns: index 0 is 11 Dec.
+    expect(trend.body.data.days.actuals.sodiumMg).toEqual([452]);
+    expect(trend.body.data.days.actuals.fluidMl).toEqual([330]);
+    expect((await athleteAgent.get(day('2026-12-11'))).body.data.totals.sodiumMg).toBe(452);
+  });
+
+  it('is the athlete’s own log: the coach gets 403, another athlete 404, and nothing is written', async () => {
+    const slot = (await weighInDay()).slots[0]!;
+    const other = await createAthlete(t.dataSource, { coach });
+    const otherAgent = await signedIn(t.app, other.user.email, FACTORY_PASSWORD);
+    expect((await coachAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(403);
+    expect((await otherAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot))).status).toBe(404);
+    expect(await t.dataSource.query('SELECT id FROM fluid_entries')).toEqual([]);
+    const ticked = await athleteAgent.post(`${day('2026-12-11')}/fluids`).send(fluidBody(slot));
+    const url = `/api/athletes/${a.athlete.id}/fluids/${ticked.body.data.id}`;
+    expect((await coachAgent.delete(url)).status).toBe(403);
+    expect((await otherAgent.delete(url)).status).toBe(404);
+    expect(await t.dataSource.query('SELECT count(*)::int AS n FROM fluid_entries')).toEqual([{ n: 1 }]);
+  });
+});
+
+describe('the team’s acute-share threshold', () => {
+  it('answers the default 5 % with its source and what 7 % means; the owner sets it, a coach reads it', async () => {
+    const read = await coachAgent.get('/api/team/cut-settings');
+    expect(read.status).toBe(200);
+    expect(read.body.abilities).toEqual({ manage: false });
+    expect(cutSettingsView.parse(read.body.data)).toMatchObject({
+      acuteSharePct: 5,
+      defaultPct: 5,
+      severePct: 7,
+    });
+    expect(read.body.data.source).toMatch(/Barley et al\. 2018/);
+    expect(read.body.data.severeSource).toMatch(/common practice, no source/);
+    expect((await coachAgent.put('/api/team/cut-settings').send({ acuteSharePct: 6 })).status).toBe(403);
+
+    const owner = await createOwner(t.dataSource, { teamId: coach.teamId });
+    const ownerAgent = await signedIn(t.app, owner.email, FACTORY_PASSWORD);
+    const bad = await ownerAgent.put('/api/team/cut-settings').send({ acuteSharePct: 12 });
+    expect(bad.status).toBe(400);
+    expect(Object.keys(bad.body.error.fields)).toEqual(['acuteSharePct']);
+    const set = await ownerAgent.put('/api/team/cut-settings').send({ acuteSharePct: 4.5 });
+    expect(set.body.data).toMatchObject({ acuteSharePct: 4.5, defaultPct: 5 });
+    expect((await ownerAgent.get('/api/team/cut-settings')).body.abilities).toEqual({ manage: true });
+    expect((await athleteAgent.get('/api/team/cut-settings')).status).toBe(403);
   });
 });

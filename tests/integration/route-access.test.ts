@@ -75,6 +75,7 @@ const ACCESS: Record<string, Cell> = {
   'GET /api/team/members': TEAM_STAFF,
   'GET /api/team/guardrails': TEAM_STAFF,
   'PUT /api/team/guardrails': TEAM_MANAGE,
+  'GET /api/team/cut-settings': TEAM_STAFF,
   'PUT /api/team/cut-settings': TEAM_MANAGE,
   'GET /api/athletes/:athleteId': ATHLETE_ROWS,
   'PUT /api/athletes/:athleteId/intake': STAFF_ON_ATHLETE.filter((a) => a !== 'athlete'),

@@ -1,4 +1,5 @@
 import { atwaterKcal } from '@driftmark/shared';
+import { addSodium } from './day-actuals.js';
 
 /** What a meal entry stores: grams as eaten and the energy they carry. */
 export interface MealNutrients {
@@ -60,7 +61,10 @@ export function foodMealNutrients(per100g: Per100g, quantityG: number): MealNutr
 }
 
 /** Sums of a day's meals (null fibre, alcohol or sodium counts as none). */
-export function sumNutrients(meals: readonly MealNutrients[]) {
+export function sumNutrients(
+  meals: readonly MealNutrients[],
+  drinks: readonly { sodiumMg: number | null }[] = [],
+) {
   const total = {
     energyKcal: 0,
     proteinG: 0,
@@ -78,7 +82,9 @@ export function sumNutrients(meals: readonly MealNutrients[]) {
     total.fibreG += m.fibreG ?? 0;
     total.alcoholG += m.alcoholG ?? 0;
     // Unknown stays unknown: a total only from meals that carry a figure, null when none does.
-    if (m.sodiumMg !== null) total.sodiumMg = (total.sodiumMg ?? 0) + m.sodiumMg;
+    total.sodiumMg = addSodium(total.sodiumMg, m.sodiumMg);
   }
+  // Drinks that carry sodium (a recovery drink) count toward the day's, as in dayActuals.
+  for (const d of drinks) total.sodiumMg = addSodium(total.sodiumMg, d.sodiumMg);
   return total;
 }

@@ -1,6 +1,7 @@
 import {
   createCutPlanRequest,
   cutSettingsRequest,
+  cutSettingsView,
   rehearsalNoteRequest,
   rehearsalView,
   uuid,
@@ -12,9 +13,9 @@ import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
-import { authorizeTeam } from '../policies/team.policy.js';
+import { authorizeTeam, canOnTeam } from '../policies/team.policy.js';
 import { TeamRepository } from '../repositories/team.repository.js';
-import { CutService } from '../services/cut.service.js';
+import { CutService, cutSettingsOf } from '../services/cut.service.js';
 import { loadAthlete } from './athletes.routes.js';
 import { responds } from '../middleware/responds.js';
 
@@ -25,6 +26,7 @@ const cutPlanParams = z.object({ athleteId: uuid, cutPlanId: uuid });
  * Making weight under /api/athletes/:athleteId: the weigh-in's record and the cut plan. Reading is
  * the athlete policy's `read` (the athlete too); writing is `plan` (coach, owner, shared staff), and
  * a rehearsal's day notes `noteRehearsal` (the athlete and those staff).
+ * `abilities.log` says whether the reader may tick the recovery checklist (the athlete's own log).
  */
 export function cutsRouter(): Router {
   const router = Router();
@@ -40,6 +42,7 @@ export function cutsRouter(): Router {
         data: await new CutService(req.ctx).getCut(athlete),
         abilities: {
           plan: canOnAthlete(actor, 'plan', target),
+          log: canOnAthlete(actor, 'log', target),
           noteRehearsal: canOnAthlete(actor, 'noteRehearsal', target),
         },
       });
@@ -92,15 +95,33 @@ export function cutsRouter(): Router {
   return router;
 }
 
-/** PUT /api/team/cut-settings: the team's acute-share threshold (owner). */
+/**
+ * GET /api/team/cut-settings (staff, as the guardrail floors) and PUT (owner): the team's
+ * acute-share threshold, answered with the default and the sources beside it.
+ */
 export function cutSettingsRouter(): Router {
   const router = Router();
-  router.put(
+  router.get(
     '/cut-settings',
     responds({
-      summary: 'Set the team’s acute-share threshold',
-      data: z.object({ acuteSharePct: z.number() }),
+      summary: 'The team’s acute-share threshold, its default and sources',
+      data: cutSettingsView,
+      abilities: true,
     }),
+    authenticate(),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const team = { id: actor.teamId };
+      authorizeTeam(actor, { kind: 'viewGuardrails' }, team);
+      res.json({
+        data: await cutSettingsOf(new TeamRepository(req.ctx.dataSource.manager), actor.teamId),
+        abilities: { manage: canOnTeam(actor, { kind: 'manageSettings' }, team) },
+      });
+    },
+  );
+  router.put(
+    '/cut-settings',
+    responds({ summary: 'Set the team’s acute-share threshold', data: cutSettingsView }),
     authenticate(),
     validate({ body: cutSettingsRequest }),
     async (req, res) => {
@@ -108,7 +129,7 @@ export function cutSettingsRouter(): Router {
       authorizeTeam(actor, { kind: 'manageSettings' }, { id: actor.teamId });
       const teams = new TeamRepository(req.ctx.dataSource.manager);
       await teams.setAcuteSharePct(actor.teamId, req.body.acuteSharePct);
-      res.json({ data: { acuteSharePct: await teams.acuteSharePct(actor.teamId) } });
+      res.json({ data: await cutSettingsOf(teams, actor.teamId) });
     },
   );
   return router;

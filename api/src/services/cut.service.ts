@@ -1,4 +1,7 @@
 import {
+  ACUTE_SHARE_DEFAULT_PCT,
+  ACUTE_SHARE_SEVERE_MEANING,
+  ACUTE_SHARE_SEVERE_PCT,
   acuteShare,
   beforeEventOnAthleteClock,
   chronicRate,
@@ -8,6 +11,7 @@ import {
   cutPathKg,
   cutWarnings,
   preAcuteDate,
+  recoveryItemAmounts,
   recoveryTargets,
   recoveryWindowHours,
   REHEARSAL_REGAIN_MORNINGS,
@@ -19,6 +23,8 @@ import {
   type RehearsalView,
   type CutFiguresView,
   type CutPlanShape,
+  type CutSettingsView,
+  type RecoveryItemKind,
   type CutView,
   type LimitGapView,
   type RecoveryView,
@@ -27,12 +33,16 @@ import {
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { conflict, guardrailsUnacknowledged, notFound, validationFailed } from '../errors.js';
+import { FluidEntry } from '../entities/fluid-entry.entity.js';
+import { MealEntry } from '../entities/meal-entry.entity.js';
 import { localDateTime } from '../lib/local-time.js';
+import { recoveryClientId } from '../lib/recovery-client-id.js';
 import type { Actor } from '../policies/actor.js';
 import type { CutPlan } from '../entities/cut-plan.entity.js';
 import { presentCutPlan, presentRehearsal } from '../presenters/cut.presenter.js';
 import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { CutPlanRepository, type CutPlanWithAuthor } from '../repositories/cut-plan.repository.js';
+import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { TeamRepository } from '../repositories/team.repository.js';
 import { TrendRepository } from '../repositories/trend.repository.js';
 import { loadSnapshots } from './athlete-figures.service.js';
@@ -102,16 +112,41 @@ export function cutFigures(shape: CutPlanShape, thresholdPct: number, today: str
   };
 }
 
+/** The team's acute-share threshold with the default, the severe line and their sources. */
+export async function cutSettingsOf(teams: TeamRepository, teamId: string): Promise<CutSettingsView> {
+  return {
+    acuteSharePct: await teams.acuteSharePct(teamId),
+    defaultPct: ACUTE_SHARE_DEFAULT_PCT,
+    source: CUT_SOURCES.acuteShare,
+    severePct: ACUTE_SHARE_SEVERE_PCT,
+    severeMeaning: ACUTE_SHARE_SEVERE_MEANING,
+    severeSource: CUT_SOURCES.acuteShareSevere,
+  };
+}
+
+/** An entry a recovery item logged, found by the item's client id. */
+export type LoggedEntry = { entryId: string; date: string; time: string };
+
+/** How a recovery item is linked to what it logs: its client id, and the entry with that id. */
+export interface RecoveryLinks {
+  clientId(slotIndex: number, kind: RecoveryItemKind): string;
+  logged(clientId: string): LoggedEntry | null;
+}
+
+const NO_LINKS: RecoveryLinks = { clientId: () => '', logged: () => null };
+
 /**
  * On the weigh-in day and until the competition: recovery targets from the kg lost at the scale,
  * counted from the plan's pre-acute weight (else the usual weight) down to the limit, each slot
- * placed on the athlete's clock from the weigh-in's time on the venue clock.
+ * placed on the athlete's clock from the weigh-in's time on the venue clock, each with its fluid
+ * and carbohydrate items (done while an entry with the item's client id exists).
  */
 export function recoveryOf(
   event: WeighInEventView | null,
   plan: Pick<CutPlanShape, 'preAcuteKg'> | null,
   today: string,
   athleteTimeZone: string,
+  links: RecoveryLinks = NO_LINKS,
 ): RecoveryView | null {
   if (!event || event.recoveryWindowHours === null || !event.weighInTime || !event.timeZone) return null;
   if (today < event.date || (event.competitionDate !== null && today > event.competitionDate)) return null;
@@ -130,11 +165,25 @@ export function recoveryOf(
     windowHours: event.recoveryWindowHours,
     fluidL: targets.fluidL,
     carbohydrateG: targets.carbohydrateG,
-    slots: targets.slots.map((s) => ({
-      ...beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone),
-      fluidL: s.fluidL,
-      carbohydrateG: s.carbohydrateG,
-    })),
+    slots: targets.slots.map((s, i) => {
+      const at = beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone);
+      const amounts = recoveryItemAmounts(s);
+      const item = (kind: RecoveryItemKind) => {
+        const clientId = links.clientId(i, kind);
+        return { clientId, logged: links.logged(clientId) };
+      };
+      return {
+        ...at,
+        fluidL: s.fluidL,
+        carbohydrateG: s.carbohydrateG,
+        fluid: { ...item('fluid'), volumeMl: amounts.volumeMl, sodiumMg: amounts.sodiumMg },
+        carbohydrate: {
+          ...item('carbohydrate'),
+          carbohydrateG: amounts.carbohydrateG,
+          mealName: `Recovery carbohydrate ${at.time}`,
+        },
+      };
+    }),
     source: CUT_SOURCES.recovery,
   };
 }
@@ -158,6 +207,8 @@ export class CutService {
     ]);
     const acks = plan ? await new CutPlanRepository(this.manager).acknowledgements(plan.id) : [];
     const event = weighInEventOf(athlete);
+    const recovery = recoveryOf(event, plan, today, athlete.user.timeZone);
+    const links = recovery && event ? await this.recoveryLinks(athlete.id, event.date, recovery) : NO_LINKS;
     return {
       athleteId: athlete.id,
       weighIn: event,
@@ -165,10 +216,31 @@ export class CutService {
       plan: plan ? presentCutPlan(plan, acks) : null,
       figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
       thresholdPct,
-      recovery: recoveryOf(event, plan, today, athlete.user.timeZone),
+      recovery: recovery ? recoveryOf(event, plan, today, athlete.user.timeZone, links) : null,
       rehearsal: rehearsal ? await this.rehearsalRecord(rehearsal, today) : null,
       caution: CUT_CAUTION,
     };
+  }
+
+  /**
+   * The recovery items' client ids (fixed per athlete, weigh-in date and item) and the fluid and
+   * meal entries logged with them: one query per table, whatever the number of slots.
+   */
+  private async recoveryLinks(
+    athleteId: string,
+    weighInDate: string,
+    recovery: RecoveryView,
+  ): Promise<RecoveryLinks> {
+    const clientId = (i: number, kind: RecoveryItemKind) => recoveryClientId(athleteId, weighInDate, i, kind);
+    const ids = (kind: RecoveryItemKind) => recovery.slots.map((_, i) => clientId(i, kind));
+    const [fluids, meals] = await Promise.all([
+      new DayEntryRepository(this.manager, FluidEntry).findByClientIds(athleteId, ids('fluid')),
+      new DayEntryRepository(this.manager, MealEntry).findByClientIds(athleteId, ids('carbohydrate')),
+    ]);
+    const byClientId = new Map<string, LoggedEntry>(
+      [...fluids, ...meals].map((e) => [e.clientId, { entryId: e.id, date: e.localDate, time: e.localTime }]),
+    );
+    return { clientId, logged: (id) => byClientId.get(id) ?? null };
   }
 
   /**

@@ -77,8 +77,15 @@ export const fluidKind: EntryKind<FluidEntry, FluidEntryRequest> = {
     enteredValue: input.volume,
     enteredUnit: input.unit,
     kind: input.kind,
+    sodiumMg: input.sodiumMg ?? null,
   }),
-  asInput: (e) => ({ time: e.localTime, volume: e.enteredValue, unit: e.enteredUnit, kind: e.kind }),
+  asInput: (e) => ({
+    time: e.localTime,
+    volume: e.enteredValue,
+    unit: e.enteredUnit,
+    kind: e.kind,
+    sodiumMg: e.sodiumMg,
+  }),
 };
 
 /**

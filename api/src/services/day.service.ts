@@ -129,10 +129,9 @@ export async function loadDayView(
     dayPhotoSource(manager).forDay(athlete.id, date),
     loadDayPlan(manager, athlete, date, reader),
   ]);
-  const fluidMl = fluids.length > 0 ? fluids.reduce((sum, f) => sum + f.volumeMl, 0) : null;
   const judged = dayDrift({
     plan: plan.targets,
-    actuals: dayActuals(mealTotals(meals), fluidMl, evening),
+    actuals: dayActuals(mealTotals(meals), fluids, evening),
     fluids: fluids.map((f) => ({ time: f.localTime, volumeMl: f.volumeMl })),
     date,
     today,

@@ -5,6 +5,7 @@ import {
   acuteShare,
   chronicRate,
   competitionDate,
+  CUT_SOURCES,
   cutPathKg,
   cutWarnings,
   lossPct,
@@ -13,6 +14,7 @@ import {
   limitGapSummary,
   preAcuteDate,
   rateSeverity,
+  recoveryItemAmounts,
   recoveryTargets,
   recoveryWindowHours,
   type CutPlanShape,
@@ -260,6 +262,36 @@ describe('the words of the warnings and the gap', () => {
     expect(limitGapSummary(gap, 63)).toBe(
       'Projected 0.6 kg over the 63.0 kg limit in 10 days; needs 0.7 %/week more',
     );
+  });
+});
+
+describe('the sources the acute-share warnings carry', () => {
+  it('marks the 7 % line common practice and cites the ACSM consensus statement for no numeric limit', () => {
+    const [share, severe] = cutWarnings(null, acuteShare(68, 63), 5);
+    // Burke et al. 2021, Curr Sports Med Rep 20:199–217 (REFERENCES §7): no numeric limit given.
+    expect(share!.source).toContain('Barley et al. 2018');
+    expect(share!.source).toContain('no numeric safe % confirmed');
+    expect(severe!.source).toContain('common practice, no source');
+    expect(severe!.source).toContain('Curr Sports Med Rep 20:199–217');
+    expect(CUT_SOURCES.acuteShareSevere).toContain('confirms no numeric limit');
+  });
+});
+
+describe('what ticking a recovery slot logs', () => {
+  it('rounds the fluid to 10 mL and takes the carbohydrate band’s floor in whole grams', () => {
+    // 5.25 L over 16 slots = 328.125 mL → 330 mL; sodium 0.33 L × 20 mmol/L × 22.99 mg/mmol
+    // (Sawka 2007, from memory) = 151.7 → 152 mg; 1.0–1.2 g/kg × 63 kg = 63–75.6 g → 63 g.
+    expect(recoveryItemAmounts({ fluidL: 5.25 / 16, carbohydrateG: { min: 63, max: 75.6 } })).toEqual({
+      volumeMl: 330,
+      sodiumMg: 152,
+      carbohydrateG: 63,
+    });
+    // 0.3249 L → 320 mL (324.9 rounds down), 0.32 × 459.8 = 147.1 → 147 mg; 40.5 g → 41 g (half up).
+    expect(recoveryItemAmounts({ fluidL: 0.3249, carbohydrateG: { min: 40.5, max: 60 } })).toEqual({
+      volumeMl: 320,
+      sodiumMg: 147,
+      carbohydrateG: 41,
+    });
   });
 });
 

@@ -27,8 +27,11 @@ export type WeighInTiming = (typeof WEIGH_IN_TIMINGS)[number];
 export const ACUTE_SHARE_DEFAULT_PCT = 5;
 /**
  * Above this acute share the plan needs a second acknowledgement and the athlete sees the
- * stop-and-seek-care signs. Common practice, no source: no position statement giving a numeric
- * limit was confirmed (REFERENCES §7: "No numeric 'safe %' limit for acute loss was confirmed").
+ * stop-and-seek-care signs. The 7 % itself is common practice, no source. Burke LM, Slater GJ,
+ * Matthews JJ, Langan-Evans C, Horswill CA (2021) "ACSM Expert Consensus Statement on Weight Loss
+ * in Weight-Category Sports", Curr Sports Med Rep 20:199–217, recommends against rapid and
+ * unhealthy weight-loss methods but gives no numeric limit; no numeric safe % was confirmed
+ * (REFERENCES §7).
  */
 export const ACUTE_SHARE_SEVERE_PCT = 7;
 /**
@@ -38,6 +41,12 @@ export const ACUTE_SHARE_SEVERE_PCT = 7;
  * working-group position on fluid replacement, not read.
  */
 export const RECOVERY_FLUID_L_PER_KG_LOST = 1.5;
+/**
+ * Sodium in the recovery fluid, mg per litre: the low end of the 20–30 mmol/L the ACSM position
+ * stand names for drinks (Sawka et al. 2007, MSSE 39:377–390; the range from memory, unconfirmed),
+ * at 22.99 mg per mmol (sodium's standard atomic weight, IUPAC): 20 × 22.99 = 459.8 mg/L.
+ */
+export const RECOVERY_SODIUM_MG_PER_L = 20 * 22.99;
 /**
  * Carbohydrate after the weigh-in, g per kg of body mass: 1.0–1.2 g/kg an hour for the first 4 h
  * (speedy refuelling), then the daily 5–10 g/kg pro rata for the rest of the window. Burke LM,
@@ -50,6 +59,11 @@ export const RECOVERY_CARB = {
   perHourGPerKg: { min: 1.0, max: 1.2 },
   perDayGPerKg: { min: 5, max: 10 },
 } as const;
+/** What the severe line means, as the team settings and the plan builder say it. */
+export const ACUTE_SHARE_SEVERE_MEANING =
+  `Above ${ACUTE_SHARE_SEVERE_PCT} % of body mass a cut plan needs a second acknowledgement, with a ` +
+  'physician involved, and the athlete is shown the signs to stop and seek care. Losses this large ' +
+  'are often spoken of as intravenous-rehydration territory; no numeric safe limit is published.';
 /** The last drink slot starts at least this long before competition: common practice, no source. */
 export const RECOVERY_LAST_DRINK_MINUTES_BEFORE = 60;
 
@@ -57,10 +71,17 @@ export const CUT_SOURCES = {
   chronicRate:
     'Helms, Aragon & Fitschen 2014, JISSN 11:20 (1 %/week); Garthe et al. 2011, IJSNEM 21:97–104 (1.4 %/week)',
   acuteShare:
-    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss; ' +
-    'the 7 % second acknowledgement is common practice, no source',
+    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss ' +
+    '(from memory, unconfirmed); Burke et al. 2021, ACSM Expert Consensus Statement on Weight Loss in ' +
+    'Weight-Category Sports, Curr Sports Med Rep 20:199–217, recommends against rapid and unhealthy loss ' +
+    'methods and gives no numeric limit: no numeric safe % confirmed',
+  acuteShareSevere:
+    'The 7 % second acknowledgement is common practice, no source; Burke et al. 2021 (ACSM Expert ' +
+    'Consensus Statement, Curr Sports Med Rep 20:199–217) recommends against rapid and unhealthy loss ' +
+    'methods and confirms no numeric limit',
   recovery:
-    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium); ' +
+    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium at ' +
+    '20 mmol/L, the low end of its 20–30 mmol/L; both from memory, unconfirmed); ' +
     'Reale, Slater & Burke 2017, Eur J Sport Sci 17:727–740 (the recovery window); carbohydrate bands ' +
     'from Burke et al. 2011, J Sports Sci 29:S17–S27 (from memory)',
 } as const;
@@ -295,6 +316,31 @@ export function recoveryTargets(input: {
   return { fluidL, carbohydrateG, carbohydrateGPerKg: perKg, slots };
 }
 
+/** The two items of a recovery slot: a drink (fluid entry) and carbohydrate (a meal). */
+export const RECOVERY_ITEM_KINDS = ['fluid', 'carbohydrate'] as const;
+export type RecoveryItemKind = (typeof RECOVERY_ITEM_KINDS)[number];
+
+/**
+ * What ticking a slot's items logs: the slot's fluid rounded to 10 mL with its sodium
+ * (RECOVERY_SODIUM_MG_PER_L, whole mg), and the lower end of its carbohydrate band rounded to a
+ * whole gram (the target's floor met, the athlete may eat more and log it as any meal). Rounding
+ * and taking the floor: common practice, no source.
+ */
+export function recoveryItemAmounts(
+  slot: Pick<RecoveryTargets['slots'][number], 'fluidL' | 'carbohydrateG'>,
+): {
+  volumeMl: number;
+  sodiumMg: number;
+  carbohydrateG: number;
+} {
+  const volumeMl = Math.round((slot.fluidL * 1000) / 10) * 10;
+  return {
+    volumeMl,
+    sodiumMg: Math.round((volumeMl / 1000) * RECOVERY_SODIUM_MG_PER_L),
+    carbohydrateG: Math.round(slot.carbohydrateG.min),
+  };
+}
+
 /** g/kg of carbohydrate from hour `a` to hour `b` after the weigh-in (RECOVERY_CARB). */
 function carbGPerKg(a: number, b: number, end: 'min' | 'max'): number {
   if (b <= a) return 0;
@@ -365,7 +411,7 @@ export function cutWarnings(
       message:
         `An acute loss above ${ACUTE_SHARE_SEVERE_PCT} % of body mass (${fixed(acute.pct, 1)} % here) needs a ` +
         'physician involved; the athlete is shown the signs to stop and seek care.',
-      source: CUT_SOURCES.acuteShare,
+      source: CUT_SOURCES.acuteShareSevere,
       stopSigns: STOP_SIGNS_TEXT,
     });
   }

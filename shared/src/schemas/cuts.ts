@@ -101,6 +101,23 @@ export const cutSettingsRequest = z.object({
 });
 export type CutSettingsRequest = z.infer<typeof cutSettingsRequest>;
 
+/** GET and PUT /api/team/cut-settings: the team's threshold with the default and the sources. */
+export const cutSettingsView = z.object({
+  /** The team's threshold in force, % of body mass. */
+  acuteSharePct: z.number(),
+  /** The default when the team has set none, % (Barley et al. 2018). */
+  defaultPct: z.number(),
+  /** Where the default comes from. */
+  source: z.string(),
+  /** Above this the plan needs a second acknowledgement, % (common practice, no source). */
+  severePct: z.number(),
+  /** What the severe line means, in words. */
+  severeMeaning: z.string(),
+  /** Where the severe line comes from. */
+  severeSource: z.string(),
+});
+export type CutSettingsView = z.infer<typeof cutSettingsView>;
+
 const severity = z.enum(['none', 'warning', 'strong', 'severe']);
 
 /** A cut-plan warning as the server words it. */
@@ -173,6 +190,19 @@ export const cutFiguresView = z.object({
 });
 export type CutFiguresView = z.infer<typeof cutFiguresView>;
 
+/**
+ * One item of the recovery checklist. Its client id is the server's, fixed for the athlete, the
+ * weigh-in date and the item, so a double tap (or a second device) returns the first entry
+ * instead of logging twice; the item is done while an entry with that client id exists.
+ */
+export const recoveryItemView = z.object({
+  /** The client id to log this item's entry with. */
+  clientId: z.string(),
+  /** The entry logged for it (delete it by id to untick); null while not ticked. */
+  logged: z.object({ entryId: z.string(), date: z.string(), time: z.string() }).nullable(),
+});
+export type RecoveryItemView = z.infer<typeof recoveryItemView>;
+
 /** The recovery targets for the window after the weigh-in (rules/weight-cut.ts recoveryTargets). */
 export const recoveryView = z.object({
   /** kg lost at the scale: the weight before the last days (the plan's, else the usual) minus the limit. */
@@ -189,6 +219,10 @@ export const recoveryView = z.object({
       time: z.string(),
       fluidL: z.number(),
       carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+      /** Ticking it logs a fluid entry of `volumeMl` with `sodiumMg` through POST …/days/:date/fluids with `clientId`. */
+      fluid: recoveryItemView.extend({ volumeMl: z.number(), sodiumMg: z.number() }),
+      /** Ticking it logs a meal of `carbohydrateG` (macros) through POST …/days/:date/meals with `clientId`. */
+      carbohydrate: recoveryItemView.extend({ carbohydrateG: z.number(), mealName: z.string() }),
     }),
   ),
   source: z.string(),

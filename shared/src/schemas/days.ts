@@ -25,6 +25,8 @@ export const fluidView = z.object({
   volumeMl: z.number(),
   entered: entered(VOLUME_UNITS),
   kind: z.enum(FLUID_KINDS),
+  /** Sodium the drink carried, mg (a recovery drink); null when unknown. */
+  sodiumMg: z.number().nullable(),
 });
 
 export const mealView = z.object({
@@ -104,7 +106,7 @@ export const dayView = z.object({
     fatG: z.number(),
     fibreG: z.number(),
     alcoholG: z.number(),
-    /** Sodium from meals that carry it, mg; null when no meal of the day carries a figure (unknown, not 0). */
+    /** Sodium from meals and drinks that carry it, mg; null when none of the day's does (unknown, not 0). */
     sodiumMg: z.number().nullable(),
   }),
   supplements: z.array(supplementView),

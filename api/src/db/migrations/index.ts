@@ -11,6 +11,7 @@ import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
 import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
 import { AddFoodLabels1796210000000 } from './1796210000000-AddFoodLabels.js';
 import { AddCutRehearsals1796220000000 } from './1796220000000-AddCutRehearsals.js';
+import { AddFluidSodium1796230000000 } from './1796230000000-AddFluidSodium.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -26,4 +27,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddBodyMeasurements1796190140000,
   AddFoodLabels1796210000000,
   AddCutRehearsals1796220000000,
+  AddFluidSodium1796230000000,
 ];

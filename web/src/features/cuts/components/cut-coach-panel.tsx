@@ -2,10 +2,11 @@ import { useState, type ReactNode } from 'react';
 import { Card, CardHeader } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/spinner';
 import { Alert } from '@/components/ui/alert';
-import type { WeightUnit } from '@driftmark/shared';
+import type { VolumeUnit, WeightUnit } from '@driftmark/shared';
 import { useCut } from '../api/get-cut';
-import { LimitGap, PlanFigures, RecoveryChecklist } from './cut-figures';
+import { LimitGap, PlanFigures } from './cut-figures';
 import { CutPlanBuilder } from './cut-plan-builder';
+import { RecoveryChecklist } from './recovery-checklist';
 import { RehearsalRecord } from './rehearsal-record';
 import { WeighInEventForm } from './weigh-in-event-form';
 
@@ -14,10 +15,12 @@ export function CutCoachPanel({
   athleteId,
   today,
   unit,
+  volumeUnit,
 }: {
   athleteId: string;
   today: string;
   unit: WeightUnit;
+  volumeUnit: VolumeUnit;
 }) {
   const cut = useCut(athleteId);
   if (cut.isPending) return <Skeleton className="mb-5 h-32" />;
@@ -33,7 +36,7 @@ export function CutCoachPanel({
     <Card className="mb-5 space-y-4" aria-labelledby="cut-heading">
       <CardHeader id="cut-heading" title="Making weight" eyebrow="Weigh-in" />
       <LimitGap cut={view} unit={unit} />
-      <RecoveryChecklist cut={view} />
+      <RecoveryChecklist cut={view} volumeUnit={volumeUnit} />
       {view.plan ? (
         <PlanFigures cut={view} unit={unit} />
       ) : (
