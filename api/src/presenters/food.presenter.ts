@@ -3,6 +3,8 @@ import type { EverydayFood } from '../adapters/everyday-foods.js';
 import type { ReferenceFood } from '../adapters/reference-foods.js';
 import type { Food } from '../entities/food.entity.js';
 
+const NO_USES = { mine: 0, team: 0 };
+
 /** A team food's energy per 100 g, from its macros with the Atwater general factors. */
 export function teamFoodEnergyKcal(
   f: Pick<Food, 'proteinG' | 'carbohydrateG' | 'fatG' | 'alcoholG'>,
@@ -17,6 +19,7 @@ export function presentTeamFood(f: Food): FoodView {
     source: 'team',
     preparation: preparationOf(f.name),
     portions: [],
+    uses: NO_USES,
     per100g: {
       energyKcal: teamFoodEnergyKcal(f),
       listedEnergyKcal: null,
@@ -36,6 +39,7 @@ export function presentReferenceFood(f: ReferenceFood): FoodView {
     source: 'reference',
     preparation: preparationOf(f.name),
     portions: [],
+    uses: NO_USES,
     per100g: {
       energyKcal: f.per100g.energyKcal,
       listedEnergyKcal: f.listedEnergyKcal,
@@ -63,6 +67,7 @@ export function presentEverydayFood(f: EverydayFood): FoodView {
     source: 'everyday',
     preparation: f.preparation,
     portions: [...f.portions],
+    uses: NO_USES,
     per100g: {
       energyKcal: f.per100g.energyKcal,
       listedEnergyKcal: null,

@@ -147,7 +147,10 @@ export class FoodService {
         view: () => presentTeamFood(f),
       }),
     );
-    return rankFoods(q, [...team, ...fixed], usage, limit, now.getTime()).map((f) => f.view());
+    return rankFoods(q, [...team, ...fixed], usage, limit, now.getTime()).map((f) => {
+      const used = usage.get(f.id.toLowerCase());
+      return { ...f.view(), uses: { mine: used?.mine ?? 0, team: used?.team ?? 0 } };
+    });
   }
 
   async create(actor: Actor, input: CreateFoodRequest): Promise<FoodView> {

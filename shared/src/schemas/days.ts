@@ -185,6 +185,8 @@ export const foodView = z.object({
   preparation: z.enum(['raw', 'cooked']).nullable(),
   /** Household measures the food carries a weight for; log grams or a count of one of these. */
   portions: z.array(z.object({ unit: z.string(), label: z.string(), grams: z.number() })),
+  /** Meals holding it over the last 180 days: by the signed-in athlete (0 for staff) and by the whole team. */
+  uses: z.object({ mine: z.number(), team: z.number() }),
   per100g: z.object({
     /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),

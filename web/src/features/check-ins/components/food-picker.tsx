@@ -43,6 +43,15 @@ interface FoodPickerProps {
   invalid?: boolean;
 }
 
+/** "In 3 of your meals · 7 of the team's" over the server's window; null when never logged. */
+function usesLine(food: FoodView): string | null {
+  const { mine, team } = food.uses;
+  if (mine === 0 && team === 0) return null;
+  const parts = [mine > 0 ? `in ${mine} of your meals` : null, team > mine ? `${team} of the team’s` : null];
+  const text = parts.filter(Boolean).join(' · ');
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
 /** Where a food comes from, in a word beside its name. */
 function sourceWord(food: FoodView): string | null {
   if (food.source === 'team') return 'Team food';
@@ -104,7 +113,9 @@ export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
           <>
             {term ? null : (
               <p className="mb-1.5 text-xs font-semibold tracking-wide text-ink-faint uppercase">
-                Recent and frequent
+                {search.data.some((f) => f.uses.mine + f.uses.team > 0)
+                  ? 'Recent and frequent'
+                  : 'Everyday foods'}
               </p>
             )}
             <ul aria-label="Foods found" className={cn('space-y-1.5', search.isFetching && 'opacity-70')}>
@@ -128,6 +139,9 @@ export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
                       {sourceWord(food) ? `${sourceWord(food)} · ` : ''}
                       {per100gLine(food)}
                     </span>
+                    {usesLine(food) ? (
+                      <span className="text-xs text-ink-faint tabular-nums">{usesLine(food)}</span>
+                    ) : null}
                     {food.per100g.listedEnergyKcal !== null ? (
                       <span className="text-xs text-ink-faint tabular-nums">{listedEnergyLine(food)}</span>
                     ) : null}

@@ -170,6 +170,7 @@ function foodsFromEntry(entry: DayView['meals'][number]): Record<string, FoodVie
           : 'team',
       preparation: null,
       portions,
+      uses: { mine: 0, team: 0 },
       per100g: {
         energyKcal: per100g.energyKcal,
         listedEnergyKcal: null,
