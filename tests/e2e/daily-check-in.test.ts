@@ -83,7 +83,10 @@ describe('the daily check-in on a phone', () => {
     await page.setViewportSize({ width: 375, height: 812 });
     await meal.getByRole('button', { name: 'Save meal' }).click();
     await page.getByRole('list', { name: 'Meals logged' }).getByText('Breakfast').waitFor();
-    await page.getByRole('list', { name: 'Foods in Breakfast' }).getByText(/Rice flakes/).waitFor();
+    await page
+      .getByRole('list', { name: 'Foods in Breakfast' })
+      .getByText(/Rice flakes/)
+      .waitFor();
 
     await page.getByRole('button', { name: 'Add a supplement' }).click();
     const supplement = page.getByRole('form', { name: 'Add a supplement' });
