@@ -23,7 +23,7 @@ import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js
 import { dataRouter } from './routes/data.routes.js';
 import { devInboxEnabled } from './middleware/dev-inbox.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
-import { foodsRouter } from './routes/foods.routes.js';
+import { athleteFoodsRouter, foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
@@ -127,6 +127,8 @@ export function createApp(deps: {
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
+  // An athlete's personal foods from a label or a barcode (/athletes/:athleteId/foods…).
+  api.use('/athletes', athleteFoodsRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).
   api.use(photosRouter());
   // Marks on an athlete's charts (/athletes/:athleteId/marks) and single marks (/marks/:markId…).

@@ -76,6 +76,16 @@ export const configSchema = z.object({
       .refine((s) => /^smtps?:\/\//.test(s), 'must start with smtp:// or smtps://')
       .optional(),
   ),
+  /**
+   * Base URL of the open food-products database the barcode lookup asks (its Node SDK's `host`):
+   * the local fake in development and tests (scripts start it), unset = no barcode lookup.
+   */
+  FOOD_PRODUCTS_URL: optionalString.pipe(
+    z
+      .string()
+      .refine((s) => /^https?:\/\/[^/]+/.test(s), 'must be an http(s) URL such as http://127.0.0.1:4580')
+      .optional(),
+  ),
   MAIL_FROM: optionalString.transform((v) => v ?? 'Driftmark <no-reply@driftmark.test>'),
   MAIL_CAPTURE_DIR: optionalString,
   UPLOADS_DIR: optionalString.transform((v) => path.resolve(v ?? path.join(REPO_ROOT, 'uploads-dev'))),
@@ -138,6 +148,8 @@ export interface Config {
   databaseUrl: string;
   jwtSecret: string;
   smtpUrl?: string;
+  /** The open food-products database's base URL for barcode lookups; unset = lookups answer 503. */
+  foodProductsUrl?: string;
   mailFrom: string;
   mailCaptureDir?: string;
   uploadsDir: string;
@@ -196,6 +208,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     databaseUrl: e.DATABASE_URL,
     jwtSecret: e.JWT_SECRET,
     ...(e.SMTP_URL ? { smtpUrl: e.SMTP_URL } : {}),
+    ...(e.FOOD_PRODUCTS_URL ? { foodProductsUrl: e.FOOD_PRODUCTS_URL.replace(/\/+$/, '') } : {}),
     mailFrom: e.MAIL_FROM,
     ...(e.MAIL_CAPTURE_DIR ? { mailCaptureDir: path.resolve(e.MAIL_CAPTURE_DIR) } : {}),
     uploadsDir: e.UPLOADS_DIR,

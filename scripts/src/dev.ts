@@ -11,6 +11,7 @@ import {
   appEnv,
   buildShared,
   DEMO_PASSWORD,
+  startFoodProductsFakeService,
   startSmtpFake,
   type RunningSmtpFake,
 } from './lib/app.js';
@@ -70,6 +71,12 @@ async function main(): Promise<void> {
 
   smtp = await startSmtpFake({ preferredPort: 2525, captureDir: mailDir, exclude: [API_PORT, WEB_PORT] });
   services.push(smtp.service);
+  // The barcode lookup asks a local fake of the open food-products database (invented products).
+  const foodProducts = await startFoodProductsFakeService({
+    preferredPort: 4580,
+    exclude: [API_PORT, WEB_PORT, smtp.port],
+  });
+  services.push(foodProducts.service);
   services.push(
     startService('tsc shared', node, [
       packageBin('typescript', 'tsc'),
@@ -89,7 +96,7 @@ async function main(): Promise<void> {
         repoPath('api', 'tsconfig.json'),
         repoPath('api', 'src', 'server.ts'),
       ],
-      { env: appEnv({ ...env, SMTP_URL: smtp.url }) },
+      { env: appEnv({ ...env, SMTP_URL: smtp.url, FOOD_PRODUCTS_URL: foodProducts.url }) },
     ),
     startService(
       'vite',

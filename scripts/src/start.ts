@@ -13,8 +13,10 @@ import {
   buildWorkspace,
   DEMO_ACCOUNTS,
   DEMO_PASSWORD,
+  startFoodProductsFakeService,
   startSmtpFake,
   superviseBuiltServer,
+  type RunningFoodProductsFake,
   type RunningSmtpFake,
   type SupervisedServer,
 } from './lib/app.js';
@@ -28,11 +30,13 @@ import { ensureJwtSecret } from './lib/secrets.js';
 const startedAt = Date.now();
 let server: SupervisedServer | undefined;
 let smtp: RunningSmtpFake | undefined;
+let foodProducts: RunningFoodProductsFake | undefined;
 let stopping = false;
 
 async function stopAll(): Promise<void> {
   await server?.stop('SIGINT', 15_000);
   await smtp?.service.stop('SIGTERM', 5_000);
+  await foodProducts?.service.stop('SIGTERM', 5_000);
 }
 
 onShutdownSignal(() => {
@@ -83,7 +87,11 @@ async function main(): Promise<void> {
 
   smtp = await startSmtpFake({ preferredPort: 2525, captureDir: mailDir, exclude: [port] });
   // A server that dies later (a bug) is started again after a short wait; see superviseBuiltServer.
-  server = superviseBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url }), { baseUrl });
+  // The barcode lookup asks a local fake of the open food-products database (invented products).
+  foodProducts = await startFoodProductsFakeService({ preferredPort: 4580, exclude: [port, smtp.port] });
+  server = superviseBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url, FOOD_PRODUCTS_URL: foodProducts.url }), {
+    baseUrl,
+  });
   void smtp.service.exited.then((exit) => {
     if (!stopping)
       warn(`The SMTP fake stopped (${exit.signal ?? `exit ${exit.code}`}); e-mail will not be captured.`);

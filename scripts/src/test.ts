@@ -14,8 +14,10 @@ import {
   buildShared,
   buildWorkspace,
   startBuiltServer,
+  startFoodProductsFakeService,
   startSmtpFake,
   waitForHealth,
+  type RunningFoodProductsFake,
   type RunningSmtpFake,
 } from './lib/app.js';
 import { ensureChromium } from './lib/chromium.js';
@@ -127,11 +129,18 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   rmSync(serverLog, { force: true });
 
   let smtp: RunningSmtpFake | undefined;
+  let foodProducts: RunningFoodProductsFake | undefined;
   let server: Service | undefined;
   try {
     const port = await pickFreePort(3100);
     smtp = await startSmtpFake({ preferredPort: 2600, captureDir, exclude: [port], logFile: serverLog });
     running.push(smtp.service);
+    foodProducts = await startFoodProductsFakeService({
+      preferredPort: 4680,
+      exclude: [port, smtp.port],
+      logFile: serverLog,
+    });
+    running.push(foodProducts.service);
     const baseUrl = `http://127.0.0.1:${port}`;
     server = startBuiltServer(
       appEnv({
@@ -141,6 +150,7 @@ async function e2eStage(e2eUrl: string): Promise<void> {
         APP_ORIGIN: baseUrl,
         EXTRA_ORIGINS: undefined,
         SMTP_URL: smtp.url,
+        FOOD_PRODUCTS_URL: foodProducts.url,
         MAIL_CAPTURE_DIR: captureDir,
         UPLOADS_DIR: uploadsDir,
         WEB_DIST: repoPath('web', 'dist'),
@@ -179,6 +189,7 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   } finally {
     await server?.stop('SIGINT', 15_000);
     await smtp?.service.stop('SIGTERM', 5000);
+    await foodProducts?.service.stop('SIGTERM', 5000);
     rmSync(scratch, { recursive: true, force: true });
   }
 }

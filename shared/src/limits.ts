@@ -49,6 +49,16 @@ export const LIMITS = {
   /** Nutrients per 100 g of a team food. */
   per100gMacroG: { min: 0, max: 100 },
   per100gSodiumMg: { min: 0, max: 40000 },
+  /** A nutrition label's serving, g or mL. */
+  labelServing: { min: 1, max: 2000 },
+  /** Grams of one macro as printed on a label (per 100 g or per serving). */
+  labelMacroG: { min: 0, max: 2000 },
+  /** Sodium as printed, mg (per 100 g or per serving). */
+  labelSodiumMg: { min: 0, max: 100000 },
+  /** Energy as printed, kcal or kJ (per 100 g or per serving). */
+  labelEnergy: { min: 0, max: 40000 },
+  /** Density of a liquid served in mL, g/mL. */
+  labelDensity: { min: 0.5, max: 2.5 },
   mealName: { min: 1, max: 120 },
   foodName: { min: 2, max: 120 },
   supplementName: { min: 1, max: 80 },

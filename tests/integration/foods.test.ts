@@ -88,6 +88,7 @@ describe('GET /api/foods', () => {
       id: expect.any(String),
       name: 'Overnight oats, team recipe',
       source: 'team',
+      barcode: null,
       preparation: null,
       portions: [],
       uses: { mine: 0, team: 0 },

@@ -119,6 +119,12 @@ const ACCESS: Record<string, Cell> = {
   'DELETE /api/countdown-templates/:templateId': [...TEAM_STAFF, 'outsider'],
   'GET /api/foods': SIGNED_IN,
   'POST /api/foods': TEAM_STAFF,
+  'POST /api/foods/label': TEAM_STAFF,
+  // `foodId` is the named athlete's personal food: only the athlete and the staff who read them.
+  'GET /api/foods/:foodId': ATHLETE_ROWS,
+  // Personal foods are added by the athlete alone (a coach is refused in food-labels.test.ts).
+  'POST /api/athletes/:athleteId/foods': ATHLETE_ROWS,
+  'POST /api/athletes/:athleteId/foods/barcode': ATHLETE_ROWS,
   'POST /api/athletes/:athleteId/photos': ATHLETE_ROWS,
   'GET /api/athletes/:athleteId/photos': ATHLETE_ROWS,
   'GET /api/photos/:photoId/:size': ATHLETE_ROWS,
@@ -169,6 +175,17 @@ const measurementBody = {
   measuredBy: 'Coach',
 };
 
+/** A nutrition label, per 100 g. */
+const labelBody = {
+  name: 'Access crackers',
+  basis: 'per100g',
+  energy: 400,
+  energyUnit: 'kcal',
+  proteinG: 10,
+  carbohydrateG: 70,
+  fatG: 9,
+};
+
 let t: TestApp;
 let routes: AppRoute[];
 let w: World;
@@ -197,6 +214,7 @@ beforeAll(async () => {
   const template = await coachAgent.post('/api/countdown-templates').send(templateBody());
   const version = await coachAgent.post(`${a}/plan/versions`).send(versionBody(TODAY, planContent()));
   const measurement = await coachAgent.post(`${a}/body-measurements`).send(measurementBody);
+  const personalFood = await self.post(`${a}/foods`).send(labelBody);
   const invitation = await coachAgent
     .post('/api/invitations')
     .send({ email: 'invitee@example.test', name: 'Invitee', role: 'athlete' });
@@ -207,6 +225,7 @@ beforeAll(async () => {
       athleteId: athlete.athlete.id,
       markId: mark.body.data.id,
       measurementId: measurement.body.data?.id ?? randomUUID(),
+      foodId: personalFood.body.data?.food?.id ?? randomUUID(),
       templateId: template.body.data.id,
       versionId: version.body.data?.id ?? version.body.data?.version?.id ?? randomUUID(),
       id: invitation.body.data?.id ?? randomUUID(),
@@ -312,6 +331,9 @@ function bodyFor(key: string): object | undefined {
     'POST /api/countdown-templates': templateBody(),
     'PUT /api/countdown-templates/:templateId': templateBody(),
     'POST /api/foods': { name: 'Test oats', proteinG: 13, carbohydrateG: 60, fatG: 7 },
+    'POST /api/foods/label': labelBody,
+    'POST /api/athletes/:athleteId/foods': labelBody,
+    'POST /api/athletes/:athleteId/foods/barcode': { barcode: '2004821000018' },
     'POST /api/athletes/:athleteId/marks': { metric: 'weight', fromDate: TODAY, toDate: TODAY, note: 'Note' },
     'PATCH /api/marks/:markId': { note: 'Edited' },
     'POST /api/marks/:markId/replies': { body: 'Reply' },

@@ -121,7 +121,7 @@ export async function mealItemsAsEaten(
   const toLookUp = items.filter((i) => !usesStored(i)).map((i) => i.foodId);
   const looked =
     toLookUp.length > 0
-      ? await resolveFoods(ctx.manager, ctx.athlete.teamId, toLookUp)
+      ? await resolveFoods(ctx.manager, ctx.athlete, toLookUp)
       : new Map<string, ResolvedFood>();
   const problems: Record<string, string> = {};
   const rows: NewMealItem[] = [];

@@ -166,6 +166,53 @@ export async function startSmtpFake(options: {
   return { service, port, url: `smtp://127.0.0.1:${port}` };
 }
 
+export interface RunningFoodProductsFake {
+  service: Service;
+  port: number;
+  /** The base URL the API's FOOD_PRODUCTS_URL names. */
+  url: string;
+}
+
+/** Starts scripts/src/food-products-fake.ts on the first free port at or after `preferredPort`. */
+export async function startFoodProductsFakeService(options: {
+  preferredPort: number;
+  logFile?: string;
+  exclude?: number[];
+}): Promise<RunningFoodProductsFake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const service = startService(
+    'food-products-fake',
+    node,
+    ['--import', 'tsx', repoPath('scripts', 'src', 'food-products-fake.ts')],
+    {
+      env: { ...process.env, FOOD_PRODUCTS_PORT: String(port), FOOD_PRODUCTS_HOST: '127.0.0.1' },
+      ipc: true,
+      logFile: options.logFile,
+    },
+  );
+  const ready = await new Promise<boolean>((resolve) => {
+    const timer = setTimeout(() => resolve(false), 20_000);
+    service.child.on('message', (message: { type?: string }) => {
+      if (message?.type === 'ready') {
+        clearTimeout(timer);
+        resolve(true);
+      }
+    });
+    void service.exited.then(() => {
+      clearTimeout(timer);
+      resolve(false);
+    });
+  });
+  if (!ready) {
+    await service.stop('SIGKILL');
+    throw new Error(
+      `The food-products fake did not start on port ${port}${options.logFile ? ` (see ${options.logFile})` : ''}.`,
+    );
+  }
+  service.child.channel?.unref();
+  return { service, port, url: `http://127.0.0.1:${port}` };
+}
+
 /** Polls GET <baseUrl>/api/health until it answers 200; fails early when the server process exits. */
 export async function waitForHealth(baseUrl: string, server: Service, timeoutMs = 60_000): Promise<void> {
   const deadline = Date.now() + timeoutMs;

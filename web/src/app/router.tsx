@@ -150,6 +150,10 @@ export const router = createBrowserRouter([
                     loader: prefetchOwnProfile,
                   },
                   {
+                    path: 'athlete/foods/new',
+                    lazy: page(() => import('./routes/athlete-foods'), 'AthleteFoodsRoute'),
+                  },
+                  {
                     path: 'athlete/trends',
                     lazy: page(() => import('./routes/athlete-trends'), 'AthleteTrendsRoute'),
                     loader: prefetchOwnTrends,
@@ -284,6 +288,10 @@ export const router = createBrowserRouter([
                         ),
                       },
                     ],
+                  },
+                  {
+                    path: 'foods/new',
+                    lazy: page(() => import('./routes/coach-foods'), 'CoachFoodsRoute'),
                   },
                   {
                     path: 'templates',

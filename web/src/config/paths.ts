@@ -22,6 +22,10 @@ export const paths = {
   coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
   athletePhotos: '/athlete/photos',
+  /** The athlete adds a packaged food: barcode (camera, photo or typed) or nutrition label. */
+  athleteFoodNew: '/athlete/foods/new',
+  /** Staff add a team food from a nutrition label. */
+  coachFoodNew: '/coach/foods/new',
   athleteBody: '/athlete/body',
   /** The athlete's own weight chart, rate, adherence and their coach's marks. */
   athleteTrends: '/athlete/trends',

@@ -9,7 +9,8 @@ import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitC
 import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
 import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
 import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
-import { AddMealEntryItems1796210000000 } from './1796210000000-AddMealEntryItems.js';
+import { AddFoodLabels1796210000000 } from './1796210000000-AddFoodLabels.js';
+import { AddMealEntryItems1796220000000 } from './1796220000000-AddMealEntryItems.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -23,5 +24,6 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   OutboxSendingLease1796190000001,
   AddWeightCuts1796200000000,
   AddBodyMeasurements1796190140000,
-  AddMealEntryItems1796210000000,
+  AddFoodLabels1796210000000,
+  AddMealEntryItems1796220000000,
 ];

@@ -2,6 +2,7 @@ import { ROLE_LABELS } from '@driftmark/shared';
 import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
 import {
+  BowlIcon,
   CountdownIcon,
   EnvelopeIcon,
   FlagIcon,
@@ -35,6 +36,11 @@ export function StaffShell() {
           <SidebarNavLink to={paths.coachTemplates} icon={<CountdownIcon />}>
             Countdown templates
           </SidebarNavLink>
+          {me.role === 'assistant' ? null : (
+            <SidebarNavLink to={paths.coachFoodNew} icon={<BowlIcon />}>
+              Team foods
+            </SidebarNavLink>
+          )}
           <SidebarNavLink to={paths.settings} icon={<SlidersIcon />}>
             Settings
           </SidebarNavLink>

@@ -26,13 +26,15 @@ export function per100gLine(food: Pick<FoodView, 'per100g'>): string {
 }
 
 /**
- * The reference table's own energy figure, when the server sent it (it differs from the Atwater
- * figure by more than 5 %): "The food table lists 384 kcal per 100 g; counted here from its macros."
+ * The energy the source prints, when the server sent it (it judged it off the Atwater figure: the
+ * reference table beyond 5 %, a label beyond the label check's tolerance): "The food table lists
+ * 384 kcal per 100 g; counted here from its macros." / "The label prints …".
  */
-export function listedEnergyLine(food: Pick<FoodView, 'per100g'>): string | null {
+export function listedEnergyLine(food: Pick<FoodView, 'per100g' | 'source'>): string | null {
   const listed = food.per100g.listedEnergyKcal;
   if (listed === null) return null;
-  return `The food table lists ${formatNumber(listed, 0)}${NBSP}kcal per 100${NBSP}g; counted here from its protein, carbohydrate and fat (Atwater factors).`;
+  const who = food.source === 'reference' ? 'The food table lists' : 'The label prints';
+  return `${who} ${formatNumber(listed, 0)}${NBSP}kcal per 100${NBSP}g; counted here from its protein, carbohydrate and fat (Atwater factors).`;
 }
 
 interface FoodPickerProps {
@@ -55,12 +57,14 @@ function usesLine(food: FoodView): string | null {
 /** Where a food comes from, in a word beside its name. */
 function sourceWord(food: FoodView): string | null {
   if (food.source === 'team') return 'Team food';
+  if (food.source === 'personal') return 'My food';
   if (food.source === 'reference') return 'IFCT 2017';
   return null;
 }
 
 /**
- * Search the food list (team foods, our everyday foods, the reference table) and add a food.
+ * Search the food list (team foods, the athlete's own foods, our everyday foods, the reference
+ * table) and add a food.
  * With the box empty it lists the athlete's recent and frequent foods, then the team's.
  */
 export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
