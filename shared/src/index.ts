@@ -14,6 +14,7 @@ export * from './schemas/athletes.js';
 export * from './schemas/check-ins.js';
 export * from './schemas/days.js';
 export * from './nutrition.js';
+export * from './meal-items.js';
 export * from './food-label.js';
 export * from './barcode.js';
 export * from './schemas/plans.js';

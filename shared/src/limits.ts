@@ -44,6 +44,10 @@ export const LIMITS = {
   mealSodiumMg: { min: 0, max: 20000 },
   /** Quantity of a food from the food list, g. */
   foodQuantityG: { min: 1, max: 5000 },
+  /** Foods in one meal. */
+  mealItems: { min: 1, max: 20 },
+  /** Portions of a food in one meal item ("2 slices", "1.5 scoops"). */
+  portionCount: { min: 0.25, max: 50 },
   /** Nutrients per 100 g of a team food. */
   per100gMacroG: { min: 0, max: 100 },
   per100gSodiumMg: { min: 0, max: 40000 },

@@ -61,16 +61,32 @@ describe('the daily check-in on a phone', () => {
     await page.getByRole('button', { name: 'Add a meal' }).click();
     const meal = page.getByRole('form', { name: 'Add a meal' });
     await meal.getByLabel('Meal name').fill('Breakfast');
-    await meal.getByRole('radio', { name: 'Food from the list' }).check();
-    await meal.getByLabel('Search foods').fill('rice flakes');
+    // Two foods in one meal: one by its portion (a cup of oats comes with 1 cup), one in grams.
+    await meal.getByLabel('Add a food').fill('oats');
+    await meal
+      .getByRole('list', { name: 'Foods found' })
+      .getByRole('button', { name: /Oats, rolled, dry/ })
+      .first()
+      .click();
+    await meal.getByLabel('Add a food').fill('rice flakes');
     await meal
       .getByRole('list', { name: 'Foods found' })
       .getByRole('button', { name: /Rice flakes/ })
       .first()
       .click();
-    await meal.getByLabel('Quantity (g)').fill('80');
+    await meal.getByLabel('Amount of Rice flakes').fill('80');
+    // The meal's live total is the two foods' sum, by the shared rule the server stores.
+    await meal.getByText('Meal total').waitFor();
+    await screenshot(page, 'meal-form-375');
+    await page.setViewportSize({ width: 1280, height: 860 });
+    await screenshot(page, 'meal-form-1280');
+    await page.setViewportSize({ width: 375, height: 812 });
     await meal.getByRole('button', { name: 'Save meal' }).click();
     await page.getByRole('list', { name: 'Meals logged' }).getByText('Breakfast').waitFor();
+    await page
+      .getByRole('list', { name: 'Foods in Breakfast' })
+      .getByText(/Rice flakes/)
+      .waitFor();
 
     await page.getByRole('button', { name: 'Add a supplement' }).click();
     const supplement = page.getByRole('form', { name: 'Add a supplement' });

@@ -6,6 +6,7 @@ const TABLES = [
   'weigh_ins',
   'fluid_entries',
   'meal_entries',
+  'meal_entry_items',
   'supplement_entries',
   'evening_logs',
   'symptom_reports',
@@ -56,13 +57,17 @@ export const macroMealBody = (overrides: Record<string, unknown> = {}) => ({
   ...overrides,
 });
 
-export const foodMealBody = (foodId: string, quantityG: number, overrides: Record<string, unknown> = {}) => ({
+/** A meal of one food from the list, by grams. */
+export const foodMealBody = (foodId: string, quantityG: number, overrides: Record<string, unknown> = {}) =>
+  foodsMealBody([{ foodId, quantityG }], overrides);
+
+/** A meal of foods from the list: each item with grams or portions. */
+export const foodsMealBody = (items: Record<string, unknown>[], overrides: Record<string, unknown> = {}) => ({
   clientId: newId(),
   time: '13:00',
   name: 'Snack',
-  source: 'food',
-  foodId,
-  quantityG,
+  source: 'foods',
+  items,
   ...overrides,
 });
 

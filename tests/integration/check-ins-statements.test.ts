@@ -3,7 +3,8 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
-import { countRows, fluidBody, foodMealBody, macroMealBody, weighInBody } from './check-ins-helpers.js';
+import { Food } from '../../api/src/entities/food.entity.js';
+import { countRows, fluidBody, foodsMealBody, macroMealBody, weighInBody } from './check-ins-helpers.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
 import { countStatements } from './trend-helpers.js';
 
@@ -17,6 +18,13 @@ const TODAY = '2026-12-01';
  * foods and one spare. Counted on the query runner, so BEGIN and COMMIT count too.
  */
 const MAX_STATEMENTS = 5;
+
+/**
+ * A meal of foods writes its items beside its row, in one transaction: BEGIN, the meal, one insert
+ * of all its items and COMMIT, with one read of the team's foods among them, whatever their number:
+ * 7 at most (a meal of one food took 5 before meals held several foods).
+ */
+const MAX_FOODS_MEAL_STATEMENTS = 7;
 
 let t: TestApp;
 let me: CreatedAthlete;
@@ -89,7 +97,7 @@ describe('a check-in write', () => {
     expect(await countRows(t.dataSource, 'weigh_ins')).toBe(1);
   });
 
-  it('creates a meal (typed macros, a reference food) in at most 5 statements each', async () => {
+  it('creates a meal of typed macros in at most 5 statements, a meal of foods in at most 7', async () => {
     const typed = await measured(() => agent.post(`${base}/meals`).send(macroMealBody()));
     expect(typed.res.status).toBe(201);
     expect(typed.statements.length, typed.statements.join('\n')).toBeLessThanOrEqual(MAX_STATEMENTS);
@@ -97,14 +105,37 @@ describe('a check-in write', () => {
     // FAO Food and Nutrition Paper 77, 2003).
     expect(mealView.strict().parse(typed.res.body.data).energyKcal).toBeCloseTo(535, 9);
 
-    const food = await measured(() => agent.post(`${base}/meals`).send(foodMealBody('ifct:A001', 150)));
-    expect(food.res.status).toBe(201);
-    expect(food.statements.length, food.statements.join('\n')).toBeLessThanOrEqual(MAX_STATEMENTS);
-    expect(mealView.strict().parse(food.res.body.data).food).toMatchObject({
-      id: 'ifct:A001',
-      quantityG: 150,
+    const teamFood = await t.dataSource.getRepository(Food).save({
+      teamId: me.athlete.teamId,
+      name: 'Overnight oats',
+      proteinG: 10,
+      carbohydrateG: 50,
+      fatG: 5,
+      fibreG: null,
+      alcoholG: null,
+      sodiumMg: null,
+      createdById: null,
     });
+    const items = [
+      { foodId: 'ifct:A001', quantityG: 150 },
+      { foodId: 'dm:egg-whole-raw', portions: 2, portionUnit: 'large' },
+      { foodId: teamFood.id, quantityG: 200 },
+    ];
+    const food = await measured(() => agent.post(`${base}/meals`).send(foodsMealBody(items)));
+    expect(food.res.status).toBe(201);
+    expect(food.statements.length, food.statements.join('\n')).toBeLessThanOrEqual(MAX_FOODS_MEAL_STATEMENTS);
+    expect(
+      mealView
+        .strict()
+        .parse(food.res.body.data)
+        .items.map((i) => [i.foodId, i.quantityG]),
+    ).toEqual([
+      ['ifct:A001', 150],
+      ['dm:egg-whole-raw', 100],
+      [teamFood.id, 200],
+    ]);
     expect(await countRows(t.dataSource, 'meal_entries')).toBe(2);
+    expect(await countRows(t.dataSource, 'meal_entry_items')).toBe(3);
   });
 
   it('no longer recomputes the day view: no plan or flag is read by a fluid create', async () => {

@@ -382,7 +382,7 @@ describe('meals', () => {
     expect(res.status).toBe(201);
     expect(mealView.strict().parse(res.body.data)).toMatchObject({
       source: 'macros',
-      food: null,
+      items: [],
       proteinG: 150,
       carbohydrateG: 250,
       fatG: 70,
@@ -409,7 +409,9 @@ describe('meals', () => {
     const res = await agent.post(`${base}/days/${TODAY}/meals`).send(foodMealBody('ifct:A001', 150));
     expect(res.status).toBe(201);
     const meal = res.body.data;
-    expect(meal.food).toEqual({ id: 'ifct:A001', name: 'Amaranth seed, black', quantityG: 150 });
+    expect(meal.items).toMatchObject([
+      { foodId: 'ifct:A001', foodName: 'Amaranth seed, black', quantityG: 150, portion: null },
+    ]);
     expect(meal.energyKcal).toBeCloseTo(349.94 * 1.5, 9);
     expect(meal.proteinG).toBeCloseTo(21.885, 9);
     expect(meal.carbohydrateG).toBeCloseTo(89.97, 9);
@@ -447,7 +449,7 @@ describe('meals', () => {
       sodiumMg: 80,
       energyKcal: 570,
     });
-    expect(meal.food).toEqual({ id: food.id, name: 'Overnight oats', quantityG: 200 });
+    expect(meal.items).toMatchObject([{ foodId: food.id, foodName: 'Overnight oats', quantityG: 200 }]);
     const view = await day();
     const typed = view.meals.find((m: { source: string }) => m.source === 'macros');
     expect(typed.sodiumMg).toBeNull();
@@ -478,12 +480,12 @@ describe('meals', () => {
     for (const foodId of ['ifct:Z999', foreign.id, newId()]) {
       const res = await agent.post(`${base}/days/${TODAY}/meals`).send(foodMealBody(foodId, 100));
       expect(res.status, foodId).toBe(400);
-      expect(res.body.error.fields).toEqual({ foodId: 'Choose a food from the list' });
+      expect(res.body.error.fields).toEqual({ 'items.0.foodId': 'Choose a food from the list' });
     }
     const negative = await agent.post(`${base}/days/${TODAY}/meals`).send(macroMealBody({ proteinG: -1 }));
     expect(negative.body.error.fields).toEqual({ proteinG: 'Protein must be at least 0 g' });
     const heavy = await agent.post(`${base}/days/${TODAY}/meals`).send(foodMealBody('ifct:A001', 6000));
-    expect(Object.keys(heavy.body.error.fields)).toEqual(['quantityG']);
+    expect(Object.keys(heavy.body.error.fields)).toEqual(['items.0.quantityG']);
     expect(await countRows(t.dataSource, 'meal_entries')).toBe(0);
   });
 
@@ -492,23 +494,25 @@ describe('meals', () => {
     const id = created.body.data.id;
     // E053 pineapple: P 0.52, C 9.42, F 0.16 g per 100 g → 4·0.52 + 4·9.42 + 9·0.16 = 41.20 kcal (Atwater).
     expect(created.body.data.energyKcal).toBeCloseTo(41.2, 9);
-    const doubled = await agent.patch(`${base}/meals/${id}`).send({ quantityG: 200 });
+    const doubled = await agent
+      .patch(`${base}/meals/${id}`)
+      .send({ items: [{ foodId: 'ifct:E053', quantityG: 200 }] });
     expect(doubled.status).toBe(200);
     expect(doubled.body.data.energyKcal).toBeCloseTo(82.4, 9);
-    expect(doubled.body.data.food.quantityG).toBe(200);
+    expect(doubled.body.data.items[0].quantityG).toBe(200);
 
     const switched = await agent
       .patch(`${base}/meals/${id}`)
       .send({ source: 'macros', proteinG: 1, carbohydrateG: 20, fatG: 0, name: 'Fruit' });
     expect(switched.body.data).toMatchObject({
       source: 'macros',
-      food: null,
+      items: [],
       name: 'Fruit',
       energyKcal: 84,
     });
-    const incomplete = await agent.patch(`${base}/meals/${id}`).send({ source: 'food' });
+    const incomplete = await agent.patch(`${base}/meals/${id}`).send({ source: 'foods' });
     expect(incomplete.status).toBe(400);
-    expect(Object.keys(incomplete.body.error.fields).sort()).toEqual(['foodId', 'quantityG']);
+    expect(Object.keys(incomplete.body.error.fields)).toEqual(['items']);
 
     expect((await agent.delete(`${base}/meals/${id}`)).status).toBe(204);
     expect((await day()).meals).toEqual([]);

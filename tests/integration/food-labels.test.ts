@@ -222,6 +222,6 @@ describe('label foods: who adds and who sees them', () => {
     expect(ok.body.data.proteinG).toBeCloseTo(6.5, 9);
     const refused = await agent.post(meals).send(foodMealBody(theirs.body.data.food.id, 50));
     expect(refused.status).toBe(400);
-    expect(refused.body.error.fields).toHaveProperty('foodId');
+    expect(refused.body.error.fields).toEqual({ 'items.0.foodId': 'Choose a food from the list' });
   });
 });

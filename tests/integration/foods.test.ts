@@ -3,12 +3,16 @@ import type { User } from '../../api/src/entities/user.entity.js';
 import { createAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createAssistant, createCoach, createOwner } from '../factories/users.js';
-import { countRows } from './check-ins-helpers.js';
+import { countRows, newId } from './check-ins-helpers.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
+
+// Noon UTC on 1 December 2026: "today" for the athletes below.
+const now = new Date('2026-12-01T12:00:00Z');
+const TODAY = '2026-12-01';
 
 let t: TestApp;
 beforeAll(async () => {
-  t = await buildTestApp();
+  t = await buildTestApp({}, { clock: () => now });
 });
 afterAll(() => t.close());
 
@@ -75,7 +79,7 @@ describe('GET /api/foods', () => {
     expect(oil.per100g).toMatchObject({ energyKcal: 900, listedEnergyKcal: null });
   });
 
-  it('lists the team’s own foods first, and never another team’s', async () => {
+  it('lists the team’s own foods, and never another team’s', async () => {
     const coachAgent = await as(coach);
     const created = await coachAgent.post('/api/foods').send(oats);
     expect(created.status).toBe(201);
@@ -85,6 +89,9 @@ describe('GET /api/foods', () => {
       name: 'Overnight oats, team recipe',
       source: 'team',
       barcode: null,
+      preparation: null,
+      portions: [],
+      uses: { mine: 0, team: 0 },
       per100g: {
         energyKcal: 285,
         listedEnergyKcal: null,
@@ -102,10 +109,11 @@ describe('GET /api/foods', () => {
       .send({ ...oats, name: 'Oats, stranger' });
     expect(strangerFood.status).toBe(201);
 
-    const res = await (await as(athlete.user)).get('/api/foods?q=oats');
+    const res = await (await as(athlete.user)).get('/api/foods?q=overnight oats');
     expect(res.body.data[0]).toEqual(created.body.data);
-    expect(names(res.body)).not.toContain('Oats, stranger');
-    expect(res.body.data.slice(1).every((f: FoodRow) => f.source === 'reference')).toBe(true);
+    const all = await (await as(athlete.user)).get('/api/foods?q=oats&limit=50');
+    expect(names(all.body)).toContain('Overnight oats, team recipe');
+    expect(names(all.body)).not.toContain('Oats, stranger');
   });
 
   it('ranks names that start with the first word first and honours limit', async () => {
@@ -124,6 +132,64 @@ describe('GET /api/foods', () => {
       expect(res.status, limit).toBe(400);
       expect(Object.keys(res.body.error.fields)).toEqual(['limit']);
     }
+  });
+
+  it('finds what people type: word starts, plurals, other words; raw or cooked and portions', async () => {
+    const agent = await as(athlete.user);
+    const top = async (q: string, limit = 3) =>
+      (await agent.get('/api/foods').query({ q, limit })).body.data as FoodRow[];
+    expect((await top('oat'))[0]!.id).toBe('dm:oats-rolled-dry');
+    expect((await top('oat', 50)).filter((f) => /goat/i.test(f.name))).toEqual([]);
+    expect((await top('whey'))[0]).toMatchObject({
+      id: 'dm:whey-protein-powder',
+      source: 'everyday',
+      portions: [{ unit: 'scoop', label: 'scoop (30 g)', grams: 30 }],
+    });
+    expect((await top('rice cooked'))[0]).toMatchObject({
+      id: 'dm:rice-white-cooked',
+      preparation: 'cooked',
+    });
+    expect((await top('eggs')).map((f) => f.id)).toContain('dm:egg-whole-raw');
+  });
+
+  it('puts the athlete’s own and the team’s foods first, and lists them when the box is empty', async () => {
+    const mine = await as(athlete.user);
+    const teammate = await createAthlete(t.dataSource, { coach });
+    const theirs = await as(teammate.user);
+    const meal = (foodId: string) => ({
+      clientId: newId(),
+      time: '00:00',
+      name: 'Snack',
+      source: 'foods',
+      items: [{ foodId, quantityG: 100 }],
+    });
+    // The team logs the small apple three times; this athlete the green one once.
+    for (let i = 0; i < 3; i++) {
+      await theirs
+        .post(`/api/athletes/${teammate.athlete.id}/days/${TODAY}/meals`)
+        .send(meal('ifct:E003'))
+        .expect(201);
+    }
+    await mine
+      .post(`/api/athletes/${athlete.athlete.id}/days/${TODAY}/meals`)
+      .send(meal('ifct:E002'))
+      .expect(201);
+    const ids = async (agent: typeof mine, q?: string) =>
+      (
+        (await agent.get('/api/foods').query(q ? { q, limit: 10 } : { limit: 10 })).body.data as FoodRow[]
+      ).map((f) => f.id);
+    // The athlete's own apple first; the team's above the other reference apples.
+    const apples = await ids(mine, 'apple');
+    expect(apples[0]).toBe('ifct:E002');
+    expect(apples.indexOf('ifct:E003')).toBeLessThan(apples.indexOf('ifct:E001'));
+    expect((await ids(mine)).slice(0, 2)).toEqual(['ifct:E002', 'ifct:E003']);
+    const listed = (await mine.get('/api/foods').query({ limit: 2 })).body.data as { uses: unknown }[];
+    expect(listed.map((f) => f.uses)).toEqual([
+      { mine: 1, team: 1 },
+      { mine: 0, team: 3 },
+    ]);
+    // The teammate's own use comes first for them.
+    expect((await ids(theirs)).slice(0, 2)).toEqual(['ifct:E003', 'ifct:E002']);
   });
 
   it('answers 401 when signed out', async () => {

@@ -21,6 +21,7 @@ import { Mark } from '../entities/mark.entity.js';
 import { MarkRead } from '../entities/mark-read.entity.js';
 import { MarkReply } from '../entities/mark-reply.entity.js';
 import { MealEntry } from '../entities/meal-entry.entity.js';
+import { MealEntryItem } from '../entities/meal-entry-item.entity.js';
 import { OutboxMessage } from '../entities/outbox-message.entity.js';
 import { PasswordResetToken } from '../entities/password-reset-token.entity.js';
 import { PlanVersion } from '../entities/plan-version.entity.js';
@@ -52,6 +53,7 @@ export const ENTITIES = [
   WeighIn,
   FluidEntry,
   MealEntry,
+  MealEntryItem,
   SupplementEntry,
   EveningLog,
   SymptomReport,

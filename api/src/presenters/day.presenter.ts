@@ -1,12 +1,19 @@
-import { inReaderUnits, RATING_KEYS, type DaySummary, type DayView, type Reader } from '@driftmark/shared';
+import {
+  inReaderUnits,
+  RATING_KEYS,
+  sumNutrients,
+  type DaySummary,
+  type DayView,
+  type Reader,
+} from '@driftmark/shared';
 import type { AthleteFlag } from '../entities/athlete-flag.entity.js';
 import type { EveningLog } from '../entities/evening-log.entity.js';
 import type { FluidEntry } from '../entities/fluid-entry.entity.js';
 import type { MealEntry } from '../entities/meal-entry.entity.js';
+import type { MealEntryItem } from '../entities/meal-entry-item.entity.js';
 import type { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import type { SymptomReport } from '../entities/symptom-report.entity.js';
 import type { WeighIn } from '../entities/weigh-in.entity.js';
-import { sumNutrients } from '../lib/meal-nutrients.js';
 
 type Of<K extends keyof DayView> = DayView[K];
 
@@ -40,10 +47,7 @@ export function presentMeal(m: MealEntry): Of<'meals'>[number] {
     time: m.localTime,
     name: m.name,
     source: m.source,
-    food:
-      m.source === 'food' && m.foodId && m.foodName && m.quantityG !== null
-        ? { id: m.foodId, name: m.foodName, quantityG: m.quantityG }
-        : null,
+    items: (m.items ?? []).map(presentMealItem),
     proteinG: m.proteinG,
     carbohydrateG: m.carbohydrateG,
     fatG: m.fatG,
@@ -51,6 +55,25 @@ export function presentMeal(m: MealEntry): Of<'meals'>[number] {
     alcoholG: m.alcoholG,
     sodiumMg: m.sodiumMg,
     energyKcal: m.energyKcal,
+  };
+}
+
+export function presentMealItem(i: MealEntryItem): Of<'meals'>[number]['items'][number] {
+  return {
+    foodId: i.foodId,
+    foodName: i.foodName,
+    quantityG: i.quantityG,
+    portion:
+      i.portionCount !== null && i.portionUnit !== null && i.portionLabel !== null && i.portionG !== null
+        ? { count: i.portionCount, unit: i.portionUnit, label: i.portionLabel, grams: i.portionG }
+        : null,
+    proteinG: i.proteinG,
+    carbohydrateG: i.carbohydrateG,
+    fatG: i.fatG,
+    fibreG: i.fibreG,
+    alcoholG: i.alcoholG,
+    sodiumMg: i.sodiumMg,
+    energyKcal: i.energyKcal,
   };
 }
 

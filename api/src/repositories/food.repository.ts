@@ -1,4 +1,4 @@
-import type { EntityManager } from 'typeorm';
+import { type EntityManager, type SelectQueryBuilder } from 'typeorm';
 import { Food } from '../entities/food.entity.js';
 
 export type NewFood = Pick<
@@ -15,9 +15,6 @@ export type NewFood = Pick<
 > &
   Partial<Pick<Food, 'athleteId' | 'barcode' | 'labelEnergyKcal'>>;
 
-/** `%`, `_` and `\` taken literally inside an ILIKE pattern. */
-const likeEscape = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
-
 export class FoodRepository {
   constructor(private readonly manager: EntityManager) {}
 
@@ -31,15 +28,23 @@ export class FoodRepository {
   }
 
   /**
-   * A food a meal of this athlete may use: a team food of the team, or the athlete's own personal
-   * food (never another athlete's).
+   * The foods of a team an athlete's meal and search may use: the team's foods, plus the athlete's
+   * own personal foods when `athleteId` is given (never another athlete's); the team's foods only
+   * when it is null (staff). The one place this rule lives.
    */
-  findForAthleteMeal(id: string, teamId: string, athleteId: string): Promise<Food | null> {
-    return this.manager
-      .createQueryBuilder(Food, 'f')
-      .where('f.id = :id AND f.team_id = :teamId', { id, teamId })
-      .andWhere('(f.athlete_id IS NULL OR f.athlete_id = :athleteId)', { athleteId })
-      .getOne();
+  private usableBy(teamId: string, athleteId: string | null): SelectQueryBuilder<Food> {
+    const qb = this.manager.createQueryBuilder(Food, 'f').where('f.team_id = :teamId', { teamId });
+    if (athleteId) qb.andWhere('(f.athlete_id IS NULL OR f.athlete_id = :athleteId)', { athleteId });
+    else qb.andWhere('f.athlete_id IS NULL');
+    return qb;
+  }
+
+  /** Of `ids`, the foods this athlete's meal may use (`usableBy`), in one statement. */
+  findManyForAthleteMeal(ids: readonly string[], teamId: string, athleteId: string): Promise<Food[]> {
+    if (ids.length === 0) return Promise.resolve([]);
+    return this.usableBy(teamId, athleteId)
+      .andWhere('f.id IN (:...ids)', { ids: [...ids] })
+      .getMany();
   }
 
   /** The athlete's personal food made from this barcode, if any (index on athlete_id, barcode). */
@@ -48,21 +53,14 @@ export class FoodRepository {
   }
 
   /**
-   * Team foods, plus the personal foods of `athleteId` when given, whose name holds every word
-   * (any order, any case), at most `limit`, by name.
+   * The foods search matches in memory (by the one rule, `lib/food-search.ts`): the team's, plus the
+   * athlete's own personal foods when `athleteId` is given; at most 5,000.
    */
-  search(
-    teamId: string,
-    words: readonly string[],
-    limit: number,
-    athleteId: string | null = null,
-  ): Promise<Food[]> {
-    const qb = this.manager.createQueryBuilder(Food, 'f').where('f.team_id = :teamId', { teamId });
-    if (athleteId) qb.andWhere('(f.athlete_id IS NULL OR f.athlete_id = :athleteId)', { athleteId });
-    else qb.andWhere('f.athlete_id IS NULL');
-    words.forEach((w, i) => {
-      qb.andWhere(`f.name ILIKE :w${i} ESCAPE '\\'`, { [`w${i}`]: `%${likeEscape(w)}%` });
-    });
-    return qb.orderBy('lower(f.name)', 'ASC').addOrderBy('f.id', 'ASC').limit(limit).getMany();
+  listForTeam(teamId: string, athleteId: string | null): Promise<Food[]> {
+    return this.usableBy(teamId, athleteId)
+      .orderBy('f.name', 'ASC')
+      .addOrderBy('f.id', 'ASC')
+      .limit(5000)
+      .getMany();
   }
 }

@@ -101,9 +101,11 @@ export class CheckInService {
   private write<E extends ClientDayEntry, I extends { clientId: string; time: string }, T>(
     kind: EntryKind<E, I>,
     work: (manager: EntityManager) => Promise<T>,
+    input?: I,
   ): Promise<T> {
     const { dataSource } = this.deps;
-    return kind.afterSave ? dataSource.transaction(work) : work(dataSource.manager);
+    const needed = kind.afterSave && (input === undefined || (kind.transactional?.(input) ?? true));
+    return needed ? dataSource.transaction(work) : work(dataSource.manager);
   }
 
   /**
@@ -119,39 +121,44 @@ export class CheckInService {
     input: I,
   ): Promise<EntryResult<E>> {
     const now = this.deps.clock();
-    const { entry, created } = await this.write(kind, async (manager) => {
-      const repo = new DayEntryRepository(manager, kind.entity);
-      const replay = async () => {
-        const first = await repo.findByClientId(athlete.id, input.clientId);
-        return first ? { entry: first, created: false } : null;
-      };
-      const problem = futureEntryProblem({ date, time: input.time }, athlete.user.timeZone, now);
-      if (problem) {
-        const first = await replay();
-        if (first) return first;
-        throw validationFailed(problem);
-      }
-      const ctx: EntryContext = { manager, athlete, previous: null };
-      const inserted = await repo.insertWithinDayLimit(
-        {
-          ...(await kind.columns(input, ctx)),
-          athleteId: athlete.id,
-          localDate: date,
-          localTime: input.time,
-          loggedAt: localInstant(date, input.time, athlete.user.timeZone),
-          clientId: input.clientId,
-        } as QueryDeepPartialEntity<E>,
-        LIMITS.entriesPerDay,
-      );
-      if (!inserted) {
-        // Either the client id was taken (return its entry) or the day is full.
-        const first = await replay();
-        if (first) return first;
-        throw validationFailed({ date: `At most ${LIMITS.entriesPerDay} ${kind.plural} a day` });
-      }
-      await kind.afterSave?.(inserted, ctx);
-      return { entry: inserted, created: true };
-    });
+    const { entry, created } = await this.write(
+      kind,
+      async (manager) => {
+        const repo = new DayEntryRepository(manager, kind.entity);
+        const replay = async () => {
+          const first = await repo.findByClientId(athlete.id, input.clientId);
+          if (first) await kind.load?.([first], manager);
+          return first ? { entry: first, created: false } : null;
+        };
+        const problem = futureEntryProblem({ date, time: input.time }, athlete.user.timeZone, now);
+        if (problem) {
+          const first = await replay();
+          if (first) return first;
+          throw validationFailed(problem);
+        }
+        const ctx: EntryContext = { manager, athlete, previous: null };
+        const inserted = await repo.insertWithinDayLimit(
+          {
+            ...(await kind.columns(input, ctx)),
+            athleteId: athlete.id,
+            localDate: date,
+            localTime: input.time,
+            loggedAt: localInstant(date, input.time, athlete.user.timeZone),
+            clientId: input.clientId,
+          } as QueryDeepPartialEntity<E>,
+          LIMITS.entriesPerDay,
+        );
+        if (!inserted) {
+          // Either the client id was taken (return its entry) or the day is full.
+          const first = await replay();
+          if (first) return first;
+          throw validationFailed({ date: `At most ${LIMITS.entriesPerDay} ${kind.plural} a day` });
+        }
+        await kind.afterSave?.(inserted, ctx);
+        return { entry: inserted, created: true };
+      },
+      input,
+    );
     const meta = kind.meta?.(entry);
     return { entry, created, ...(meta ? { meta } : {}) };
   }
@@ -173,6 +180,7 @@ export class CheckInService {
       const repo = new DayEntryRepository(manager, kind.entity);
       const stored = await repo.findForAthlete(entryId, athlete.id);
       if (!stored) throw notFound();
+      await kind.load?.([stored], manager);
       let base = kind.asInput(stored);
       if (kind.path === 'meals' && 'source' in body && body.source !== base.source) {
         base = { time: base.time, name: base.name };

@@ -13,6 +13,7 @@ const ARCHIVE_TABLES = {
     'weigh_ins',
     'fluid_entries',
     'meal_entries',
+    'meal_entry_items',
     'supplement_entries',
     'evening_logs',
     'symptom_reports',

@@ -9,6 +9,7 @@ import {
 import type { DataSource, EntityManager } from 'typeorm';
 import { FluidEntry } from '../entities/fluid-entry.entity.js';
 import { MealEntry } from '../entities/meal-entry.entity.js';
+import { mealKind } from './day-entry-kinds.js';
 import type { PlanVersion } from '../entities/plan-version.entity.js';
 import { SupplementEntry } from '../entities/supplement-entry.entity.js';
 import { SymptomReport } from '../entities/symptom-report.entity.js';
@@ -129,6 +130,8 @@ export async function loadDayView(
     dayPhotoSource(manager).forDay(athlete.id, date),
     loadDayPlan(manager, athlete, date, reader),
   ]);
+  // A meal of foods lists its items: one more statement for all of the day's.
+  await mealKind.load?.(meals, manager);
   const judged = dayDrift({
     plan: plan.targets,
     actuals: dayActuals(mealTotals(meals), fluids, evening),

@@ -2,76 +2,114 @@ import {
   labelRequestPer100g,
   normaliseBarcode,
   type CreateFoodRequest,
+  type FoodPortion,
   type FoodView,
   type LabelFoodRequest,
   type LabelFoodResult,
   type LabelNutrients,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
+import { findEverydayFood, listEverydayFoods } from '../adapters/everyday-foods.js';
 import { FoodProductsUnavailable, lookupProduct } from '../adapters/food-products.js';
 import { findReferenceFood, listReferenceFoods } from '../adapters/reference-foods.js';
 import type { Config } from '../config.js';
 import type { Athlete } from '../entities/athlete.entity.js';
 import type { Food } from '../entities/food.entity.js';
 import { AppError } from '../errors.js';
-import { compareByRelevance, nameMatches, searchWords } from '../lib/food-search.js';
+import { indexFood, rankFoods, type IndexedFood, type SearchableFood } from '../lib/food-search.js';
 import type { Per100g } from '../lib/meal-nutrients.js';
 import type { Actor } from '../policies/actor.js';
 import {
   labelCheckOf,
+  preparationOf,
+  presentEverydayFood,
   presentReferenceFood,
   presentTeamFood,
   teamFoodEnergyKcal,
 } from '../presenters/food.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { FoodRepository } from '../repositories/food.repository.js';
+import { MealItemRepository } from '../repositories/meal-item.repository.js';
 
-/** A food resolved for a meal entry: what the entry keeps of it. */
+/** A food resolved for a meal item: what the item keeps of it. */
 export interface ResolvedFood {
   id: string;
   name: string;
   per100g: Per100g;
+  portions: readonly FoodPortion[];
 }
 
 const REFERENCE_PREFIX = 'ifct:';
+const EVERYDAY_PREFIX = 'dm:';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
  * A food an athlete's meal may use by id (`<uuid>` for a team food or the athlete's own personal
- * food, `ifct:<code>` for a reference food), or null when there is no such food for them.
+ * food, `dm:<slug>` for an everyday food, `ifct:<code>` for a reference food), or null when there is
+ * no such food for them.
  */
 export async function resolveFood(
   manager: EntityManager,
   athlete: Pick<Athlete, 'id' | 'teamId'>,
   foodId: string,
 ): Promise<ResolvedFood | null> {
-  if (foodId.toLowerCase().startsWith(REFERENCE_PREFIX)) {
-    const ref = await findReferenceFood(foodId.slice(REFERENCE_PREFIX.length));
-    return ref ? { id: ref.id, name: ref.name, per100g: ref.per100g } : null;
-  }
-  if (!UUID.test(foodId)) return null;
-  const food = await new FoodRepository(manager).findForAthleteMeal(
-    foodId.toLowerCase(),
-    athlete.teamId,
-    athlete.id,
-  );
-  if (!food) return null;
-  return {
-    id: food.id,
-    name: food.name,
-    per100g: {
-      energyKcal: teamFoodEnergyKcal(food),
-      proteinG: food.proteinG,
-      carbohydrateG: food.carbohydrateG,
-      fatG: food.fatG,
-      fibreG: food.fibreG,
-      alcoholG: food.alcoholG,
-      sodiumMg: food.sodiumMg,
-    },
-  };
+  return (await resolveFoods(manager, athlete, [foodId])).get(foodId.toLowerCase()) ?? null;
 }
 
-type FoodDeps = { dataSource: DataSource; config: Pick<Config, 'foodProductsUrl'> };
+/**
+ * Foods an athlete's meal may use by id, keyed by the lower-cased id: team foods and the athlete's
+ * own personal foods (`FoodRepository.findManyForAthleteMeal`), our everyday foods, the reference
+ * table; ids with no such food for them are left out. Stored foods are read in one statement,
+ * whatever their number.
+ */
+export async function resolveFoods(
+  manager: EntityManager,
+  athlete: Pick<Athlete, 'id' | 'teamId'>,
+  foodIds: readonly string[],
+): Promise<Map<string, ResolvedFood>> {
+  const found = new Map<string, ResolvedFood>();
+  const teamIds: string[] = [];
+  for (const raw of new Set(foodIds.map((id) => id.toLowerCase()))) {
+    if (raw.startsWith(REFERENCE_PREFIX)) {
+      const ref = await findReferenceFood(raw.slice(REFERENCE_PREFIX.length));
+      if (ref) found.set(raw, { id: ref.id, name: ref.name, per100g: ref.per100g, portions: [] });
+    } else if (raw.startsWith(EVERYDAY_PREFIX)) {
+      const own = findEverydayFood(raw);
+      if (own) found.set(raw, { id: own.id, name: own.name, per100g: own.per100g, portions: own.portions });
+    } else if (UUID.test(raw)) {
+      teamIds.push(raw);
+    }
+  }
+  if (teamIds.length > 0) {
+    for (const food of await new FoodRepository(manager).findManyForAthleteMeal(
+      teamIds,
+      athlete.teamId,
+      athlete.id,
+    )) {
+      found.set(food.id.toLowerCase(), {
+        id: food.id,
+        name: food.name,
+        per100g: {
+          energyKcal: teamFoodEnergyKcal(food),
+          proteinG: food.proteinG,
+          carbohydrateG: food.carbohydrateG,
+          fatG: food.fatG,
+          fibreG: food.fibreG,
+          alcoholG: food.alcoholG,
+          sodiumMg: food.sodiumMg,
+        },
+        portions: [],
+      });
+    }
+  }
+  return found;
+}
+
+type FoodDeps = {
+  dataSource: DataSource;
+  clock: () => Date;
+  config: Pick<Config, 'foodProductsUrl'>;
+};
 
 /** Who a food made from a label belongs to: the team, or one athlete of it. */
 export type FoodOwner = { teamId: string; athleteId: string | null };
@@ -86,30 +124,77 @@ const barcodeNotFound = (listedWithoutFigures: boolean): AppError =>
     { barcode: listedWithoutFigures ? 'Listed without nutrition figures' : 'Not found' },
   );
 
+/** How far back use counts for ranking: 180 days (common practice, no source). */
+const USAGE_WINDOW_DAYS = 180;
+
+type Candidate = SearchableFood & { view: () => FoodView };
+
+/** Our everyday foods and the reference table, indexed for search once. */
+let fixedFoods: Promise<IndexedFood<Candidate>[]> | null = null;
+function indexedFixedFoods(): Promise<IndexedFood<Candidate>[]> {
+  fixedFoods ??= listReferenceFoods()
+    .then((reference) => [
+      ...listEverydayFoods().map((f) =>
+        indexFood<Candidate>({
+          id: f.id,
+          name: f.name,
+          terms: f.terms,
+          preparation: f.preparation,
+          source: 'everyday',
+          view: () => presentEverydayFood(f),
+        }),
+      ),
+      ...reference.map((f) =>
+        indexFood<Candidate>({
+          id: f.id,
+          name: f.name,
+          preparation: preparationOf(f.name),
+          source: 'reference',
+          view: () => presentReferenceFood(f),
+        }),
+      ),
+    ])
+    .catch((err: unknown) => {
+      fixedFoods = null;
+      throw err;
+    });
+  return fixedFoods;
+}
+
 export class FoodService {
   constructor(private readonly deps: FoodDeps) {}
 
   /**
-   * The team's foods, then reference foods, whose names hold every word of `q` (any order, any
-   * case); at most `limit` in all. An empty query lists from the start of each.
+   * The foods answering `q` (the team's, the signed-in athlete's own personal foods, our everyday
+   * foods, the reference table), best first,
+   * ranked by how well they match and by how often this athlete and the team log them; at most
+   * `limit`. An empty query lists the recent and frequent foods first (`lib/food-search.ts`).
    */
   async search(actor: Actor, q: string | undefined, limit: number): Promise<FoodView[]> {
-    const words = searchWords(q);
     const manager = this.deps.dataSource.manager;
+    const now = this.deps.clock();
+    const since = new Date(now.getTime() - USAGE_WINDOW_DAYS * 86_400_000);
     // An athlete also finds their own personal foods; staff search the team's list.
     const ownAthlete =
       actor.role === 'athlete' ? await new AthleteRepository(manager).findByUserId(actor.userId) : null;
-    const team = await new FoodRepository(manager).search(actor.teamId, words, limit, ownAthlete?.id ?? null);
-    team.sort(compareByRelevance(words));
-    const room = limit - team.length;
-    const reference =
-      room > 0
-        ? (await listReferenceFoods())
-            .filter((f) => nameMatches(f.name, words))
-            .sort(compareByRelevance(words))
-            .slice(0, room)
-        : [];
-    return [...team.map(presentTeamFood), ...reference.map(presentReferenceFood)];
+    const [teamFoods, usage, fixed] = await Promise.all([
+      new FoodRepository(manager).listForTeam(actor.teamId, ownAthlete?.id ?? null),
+      new MealItemRepository(manager).usage(actor.teamId, actor.userId, since),
+      indexedFixedFoods(),
+    ]);
+    const team = teamFoods.map((f) =>
+      indexFood<Candidate>({
+        id: f.id.toLowerCase(),
+        name: f.name,
+        preparation: preparationOf(f.name),
+        source: f.athleteId ? 'personal' : 'team',
+        view: () => presentTeamFood(f),
+      }),
+    );
+    return rankFoods(q, [...team, ...fixed], usage, limit, now.getTime()).map((f) => {
+      const used = usage.get(f.id.toLowerCase());
+      return { ...f.view(), uses: { mine: used?.mine ?? 0, team: used?.team ?? 0 } };
+    });
   }
 
   async create(actor: Actor, input: CreateFoodRequest): Promise<FoodView> {

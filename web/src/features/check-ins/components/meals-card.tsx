@@ -1,9 +1,17 @@
-import { mealEntryRequest, type DayView, type FoodView, type MealEntryRequest } from '@driftmark/shared';
-import { useMemo, useRef, useState } from 'react';
-import { useForm, useWatch } from 'react-hook-form';
+import {
+  mealEntryRequest,
+  per100gFromEaten,
+  type DayView,
+  type FoodView,
+  type MealEntryRequest,
+  type MealItemView,
+} from '@driftmark/shared';
+import { useId, useMemo, useRef, useState } from 'react';
+import { useFieldArray, useForm, useFormContext, useWatch } from 'react-hook-form';
 import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
-import { FieldErrorText, useFieldError } from '@/components/ui/field';
+import { controlClasses, FieldErrorText, useFieldError } from '@/components/ui/field';
+import { cn } from '@/lib/cn';
 import { Form, SubmitButton } from '@/components/ui/form';
 import { BowlIcon } from '@/components/ui/icons';
 import { SegmentedField } from '@/components/ui/segmented-field';
@@ -14,8 +22,14 @@ import { useCreateMeal } from '../api/create-meal';
 import { useDeleteMeal } from '../api/delete-meal';
 import { useUpdateMeal } from '../api/update-meal';
 import { createClientIdKeeper } from '../utils/client-id';
-import { foodPortionPreview, macroEnergyPreview } from '../utils/energy';
-import { mealFormValues, toMealRequest, withoutClientId, type MealFormValues } from '../utils/form-values';
+import { macroEnergyPreview, mealItemsPreview } from '../utils/energy';
+import {
+  itemAmountField,
+  mealFormValues,
+  toMealRequest,
+  withoutClientId,
+  type MealFormValues,
+} from '../utils/form-values';
 import { createRequestResolver } from '@/lib/request-resolver';
 import { CheckInCard, HeaderFigure, NotLogged } from './check-in-card';
 import type { DayCardProps } from './day-card-props';
@@ -81,10 +95,17 @@ export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
                 <span className="font-semibold">{m.name}</span>
                 <span className="font-semibold tabular-nums">{formatEnergy(m.energyKcal)}</span>
               </p>
-              {m.food ? (
-                <p className="text-ink-muted">
-                  {m.food.name}, <span className="tabular-nums">{grams(m.food.quantityG)}</span>
-                </p>
+              {m.items.length > 0 ? (
+                <ul aria-label={`Foods in ${m.name}`} className="text-ink-muted">
+                  {m.items.map((item, i) => (
+                    <li key={i} className="flex flex-wrap justify-between gap-x-3">
+                      <span>
+                        {item.foodName}, <span className="tabular-nums">{amountText(item)}</span>
+                      </span>
+                      <span className="tabular-nums">{formatEnergy(item.energyKcal)}</span>
+                    </li>
+                  ))}
+                </ul>
               ) : null}
               <p className="text-xs text-ink-muted tabular-nums">
                 P {grams(m.proteinG)} · C {grams(m.carbohydrateG)} · F {grams(m.fatG)}
@@ -119,25 +140,53 @@ export function MealsCard({ athleteId, day, canEdit, now }: DayCardProps) {
   );
 }
 
-/** A saved food meal carries no per-100 g values: derive them from what was eaten, for the preview. */
-function foodFromEntry(entry: DayView['meals'][number]): FoodView | null {
-  if (!entry.food || entry.food.quantityG <= 0) return null;
-  const f = 100 / entry.food.quantityG;
-  return {
-    id: entry.food.id,
-    name: entry.food.name,
-    source: entry.food.id.startsWith('ifct:') ? 'reference' : 'team',
-    barcode: null,
-    per100g: {
-      energyKcal: entry.energyKcal * f,
-      listedEnergyKcal: null,
-      proteinG: entry.proteinG * f,
-      carbohydrateG: entry.carbohydrateG * f,
-      fatG: entry.fatG * f,
-      fibreG: entry.fibreG === null ? null : entry.fibreG * f,
-      sodiumMg: entry.sodiumMg === null ? null : entry.sodiumMg * f,
-    },
-  };
+/** "2 × large egg (100 g)" or "150 g". */
+function amountText(item: MealItemView): string {
+  if (!item.portion) return grams(item.quantityG);
+  return `${formatNumber(item.portion.count, 2)} × ${item.portion.label} (${grams(item.quantityG)})`;
+}
+
+/**
+ * A saved meal's foods carry no per-100 g values: derive them from what was eaten (the shared
+ * rule's inverse), with the portion it was eaten in, for the live figures of an edit.
+ */
+function foodsFromEntry(entry: DayView['meals'][number]): Record<string, FoodView> {
+  const foods: Record<string, FoodView> = {};
+  for (const item of entry.items) {
+    const known = foods[item.foodId];
+    const portions = item.portion
+      ? [{ unit: item.portion.unit, label: item.portion.label, grams: item.portion.grams }]
+      : [];
+    if (known) {
+      known.portions.push(...portions.filter((p) => !known.portions.some((k) => k.unit === p.unit)));
+      continue;
+    }
+    const per100g = per100gFromEaten(item, item.quantityG);
+    foods[item.foodId] = {
+      id: item.foodId,
+      name: item.foodName,
+      source: item.foodId.startsWith('ifct:')
+        ? 'reference'
+        : item.foodId.startsWith('dm:')
+          ? 'everyday'
+          : // a stored food: the team's or the athlete's own (the item does not say which)
+            'team',
+      barcode: null,
+      preparation: null,
+      portions,
+      uses: { mine: 0, team: 0 },
+      per100g: {
+        energyKcal: per100g.energyKcal,
+        listedEnergyKcal: null,
+        proteinG: per100g.proteinG,
+        carbohydrateG: per100g.carbohydrateG,
+        fatG: per100g.fatG,
+        fibreG: per100g.fibreG,
+        sodiumMg: per100g.sodiumMg ?? null,
+      },
+    };
+  }
+  return foods;
 }
 
 function MealForm({
@@ -162,25 +211,29 @@ function MealForm({
     defaultValues: mealFormValues(entry, now),
   });
   useFollowClock(form, 'time', now, entry === null);
-  const [food, setFood] = useState<FoodView | null>(() => (entry ? foodFromEntry(entry) : null));
+  const [foods, setFoods] = useState<Record<string, FoodView>>(() => (entry ? foodsFromEntry(entry) : {}));
   const keeper = useRef(createClientIdKeeper()).current;
   const create = useCreateMeal(athleteId, date);
   const update = useUpdateMeal(athleteId, date);
   const values = useWatch({ control: form.control });
   const source = values.source ?? 'macros';
 
+  const typed = (values.items ?? []).map((item) => ({
+    food: foods[item?.foodId ?? ''] ?? NO_FOOD,
+    amount: item?.amount ?? '',
+    unit: item?.unit ?? 'g',
+  }));
+  const preview = mealItemsPreview(typed);
   const energy =
-    source === 'food'
-      ? food
-        ? (foodPortionPreview(food, values.quantityG ?? '')?.energyKcal ?? null)
-        : null
+    source === 'foods'
+      ? (preview.total?.energyKcal ?? null)
       : macroEnergyPreview({
           proteinG: values.proteinG ?? '',
           carbohydrateG: values.carbohydrateG ?? '',
           fatG: values.fatG ?? '',
           alcoholG: values.alcoholG ?? '',
         });
-  const portion = source === 'food' && food ? foodPortionPreview(food, values.quantityG ?? '') : null;
+  const portion = source === 'foods' ? preview.total : null;
 
   return (
     <Form
@@ -219,18 +272,15 @@ function MealForm({
         name="source"
         legend="Enter as"
         options={[
+          { value: 'foods', label: 'Foods from the list' },
           { value: 'macros', label: 'Grams of macros' },
-          { value: 'food', label: 'Food from the list' },
         ]}
       />
-      {source === 'food' ? (
-        <FoodFields
-          food={food}
-          onChoose={(f) => {
-            setFood(f);
-            form.setValue('foodId', f?.id ?? '', { shouldDirty: true });
-            if (f) form.clearErrors('foodId');
-          }}
+      {source === 'foods' ? (
+        <FoodsFields
+          foods={foods}
+          figures={preview.items}
+          onAdd={(f) => setFoods((known) => ({ ...known, [f.id]: f }))}
         />
       ) : (
         <>
@@ -295,7 +345,7 @@ function MealForm({
         aria-live="polite"
         className="flex items-baseline justify-between rounded-md bg-paper px-3 py-2 text-sm"
       >
-        <span className="text-ink-muted">Energy</span>
+        <span className="text-ink-muted">{source === 'foods' ? 'Meal total' : 'Energy'}</span>
         <span className="text-lg font-bold text-ink tabular-nums">
           {energy === null ? '—' : formatEnergy(energy)}
         </span>
@@ -321,35 +371,150 @@ function MealForm({
   );
 }
 
-function FoodFields({
-  food,
-  onChoose,
+/** Stands in for a food whose figures the form does not hold (never shown). */
+const NO_FOOD: Pick<FoodView, 'per100g' | 'portions'> = {
+  portions: [],
+  per100g: {
+    energyKcal: 0,
+    listedEnergyKcal: null,
+    proteinG: 0,
+    carbohydrateG: 0,
+    fatG: 0,
+    fibreG: null,
+    sodiumMg: null,
+  },
+};
+
+const MAX_ITEMS = 20;
+
+function FoodsFields({
+  foods,
+  figures,
+  onAdd,
 }: {
-  food: FoodView | null;
-  onChoose: (food: FoodView | null) => void;
+  foods: Record<string, FoodView>;
+  figures: ReturnType<typeof mealItemsPreview>['items'];
+  onAdd: (food: FoodView) => void;
 }) {
-  const error = useFieldError('foodId');
-  const errorId = 'meal-food-error';
+  const { control, clearErrors } = useFormContext<MealFormValues>();
+  const { fields, append, remove } = useFieldArray({ control, name: 'items' });
+  const listError = useFieldError('items');
+  const errorId = 'meal-items-error';
   return (
-    <div className="space-y-4">
-      <div>
-        <FoodPicker chosen={food} onChoose={onChoose} errorId={errorId} invalid={Boolean(error)} />
-        <FieldErrorText id={errorId} error={error} />
-        <p className="mt-2 text-sm">
-          <Link to={paths.athleteFoodNew}>Not in the list? Scan a barcode or copy a label</Link>
-        </p>
-      </div>
-      {food ? (
-        <TextField
-          name="quantityG"
-          label="Quantity (g)"
-          suffix="g"
-          inputMode="decimal"
-          autoComplete="off"
-          required
-          inputClassName="tabular-nums"
+    <div className="space-y-3">
+      {fields.length > 0 ? (
+        <ol aria-label="Foods in this meal" className="space-y-2">
+          {fields.map((field, i) => (
+            <MealItemRow
+              key={field.id}
+              index={i}
+              food={foods[field.foodId] ?? null}
+              figures={figures[i] ?? null}
+              onRemove={() => remove(i)}
+            />
+          ))}
+        </ol>
+      ) : (
+        <p className="text-sm text-ink-muted">No foods yet: search below and add each food of the meal.</p>
+      )}
+      {listError?.message ? <FieldErrorText id={errorId} error={listError} /> : null}
+      {fields.length < MAX_ITEMS ? (
+        <FoodPicker
+          invalid={Boolean(listError?.message)}
+          errorId={errorId}
+          onChoose={(food) => {
+            onAdd(food);
+            const portion = food.portions[0];
+            append(
+              { foodId: food.id, amount: portion ? '1' : '', unit: portion?.unit ?? 'g' },
+              { shouldFocus: true, focusName: `items.${fields.length}.amount` },
+            );
+            clearErrors('items');
+          }}
         />
-      ) : null}
+      ) : (
+        <p className="text-sm text-ink-muted">A meal holds at most {MAX_ITEMS} foods.</p>
+      )}
+      <p className="text-sm">
+        <Link to={paths.athleteFoodNew}>Not in the list? Scan a barcode or copy a label</Link>
+      </p>
     </div>
+  );
+}
+
+function MealItemRow({
+  index,
+  food,
+  figures,
+  onRemove,
+}: {
+  index: number;
+  food: FoodView | null;
+  figures: ReturnType<typeof mealItemsPreview>['items'][number];
+  onRemove: () => void;
+}) {
+  const { register, control } = useFormContext<MealFormValues>();
+  const unit = useWatch({ control, name: `items.${index}.unit` }) ?? 'g';
+  const amountId = useId();
+  const errorId = useId();
+  const amountError = useFieldError(itemAmountField(index, unit));
+  const portionError = useFieldError(`items.${index}.portionUnit`);
+  const foodError = useFieldError(`items.${index}.foodId`);
+  const error = amountError ?? portionError ?? foodError;
+  const name = food?.name ?? 'Food';
+  return (
+    <li className="rounded-md border border-line-strong bg-surface px-3 py-2">
+      <div className="flex flex-wrap items-baseline justify-between gap-x-2">
+        <p className="font-semibold text-ink">
+          {name}
+          {food?.preparation ? (
+            <span className="ml-2 text-xs font-normal text-ink-muted">{food.preparation}</span>
+          ) : null}
+        </p>
+        <Button variant="ghost" className="-mr-3" onClick={onRemove} aria-label={`Remove ${name}`}>
+          Remove
+        </Button>
+      </div>
+      <div className="mt-1 grid grid-cols-[minmax(0,6rem)_minmax(0,1fr)] gap-2">
+        <div>
+          <label htmlFor={amountId} className="sr-only">
+            Amount of {name}
+          </label>
+          <input
+            id={amountId}
+            {...register(`items.${index}.amount`)}
+            inputMode="decimal"
+            autoComplete="off"
+            aria-invalid={error ? true : undefined}
+            aria-describedby={error ? errorId : undefined}
+            className={cn(controlClasses, 'tabular-nums', error ? 'border-off-plan' : 'border-line-strong')}
+          />
+        </div>
+        <div>
+          <label htmlFor={`${amountId}-unit`} className="sr-only">
+            Unit for {name}
+          </label>
+          <select
+            id={`${amountId}-unit`}
+            {...register(`items.${index}.unit`)}
+            className={cn(controlClasses, 'border-line-strong')}
+          >
+            <option value="g">grams</option>
+            {(food?.portions ?? []).map((p) => (
+              <option key={p.unit} value={p.unit}>
+                {p.label} ({formatNumber(p.grams, 1)}
+                {NBSP}g)
+              </option>
+            ))}
+          </select>
+        </div>
+      </div>
+      <FieldErrorText id={errorId} error={error} />
+      <p className="mt-1 text-xs text-ink-muted tabular-nums">
+        {figures
+          ? `${grams(figures.grams)} · ${formatEnergy(figures.energyKcal)} · P ${grams(figures.proteinG)} · C ${grams(figures.carbohydrateG)} · F ${grams(figures.fatG)}`
+          : 'Type how much'}
+      </p>
+    </li>
   );
 }

@@ -1,5 +1,12 @@
 import { parseTypedNumber } from '@driftmark/shared';
-import { atwaterKcal, type FoodView } from '@driftmark/shared';
+import {
+  atwaterKcal,
+  itemGrams,
+  nutrientsAsEaten,
+  sumNutrients,
+  type FoodView,
+  type MealNutrients,
+} from '@driftmark/shared';
 
 export interface MacroTexts {
   proteinG: string;
@@ -27,32 +34,35 @@ export function macroEnergyPreview(m: MacroTexts): number | null {
   return atwaterKcal({ proteinG, carbohydrateG, fatG, alcoholG });
 }
 
-export interface FoodPortion {
-  energyKcal: number;
-  proteinG: number;
-  carbohydrateG: number;
-  fatG: number;
-  /** Null when the food list has no sodium figure for the food. */
-  sodiumMg: number | null;
+/** A food of the meal form as typed: the food (per 100 g, its portions), the amount and its unit. */
+export interface TypedItem {
+  food: Pick<FoodView, 'per100g' | 'portions'>;
+  amount: string;
+  /** 'g' or one of the food's portion units. */
+  unit: string;
 }
 
 /**
- * Live energy and macros of a quantity of a food from the list: its per-100 g values × grams / 100
- * (the energy the server gives the food — Atwater from its macros — as it stores it). Null until a
- * usable quantity is typed.
+ * Live figures of a meal of foods as the athlete types it, by the shared rule the server stores
+ * (`itemGrams`, `nutrientsAsEaten`, `sumNutrients` in shared/src/meal-items.ts): each item's
+ * figures (null while its amount is not a usable number) and the meal's total (null until at
+ * least one item has one).
  */
-export function foodPortionPreview(
-  food: Pick<FoodView, 'per100g'>,
-  quantityText: string,
-): FoodPortion | null {
-  const q = readGrams(quantityText);
-  if (q === null || q === undefined || q === 0) return null;
-  const f = q / 100;
-  return {
-    energyKcal: food.per100g.energyKcal * f,
-    proteinG: food.per100g.proteinG * f,
-    carbohydrateG: food.per100g.carbohydrateG * f,
-    fatG: food.per100g.fatG * f,
-    sodiumMg: food.per100g.sodiumMg === null ? null : food.per100g.sodiumMg * f,
-  };
+export function mealItemsPreview(items: readonly TypedItem[]): {
+  items: Array<(MealNutrients & { grams: number }) | null>;
+  total: MealNutrients | null;
+} {
+  const each = items.map(({ food, amount, unit }) => {
+    const n = readGrams(amount);
+    if (n === null || n === undefined || n === 0) return null;
+    const grams = itemGrams(
+      unit === 'g' ? { quantityG: n } : { portions: n, portionUnit: unit },
+      food.portions,
+    );
+    if (grams === null) return null;
+    const per100g = { ...food.per100g, alcoholG: null };
+    return { ...nutrientsAsEaten(per100g, grams), grams };
+  });
+  const known = each.filter((x): x is MealNutrients & { grams: number } => x !== null);
+  return { items: each, total: known.length > 0 ? sumNutrients(known) : null };
 }

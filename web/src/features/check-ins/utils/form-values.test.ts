@@ -120,8 +120,7 @@ describe('meals', () => {
     fibreG: '',
     alcoholG: '',
     sodiumMg: '',
-    foodId: '',
-    quantityG: '',
+    items: [],
   };
 
   it('sends grams of macros, optional ones as null when empty', () => {
@@ -141,14 +140,33 @@ describe('meals', () => {
     expect(toMealRequest({ ...base, sodiumMg: 'lots' }).numberErrors).toEqual({ sodiumMg: NOT_A_NUMBER });
   });
 
-  it('sends a food with its quantity, and asks for the food when none is chosen', async () => {
-    const food = toMealRequest({ ...base, source: 'food', foodId: 'ifct:A001', quantityG: '150' }).request;
-    expect(food).toMatchObject({ source: 'food', foodId: 'ifct:A001', quantityG: 150 });
-    expect(food).not.toHaveProperty('proteinG');
-    expect(mealEntryRequest.safeParse(food).success).toBe(true);
+  it('sends foods with grams or portions, and names the item whose amount is not a number', async () => {
+    const foods = toMealRequest({
+      ...base,
+      source: 'foods',
+      items: [
+        { foodId: 'ifct:A001', amount: '150', unit: 'g' },
+        { foodId: 'dm:bread-white', amount: '2', unit: 'slice' },
+      ],
+    });
+    expect(foods.request).toMatchObject({
+      source: 'foods',
+      items: [
+        { foodId: 'ifct:A001', quantityG: 150 },
+        { foodId: 'dm:bread-white', portions: 2, portionUnit: 'slice' },
+      ],
+    });
+    expect(foods.request).not.toHaveProperty('proteinG');
+    expect(mealEntryRequest.safeParse(foods.request).success).toBe(true);
+    const typo = toMealRequest({
+      ...base,
+      source: 'foods',
+      items: [{ foodId: 'dm:banana', amount: 'two', unit: 'medium' }],
+    });
+    expect(typo.numberErrors).toEqual({ 'items.0.portions': NOT_A_NUMBER });
     const resolver = createRequestResolver(mealEntryRequest, toMealRequest);
-    const result = await resolver({ ...base, source: 'food', quantityG: '150' }, undefined, opts);
-    expect(result.errors.foodId?.message).toBe('Choose a food');
+    const result = await resolver({ ...base, source: 'foods' }, undefined, opts);
+    expect(result.errors.items?.message).toBe('Add at least one food');
   });
 
   it('leaves the client id out of an edit', () => {

@@ -129,10 +129,18 @@ export function fluidFormValues(
 
 /* ---------- Meals ---------- */
 
+/** One food of the meal as typed: an amount in grams ('g') or in one of the food's portions. */
+export interface MealItemFormValues {
+  foodId: string;
+  amount: string;
+  /** 'g', or a portion unit the food carries ("slice", "cup", "large"). */
+  unit: string;
+}
+
 export interface MealFormValues {
   name: string;
   time: string;
-  source: 'macros' | 'food';
+  source: 'macros' | 'foods';
   proteinG: string;
   carbohydrateG: string;
   fatG: string;
@@ -140,22 +148,33 @@ export interface MealFormValues {
   alcoholG: string;
   /** mg; macros only (a food from the list brings its own). */
   sodiumMg: string;
-  foodId: string;
-  quantityG: string;
+  items: MealItemFormValues[];
+}
+
+/** Where an item's amount box shows its message: the request field it fills. */
+export function itemAmountField(i: number, unit: string): string {
+  return unit === 'g' ? `items.${i}.quantityG` : `items.${i}.portions`;
 }
 
 export function toMealRequest(v: MealFormValues): Conversion<keyof MealFormValues> {
-  const read = numberReader<keyof MealFormValues>();
+  const read = numberReader<string>();
   const base = { clientId: CLIENT_ID_PLACEHOLDER, time: v.time, name: v.name };
-  if (v.source === 'food') {
+  if (v.source === 'foods') {
     return {
       request: {
         ...base,
-        source: 'food',
-        foodId: v.foodId || undefined,
-        quantityG: read.required('quantityG', v.quantityG),
+        source: 'foods',
+        items: v.items.map((item, i) =>
+          item.unit === 'g'
+            ? { foodId: item.foodId, quantityG: read.required(itemAmountField(i, 'g'), item.amount) }
+            : {
+                foodId: item.foodId,
+                portions: read.required(itemAmountField(i, item.unit), item.amount),
+                portionUnit: item.unit,
+              },
+        ),
       },
-      numberErrors: read.errors,
+      numberErrors: read.errors as Conversion<keyof MealFormValues>['numberErrors'],
     };
   }
   return {
@@ -169,7 +188,7 @@ export function toMealRequest(v: MealFormValues): Conversion<keyof MealFormValue
       alcoholG: read.optional('alcoholG', v.alcoholG),
       sodiumMg: read.optional('sodiumMg', v.sodiumMg),
     },
-    numberErrors: read.errors,
+    numberErrors: read.errors as Conversion<keyof MealFormValues>['numberErrors'],
   };
 }
 
@@ -177,31 +196,33 @@ export function mealFormValues(entry: DayView['meals'][number] | null, now: stri
   const empty: MealFormValues = {
     name: '',
     time: now,
-    source: 'macros',
+    source: 'foods',
     proteinG: '',
     carbohydrateG: '',
     fatG: '',
     fibreG: '',
     alcoholG: '',
     sodiumMg: '',
-    foodId: '',
-    quantityG: '',
+    items: [],
   };
   if (!entry) return empty;
-  if (entry.source === 'food' && entry.food) {
+  if (entry.source === 'foods') {
     return {
       ...empty,
       name: entry.name,
       time: entry.time,
-      source: 'food',
-      foodId: entry.food.id,
-      quantityG: toTypedText(entry.food.quantityG, 1),
+      items: entry.items.map((item) =>
+        item.portion
+          ? { foodId: item.foodId, amount: toTypedText(item.portion.count, 2), unit: item.portion.unit }
+          : { foodId: item.foodId, amount: toTypedText(item.quantityG, 1), unit: 'g' },
+      ),
     };
   }
   return {
     ...empty,
     name: entry.name,
     time: entry.time,
+    source: 'macros',
     proteinG: toTypedText(entry.proteinG, 1),
     carbohydrateG: toTypedText(entry.carbohydrateG, 1),
     fatG: toTypedText(entry.fatG, 1),

@@ -1,0 +1,36 @@
+/**
+ * Thirty everyday searches and the foods a good answer shows in its top 3 (any of them). Written
+ * down by hand from what athletes type; the test beside it measures the search against them.
+ */
+export const EVERYDAY_SEARCHES: ReadonlyArray<{ q: string; expect: readonly string[] }> = [
+  { q: 'oats', expect: ['dm:oats-rolled-dry'] },
+  { q: 'rolled oats', expect: ['dm:oats-rolled-dry'] },
+  { q: 'oat flakes', expect: ['dm:oats-rolled-dry'] },
+  { q: 'oat', expect: ['dm:oats-rolled-dry'] },
+  { q: 'whey', expect: ['dm:whey-protein-powder'] },
+  { q: 'whey protein', expect: ['dm:whey-protein-powder'] },
+  { q: 'rice cooked', expect: ['dm:rice-white-cooked'] },
+  { q: 'cooked rice', expect: ['dm:rice-white-cooked'] },
+  { q: 'brown rice', expect: ['dm:rice-brown-cooked', 'ifct:A013'] },
+  { q: 'chicken breast', expect: ['dm:chicken-breast-cooked', 'dm:chicken-breast-raw', 'ifct:N003'] },
+  { q: 'egg', expect: ['dm:egg-whole-raw', 'dm:egg-whole-boiled', 'ifct:M001', 'ifct:M004'] },
+  { q: 'eggs', expect: ['dm:egg-whole-raw', 'dm:egg-whole-boiled', 'ifct:M001', 'ifct:M004'] },
+  { q: 'boiled egg', expect: ['dm:egg-whole-boiled', 'ifct:M004'] },
+  { q: 'egg white', expect: ['dm:egg-white-raw', 'ifct:M002', 'ifct:M005'] },
+  { q: 'banana', expect: ['dm:banana', 'ifct:E009', 'ifct:E010', 'ifct:E011', 'ifct:E012'] },
+  { q: 'olive oil', expect: ['dm:olive-oil'] },
+  { q: 'milk', expect: ['dm:milk-whole', 'dm:milk-skim', 'ifct:L002'] },
+  { q: 'greek yogurt', expect: ['dm:greek-yogurt-nonfat'] },
+  { q: 'peanut butter', expect: ['dm:peanut-butter'] },
+  { q: 'bread', expect: ['dm:bread-whole-wheat', 'dm:bread-white'] },
+  { q: 'sweet potato', expect: ['dm:sweet-potato-baked', 'ifct:F013', 'ifct:F014'] },
+  { q: 'potatoes', expect: ['dm:potato-baked', 'ifct:F006', 'ifct:F007', 'ifct:F008'] },
+  { q: 'salmon', expect: ['dm:salmon-cooked', 'ifct:P068'] },
+  { q: 'tuna', expect: ['dm:tuna-canned-water', 'ifct:P084'] },
+  { q: 'almonds', expect: ['dm:almonds', 'ifct:H001'] },
+  { q: 'apple', expect: ['dm:apple', 'ifct:E001', 'ifct:E002', 'ifct:E003'] },
+  { q: 'pasta', expect: ['dm:pasta-cooked', 'dm:pasta-dry'] },
+  { q: 'lentils', expect: ['dm:lentils-cooked', 'ifct:B013', 'ifct:B014', 'ifct:B015'] },
+  { q: 'cottage cheese', expect: ['dm:cottage-cheese'] },
+  { q: 'spinach', expect: ['dm:spinach-raw', 'ifct:C033'] },
+];
