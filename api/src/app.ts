@@ -23,12 +23,13 @@ import { countdownTemplatesRouter } from './routes/countdown-templates.routes.js
 import { dataRouter } from './routes/data.routes.js';
 import { devInboxEnabled } from './middleware/dev-inbox.js';
 import { devMailRouter } from './routes/dev-mail.routes.js';
-import { foodsRouter } from './routes/foods.routes.js';
+import { athleteFoodsRouter, foodsRouter } from './routes/foods.routes.js';
 import { healthRouter } from './routes/health.routes.js';
 import { invitationsRouter } from './routes/invitations.routes.js';
 import { marksRouter } from './routes/marks.routes.js';
 import { mealPlansRouter, plannedMealsRouter } from './routes/meal-plans.routes.js';
 import { notificationsRouter } from './routes/notifications.routes.js';
+import { openApiRouter } from './routes/openapi.routes.js';
 import { meDataRouter } from './routes/me-data.routes.js';
 import { meSessionsRouter } from './routes/me-sessions.routes.js';
 import { meRouter } from './routes/me.routes.js';
@@ -61,6 +62,9 @@ export function createApp(deps: {
   app.set('etag', false);
   // Path params and query strings are validated per route with zod; keep the query parser simple.
   app.set('query parser', 'simple');
+  // Behind a TLS proxy (several instances behind one origin), the client's address comes from
+  // X-Forwarded-For, believed only from the hops TRUST_PROXY names; rate limits key on it.
+  app.set('trust proxy', config.trustProxy);
 
   app.use(requestLogging(logger));
   if (config.statementCountHeader) {
@@ -101,6 +105,8 @@ export function createApp(deps: {
     next();
   });
   api.use('/health', healthRouter());
+  // The OpenAPI description of this router (/openapi.json), for staff.
+  api.use(openApiRouter());
   api.use('/auth', authRouter(limits));
   api.use('/me', meRouter());
   // The signed-in devices (/me/sessions…).
@@ -130,6 +136,8 @@ export function createApp(deps: {
   api.use('/athletes', dataRouter());
   api.use('/countdown-templates', countdownTemplatesRouter());
   api.use('/foods', foodsRouter());
+  // An athlete's personal foods from a label or a barcode (/athletes/:athleteId/foods…).
+  api.use('/athletes', athleteFoodsRouter());
   // Meal-plan quantity fitting (/meal-plans/fit).
   api.use('/meal-plans', mealPlansRouter());
   // Photo uploads and the gallery (/athletes/:athleteId/photos) and single photos (/photos/:photoId).

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { loadConfig } from './config.js';
+import { loadConfig, loadStorageConfig } from './config.js';
 
 const base = {
   APP_MODE: 'development',
@@ -47,6 +47,61 @@ describe('loadConfig', () => {
     expect(c.uploadsDir).toMatch(/uploads-dev$/);
   });
 
+  it('keeps photos in the folder unless PHOTO_STORAGE=s3 names a bucket', () => {
+    expect(loadConfig(base)).toMatchObject({ photoStorage: 'folder' });
+    expect(loadConfig(base).s3).toBeUndefined();
+    const c = loadConfig({
+      ...base,
+      PHOTO_STORAGE: 's3',
+      S3_BUCKET: 'driftmark-photos',
+      S3_ENDPOINT: 'http://127.0.0.1:4569',
+      S3_FORCE_PATH_STYLE: '1',
+      S3_ACCESS_KEY_ID: 'key',
+      S3_SECRET_ACCESS_KEY: 'secret',
+    });
+    expect(c.photoStorage).toBe('s3');
+    expect(c.s3).toEqual({
+      bucket: 'driftmark-photos',
+      region: 'us-east-1',
+      endpoint: 'http://127.0.0.1:4569',
+      forcePathStyle: true,
+      credentials: { accessKeyId: 'key', secretAccessKey: 'secret' },
+    });
+    // Without keys the SDK's own chain (environment, profile, instance role) answers.
+    const aws = loadConfig({
+      ...base,
+      PHOTO_STORAGE: 's3',
+      S3_BUCKET: 'photos.example',
+      S3_REGION: 'eu-north-1',
+    });
+    expect(aws.s3).toEqual({ bucket: 'photos.example', region: 'eu-north-1', forcePathStyle: false });
+    expect(loadStorageConfig({ S3_BUCKET: 'abc' })).toMatchObject({
+      photoStorage: 'folder',
+      s3: { bucket: 'abc' },
+    });
+  });
+
+  it('names every bad photo-store setting', () => {
+    expect(problemsOf({ ...base, PHOTO_STORAGE: 's3' })).toContain(
+      'S3_BUCKET: is required when PHOTO_STORAGE=s3',
+    );
+    const message = problemsOf({
+      ...base,
+      PHOTO_STORAGE: 'disk',
+      // AWS bucket naming rules: no capitals or underscores, 3-63 characters.
+      S3_BUCKET: 'My_Bucket',
+      S3_ENDPOINT: 'localhost:9000',
+      S3_FORCE_PATH_STYLE: 'yes',
+    });
+    for (const name of ['PHOTO_STORAGE', 'S3_BUCKET', 'S3_ENDPOINT', 'S3_FORCE_PATH_STYLE'])
+      expect(message).toContain(`  - ${name}: `);
+    expect(problemsOf({ ...base, S3_BUCKET: 'ab' })).toContain('S3_BUCKET: must be a bucket name');
+    expect(problemsOf({ ...base, S3_ACCESS_KEY_ID: 'key' })).toContain(
+      'S3_SECRET_ACCESS_KEY: set both S3 keys or neither',
+    );
+    expect(() => loadStorageConfig({ PHOTO_STORAGE: 's3' })).toThrow(/S3_BUCKET: is required/);
+  });
+
   it('derives the origin from PORT and parses EXTRA_ORIGINS', () => {
     const c = loadConfig({
       ...base,
@@ -55,6 +110,20 @@ describe('loadConfig', () => {
     });
     expect(c.appOrigin).toBe('http://127.0.0.1:3456');
     expect(c.extraOrigins).toEqual(['http://127.0.0.1:5173', 'http://localhost:5173']);
+  });
+
+  it('reads TRUST_PROXY as a hop count or a list of proxy addresses, refusing anything else', () => {
+    expect(loadConfig(base).trustProxy).toBe(false);
+    expect(loadConfig({ ...base, TRUST_PROXY: '' }).trustProxy).toBe(false);
+    expect(loadConfig({ ...base, TRUST_PROXY: '1' }).trustProxy).toBe(1);
+    expect(loadConfig({ ...base, TRUST_PROXY: 'loopback, 10.0.0.0/8,fd00::1' }).trustProxy).toEqual([
+      'loopback',
+      '10.0.0.0/8',
+      'fd00::1',
+    ]);
+    for (const bad of ['yes', '10.0.0.0/33', '10.0.0.1/8/8', 'proxy.example.test', ',']) {
+      expect(problemsOf({ ...base, TRUST_PROXY: bad })).toMatch(/TRUST_PROXY: must be a number of proxies/);
+    }
   });
 
   it('treats empty variables as unset', () => {

@@ -26,6 +26,8 @@ try {
     DATABASE_URL: databaseUrl,
     JWT_SECRET: await ensureJwtSecret(),
     UPLOADS_DIR: uploadsDir,
+    // The folder it has just emptied; photos:migrate moves them to a bucket.
+    PHOTO_STORAGE: 'folder',
   });
   await buildShared();
   await apiCli('migrate', env, { source: true });

@@ -11,6 +11,8 @@ import {
   appEnv,
   buildShared,
   DEMO_PASSWORD,
+  startFoodProductsFakeService,
+  localPhotoStore,
   startSmtpFake,
   type RunningSmtpFake,
 } from './lib/app.js';
@@ -50,6 +52,10 @@ async function main(): Promise<void> {
   mkdirSync(mailDir, { recursive: true });
   mkdirSync(repoPath('uploads-dev'), { recursive: true });
 
+  // PHOTO_STORAGE=s3 without a bucket of its own: the local S3 fake (before the seed writes photos).
+  const store = await localPhotoStore({ dataRoot: cluster.dataRoot, exclude: [API_PORT, WEB_PORT] });
+  if (store.fake) services.push(store.fake.service);
+
   await buildShared();
   const webOrigin = `http://127.0.0.1:${WEB_PORT}`;
   const env = {
@@ -63,13 +69,24 @@ async function main(): Promise<void> {
     JWT_SECRET: jwtSecret,
     MAIL_CAPTURE_DIR: mailDir,
     UPLOADS_DIR: repoPath('uploads-dev'),
+    ...store.env,
   };
   await apiCli('migrate', appEnv(env), { source: true });
   await apiCli('seed', appEnv(env), { source: true });
   if (stopping) return;
 
-  smtp = await startSmtpFake({ preferredPort: 2525, captureDir: mailDir, exclude: [API_PORT, WEB_PORT] });
+  smtp = await startSmtpFake({
+    preferredPort: 2525,
+    captureDir: mailDir,
+    exclude: [API_PORT, WEB_PORT, ...(store.fake ? [store.fake.port] : [])],
+  });
   services.push(smtp.service);
+  // The barcode lookup asks a local fake of the open food-products database (invented products).
+  const foodProducts = await startFoodProductsFakeService({
+    preferredPort: 4580,
+    exclude: [API_PORT, WEB_PORT, smtp.port],
+  });
+  services.push(foodProducts.service);
   services.push(
     startService('tsc shared', node, [
       packageBin('typescript', 'tsc'),
@@ -89,7 +106,7 @@ async function main(): Promise<void> {
         repoPath('api', 'tsconfig.json'),
         repoPath('api', 'src', 'server.ts'),
       ],
-      { env: appEnv({ ...env, SMTP_URL: smtp.url }) },
+      { env: appEnv({ ...env, SMTP_URL: smtp.url, FOOD_PRODUCTS_URL: foodProducts.url }) },
     ),
     startService(
       'vite',

@@ -13,8 +13,12 @@ import {
   buildWorkspace,
   DEMO_ACCOUNTS,
   DEMO_PASSWORD,
+  startFoodProductsFakeService,
   startSmtpFake,
   superviseBuiltServer,
+  type RunningFoodProductsFake,
+  localPhotoStore,
+  type RunningS3Fake,
   type RunningSmtpFake,
   type SupervisedServer,
 } from './lib/app.js';
@@ -28,11 +32,15 @@ import { ensureJwtSecret } from './lib/secrets.js';
 const startedAt = Date.now();
 let server: SupervisedServer | undefined;
 let smtp: RunningSmtpFake | undefined;
+let foodProducts: RunningFoodProductsFake | undefined;
+let s3: RunningS3Fake | undefined;
 let stopping = false;
 
 async function stopAll(): Promise<void> {
   await server?.stop('SIGINT', 15_000);
   await smtp?.service.stop('SIGTERM', 5_000);
+  await foodProducts?.service.stop('SIGTERM', 5_000);
+  await s3?.service.stop('SIGTERM', 5_000);
 }
 
 onShutdownSignal(() => {
@@ -65,6 +73,10 @@ async function main(): Promise<void> {
   await buildWorkspace('api');
   await buildWorkspace('web');
 
+  // PHOTO_STORAGE=s3 without a bucket of its own: the local S3 fake (before the seed writes photos).
+  const store = await localPhotoStore({ dataRoot: cluster.dataRoot, exclude: [port] });
+  s3 = store.fake;
+
   const baseUrl = `http://127.0.0.1:${port}`;
   const env = {
     APP_MODE: 'demo',
@@ -76,20 +88,34 @@ async function main(): Promise<void> {
     MAIL_CAPTURE_DIR: mailDir,
     UPLOADS_DIR: uploadsDir,
     WEB_DIST: repoPath('web', 'dist'),
+    ...store.env,
   };
   await apiCli('migrate', appEnv(env));
   await apiCli('seed', appEnv(env));
   if (stopping) return;
 
-  smtp = await startSmtpFake({ preferredPort: 2525, captureDir: mailDir, exclude: [port] });
+  smtp = await startSmtpFake({
+    preferredPort: 2525,
+    captureDir: mailDir,
+    exclude: [port, ...(s3 ? [s3.port] : [])],
+  });
   // A server that dies later (a bug) is started again after a short wait; see superviseBuiltServer.
-  server = superviseBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url }), { baseUrl });
+  // The barcode lookup asks a local fake of the open food-products database (invented products).
+  foodProducts = await startFoodProductsFakeService({ preferredPort: 4580, exclude: [port, smtp.port] });
+  server = superviseBuiltServer(appEnv({ ...env, SMTP_URL: smtp.url, FOOD_PRODUCTS_URL: foodProducts.url }), {
+    baseUrl,
+  });
   void smtp.service.exited.then((exit) => {
     if (!stopping)
       warn(`The SMTP fake stopped (${exit.signal ?? `exit ${exit.code}`}); e-mail will not be captured.`);
   });
   await server.ready;
 
+  const bucket = store.env.S3_BUCKET ?? process.env.S3_BUCKET;
+  const photosLine =
+    process.env.PHOTO_STORAGE === 's3'
+      ? `bucket ${bucket}${s3 ? ` in the S3 fake (${s3.endpoint})` : ''}`
+      : `${uploadsDir} (PHOTO_STORAGE=s3 npm start: a bucket in the S3 fake)`;
   const width = Math.max(...DEMO_ACCOUNTS.map((account) => account.email.length));
   console.log(
     [
@@ -100,6 +126,7 @@ async function main(): Promise<void> {
       '    (five more athletes: see the roster)',
       `  Dev inbox:  ${baseUrl}/dev/inbox   (mail captured via ${smtp.url} into ${mailDir})`,
       `  Database:   ${cluster.host}:${cluster.port}/driftmark (cluster in ${cluster.layout.dataDir})`,
+      `  Photos:     ${photosLine}`,
       '  Ctrl-C stops the app; the data stays.',
       '',
     ].join('\n'),

@@ -14,8 +14,12 @@ import {
   buildShared,
   buildWorkspace,
   startBuiltServer,
+  startFoodProductsFakeService,
   startSmtpFake,
   waitForHealth,
+  type RunningFoodProductsFake,
+  startS3Fake,
+  type RunningS3Fake,
   type RunningSmtpFake,
 } from './lib/app.js';
 import { ensureChromium } from './lib/chromium.js';
@@ -127,11 +131,18 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   rmSync(serverLog, { force: true });
 
   let smtp: RunningSmtpFake | undefined;
+  let foodProducts: RunningFoodProductsFake | undefined;
   let server: Service | undefined;
   try {
     const port = await pickFreePort(3100);
     smtp = await startSmtpFake({ preferredPort: 2600, captureDir, exclude: [port], logFile: serverLog });
     running.push(smtp.service);
+    foodProducts = await startFoodProductsFakeService({
+      preferredPort: 4680,
+      exclude: [port, smtp.port],
+      logFile: serverLog,
+    });
+    running.push(foodProducts.service);
     const baseUrl = `http://127.0.0.1:${port}`;
     server = startBuiltServer(
       appEnv({
@@ -141,6 +152,7 @@ async function e2eStage(e2eUrl: string): Promise<void> {
         APP_ORIGIN: baseUrl,
         EXTRA_ORIGINS: undefined,
         SMTP_URL: smtp.url,
+        FOOD_PRODUCTS_URL: foodProducts.url,
         MAIL_CAPTURE_DIR: captureDir,
         UPLOADS_DIR: uploadsDir,
         WEB_DIST: repoPath('web', 'dist'),
@@ -179,6 +191,29 @@ async function e2eStage(e2eUrl: string): Promise<void> {
   } finally {
     await server?.stop('SIGINT', 15_000);
     await smtp?.service.stop('SIGTERM', 5000);
+    await foodProducts?.service.stop('SIGTERM', 5000);
+    rmSync(scratch, { recursive: true, force: true });
+  }
+}
+
+/**
+ * The integration files against the test database, with the S3 fake running: the photo files that
+ * test the bucket (`photos-s3`, `photos-migrate`) make their own buckets in it (S3_* point at it;
+ * PHOTO_STORAGE stays unset, so every other file uses a folder).
+ */
+async function integrationStage(env: NodeJS.ProcessEnv): Promise<void> {
+  const scratch = mkdtempSync(path.join(os.tmpdir(), 'driftmark-s3-fake-'));
+  let s3: RunningS3Fake | undefined;
+  try {
+    s3 = await startS3Fake({
+      preferredPort: 4569,
+      directory: scratch,
+      logFile: path.join(reportsDir, 'integration-s3-fake.log'),
+    });
+    running.push(s3.service);
+    await vitest('integration', { ...env, ...s3.env });
+  } finally {
+    await s3?.service.stop('SIGTERM', 5000);
     rmSync(scratch, { recursive: true, force: true });
   }
 }
@@ -251,8 +286,8 @@ async function main(): Promise<number> {
     unit: { name: 'unit', describe: 'vitest run --project unit', run: () => vitest('unit') },
     integration: {
       name: 'integration',
-      describe: 'vitest run --project integration (driftmark_test)',
-      run: () => vitest('integration', integrationEnv()),
+      describe: 'vitest run --project integration (driftmark_test, the S3 fake)',
+      run: () => integrationStage(integrationEnv()),
     },
     'migration-check': {
       name: 'migration-check',

@@ -15,6 +15,8 @@ export const ERROR_CODES = {
   csrf_rejected: 403,
   forbidden: 403,
   not_found: 404,
+  /** No product with this barcode in the food-products database (or none with nutrition figures). */
+  barcode_not_found: 404,
   conflict: 409,
   /**
    * A save met guardrail warnings the coach has not acknowledged: `fields` lists them by key → message,
@@ -29,6 +31,8 @@ export const ERROR_CODES = {
   rate_limited: 429,
   internal_error: 500,
   db_unavailable: 503,
+  /** The food-products database did not answer (or the server has none set): enter the label. */
+  food_products_unavailable: 503,
 } as const;
 
 export type ErrorCode = keyof typeof ERROR_CODES;

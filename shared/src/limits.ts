@@ -32,6 +32,8 @@ export const LIMITS = {
   // Daily check-in (SI units). Each refuses nonsense, not unusual days.
   /** One fluid entry, mL (30 L in one entry is refused). */
   fluidEntryMl: { min: 1, max: 5000 },
+  /** Sodium in one drink, mg: a plausibility bound, as the meal's (common practice, no source). */
+  fluidSodiumMg: { min: 0, max: 5000 },
   /** Grams per meal entry. */
   mealProteinG: { min: 0, max: 500 },
   mealCarbohydrateG: { min: 0, max: 1500 },
@@ -49,6 +51,16 @@ export const LIMITS = {
   /** Nutrients per 100 g of a team food. */
   per100gMacroG: { min: 0, max: 100 },
   per100gSodiumMg: { min: 0, max: 40000 },
+  /** A nutrition label's serving, g or mL. */
+  labelServing: { min: 1, max: 2000 },
+  /** Grams of one macro as printed on a label (per 100 g or per serving). */
+  labelMacroG: { min: 0, max: 2000 },
+  /** Sodium as printed, mg (per 100 g or per serving). */
+  labelSodiumMg: { min: 0, max: 100000 },
+  /** Energy as printed, kcal or kJ (per 100 g or per serving). */
+  labelEnergy: { min: 0, max: 40000 },
+  /** Density of a liquid served in mL, g/mL. */
+  labelDensity: { min: 0.5, max: 2.5 },
   mealName: { min: 1, max: 120 },
   foodName: { min: 2, max: 120 },
   supplementName: { min: 1, max: 80 },
@@ -70,6 +82,8 @@ export const LIMITS = {
   warningKey: { max: 120 },
   /** What the acute part of a cut consists of (free text). */
   cutNotes: { max: 2000 },
+  /** What was done on one day of a practice cut (free text). */
+  rehearsalNote: { max: 1000 },
   /** Days of acute loss before a weigh-in a cut plan may hold. */
   cutAcuteDays: { min: 0, max: 14 },
   /** The team's acute-share threshold, % of body mass. */

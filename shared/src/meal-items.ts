@@ -77,10 +77,12 @@ export function per100gFromEaten(eaten: MealNutrients, grams: number): Per100g {
 
 /**
  * Sums of meals or of a meal's items. Fibre and alcohol count a missing figure as none; sodium
- * stays unknown (null) only when no part carries a figure.
+ * stays unknown (null) only when no part carries a figure. A day's sums pass its drinks too: a
+ * drink that carries sodium (a recovery drink) counts toward the day's.
  */
 export function sumNutrients(
   parts: readonly MealNutrients[],
+  drinks: readonly { sodiumMg: number | null }[] = [],
 ): MealNutrients & { fibreG: number; alcoholG: number } {
   const total = {
     energyKcal: 0,
@@ -100,5 +102,6 @@ export function sumNutrients(
     total.alcoholG += m.alcoholG ?? 0;
     if (m.sodiumMg !== null) total.sodiumMg = (total.sodiumMg ?? 0) + m.sodiumMg;
   }
+  for (const d of drinks) if (d.sodiumMg !== null) total.sodiumMg = (total.sodiumMg ?? 0) + d.sodiumMg;
   return total;
 }

@@ -35,5 +35,22 @@ export function volumeFromMl(ml: number, unit: VolumeUnit): number {
   return unit === 'ml' ? ml : mlToFlOz(ml);
 }
 
+/** Body lengths (circumferences, height): centimetres, or inches for those who weigh in pounds. */
+export const LENGTH_UNITS = ['cm', 'in'] as const;
+export type LengthUnit = (typeof LENGTH_UNITS)[number];
+/** Lengths go with the weight unit: cm beside kg, inches beside lb. */
+export function lengthUnitFor(weightUnit: WeightUnit): LengthUnit {
+  return weightUnit === 'lb' ? 'in' : 'cm';
+}
+/** Length in the viewer's unit → cm. */
+export function lengthToCm(value: number, unit: LengthUnit): number {
+  return unit === 'cm' ? value : inToCm(value);
+}
+/** cm → the viewer's unit. */
+export function lengthFromCm(cm: number, unit: LengthUnit): number {
+  return unit === 'cm' ? cm : cmToIn(cm);
+}
+
 export const WEIGHT_UNIT_LABELS: Record<WeightUnit, string> = { kg: 'kg', lb: 'lb' };
 export const VOLUME_UNIT_LABELS: Record<VolumeUnit, string> = { ml: 'mL', floz: 'fl oz' };
+export const LENGTH_UNIT_LABELS: Record<LengthUnit, string> = { cm: 'cm', in: 'in' };

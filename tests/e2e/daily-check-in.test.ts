@@ -75,6 +75,12 @@ describe('the daily check-in on a phone', () => {
       .first()
       .click();
     await meal.getByLabel('Amount of Rice flakes').fill('80');
+    // The meal's live total is the two foods' sum, by the shared rule the server stores.
+    await meal.getByText('Meal total').waitFor();
+    await screenshot(page, 'meal-form-375');
+    await page.setViewportSize({ width: 1280, height: 860 });
+    await screenshot(page, 'meal-form-1280');
+    await page.setViewportSize({ width: 375, height: 812 });
     await meal.getByRole('button', { name: 'Save meal' }).click();
     await page.getByRole('list', { name: 'Meals logged' }).getByText('Breakfast').waitFor();
     await page

@@ -7,8 +7,10 @@
 import bcrypt from 'bcryptjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { addDays } from '../../api/src/seed/calendar.js';
-import { DEMO_OWNER_EMAIL, DEMO_PASSWORD } from '../../api/src/seed/demo-team.js';
+import { DEMO_ATHLETES, DEMO_OWNER_EMAIL, DEMO_PASSWORD } from '../../api/src/seed/demo-team.js';
 import { seedDemo } from '../../api/src/seed/seed-demo.js';
+import { AthleteRepository } from '../../api/src/repositories/athlete.repository.js';
+import { CutService } from '../../api/src/services/cut.service.js';
 import { ReviewQueueService } from '../../api/src/services/review-queue.service.js';
 import { RosterService } from '../../api/src/services/roster.service.js';
 import { User } from '../../api/src/entities/user.entity.js';
@@ -57,7 +59,14 @@ async function view() {
     new RosterService(deps).list(actor),
     new ReviewQueueService(deps).list(actor, { weight: owner.weightUnit, volume: owner.volumeUnit }),
   ]);
-  return { now, roster, queue };
+  // Aroha's practice run, as her coach's panel reads it.
+  const aroha = DEMO_ATHLETES.find((d) => d.key === 'weigh_in')!;
+  const row = roster.find((r) => r.email === aroha.email);
+  const athlete = row
+    ? await new AthleteRepository(t.dataSource.manager).findWithPeople(row.athleteId)
+    : null;
+  const rehearsal = athlete ? (await new CutService(deps).getCut(athlete)).rehearsal : null;
+  return { now, roster, queue, rehearsal };
 }
 
 let passwordHash = '';

@@ -2,7 +2,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createStorage } from '../../api/src/adapters/storage.js';
+import { LocalFolderStorage } from '../../api/src/adapters/storage.js';
 import { addDays, localDate } from '../../api/src/seed/calendar.js';
 import { DEMO_ATHLETES, DEMO_PASSWORD } from '../../api/src/seed/demo-team.js';
 import { SHIFTED_DATE_COLUMNS } from '../../api/src/seed/refresh-demo-dates.js';
@@ -19,7 +19,8 @@ const COUNTDOWN_TZ = 'Europe/Madrid';
 let t: TestApp;
 let now = seededAt;
 const uploadsDir = mkdtempSync(path.join(os.tmpdir(), 'driftmark-refresh-'));
-const seed = () => seedDemo(t.dataSource, { appMode: 'test', now, storage: createStorage({ uploadsDir }) });
+const seed = () =>
+  seedDemo(t.dataSource, { appMode: 'test', now, storage: new LocalFolderStorage(uploadsDir) });
 
 const tables = () => t.dataSource.entityMetadatas.map((m) => m.tableName).sort();
 
@@ -260,7 +261,7 @@ describe('demo date refresh', () => {
     const result = await seedDemo(t.dataSource, {
       appMode: 'test',
       now,
-      storage: createStorage({ uploadsDir }),
+      storage: new LocalFolderStorage(uploadsDir),
       warn: (message) => warnings.push(message),
     });
     expect(result.movedDays).toBeGreaterThan(0);

@@ -3,7 +3,7 @@
  * from the same services the review queue and the roster answer with. Every check returns the
  * broken promises as sentences (empty when all hold), so a failing day says what went wrong.
  */
-import type { ReviewQueueItem, RosterRow } from '@driftmark/shared';
+import type { RehearsalView, ReviewQueueItem, RosterRow } from '@driftmark/shared';
 import { addDays, localDate } from '../../api/src/seed/calendar.js';
 import { DEMO_ATHLETES, type DemoSituation } from '../../api/src/seed/demo-team.js';
 
@@ -11,6 +11,8 @@ export interface DemoView {
   now: Date;
   roster: readonly RosterRow[];
   queue: readonly ReviewQueueItem[];
+  /** Aroha's latest practice run, as her cut view carries it. */
+  rehearsal: RehearsalView | null;
 }
 
 function byKey(view: DemoView, key: DemoSituation) {
@@ -76,6 +78,29 @@ export function brokenDemoPromises(view: DemoView): string[] {
     expect(
       item?.reasons.some((r) => r.kind === 'over_limit' && /over the weigh-in limit/.test(r.text)) ?? false,
       `Aroha is not in the queue as over the limit (${JSON.stringify(item?.reasons)})`,
+    );
+    // A practice run a month ago: about 2 kg (2–4 %) down over two days, most of it back the next
+    // morning, a symptom report on the practice weigh-in day, notes by her and her coach.
+    const r = view.rehearsal;
+    expect(
+      r?.weighInDate === addDays(today, -31),
+      `Aroha's practice weigh-in is not 31 days ago (${r?.weighInDate}, today ${today})`,
+    );
+    expect(
+      r?.achieved != null && r.achieved.pct > 2 && r.achieved.pct < 4,
+      `Aroha's practice run did not take off 2–4 % (${JSON.stringify(r?.achieved)})`,
+    );
+    expect(
+      (r?.regained[0]?.shareOfLossPct ?? 0) > 50,
+      `Aroha's practice run has no regain by the next morning (${JSON.stringify(r?.regained)})`,
+    );
+    expect(
+      r?.days.some((d) => d.stage === 'weigh_in' && d.symptoms.length > 0) ?? false,
+      'Aroha has no symptom report on her practice weigh-in day',
+    );
+    expect(
+      (r?.days.filter((d) => d.note !== null).length ?? 0) >= 4,
+      `Aroha's practice run lacks its day notes (${r?.days.filter((d) => d.note).length})`,
     );
   }
   // Priya: 5 weeks from a shoot, losing faster than 1.4 %/week over the last 14 days.

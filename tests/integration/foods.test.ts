@@ -88,8 +88,10 @@ describe('GET /api/foods', () => {
       id: expect.any(String),
       name: 'Overnight oats, team recipe',
       source: 'team',
+      barcode: null,
       preparation: null,
       portions: [],
+      uses: { mine: 0, team: 0 },
       per100g: {
         energyKcal: 285,
         listedEnergyKcal: null,
@@ -181,6 +183,11 @@ describe('GET /api/foods', () => {
     expect(apples[0]).toBe('ifct:E002');
     expect(apples.indexOf('ifct:E003')).toBeLessThan(apples.indexOf('ifct:E001'));
     expect((await ids(mine)).slice(0, 2)).toEqual(['ifct:E002', 'ifct:E003']);
+    const listed = (await mine.get('/api/foods').query({ limit: 2 })).body.data as { uses: unknown }[];
+    expect(listed.map((f) => f.uses)).toEqual([
+      { mine: 1, team: 1 },
+      { mine: 0, team: 3 },
+    ]);
     // The teammate's own use comes first for them.
     expect((await ids(theirs)).slice(0, 2)).toEqual(['ifct:E003', 'ifct:E002']);
   });

@@ -7,7 +7,8 @@ import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createCoach, createOwner } from '../factories/users.js';
 import { fluidBody } from './check-ins-helpers.js';
 import { templateBody } from './plans-helpers.js';
-import { appRoutes, routeKey, schemaOf, type AppRoute } from './routes.js';
+import { startFoodProductsFake, type FoodProductsFake } from '../../scripts/src/lib/food-products-fake.js';
+import { appRoutes, routeKey, schemaOf, type AppRoute } from '../../api/src/lib/route-table.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**
@@ -25,6 +26,8 @@ type Agent = ReturnType<typeof browser>;
 type Role = 'owner' | 'coach' | 'athlete';
 
 let t: TestApp;
+/** The barcode route asks it (a lookup the fuzz reaches with a valid check digit). */
+let foodProducts: FoodProductsFake;
 const signIn = (email: string): Promise<Agent> => signedIn(t.app, email, FACTORY_PASSWORD);
 let routes: AppRoute[];
 const emails = {} as Record<Role, string>;
@@ -36,7 +39,8 @@ let sent = 0;
 const serverErrors: string[] = [];
 
 beforeAll(async () => {
-  t = await buildTestApp({}, { clock: () => now });
+  foodProducts = await startFoodProductsFake({ port: 0 });
+  t = await buildTestApp({ foodProductsUrl: foodProducts.url }, { clock: () => now });
   await t.reset();
   const owner = await createOwner(t.dataSource);
   const coach = await createCoach(t.dataSource, { teamId: owner.teamId });
@@ -70,6 +74,7 @@ afterAll(async () => {
     `fuzz: ${routes.length} routes, ${sent} cases (${RUNS} per route), ${serverErrors.length} answers 5xx`,
   );
   await t.close();
+  await foodProducts.close();
 });
 
 // ----------------------------------------------------------------------------------------------

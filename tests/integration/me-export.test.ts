@@ -101,6 +101,7 @@ describe('GET /api/me/export', () => {
         'weekly-check-ins.json',
         'flags.json',
         'body-composition.json',
+        'making-weight.json',
         'photos.json',
       ]),
     );

@@ -26,12 +26,15 @@ import {
   databaseIdentity,
   OWNER_MARK,
   sweepPhotoStorage,
+  type PhotoSweepReport,
 } from '../../api/src/services/photo-sweep.service.js';
+import { PHOTO_STAGING_LOCK, whileStaging, withStagingPaused } from '../../api/src/lib/staging-lock.js';
 import { PhotoService } from '../../api/src/services/photo.service.js';
 import { createAthlete, shareAthlete, type CreatedAthlete } from '../factories/athletes.js';
 import { FACTORY_PASSWORD } from '../factories/password.js';
 import { createAssistant, createCoach, createOwner } from '../factories/users.js';
 import { buildTestApp, signedIn, type TestApp } from './setup/app.js';
+import { eventually } from './setup/spawned-server.js';
 
 /* ---------- files made here, no binary fixtures ---------- */
 
@@ -760,21 +763,79 @@ describe('files and rows after a kill', () => {
     expect(await sweep(AFTER_EVERYTHING)).toEqual({ published: 0, orphans: 0, pending: 0, strays: 0 });
   });
 
+  it('waits for an upload between staging and commit (another instance) before judging its files', async () => {
+    const athleteId = w.athlete.athlete.id;
+    const storage = new LocalFolderStorage(uploadsDir);
+    const data = await jpeg(20, 20, '#335577');
+    const keys = {
+      thumb: newStorageKey(athleteId, 'image/jpeg'),
+      display: newStorageKey(athleteId, 'image/jpeg'),
+    };
+    let sweeping: Promise<PhotoSweepReport> | undefined;
+    await whileStaging(t.dataSource, async (lockHolder) => {
+      for (const key of Object.values(keys)) await storage.stage(key, data, 'image/jpeg');
+      // An instance starting now: its sweep counts every file as older than its start.
+      sweeping = withStagingPaused(t.dataSource, () =>
+        sweepPhotoStorage({
+          dataSource: t.dataSource,
+          storage,
+          database: databaseIdentity(t.config.databaseUrl),
+          before: new Date(8.64e15),
+          logger: createLogger('silent'),
+        }),
+      );
+      // It waits for the staging lock (PostgreSQL lists its request as not granted) …
+      await eventually(async () => {
+        const rows: { n: number }[] = await t.dataSource.query(
+          `SELECT count(*)::int AS n FROM pg_locks WHERE locktype = 'advisory' AND objid = $1 AND NOT granted`,
+          [PHOTO_STAGING_LOCK],
+        );
+        return rows[0]!.n > 0;
+      });
+      // … while the upload commits its row on the connection holding the lock.
+      await lockHolder.transaction((tx) =>
+        new PhotoRepository(tx).insertMany([
+          {
+            athleteId,
+            localDate: today(),
+            pose: 'Front relaxed',
+            width: 20,
+            height: 20,
+            thumbKey: keys.thumb,
+            displayKey: keys.display,
+            contentType: 'image/jpeg',
+            bytes: data.length * 2,
+            contentHash: 'e'.repeat(64),
+          },
+        ]),
+      );
+    });
+    // Then it finds the files claimed: published, not removed as a dead upload's.
+    expect(await sweeping).toEqual({ published: 2, orphans: 0, pending: 0, strays: 0 });
+    for (const key of Object.values(keys)) expect(await storage.exists(key)).toBe(true);
+  });
+
   it('empties the upload temp folders of processes that are gone and keeps those of running ones', async () => {
     const root = path.dirname(uploadTempDir());
+    const host = os.hostname();
     // Above Linux's largest pid_max (2^22), so no process can have it.
-    const gone = path.join(root, '4194399');
+    const gone = path.join(root, `${host}-4194399`);
     mkdirSync(path.join(gone, 'a-killed-upload'), { recursive: true });
     writeFileSync(path.join(gone, 'a-killed-upload', 'x.upload'), 'partial');
-    const running = path.join(root, String(process.ppid));
+    const running = path.join(root, `${host}-${process.ppid}`);
     const madeRunning = !existsSync(running);
     mkdirSync(running, { recursive: true });
+    // Another host's instance sharing the temp folder: its process ids mean nothing here.
+    const otherHost = path.join(root, `another-host.test-4194399`);
+    mkdirSync(otherHost, { recursive: true });
     try {
       expect(await sweepUploadTemp()).toBeGreaterThanOrEqual(1);
       expect(existsSync(gone)).toBe(false);
       expect(existsSync(running)).toBe(true);
+      expect(existsSync(otherHost)).toBe(true);
     } finally {
       if (madeRunning) rmSync(running, { recursive: true, force: true });
+      rmSync(otherHost, { recursive: true, force: true });
     }
   });
 });

@@ -13,7 +13,7 @@ import {
   weighInBody,
 } from './check-ins-helpers.js';
 import { planContent, templateBody, versionBody } from './plans-helpers.js';
-import { appRoutes, routeKey, type AppRoute } from './routes.js';
+import { appRoutes, routeKey, type AppRoute } from '../../api/src/lib/route-table.js';
 import { browser, buildTestApp, signedIn, type TestApp } from './setup/app.js';
 
 /**
@@ -45,6 +45,8 @@ const TEAM_MANAGE: Actor[] = ['anonymous', 'athlete', 'otherAthlete', 'assistant
 
 const ACCESS: Record<string, Cell> = {
   'GET /api/health': 'public',
+  // The API's description, for staff (and their tools, signed in as them).
+  'GET /api/openapi.json': TEAM_STAFF,
   'POST /api/auth/sign-in': 'public',
   'POST /api/auth/sign-out': 'public',
   'POST /api/auth/forgot-password': 'public',
@@ -73,6 +75,7 @@ const ACCESS: Record<string, Cell> = {
   'GET /api/team/members': TEAM_STAFF,
   'GET /api/team/guardrails': TEAM_STAFF,
   'PUT /api/team/guardrails': TEAM_MANAGE,
+  'GET /api/team/cut-settings': TEAM_STAFF,
   'PUT /api/team/cut-settings': TEAM_MANAGE,
   'GET /api/athletes/:athleteId': ATHLETE_ROWS,
   'PUT /api/athletes/:athleteId/intake': STAFF_ON_ATHLETE.filter((a) => a !== 'athlete'),
@@ -107,6 +110,8 @@ const ACCESS: Record<string, Cell> = {
   'GET /api/athletes/:athleteId/cut': ATHLETE_ROWS,
   'PUT /api/athletes/:athleteId/weigh-in': STAFF_ON_ATHLETE,
   'POST /api/athletes/:athleteId/cut-plans': STAFF_ON_ATHLETE,
+  // The athlete writes rehearsal day notes too (the athlete policy's noteRehearsal).
+  'PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note': ATHLETE_ROWS,
   'GET /api/athletes/:athleteId/body-composition': ATHLETE_ROWS,
   'POST /api/athletes/:athleteId/body-measurements': ATHLETE_ROWS,
   'DELETE /api/athletes/:athleteId/body-measurements/:measurementId': ATHLETE_ROWS,
@@ -119,6 +124,12 @@ const ACCESS: Record<string, Cell> = {
   'DELETE /api/countdown-templates/:templateId': [...TEAM_STAFF, 'outsider'],
   'GET /api/foods': SIGNED_IN,
   'POST /api/foods': TEAM_STAFF,
+  'POST /api/foods/label': TEAM_STAFF,
+  // `foodId` is the named athlete's personal food: only the athlete and the staff who read them.
+  'GET /api/foods/:foodId': ATHLETE_ROWS,
+  // Personal foods are added by the athlete alone (a coach is refused in food-labels.test.ts).
+  'POST /api/athletes/:athleteId/foods': ATHLETE_ROWS,
+  'POST /api/athletes/:athleteId/foods/barcode': ATHLETE_ROWS,
   'POST /api/meal-plans/fit': TEAM_MANAGE,
   'POST /api/athletes/:athleteId/days/:date/planned-meals/:mealId': ATHLETE_ROWS,
   'POST /api/athletes/:athleteId/photos': ATHLETE_ROWS,
@@ -171,6 +182,17 @@ const measurementBody = {
   measuredBy: 'Coach',
 };
 
+/** A nutrition label, per 100 g. */
+const labelBody = {
+  name: 'Access crackers',
+  basis: 'per100g',
+  energy: 400,
+  energyUnit: 'kcal',
+  proteinG: 10,
+  carbohydrateG: 70,
+  fatG: 9,
+};
+
 let t: TestApp;
 let routes: AppRoute[];
 let w: World;
@@ -199,6 +221,7 @@ beforeAll(async () => {
   const template = await coachAgent.post('/api/countdown-templates').send(templateBody());
   const version = await coachAgent.post(`${a}/plan/versions`).send(versionBody(TODAY, planContent()));
   const measurement = await coachAgent.post(`${a}/body-measurements`).send(measurementBody);
+  const personalFood = await self.post(`${a}/foods`).send(labelBody);
   const invitation = await coachAgent
     .post('/api/invitations')
     .send({ email: 'invitee@example.test', name: 'Invitee', role: 'athlete' });
@@ -209,6 +232,7 @@ beforeAll(async () => {
       athleteId: athlete.athlete.id,
       markId: mark.body.data.id,
       measurementId: measurement.body.data?.id ?? randomUUID(),
+      foodId: personalFood.body.data?.food?.id ?? randomUUID(),
       templateId: template.body.data.id,
       versionId: version.body.data?.id ?? version.body.data?.version?.id ?? randomUUID(),
       id: invitation.body.data?.id ?? randomUUID(),
@@ -292,6 +316,7 @@ function bodyFor(key: string): object | undefined {
       notes: null,
       acknowledgedKeys: [],
     },
+    'PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note': { date: TODAY, note: 'Low-residue food' },
     'POST /api/athletes/:athleteId/shares': { userId: w.assistantUser.id },
     'PUT /api/athletes/:athleteId/days/:date/weigh-in': weighInBody(),
     'PUT /api/athletes/:athleteId/days/:date/evening': eveningBody(),
@@ -314,6 +339,9 @@ function bodyFor(key: string): object | undefined {
     'POST /api/countdown-templates': templateBody(),
     'PUT /api/countdown-templates/:templateId': templateBody(),
     'POST /api/foods': { name: 'Test oats', proteinG: 13, carbohydrateG: 60, fatG: 7 },
+    'POST /api/foods/label': labelBody,
+    'POST /api/athletes/:athleteId/foods': labelBody,
+    'POST /api/athletes/:athleteId/foods/barcode': { barcode: '2004821000018' },
     'POST /api/meal-plans/fit': {
       targets: { energyKcal: 500, proteinG: null, carbohydrateG: null, fatG: null },
       tolerances: { energyPct: 5, proteinG: 10, carbohydrateG: 15, fatG: 7 },

@@ -3,7 +3,7 @@ import os from 'node:os';
 import path from 'node:path';
 import bcrypt from 'bcryptjs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createStorage } from '../../api/src/adapters/storage.js';
+import { LocalFolderStorage } from '../../api/src/adapters/storage.js';
 import { Athlete } from '../../api/src/entities/athlete.entity.js';
 import { AthleteFlag } from '../../api/src/entities/athlete-flag.entity.js';
 import { ConditionPhoto } from '../../api/src/entities/condition-photo.entity.js';
@@ -40,7 +40,7 @@ let t: TestApp;
 const seededAt = new Date('2026-12-01T11:30:00Z');
 // Photos go to a folder of this file's own; the app reads the same folder.
 const uploadsDir = mkdtempSync(path.join(os.tmpdir(), 'driftmark-seed-'));
-const storage = createStorage({ uploadsDir });
+const storage = new LocalFolderStorage(uploadsDir);
 const seed = (options: { appMode?: string; now?: Date } = {}) =>
   seedDemo(t.dataSource, { storage, ...options });
 /** What the generators produce for the seed date, to compare the database with. */

@@ -10,6 +10,7 @@ import { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { Consent } from '../entities/consent.entity.js';
 import { CutPlan } from '../entities/cut-plan.entity.js';
 import { CutPlanAcknowledgement } from '../entities/cut-plan-acknowledgement.entity.js';
+import { CutRehearsalNote } from '../entities/cut-rehearsal-note.entity.js';
 import { CountdownTemplate } from '../entities/countdown-template.entity.js';
 import { EveningLog } from '../entities/evening-log.entity.js';
 import { FluidEntry } from '../entities/fluid-entry.entity.js';
@@ -75,6 +76,7 @@ export const ENTITIES = [
   // Making weight
   CutPlan,
   CutPlanAcknowledgement,
+  CutRehearsalNote,
   // Body composition
   BodyMeasurement,
 ];

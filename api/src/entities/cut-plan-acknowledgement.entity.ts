@@ -9,7 +9,7 @@ import { User } from './user.entity.js';
  */
 @Entity({ name: 'cut_plan_acknowledgements' })
 @Index('UQ_cut_plan_acknowledgements_cut_plan_id_key', ['cutPlanId', 'key'], { unique: true })
-@Check('CHK_cut_plan_acknowledgements_severity', `"severity" IN ('warning', 'strong')`)
+@Check('CHK_cut_plan_acknowledgements_severity', `"severity" IN ('warning', 'strong', 'severe')`)
 export class CutPlanAcknowledgement extends BaseRecord {
   @Column({ name: 'cut_plan_id', type: 'uuid' })
   cutPlanId: string;
@@ -22,7 +22,7 @@ export class CutPlanAcknowledgement extends BaseRecord {
   key: string;
 
   @Column({ type: 'varchar', length: 8 })
-  severity: 'warning' | 'strong';
+  severity: 'warning' | 'strong' | 'severe';
 
   @Column({ type: 'text' })
   message: string;

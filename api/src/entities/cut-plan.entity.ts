@@ -7,7 +7,8 @@ import { User } from './user.entity.js';
 /**
  * A weight-cut plan for the athlete's weigh-in, built by the coach with the athlete: the chronic
  * part (start weight down to the pre-acute weight) and the acute last days. The latest one is in
- * force; earlier ones stay as the history.
+ * force; earlier ones stay as the history. A rehearsal (practice run) aims at a practice weigh-in
+ * and is kept apart: its record is shown beside the next plan.
  */
 @Entity({ name: 'cut_plans' })
 @Check('CHK_cut_plans_path', `"path" IN ('linear', 'rate')`)
@@ -49,6 +50,10 @@ export class CutPlan extends BaseRecord {
 
   @Column({ type: 'text', nullable: true })
   notes: string | null;
+
+  /** A practice run: `weighInDate` is its practice weigh-in, and it is never the plan in force. */
+  @Column({ type: 'boolean', default: false })
+  rehearsal: boolean;
 
   /** RESTRICT: a plan without its author would be no record at all. */
   @Index('IDX_cut_plans_created_by_id')

@@ -29,4 +29,8 @@ export class FluidEntry extends ClientDayEntry {
 
   @Column({ type: 'varchar', length: 16 })
   kind: FluidKind;
+
+  /** Sodium the drink carried, mg (a recovery drink after a weigh-in); null when unknown. */
+  @Column({ name: 'sodium_mg', type: 'double precision', nullable: true })
+  sodiumMg: number | null;
 }

@@ -37,6 +37,7 @@ import {
 import {
   clearRunningQueue,
   createQueue,
+  oneSetupAtATime,
   MAIL_SEND_QUEUE,
   MAIL_SWEEP_QUEUE,
   QUEUE_SCHEMA,
@@ -213,10 +214,12 @@ export async function startMailWorker(opts: MailWorkerOptions): Promise<MailWork
       retryBackoff: true,
       expireInSeconds: tuning.expireInSeconds,
     };
-    await boss.createQueue(MAIL_SEND_QUEUE, sendQueue);
-    // createQueue keeps an existing queue as it was; apply the current settings to it.
-    await boss.updateQueue(MAIL_SEND_QUEUE, sendQueue);
-    await boss.createQueue(MAIL_SWEEP_QUEUE, { name: MAIL_SWEEP_QUEUE, policy: 'short', retryLimit: 0 });
+    await oneSetupAtATime(dataSource, async () => {
+      await boss.createQueue(MAIL_SEND_QUEUE, sendQueue);
+      // createQueue keeps an existing queue as it was; apply the current settings to it.
+      await boss.updateQueue(MAIL_SEND_QUEUE, sendQueue);
+      await boss.createQueue(MAIL_SWEEP_QUEUE, { name: MAIL_SWEEP_QUEUE, policy: 'short', retryLimit: 0 });
+    });
 
     await runSweep();
     await boss.work<MailSendJob>(

@@ -42,7 +42,7 @@ import {
 } from '../services/notify.service.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { isSafetyFlag, loadSnapshots, type AthleteSnapshot } from '../services/athlete-figures.service.js';
-import { createQueue } from './queue.js';
+import { createQueue, oneSetupAtATime } from './queue.js';
 
 export const NOTIFY_TICK_QUEUE = 'notify-tick';
 /** Local hour on Monday from which staff get the weekly summary. */
@@ -289,7 +289,9 @@ export async function startNotifyScheduler(opts: NotifySchedulerOptions): Promis
 
   try {
     await boss.start();
-    await boss.createQueue(NOTIFY_TICK_QUEUE, { name: NOTIFY_TICK_QUEUE, policy: 'short', retryLimit: 0 });
+    await oneSetupAtATime(dataSource, () =>
+      boss.createQueue(NOTIFY_TICK_QUEUE, { name: NOTIFY_TICK_QUEUE, policy: 'short', retryLimit: 0 }),
+    );
     await boss.work(
       NOTIFY_TICK_QUEUE,
       { pollingIntervalSeconds: tuning.pollingIntervalSeconds },

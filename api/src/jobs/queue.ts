@@ -4,7 +4,7 @@
  * the change that caused it committed.
  */
 import PgBoss from 'pg-boss';
-import type { EntityManager } from 'typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
 import type { Config } from '../config.js';
 
 export const QUEUE_SCHEMA = 'pgboss';
@@ -24,6 +24,20 @@ export function createQueue(config: Pick<Config, 'databaseUrl'>): PgBoss {
     application_name: 'driftmark-jobs',
     // The worker fetches one job at a time; maintenance and cron share the rest.
     max: 3,
+  });
+}
+
+const QUEUE_SETUP_LOCK_KEY = 'driftmark:queue-setup';
+
+/**
+ * Runs queue set-up (pg-boss `createQueue`/`updateQueue`) in one process at a time, under a
+ * transaction-scoped advisory lock: two instances starting together deadlock inside pg-boss's
+ * `create_queue` otherwise (found by tests/integration/multi-instance.test.ts), and the loser exits.
+ */
+export async function oneSetupAtATime<T>(dataSource: DataSource, work: () => Promise<T>): Promise<T> {
+  return dataSource.transaction(async (manager) => {
+    await manager.query('SELECT pg_advisory_xact_lock(hashtext($1))', [QUEUE_SETUP_LOCK_KEY]);
+    return work();
   });
 }
 

@@ -15,22 +15,36 @@ export interface EveningFigures {
   cardioMinutes: number | null;
 }
 
+/** A drink as the day's figures read it: its volume and the sodium it carried, if known. */
+export interface DrinkFigures {
+  volumeMl: number;
+  sodiumMg: number | null;
+}
+
+/** Sodium summed over what carries a figure; unknown stays unknown (null when neither does). */
+export function addSodium(a: number | null, b: number | null): number | null {
+  return a === null ? b : b === null ? a : a + b;
+}
+
 /**
  * What was logged on a day, for drift: null for a metric with no entry at all (no meals, no
  * fluids, no evening card or the field left empty), so it reads as not logged, never as zero eaten.
+ * The day's sodium is the meals' and the drinks' (a recovery drink logs its sodium).
  */
 export function dayActuals(
   meals: MealTotals | null,
-  fluidMl: number | null,
+  drinks: readonly DrinkFigures[],
   evening: EveningFigures | null,
 ): DayActuals {
+  const fluidMl = drinks.length > 0 ? drinks.reduce((sum, d) => sum + d.volumeMl, 0) : null;
+  const drinkSodium = drinks.reduce<number | null>((sum, d) => addSodium(sum, d.sodiumMg), null);
   return {
     energyKcal: meals?.energyKcal ?? null,
     proteinG: meals?.proteinG ?? null,
     carbohydrateG: meals?.carbohydrateG ?? null,
     fatG: meals?.fatG ?? null,
     fluidMl,
-    sodiumMg: meals?.sodiumMg ?? null,
+    sodiumMg: addSodium(meals?.sodiumMg ?? null, drinkSodium),
     steps: evening?.steps ?? null,
     cardioMinutes: evening?.cardioMinutes ?? null,
   };

@@ -10,8 +10,8 @@
  * - A food's other words (`terms`, e.g. "rolled oats", "oat flakes", "porridge oats") count like its
  *   name, so a synonym finds it.
  * - Ranking: a query that is exactly the name or one of the terms first, then names starting with the
- *   first word and with fewer other words; the team's own and our everyday foods before the reference
- *   table; then the athlete's own use and the team's. The weights are ours (common practice, no
+ *   first word and with fewer other words; the team's own (and the athlete's personal foods) and our
+ *   everyday foods before the reference table; then the athlete's own use and the team's. The weights are ours (common practice, no
  *   source), checked by the thirty everyday searches in `everyday-searches.ts`.
  */
 
@@ -54,7 +54,7 @@ export interface SearchableFood {
   terms?: readonly string[];
   /** 'raw' or 'cooked' counts as a word of the food ("rice cooked"). */
   preparation?: 'raw' | 'cooked' | null;
-  source: 'team' | 'everyday' | 'reference';
+  source: 'team' | 'personal' | 'everyday' | 'reference';
 }
 
 /** How often a food was logged in the window: by this athlete, by the whole team (athlete included). */
@@ -81,8 +81,16 @@ export function indexFood<F extends SearchableFood>(food: F): IndexedFood<F> {
 
 const matchesWord = (q: string, word: string) => word === q || (q.length >= 2 && word.startsWith(q));
 
-/** Bonus by where a food comes from: the team's own and our everyday foods before the reference table. */
-const SOURCE_BONUS: Record<SearchableFood['source'], number> = { team: 8, everyday: 6, reference: 0 };
+/**
+ * Bonus by where a food comes from: the team's own (and the athlete's personal foods, weighed like
+ * them) and our everyday foods before the reference table.
+ */
+const SOURCE_BONUS: Record<SearchableFood['source'], number> = {
+  team: 8,
+  personal: 8,
+  everyday: 6,
+  reference: 0,
+};
 
 /**
  * How well a food answers the query's words (higher is better), or null when some word starts no

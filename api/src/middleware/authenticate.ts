@@ -20,8 +20,11 @@ const ENDED = {
  * cookie's session is over (and clears the cookie). A JWT older than SESSION_REFRESH_MINUTES is
  * replaced by a fresh one (sliding idle end), never beyond the session's absolute end.
  */
+/** The marker `authenticate` puts on its handler: the route needs a session (read by `lib/route-table.ts`). */
+export const AUTHENTICATES = Symbol('authenticates');
+
 export function authenticate(): RequestHandler {
-  return async (req, res, next) => {
+  const handler: RequestHandler = async (req, res, next) => {
     const { config, dataSource } = req.ctx;
     const token: unknown = req.cookies?.[SESSION_COOKIE];
     if (typeof token !== 'string' || token === '') return next(unauthenticated());
@@ -42,6 +45,8 @@ export function authenticate(): RequestHandler {
     };
     next();
   };
+  Object.defineProperty(handler, AUTHENTICATES, { value: true });
+  return handler;
 }
 
 /** The signed-in user of a request that passed `authenticate()`. */

@@ -10,10 +10,11 @@ import { AppError } from '../errors.js';
 
 /**
  * Where multer puts uploads while a request runs: per process, one folder per upload inside it,
- * removed as each upload ends.
+ * removed as each upload ends. The folder is named by host and process id: several instances may
+ * share a temp folder (containers on one volume), and a process id means something only on its host.
  */
 export function uploadTempDir(): string {
-  return path.join(uploadTempRoot(), String(process.pid));
+  return path.join(uploadTempRoot(), `${os.hostname()}-${process.pid}`);
 }
 
 function uploadTempRoot(): string {
@@ -31,8 +32,9 @@ function processAlive(pid: number): boolean {
 }
 
 /**
- * At start, before any upload: removes this process's temp folder and those of processes that are
- * gone (a kill leaves its folder behind); folders of running servers stay. Returns how many went.
+ * At start, before any upload: removes this process's temp folder and those of this host's
+ * processes that are gone (a kill leaves its folder behind); folders of running servers, and of
+ * other hosts (whose processes this one cannot see), stay. Returns how many went.
  */
 export async function sweepUploadTemp(): Promise<number> {
   let names: string[];
@@ -41,9 +43,12 @@ export async function sweepUploadTemp(): Promise<number> {
   } catch {
     return 0;
   }
+  const host = `${os.hostname()}-`;
   let removed = 0;
   for (const name of names) {
-    const pid = Number(name);
+    // Another host's folder (or a name that is not ours): that host's own start sweeps it.
+    if (!name.startsWith(host)) continue;
+    const pid = Number(name.slice(host.length));
     if (Number.isInteger(pid) && pid > 0 && pid !== process.pid && processAlive(pid)) continue;
     await rm(path.join(uploadTempRoot(), name), { recursive: true, force: true });
     removed += 1;

@@ -40,17 +40,17 @@ const N = false;
 // below until someone decides its row/column here.
 // prettier-ignore
 const EXPECTED: Record<ActorName, Record<AthleteAction, boolean>> = {
-  self:                                         { read: Y, update: Y, log: Y, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: Y, plan: N, measure: Y },
-  'other athlete, same team':                   { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
-  'owner of the team':                          { read: Y, update: Y, log: N, delete: Y, share: Y, annotate: Y, endCoaching: Y, completeIntake: N, plan: Y, measure: Y },
-  'assigned coach':                             { read: Y, update: Y, log: N, delete: Y, share: Y, annotate: Y, endCoaching: Y, completeIntake: N, plan: Y, measure: Y },
-  'coach, same team, not assigned, not shared': { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
-  'coach with a share':                         { read: Y, update: Y, log: N, delete: N, share: N, annotate: Y, endCoaching: N, completeIntake: N, plan: Y, measure: Y },
-  'assistant with the share':                   { read: Y, update: Y, log: N, delete: N, share: N, annotate: Y, endCoaching: N, completeIntake: N, plan: Y, measure: Y },
-  'assistant without the share':                { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
-  'owner of another team':                      { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
-  'coach of another team':                      { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
-  'assigned coach id, other team':              { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N },
+  self:                                         { read: Y, update: Y, log: Y, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: Y, plan: N, measure: Y, noteRehearsal: Y },
+  'other athlete, same team':                   { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
+  'owner of the team':                          { read: Y, update: Y, log: N, delete: Y, share: Y, annotate: Y, endCoaching: Y, completeIntake: N, plan: Y, measure: Y, noteRehearsal: Y },
+  'assigned coach':                             { read: Y, update: Y, log: N, delete: Y, share: Y, annotate: Y, endCoaching: Y, completeIntake: N, plan: Y, measure: Y, noteRehearsal: Y },
+  'coach, same team, not assigned, not shared': { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
+  'coach with a share':                         { read: Y, update: Y, log: N, delete: N, share: N, annotate: Y, endCoaching: N, completeIntake: N, plan: Y, measure: Y, noteRehearsal: Y },
+  'assistant with the share':                   { read: Y, update: Y, log: N, delete: N, share: N, annotate: Y, endCoaching: N, completeIntake: N, plan: Y, measure: Y, noteRehearsal: Y },
+  'assistant without the share':                { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
+  'owner of another team':                      { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
+  'coach of another team':                      { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
+  'assigned coach id, other team':              { read: N, update: N, log: N, delete: N, share: N, annotate: N, endCoaching: N, completeIntake: N, plan: N, measure: N, noteRehearsal: N },
 };
 
 describe('athlete policy', () => {

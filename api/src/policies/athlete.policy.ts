@@ -27,6 +27,8 @@ export const ATHLETE_ACTIONS = [
   'plan',
   /** Enter or remove body-composition measurements: the athlete and the staff working on them. */
   'measure',
+  /** Write what was done on a practice cut's days: the athlete and the staff working on them. */
+  'noteRehearsal',
 ] as const;
 export type AthleteAction = (typeof ATHLETE_ACTIONS)[number];
 
@@ -50,13 +52,23 @@ export function athleteRelationship(actor: Actor, target: AthleteTarget): Athlet
 }
 
 const RULES: Record<AthleteRelationship, readonly AthleteAction[]> = {
-  self: ['read', 'update', 'log', 'completeIntake', 'measure'],
+  self: ['read', 'update', 'log', 'completeIntake', 'measure', 'noteRehearsal'],
   otherAthlete: [],
-  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan', 'measure'],
-  assignedCoach: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan', 'measure'],
+  owner: ['read', 'update', 'delete', 'share', 'annotate', 'endCoaching', 'plan', 'measure', 'noteRehearsal'],
+  assignedCoach: [
+    'read',
+    'update',
+    'delete',
+    'share',
+    'annotate',
+    'endCoaching',
+    'plan',
+    'measure',
+    'noteRehearsal',
+  ],
   // A coach or assistant the athlete is shared with works on them (the plan included) but never
   // deletes, re-shares or ends the coaching.
-  sharedStaff: ['read', 'update', 'annotate', 'plan', 'measure'],
+  sharedStaff: ['read', 'update', 'annotate', 'plan', 'measure', 'noteRehearsal'],
   unrelatedStaff: [],
   otherTeam: [],
 };

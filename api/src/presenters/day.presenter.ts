@@ -36,6 +36,7 @@ export function presentFluid(f: FluidEntry): Of<'fluids'>[number] {
     volumeMl: f.volumeMl,
     entered: { value: f.enteredValue, unit: f.enteredUnit },
     kind: f.kind,
+    sodiumMg: f.sodiumMg,
   };
 }
 
@@ -157,7 +158,7 @@ export function presentDay(p: DayParts): DayView {
     fluids: p.fluids.map(presentFluid),
     fluidTotalMl: p.fluids.reduce((sum, f) => sum + f.volumeMl, 0),
     meals: p.meals.map(presentMeal),
-    totals: sumNutrients(p.meals),
+    totals: sumNutrients(p.meals, p.fluids),
     supplements: p.supplements.map(presentSupplement),
     evening: p.evening ? presentEvening(p.evening) : null,
     symptoms: p.symptoms.map(presentSymptom),

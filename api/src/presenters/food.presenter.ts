@@ -1,25 +1,53 @@
-import { atwaterKcal, type FoodView } from '@driftmark/shared';
+import { atwaterKcal, labelEnergyCheck, type FoodView, type LabelCheckView } from '@driftmark/shared';
 import type { EverydayFood } from '../adapters/everyday-foods.js';
 import type { ReferenceFood } from '../adapters/reference-foods.js';
 import type { Food } from '../entities/food.entity.js';
 
-/** A team food's energy per 100 g, from its macros with the Atwater general factors. */
+const NO_USES = { mine: 0, team: 0 };
+
+/** A team or personal food's energy per 100 g, from its macros with the Atwater general factors. */
 export function teamFoodEnergyKcal(
   f: Pick<Food, 'proteinG' | 'carbohydrateG' | 'fatG' | 'alcoholG'>,
 ): number {
   return atwaterKcal(f);
 }
 
+/** The label's printed energy against its macros (shared/src/food-label.ts), per 100 g. */
+export function labelCheckOf(f: Food): LabelCheckView | null {
+  if (f.labelEnergyKcal === null) return null;
+  const check = labelEnergyCheck({ ...f, energyKcal: f.labelEnergyKcal });
+  const printed = Math.round(check.printedKcal);
+  const computed = Math.round(check.atwaterKcal);
+  let warning: string | null = null;
+  if (check.warn) {
+    warning =
+      check.differencePct === null
+        ? `The label prints ${printed} kcal per 100 g, but its protein, carbohydrate and fat give none: check the figures you copied.`
+        : `The label prints ${printed} kcal per 100 g, ${Math.abs(Math.round(check.differencePct))} % ${
+            check.differencePct > 0 ? 'more' : 'less'
+          } than the ${computed} kcal its macros give (4 kcal/g protein and carbohydrate, 9 fat, 7 alcohol, 2 fibre): check the figures you copied.`;
+  }
+  return {
+    printedKcal: check.printedKcal,
+    atwaterKcal: check.atwaterKcal,
+    differencePct: check.differencePct,
+    warning,
+  };
+}
+
 export function presentTeamFood(f: Food): FoodView {
   return {
     id: f.id,
     name: f.name,
-    source: 'team',
+    source: f.athleteId ? 'personal' : 'team',
+    barcode: f.barcode,
     preparation: preparationOf(f.name),
     portions: [],
+    uses: NO_USES,
     per100g: {
       energyKcal: teamFoodEnergyKcal(f),
-      listedEnergyKcal: null,
+      // The printed energy stays in view where the label disagrees with its own macros.
+      listedEnergyKcal: labelCheckOf(f)?.warning ? f.labelEnergyKcal : null,
       proteinG: f.proteinG,
       carbohydrateG: f.carbohydrateG,
       fatG: f.fatG,
@@ -34,8 +62,10 @@ export function presentReferenceFood(f: ReferenceFood): FoodView {
     id: f.id,
     name: f.name,
     source: 'reference',
+    barcode: null,
     preparation: preparationOf(f.name),
     portions: [],
+    uses: NO_USES,
     per100g: {
       energyKcal: f.per100g.energyKcal,
       listedEnergyKcal: f.listedEnergyKcal,
@@ -61,8 +91,10 @@ export function presentEverydayFood(f: EverydayFood): FoodView {
     id: f.id,
     name: f.name,
     source: 'everyday',
+    barcode: null,
     preparation: f.preparation,
     portions: [...f.portions],
+    uses: NO_USES,
     per100g: {
       energyKcal: f.per100g.energyKcal,
       listedEnergyKcal: null,

@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import { CutPlan } from '../entities/cut-plan.entity.js';
 import { CutPlanAcknowledgement } from '../entities/cut-plan-acknowledgement.entity.js';
+import { CutRehearsalNote } from '../entities/cut-rehearsal-note.entity.js';
 import type { User } from '../entities/user.entity.js';
 
 export type CutPlanWithAuthor = CutPlan & { createdBy: User };
@@ -18,8 +19,10 @@ export type NewCutPlan = Pick<
   | 'path'
   | 'thresholdPct'
   | 'notes'
+  | 'rehearsal'
   | 'createdById'
 >;
+export type RehearsalNoteWithAuthor = CutRehearsalNote & { author: User | null };
 export type NewCutAcknowledgement = Pick<
   CutPlanAcknowledgement,
   'key' | 'severity' | 'message' | 'source' | 'acknowledgedById' | 'acknowledgedAt'
@@ -28,13 +31,50 @@ export type NewCutAcknowledgement = Pick<
 export class CutPlanRepository {
   constructor(private readonly manager: EntityManager) {}
 
-  /** The athlete's plan in force: the latest saved. */
+  /** The athlete's plan in force: the latest saved that is not a rehearsal. */
   latest(athleteId: string): Promise<CutPlanWithAuthor | null> {
     return this.manager.findOne(CutPlan, {
-      where: { athleteId },
+      where: { athleteId, rehearsal: false },
       relations: { createdBy: true },
       order: { createdAt: 'DESC', id: 'DESC' },
     }) as Promise<CutPlanWithAuthor | null>;
+  }
+
+  /** The athlete's latest practice run: the latest practice weigh-in (then the latest saved). */
+  latestRehearsal(athleteId: string): Promise<CutPlan | null> {
+    return this.manager.findOne(CutPlan, {
+      where: { athleteId, rehearsal: true },
+      order: { weighInDate: 'DESC', createdAt: 'DESC', id: 'DESC' },
+    });
+  }
+
+  /** One of the athlete's rehearsals by id; null for another athlete's plan or a cut that is not one. */
+  findRehearsal(athleteId: string, id: string): Promise<CutPlan | null> {
+    return this.manager.findOneBy(CutPlan, { id, athleteId, rehearsal: true });
+  }
+
+  /** A rehearsal's day notes with their writers, by date. */
+  notes(cutPlanId: string): Promise<RehearsalNoteWithAuthor[]> {
+    return this.manager.find(CutRehearsalNote, {
+      where: { cutPlanId },
+      relations: { author: true },
+      order: { localDate: 'ASC' },
+    }) as Promise<RehearsalNoteWithAuthor[]>;
+  }
+
+  /** Writes the day's note (one a day: the latest writer's), in one statement. */
+  async setNote(plan: Pick<CutPlan, 'id' | 'athleteId'>, date: string, note: string, authorId: string) {
+    await this.manager
+      .createQueryBuilder()
+      .insert()
+      .into(CutRehearsalNote)
+      .values({ cutPlanId: plan.id, athleteId: plan.athleteId, localDate: date, note, authorId })
+      .orUpdate(['note', 'author_id', 'updated_at'], ['cut_plan_id', 'local_date'])
+      .execute();
+  }
+
+  async removeNote(cutPlanId: string, date: string): Promise<void> {
+    await this.manager.delete(CutRehearsalNote, { cutPlanId, localDate: date });
   }
 
   acknowledgements(cutPlanId: string): Promise<CutAcknowledgementWithAuthor[]> {

@@ -1,4 +1,10 @@
-import type { EntityManager, FindOptionsOrder, FindOptionsWhere, QueryDeepPartialEntity } from 'typeorm';
+import {
+  In,
+  type EntityManager,
+  type FindOptionsOrder,
+  type FindOptionsWhere,
+  type QueryDeepPartialEntity,
+} from 'typeorm';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
 import { hydrateRows } from './hydrate.js';
 
@@ -15,6 +21,12 @@ export class DayEntryRepository<E extends ClientDayEntry> {
 
   findByClientId(athleteId: string, clientId: string): Promise<E | null> {
     return this.manager.findOneBy(this.entity, this.where({ athleteId, clientId }));
+  }
+
+  /** This athlete's entries with any of these client ids (a checklist's items): one statement. */
+  findByClientIds(athleteId: string, clientIds: string[]): Promise<E[]> {
+    if (clientIds.length === 0) return Promise.resolve([]);
+    return this.manager.findBy(this.entity, { athleteId, clientId: In(clientIds) } as FindOptionsWhere<E>);
   }
 
   /** The entry only if it belongs to this athlete. */

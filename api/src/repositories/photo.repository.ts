@@ -105,4 +105,19 @@ export class PhotoRepository {
     );
     return new Set(rows.map((r) => r.key));
   }
+
+  /**
+   * The stored keys of up to `limit` photos after `afterId` in id order (the photo migration's
+   * pages: resumable, and never reading the whole table at once).
+   */
+  async keysPage(
+    afterId: string | null,
+    limit: number,
+  ): Promise<{ id: string; thumbKey: string; displayKey: string }[]> {
+    return this.manager.query(
+      `SELECT id, thumb_key AS "thumbKey", display_key AS "displayKey" FROM condition_photos
+       WHERE ($1::uuid IS NULL OR id > $1::uuid) ORDER BY id LIMIT $2`,
+      [afterId, limit],
+    );
+  }
 }

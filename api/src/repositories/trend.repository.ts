@@ -23,6 +23,8 @@ export interface FluidRow {
   date: string;
   time: string;
   volumeMl: number;
+  /** Sodium the drink carried, mg; null when unknown. */
+  sodiumMg: number | null;
 }
 
 export interface SymptomRow {
@@ -234,15 +236,16 @@ export class TrendRepository {
 
   private async fluids(windows: readonly HistoryWindow[]): Promise<Map<string, FluidRow[]>> {
     const rows = await this.manager.query<
-      { athlete_id: string; date: string; time: string; volume_ml: number }[]
+      { athlete_id: string; date: string; time: string; volume_ml: number; sodium_mg: number | null }[]
     >(
-      `SELECT f.athlete_id, f.local_date::text AS date, f.local_time AS time, f.volume_ml
+      `SELECT f.athlete_id, f.local_date::text AS date, f.local_time AS time, f.volume_ml, f.sodium_mg
          FROM fluid_entries f ${inWindows('f')}
         ORDER BY f.athlete_id, f.local_date, f.local_time`,
       boundedParams(windows),
     );
     const out = new Map<string, FluidRow[]>();
-    for (const r of rows) push(out, r.athlete_id, { date: r.date, time: r.time, volumeMl: r.volume_ml });
+    for (const r of rows)
+      push(out, r.athlete_id, { date: r.date, time: r.time, volumeMl: r.volume_ml, sodiumMg: r.sodium_mg });
     return out;
   }
 

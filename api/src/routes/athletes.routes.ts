@@ -4,6 +4,7 @@ import {
   shareAthleteRequest,
   updateEventRequest,
   uuid,
+  athleteProfile,
 } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
@@ -20,6 +21,7 @@ import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { todayIn } from '../lib/dates.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { athleteProfileView, PlanService } from '../services/plan.service.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const shareParams = z.object({ athleteId: uuid, userId: uuid });
@@ -54,19 +56,26 @@ export async function loadAthleteById(req: Request, athleteId: string, action: A
 export function athletesRouter(): Router {
   const router = Router();
 
-  router.get('/:athleteId', authenticate(), validate({ params: athleteParams }), async (req, res) => {
-    const { actor, athlete, target } = await loadAthlete(req, 'read');
-    const abilities = athleteAbilities(actor, target);
-    // After the coaching ended nobody logs new days and there is nothing left to end.
-    if (athlete.status === 'ended') Object.assign(abilities, { log: false, endCoaching: false });
-    res.json({
-      data: await athleteProfileView(req.ctx.dataSource.manager, athlete, req.ctx.clock()),
-      abilities,
-    });
-  });
+  router.get(
+    '/:athleteId',
+    responds({ summary: 'One athlete’s profile', data: athleteProfile, abilities: true }),
+    authenticate(),
+    validate({ params: athleteParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      const abilities = athleteAbilities(actor, target);
+      // After the coaching ended nobody logs new days and there is nothing left to end.
+      if (athlete.status === 'ended') Object.assign(abilities, { log: false, endCoaching: false });
+      res.json({
+        data: await athleteProfileView(req.ctx.dataSource.manager, athlete, req.ctx.clock()),
+        abilities,
+      });
+    },
+  );
 
   router.put(
     '/:athleteId/intake',
+    responds({ summary: 'Complete the intake form', data: athleteProfile }),
     authenticate(),
     // Ages are counted to the server's today (UTC: the athlete's own zone is part of this very form).
     validate({
@@ -85,6 +94,7 @@ export function athletesRouter(): Router {
   // The coach moves the event; the profile in the answer says when the countdown now aims elsewhere.
   router.patch(
     '/:athleteId/event',
+    responds({ summary: 'Change the event date, time or name', data: z.object({ athlete: athleteProfile }) }),
     authenticate(),
     validate({ params: athleteParams, body: dated(updateEventRequest, { eventDate: 'any' }) }),
     async (req, res) => {
@@ -95,6 +105,7 @@ export function athletesRouter(): Router {
 
   router.post(
     '/:athleteId/shares',
+    responds({ summary: 'Share the athlete with a staff member', status: 204, data: null }),
     authenticate(),
     validate({ params: athleteParams, body: shareAthleteRequest }),
     async (req, res) => {
@@ -106,6 +117,7 @@ export function athletesRouter(): Router {
 
   router.delete(
     '/:athleteId/shares/:userId',
+    responds({ summary: 'Stop sharing the athlete with a staff member', status: 204, data: null }),
     authenticate(),
     validate({ params: shareParams }),
     async (req, res) => {

@@ -3,6 +3,8 @@ import {
   forgotPasswordRequest,
   resetPasswordRequest,
   signInRequest,
+  meResponse,
+  okResponse,
 } from '@driftmark/shared';
 import { Router } from 'express';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
@@ -13,6 +15,7 @@ import { SESSION_COOKIE } from '../lib/session-token.js';
 import { AuthService } from '../services/auth.service.js';
 import { SessionService } from '../services/session.service.js';
 import { clientInfo } from '../lib/client-info.js';
+import { responds } from '../middleware/responds.js';
 
 export function authRouter(limits: RateLimits): Router {
   const router = Router();
@@ -21,6 +24,7 @@ export function authRouter(limits: RateLimits): Router {
 
   router.post(
     '/sign-in',
+    responds({ summary: 'Sign in: sets the session cookie', data: meResponse }),
     limits.perAddress('sign-in'),
     limits.signIn(),
     validate({ body: signInRequest }),
@@ -32,19 +36,28 @@ export function authRouter(limits: RateLimits): Router {
   );
 
   // Works with or without a live session, so a stale tab can always sign out.
-  router.post('/sign-out', async (req, res) => {
-    const { config: cfg, dataSource } = req.ctx;
-    const cookie: unknown = req.cookies?.[SESSION_COOKIE];
-    if (typeof cookie === 'string' && cookie !== '') {
-      const resolved = await new SessionService(dataSource.manager, cfg).resolve(cookie, req.ctx.clock());
-      if ('session' in resolved) await new AuthService(req.ctx).signOut(resolved.session.id);
-    }
-    clearSessionCookie(res, cfg);
-    res.status(204).end();
-  });
+  router.post(
+    '/sign-out',
+    responds({ summary: 'Sign out (with or without a live session)', status: 204, data: null }),
+    async (req, res) => {
+      const { config: cfg, dataSource } = req.ctx;
+      const cookie: unknown = req.cookies?.[SESSION_COOKIE];
+      if (typeof cookie === 'string' && cookie !== '') {
+        const resolved = await new SessionService(dataSource.manager, cfg).resolve(cookie, req.ctx.clock());
+        if ('session' in resolved) await new AuthService(req.ctx).signOut(resolved.session.id);
+      }
+      clearSessionCookie(res, cfg);
+      res.status(204).end();
+    },
+  );
 
   router.post(
     '/forgot-password',
+    responds({
+      summary: 'E-mail a reset link (answers the same whether the address is known)',
+      status: 202,
+      data: okResponse,
+    }),
     forgotLimit,
     validate({ body: forgotPasswordRequest }),
     async (req, res) => {
@@ -55,6 +68,7 @@ export function authRouter(limits: RateLimits): Router {
 
   router.post(
     '/reset-password',
+    responds({ summary: 'Set a new password with a reset link’s token', data: okResponse }),
     limits.perAddress('reset-password'),
     resetLimit,
     validate({ body: resetPasswordRequest }),
@@ -66,6 +80,7 @@ export function authRouter(limits: RateLimits): Router {
 
   router.post(
     '/change-password',
+    responds({ summary: 'Change the password; other sessions end', data: meResponse }),
     authenticate(),
     validate({ body: changePasswordRequest }),
     async (req, res) => {

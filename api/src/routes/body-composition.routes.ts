@@ -1,4 +1,9 @@
-import { createBodyMeasurementRequest, uuid } from '@driftmark/shared';
+import {
+  createBodyMeasurementRequest,
+  uuid,
+  bodyCompositionView,
+  bodyMeasurementView,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate } from '../middleware/authenticate.js';
@@ -6,6 +11,7 @@ import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { BodyCompositionService } from '../services/body-composition.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const measurementParams = z.object({ athleteId: uuid, measurementId: uuid });
@@ -19,6 +25,7 @@ export function bodyCompositionRouter(): Router {
 
   router.get(
     '/:athleteId/body-composition',
+    responds({ summary: 'Measurements and body-fat estimates', data: bodyCompositionView, abilities: true }),
     authenticate(),
     validate({ params: athleteParams }),
     async (req, res) => {
@@ -33,6 +40,7 @@ export function bodyCompositionRouter(): Router {
 
   router.post(
     '/:athleteId/body-measurements',
+    responds({ summary: 'Record a measurement', status: 201, data: bodyMeasurementView }),
     authenticate(),
     // The window here; "not after today" is the athlete's own today, which the service checks.
     validate({ params: athleteParams, body: dated(createBodyMeasurementRequest, { date: 'any' }) }),
@@ -45,6 +53,7 @@ export function bodyCompositionRouter(): Router {
 
   router.delete(
     '/:athleteId/body-measurements/:measurementId',
+    responds({ summary: 'Delete a measurement', status: 204, data: null }),
     authenticate(),
     validate({ params: measurementParams }),
     async (req, res) => {

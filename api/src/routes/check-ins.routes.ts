@@ -1,4 +1,14 @@
-import { dayRangeQuery, eveningRequest, isoDate, uuid, weighInRequest } from '@driftmark/shared';
+import {
+  dayRangeQuery,
+  eveningRequest,
+  isoDate,
+  uuid,
+  weighInRequest,
+  daySummary,
+  dayView,
+  weighInView,
+  eveningView,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import type { ClientDayEntry } from '../entities/day-record.entity.js';
@@ -17,10 +27,15 @@ import {
 } from '../services/day-entry-kinds.js';
 import { DayService } from '../services/day.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const dayParams = z.object({ athleteId: uuid, date: isoDate });
 const entryParams = z.object({ athleteId: uuid, entryId: uuid });
+
+/** An edit's body for the description: any subset of the create body's fields (its cross-field checks run on the merged entry). */
+const anySubset = (schema: z.ZodType): z.ZodType =>
+  schema instanceof z.ZodObject ? z.object(schema.shape).partial() : schema;
 
 const entryBody = (entry: unknown, meta?: Record<string, string>) => ({
   data: entry,
@@ -38,6 +53,12 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
 ): void {
   router.post(
     `/:athleteId/days/:date/${kind.path}`,
+    responds({
+      summary: `Log a ${kind.plural.replace(/ entries$/, '')} entry (201; 200 when the clientId was sent before)`,
+      status: 201,
+      data: kind.view,
+      meta: true,
+    }),
     authenticate(),
     validate({ params: dayParams, body: kind.schema }),
     async (req, res) => {
@@ -50,6 +71,15 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
   // The body is checked after loading: it is laid over the stored entry, then validated whole.
   router.patch(
     `/:athleteId/${kind.path}/:entryId`,
+    responds({
+      summary: `Edit a ${kind.plural.replace(/ entries$/, '')} entry: any subset, laid over the stored one`,
+      data: kind.view,
+      meta: true,
+      body: {
+        contentType: 'application/json',
+        schema: anySubset(kind.schema),
+      },
+    }),
     authenticate(),
     validate({ params: entryParams }),
     async (req, res) => {
@@ -66,6 +96,7 @@ function entryRoutes<E extends ClientDayEntry, I extends { clientId: string; tim
 
   router.delete(
     `/:athleteId/${kind.path}/:entryId`,
+    responds({ summary: `Delete a ${kind.plural.replace(/ entries$/, '')} entry`, status: 204, data: null }),
     authenticate(),
     validate({ params: entryParams }),
     async (req, res) => {
@@ -86,6 +117,7 @@ export function checkInsRouter(): Router {
 
   router.get(
     '/:athleteId/days',
+    responds({ summary: 'Day summaries over a range', data: z.array(daySummary), abilities: true }),
     authenticate(),
     validate({ params: athleteParams, query: dated(dayRangeQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
@@ -98,18 +130,25 @@ export function checkInsRouter(): Router {
     },
   );
 
-  router.get('/:athleteId/days/:date', authenticate(), validate({ params: dayParams }), async (req, res) => {
-    const { actor, athlete, target } = await loadAthlete(req, 'read');
-    const reader = readerOf(requireAuth(req).user, athlete);
-    const day = await new DayService(req.ctx).getDay(athlete, req.params.date, reader);
-    res.json({
-      data: day,
-      abilities: { log: athlete.status !== 'ended' && canOnAthlete(actor, 'log', target) },
-    });
-  });
+  router.get(
+    '/:athleteId/days/:date',
+    responds({ summary: 'One day: entries, targets, verdicts, cautions', data: dayView, abilities: true }),
+    authenticate(),
+    validate({ params: dayParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      const reader = readerOf(requireAuth(req).user, athlete);
+      const day = await new DayService(req.ctx).getDay(athlete, req.params.date, reader);
+      res.json({
+        data: day,
+        abilities: { log: athlete.status !== 'ended' && canOnAthlete(actor, 'log', target) },
+      });
+    },
+  );
 
   router.put(
     '/:athleteId/days/:date/weigh-in',
+    responds({ summary: 'Record or replace the day’s weigh-in', data: weighInView }),
     authenticate(),
     validate({ params: dayParams, body: weighInRequest }),
     async (req, res) => {
@@ -121,6 +160,7 @@ export function checkInsRouter(): Router {
 
   router.delete(
     '/:athleteId/days/:date/weigh-in',
+    responds({ summary: 'Delete the day’s weigh-in', status: 204, data: null }),
     authenticate(),
     validate({ params: dayParams }),
     async (req, res) => {
@@ -132,6 +172,7 @@ export function checkInsRouter(): Router {
 
   router.put(
     '/:athleteId/days/:date/evening',
+    responds({ summary: 'Record or replace the evening card', data: eveningView }),
     authenticate(),
     validate({ params: dayParams, body: eveningRequest }),
     async (req, res) => {
@@ -143,6 +184,7 @@ export function checkInsRouter(): Router {
 
   router.delete(
     '/:athleteId/days/:date/evening',
+    responds({ summary: 'Delete the evening card', status: 204, data: null }),
     authenticate(),
     validate({ params: dayParams }),
     async (req, res) => {

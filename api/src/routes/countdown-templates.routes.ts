@@ -1,10 +1,11 @@
-import { templateRequest, uuid } from '@driftmark/shared';
+import { templateRequest, uuid, templateView } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
 import { authorizeTemplate, templateAbilities } from '../policies/template.policy.js';
 import { CountdownTemplateService } from '../services/countdown-template.service.js';
+import { responds } from '../middleware/responds.js';
 
 const templateParams = z.object({ templateId: uuid });
 
@@ -15,34 +16,52 @@ const templateParams = z.object({ templateId: uuid });
 export function countdownTemplatesRouter(): Router {
   const router = Router();
 
-  router.get('/', authenticate(), async (req, res) => {
-    const { actor } = requireAuth(req);
-    const team = { teamId: actor.teamId };
-    authorizeTemplate(actor, 'read', team);
-    res.json({
-      data: await new CountdownTemplateService(req.ctx).list(actor.teamId),
-      abilities: templateAbilities(actor, team),
-    });
-  });
+  router.get(
+    '/',
+    responds({ summary: 'The team’s countdown templates', data: z.array(templateView), abilities: true }),
+    authenticate(),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const team = { teamId: actor.teamId };
+      authorizeTemplate(actor, 'read', team);
+      res.json({
+        data: await new CountdownTemplateService(req.ctx).list(actor.teamId),
+        abilities: templateAbilities(actor, team),
+      });
+    },
+  );
 
-  router.post('/', authenticate(), validate({ body: templateRequest }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    authorizeTemplate(actor, 'manage', { teamId: actor.teamId });
-    res.status(201).json({ data: await new CountdownTemplateService(req.ctx).create(actor, req.body) });
-  });
+  router.post(
+    '/',
+    responds({ summary: 'Create a countdown template', status: 201, data: templateView }),
+    authenticate(),
+    validate({ body: templateRequest }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      authorizeTemplate(actor, 'manage', { teamId: actor.teamId });
+      res.status(201).json({ data: await new CountdownTemplateService(req.ctx).create(actor, req.body) });
+    },
+  );
 
-  router.get('/:templateId', authenticate(), validate({ params: templateParams }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    const team = { teamId: actor.teamId };
-    authorizeTemplate(actor, 'read', team);
-    res.json({
-      data: await new CountdownTemplateService(req.ctx).get(actor.teamId, req.params.templateId),
-      abilities: templateAbilities(actor, team),
-    });
-  });
+  router.get(
+    '/:templateId',
+    responds({ summary: 'One countdown template', data: templateView, abilities: true }),
+    authenticate(),
+    validate({ params: templateParams }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const team = { teamId: actor.teamId };
+      authorizeTemplate(actor, 'read', team);
+      res.json({
+        data: await new CountdownTemplateService(req.ctx).get(actor.teamId, req.params.templateId),
+        abilities: templateAbilities(actor, team),
+      });
+    },
+  );
 
   router.put(
     '/:templateId',
+    responds({ summary: 'Replace a countdown template', data: templateView }),
     authenticate(),
     validate({ params: templateParams, body: templateRequest }),
     async (req, res) => {
@@ -56,15 +75,21 @@ export function countdownTemplatesRouter(): Router {
     },
   );
 
-  router.delete('/:templateId', authenticate(), validate({ params: templateParams }), async (req, res) => {
-    const { actor } = requireAuth(req);
-    const service = new CountdownTemplateService(req.ctx);
-    authorizeTemplate(actor, 'read', { teamId: actor.teamId });
-    await service.get(actor.teamId, req.params.templateId);
-    authorizeTemplate(actor, 'manage', { teamId: actor.teamId });
-    await service.remove(actor.teamId, req.params.templateId);
-    res.status(204).end();
-  });
+  router.delete(
+    '/:templateId',
+    responds({ summary: 'Delete a countdown template', status: 204, data: null }),
+    authenticate(),
+    validate({ params: templateParams }),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const service = new CountdownTemplateService(req.ctx);
+      authorizeTemplate(actor, 'read', { teamId: actor.teamId });
+      await service.get(actor.teamId, req.params.templateId);
+      authorizeTemplate(actor, 'manage', { teamId: actor.teamId });
+      await service.remove(actor.teamId, req.params.templateId);
+      res.status(204).end();
+    },
+  );
 
   return router;
 }

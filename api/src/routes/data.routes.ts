@@ -1,4 +1,4 @@
-import { trendQuery, uuid } from '@driftmark/shared';
+import { trendQuery, uuid, athleteProfile } from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
@@ -7,6 +7,7 @@ import { athleteProfileView } from '../services/plan.service.js';
 import { AthleteService } from '../services/athlete.service.js';
 import { DaysExportService, daysCsvFileName } from '../services/days-export.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 
@@ -17,6 +18,11 @@ export function dataRouter(): Router {
   // Anyone who may read the athlete (the athlete too, also after the coaching ended).
   router.get(
     '/:athleteId/days.csv',
+    responds({
+      summary: 'The days as CSV, in the viewer’s units',
+      data: null,
+      raw: { contentType: 'text/csv', description: 'One row per day (header row first)' },
+    }),
     authenticate(),
     validate({ params: athleteParams, query: dated(trendQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
@@ -40,6 +46,7 @@ export function dataRouter(): Router {
   // The assigned coach or the owner ends the coaching: the athlete keeps sign-in and read access.
   router.post(
     '/:athleteId/end-coaching',
+    responds({ summary: 'End the coaching: the athlete keeps read access', data: athleteProfile }),
     authenticate(),
     validate({ params: athleteParams }),
     async (req, res) => {

@@ -4,6 +4,7 @@ import {
   listMarksQuery,
   updateMarkRequest,
   uuid,
+  markView,
 } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
@@ -14,6 +15,7 @@ import { authorizeMark, markAbilities, markListAbilities, type MarkAction } from
 import { MarkRepository } from '../repositories/mark.repository.js';
 import { MarkService } from '../services/mark.service.js';
 import { loadAthlete, loadAthleteById } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const markParams = z.object({ markId: uuid });
@@ -34,6 +36,7 @@ export function marksRouter(): Router {
 
   router.get(
     '/athletes/:athleteId/marks',
+    responds({ summary: 'Marks on the athlete’s charts', data: z.array(markView), abilities: true }),
     authenticate(),
     validate({ params: athleteParams, query: dated(listMarksQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
@@ -49,6 +52,7 @@ export function marksRouter(): Router {
 
   router.post(
     '/athletes/:athleteId/marks',
+    responds({ summary: 'Add a mark', status: 201, data: markView, abilities: true }),
     authenticate(),
     validate({ params: athleteParams, body: dated(createMarkRequest, { fromDate: 'any', toDate: 'any' }) }),
     async (req, res) => {
@@ -63,6 +67,7 @@ export function marksRouter(): Router {
 
   router.patch(
     '/marks/:markId',
+    responds({ summary: 'Edit a mark', data: markView, abilities: true }),
     authenticate(),
     validate({ params: markParams, body: updateMarkRequest }),
     async (req, res) => {
@@ -71,14 +76,21 @@ export function marksRouter(): Router {
     },
   );
 
-  router.delete('/marks/:markId', authenticate(), validate({ params: markParams }), async (req, res) => {
-    const { mark } = await loadMark(req, req.params.markId, 'delete');
-    await new MarkService(req.ctx).delete(mark);
-    res.status(204).end();
-  });
+  router.delete(
+    '/marks/:markId',
+    responds({ summary: 'Delete a mark', status: 204, data: null }),
+    authenticate(),
+    validate({ params: markParams }),
+    async (req, res) => {
+      const { mark } = await loadMark(req, req.params.markId, 'delete');
+      await new MarkService(req.ctx).delete(mark);
+      res.status(204).end();
+    },
+  );
 
   router.post(
     '/marks/:markId/replies',
+    responds({ summary: 'Reply to a mark', status: 201, data: markView, abilities: true }),
     authenticate(),
     validate({ params: markParams, body: createReplyRequest }),
     async (req, res) => {
@@ -89,10 +101,16 @@ export function marksRouter(): Router {
     },
   );
 
-  router.post('/marks/:markId/read', authenticate(), validate({ params: markParams }), async (req, res) => {
-    const { actor, athlete, mark, abilities } = await loadMark(req, req.params.markId, 'markRead');
-    res.json({ data: await new MarkService(req.ctx).markRead(actor, athlete, mark), abilities });
-  });
+  router.post(
+    '/marks/:markId/read',
+    responds({ summary: 'Mark as read', data: markView, abilities: true }),
+    authenticate(),
+    validate({ params: markParams }),
+    async (req, res) => {
+      const { actor, athlete, mark, abilities } = await loadMark(req, req.params.markId, 'markRead');
+      res.json({ data: await new MarkService(req.ctx).markRead(actor, athlete, mark), abilities });
+    },
+  );
 
   return router;
 }

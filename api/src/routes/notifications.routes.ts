@@ -1,3 +1,4 @@
+import { z } from 'zod';
 /**
  * E-mail preferences (GET/PUT /api/me/notifications) and unsubscribe links
  * (GET /api/unsubscribe?token= says what the link stops; POST /api/unsubscribe stops it: the
@@ -8,6 +9,7 @@ import {
   notificationPreferences,
   type NotificationPreferences,
   type UnsubscribeView,
+  unsubscribeView,
 } from '@driftmark/shared';
 import express, { Router, type Request } from 'express';
 import type { EntityManager } from 'typeorm';
@@ -17,6 +19,7 @@ import { verifyUnsubscribeToken } from '../lib/unsubscribe-token.js';
 import { authenticate, requireAuth } from '../middleware/authenticate.js';
 import { validate } from '../middleware/validate.js';
 import { kindsForRole, presentPreferences, wants } from '../services/notify.service.js';
+import { responds } from '../middleware/responds.js';
 
 async function savePreferences(
   manager: EntityManager,
@@ -56,14 +59,20 @@ async function resolveToken(req: Request): Promise<{ user: User; view: Unsubscri
 export function notificationsRouter(): Router {
   const router = Router();
 
-  router.get('/me/notifications', authenticate(), async (req, res) => {
-    const { user } = requireAuth(req);
-    const fresh = await req.ctx.dataSource.manager.findOneByOrFail(User, { id: user.id });
-    res.json({ data: presentPreferences(fresh) });
-  });
+  router.get(
+    '/me/notifications',
+    responds({ summary: 'E-mail preferences', data: notificationPreferences }),
+    authenticate(),
+    async (req, res) => {
+      const { user } = requireAuth(req);
+      const fresh = await req.ctx.dataSource.manager.findOneByOrFail(User, { id: user.id });
+      res.json({ data: presentPreferences(fresh) });
+    },
+  );
 
   router.put(
     '/me/notifications',
+    responds({ summary: 'Replace e-mail preferences', data: notificationPreferences }),
     authenticate(),
     validate({ body: notificationPreferences }),
     async (req, res) => {
@@ -73,22 +82,34 @@ export function notificationsRouter(): Router {
     },
   );
 
-  router.get('/unsubscribe', async (req, res) => {
-    res.json({ data: (await resolveToken(req)).view });
-  });
+  router.get(
+    '/unsubscribe',
+    responds({ summary: 'What an unsubscribe link turns off (token in the query)', data: unsubscribeView }),
+    async (req, res) => {
+      res.json({ data: (await resolveToken(req)).view });
+    },
+  );
 
-  router.post('/unsubscribe', express.urlencoded({ extended: false, limit: '4kb' }), async (req, res) => {
-    const { user, view } = await resolveToken(req);
-    if (!view.done) {
-      const current = presentPreferences(user);
-      await req.ctx.dataSource.manager.update(
-        User,
-        { id: user.id },
-        { notificationPrefs: { ...current, enabled: { ...current.enabled, [view.kind]: false } } },
-      );
-    }
-    res.json({ data: { ...view, done: true } });
-  });
+  router.post(
+    '/unsubscribe',
+    responds({
+      summary: 'One-click unsubscribe (RFC 8058; token in the query or form)',
+      data: unsubscribeView.extend({ done: z.literal(true) }),
+    }),
+    express.urlencoded({ extended: false, limit: '4kb' }),
+    async (req, res) => {
+      const { user, view } = await resolveToken(req);
+      if (!view.done) {
+        const current = presentPreferences(user);
+        await req.ctx.dataSource.manager.update(
+          User,
+          { id: user.id },
+          { notificationPrefs: { ...current, enabled: { ...current.enabled, [view.kind]: false } } },
+        );
+      }
+      res.json({ data: { ...view, done: true } });
+    },
+  );
 
   return router;
 }

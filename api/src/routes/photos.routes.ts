@@ -1,5 +1,5 @@
 import { pipeline } from 'node:stream/promises';
-import { isoDate, LIMITS, text, uuid } from '@driftmark/shared';
+import { isoDate, LIMITS, text, uuid, photoView, photoUploadFields } from '@driftmark/shared';
 import { Router, type Request, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { notFound } from '../errors.js';
@@ -10,6 +10,7 @@ import type { AthleteAction } from '../policies/athlete.policy.js';
 import { PhotoRepository } from '../repositories/photo.repository.js';
 import { assertPhotoConsent, PhotoService } from '../services/photo.service.js';
 import { loadAthleteById } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const photoParams = z.object({ photoId: uuid });
@@ -59,6 +60,15 @@ export function photosRouter(): Router {
 
   router.post(
     '/athletes/:athleteId/photos',
+    responds({
+      summary: 'Upload photos of one day and pose',
+      status: 201,
+      data: z.array(photoView),
+      body: {
+        contentType: 'multipart/form-data',
+        schema: photoUploadFields.extend({ files: z.array(z.string().meta({ format: 'binary' })) }),
+      },
+    }),
     beforeUpload(authenticate()),
     beforeUpload(validate({ params: athleteParams })),
     beforeUpload(async (req, res, next) => {
@@ -89,6 +99,7 @@ export function photosRouter(): Router {
 
   router.get(
     '/athletes/:athleteId/photos',
+    responds({ summary: 'The gallery, by pose and dates', data: z.array(photoView) }),
     authenticate(),
     validate({ params: athleteParams, query: dated(listQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {
@@ -98,30 +109,46 @@ export function photosRouter(): Router {
     },
   );
 
-  router.get('/photos/:photoId/:size', authenticate(), validate({ params: fileParams }), async (req, res) => {
-    const { photo } = await loadPhoto(req, req.params.photoId, 'read');
-    const file = await new PhotoService(req.ctx).open(photo, req.params.size);
-    res.status(200);
-    res.setHeader('Content-Type', file.contentType);
-    res.setHeader('Content-Length', String(file.size));
-    res.setHeader('Cache-Control', PHOTO_CACHE_CONTROL);
-    res.setHeader('Pragma', 'no-cache');
-    res.setHeader('X-Content-Type-Options', 'nosniff');
-    res.setHeader('Content-Disposition', 'inline');
-    try {
-      await pipeline(file.stream, res);
-    } catch (error) {
-      // A reader that goes away mid-photo is not our failure; anything before the first byte is.
-      if (!res.headersSent) throw error;
-      file.stream.destroy();
-    }
-  });
+  router.get(
+    '/photos/:photoId/:size',
+    responds({
+      summary: 'A photo file (thumb or display)',
+      data: null,
+      raw: { contentType: 'image/*', description: 'The image bytes (JPEG or WebP)' },
+    }),
+    authenticate(),
+    validate({ params: fileParams }),
+    async (req, res) => {
+      const { photo } = await loadPhoto(req, req.params.photoId, 'read');
+      const file = await new PhotoService(req.ctx).open(photo, req.params.size);
+      res.status(200);
+      res.setHeader('Content-Type', file.contentType);
+      res.setHeader('Content-Length', String(file.size));
+      res.setHeader('Cache-Control', PHOTO_CACHE_CONTROL);
+      res.setHeader('Pragma', 'no-cache');
+      res.setHeader('X-Content-Type-Options', 'nosniff');
+      res.setHeader('Content-Disposition', 'inline');
+      try {
+        await pipeline(file.stream, res);
+      } catch (error) {
+        // A reader that goes away mid-photo is not our failure; anything before the first byte is.
+        if (!res.headersSent) throw error;
+        file.stream.destroy();
+      }
+    },
+  );
 
-  router.delete('/photos/:photoId', authenticate(), validate({ params: photoParams }), async (req, res) => {
-    const { photo } = await loadPhoto(req, req.params.photoId, 'log');
-    await new PhotoService(req.ctx).delete(photo);
-    res.status(204).end();
-  });
+  router.delete(
+    '/photos/:photoId',
+    responds({ summary: 'Delete a photo', status: 204, data: null }),
+    authenticate(),
+    validate({ params: photoParams }),
+    async (req, res) => {
+      const { photo } = await loadPhoto(req, req.params.photoId, 'log');
+      await new PhotoService(req.ctx).delete(photo);
+      res.status(204).end();
+    },
+  );
 
   return router;
 }

@@ -4,6 +4,10 @@ import {
   createPlanVersionRequest,
   moveCountdownRequest,
   uuid,
+  planView,
+  planVersionView,
+  planCheckResult,
+  countdownPreview,
 } from '@driftmark/shared';
 import { Router, type Response } from 'express';
 import { z } from 'zod';
@@ -12,6 +16,7 @@ import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { PlanService, type CountdownResult } from '../services/plan.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const versionParams = z.object({ athleteId: uuid, versionId: uuid });
@@ -26,16 +31,23 @@ function sendCountdown(res: Response, result: CountdownResult): void {
 export function plansRouter(): Router {
   const router = Router();
 
-  router.get('/:athleteId/plan', authenticate(), validate({ params: athleteParams }), async (req, res) => {
-    const { actor, athlete, target } = await loadAthlete(req, 'read');
-    res.json({
-      data: await new PlanService(req.ctx).getPlan(athlete),
-      abilities: { edit: canOnAthlete(actor, 'plan', target) },
-    });
-  });
+  router.get(
+    '/:athleteId/plan',
+    responds({ summary: 'The plan: versions and the one in force', data: planView, abilities: true }),
+    authenticate(),
+    validate({ params: athleteParams }),
+    async (req, res) => {
+      const { actor, athlete, target } = await loadAthlete(req, 'read');
+      res.json({
+        data: await new PlanService(req.ctx).getPlan(athlete),
+        abilities: { edit: canOnAthlete(actor, 'plan', target) },
+      });
+    },
+  );
 
   router.get(
     '/:athleteId/plan/versions/:versionId',
+    responds({ summary: 'One plan version', data: planVersionView }),
     authenticate(),
     validate({ params: versionParams }),
     async (req, res) => {
@@ -46,6 +58,10 @@ export function plansRouter(): Router {
 
   router.post(
     '/:athleteId/plan/check',
+    responds({
+      summary: 'Check plan content: refusals and guardrail warnings, nothing saved',
+      data: planCheckResult,
+    }),
     authenticate(),
     validate({ params: athleteParams, body: dated(checkPlanRequest, { effectiveFrom: 'any' }) }),
     async (req, res) => {
@@ -56,6 +72,11 @@ export function plansRouter(): Router {
 
   router.post(
     '/:athleteId/plan/versions',
+    responds({
+      summary: 'Save a plan version (409 until its warnings are acknowledged)',
+      status: 201,
+      data: planVersionView,
+    }),
     authenticate(),
     validate({ params: athleteParams, body: dated(createPlanVersionRequest, { effectiveFrom: 'any' }) }),
     async (req, res) => {
@@ -66,6 +87,12 @@ export function plansRouter(): Router {
 
   router.post(
     '/:athleteId/plan/countdown',
+    responds({
+      summary: 'Apply a countdown template (201 saved; 200 a preview)',
+      status: 201,
+      data: planVersionView,
+      also: { status: 200, data: countdownPreview, summary: 'A preview: nothing saved' },
+    }),
     authenticate(),
     validate({ params: athleteParams, body: dated(applyCountdownRequest, { eventDate: 'any' }) }),
     async (req, res) => {
@@ -76,6 +103,12 @@ export function plansRouter(): Router {
 
   router.post(
     '/:athleteId/plan/countdown/move',
+    responds({
+      summary: 'Move the countdown and the event date (201 saved; 200 a preview)',
+      status: 201,
+      data: planVersionView,
+      also: { status: 200, data: countdownPreview, summary: 'A preview: nothing saved' },
+    }),
     authenticate(),
     validate({ params: athleteParams, body: dated(moveCountdownRequest, { eventDate: 'any' }) }),
     async (req, res) => {

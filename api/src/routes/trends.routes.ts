@@ -1,4 +1,11 @@
-import { inReaderUnits, trendDaysToColumns, trendQuery, uuid, type TrendResponse } from '@driftmark/shared';
+import {
+  inReaderUnits,
+  trendDaysToColumns,
+  trendQuery,
+  uuid,
+  type TrendResponse,
+  trendResponse,
+} from '@driftmark/shared';
 import { Router } from 'express';
 import { z } from 'zod';
 import { sendConditionalJson } from '../lib/conditional-json.js';
@@ -8,6 +15,7 @@ import { dated, validate } from '../middleware/validate.js';
 import { canOnAthlete } from '../policies/athlete.policy.js';
 import { TrendService } from '../services/trend.service.js';
 import { loadAthlete } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 
@@ -17,6 +25,11 @@ export function trendsRouter(): Router {
 
   router.get(
     '/:athleteId/trend',
+    responds({
+      summary: 'Trend, drift and flags over a range (weak ETag; 304 when unchanged)',
+      data: trendResponse,
+      abilities: true,
+    }),
     authenticate(),
     validate({ params: athleteParams, query: dated(trendQuery, { from: 'any', to: 'any' }) }),
     async (req, res) => {

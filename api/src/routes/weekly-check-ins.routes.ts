@@ -6,6 +6,9 @@ import {
   submitWeeklyCheckInRequest,
   uuid,
   type WeeklyCheckInView,
+  weeklyCheckInView,
+  checkInQuestion,
+  WEEKDAYS,
 } from '@driftmark/shared';
 import { Router, type Request } from 'express';
 import { z } from 'zod';
@@ -19,6 +22,7 @@ import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { WeeklyCheckInRepository } from '../repositories/weekly-check-in.repository.js';
 import { WeeklyCheckInService } from '../services/weekly-check-in.service.js';
 import { loadAthlete, loadAthleteById } from './athletes.routes.js';
+import { responds } from '../middleware/responds.js';
 
 const athleteParams = z.object({ athleteId: uuid });
 const checkInParams = z.object({ checkInId: uuid });
@@ -60,6 +64,11 @@ export function weeklyCheckInsRouter(): Router {
 
   router.get(
     '/athletes/:athleteId/weekly-check-ins',
+    responds({
+      summary: 'The athlete’s weekly check-ins',
+      data: z.array(weeklyCheckInView),
+      abilities: true,
+    }),
     authenticate(),
     validate({ params: athleteParams }),
     async (req, res) => {
@@ -71,6 +80,7 @@ export function weeklyCheckInsRouter(): Router {
 
   router.get(
     '/athletes/:athleteId/weekly-check-ins/current',
+    responds({ summary: 'The week due now', data: weeklyCheckInView, abilities: true }),
     authenticate(),
     validate({ params: athleteParams }),
     async (req, res) => {
@@ -84,6 +94,7 @@ export function weeklyCheckInsRouter(): Router {
   // range and figures here instead of working out the week itself.
   router.get(
     '/athletes/:athleteId/weekly-check-ins/week/:dueDate',
+    responds({ summary: 'The week due on a date', data: weeklyCheckInView, abilities: true }),
     authenticate(),
     validate({ params: weekParams }),
     async (req, res) => {
@@ -95,6 +106,7 @@ export function weeklyCheckInsRouter(): Router {
 
   router.post(
     '/athletes/:athleteId/weekly-check-ins',
+    responds({ summary: 'Submit the weekly check-in', data: weeklyCheckInView, abilities: true }),
     authenticate(),
     validate({ params: athleteParams, body: submitWeeklyCheckInRequest }),
     async (req, res) => {
@@ -106,6 +118,7 @@ export function weeklyCheckInsRouter(): Router {
 
   router.get(
     '/weekly-check-ins/:checkInId',
+    responds({ summary: 'One weekly check-in', data: weeklyCheckInView, abilities: true }),
     authenticate(),
     validate({ params: checkInParams }),
     async (req, res) => {
@@ -117,6 +130,7 @@ export function weeklyCheckInsRouter(): Router {
 
   router.post(
     '/weekly-check-ins/:checkInId/reply',
+    responds({ summary: 'The coach’s reply', data: weeklyCheckInView, abilities: true }),
     authenticate(),
     validate({ params: checkInParams, body: replyWeeklyCheckInRequest }),
     async (req, res) => {
@@ -129,6 +143,11 @@ export function weeklyCheckInsRouter(): Router {
 
   router.patch(
     '/athletes/:athleteId/check-in-day',
+    responds({
+      summary: 'Set the athlete’s check-in weekday',
+      data: z.object({ athleteId: z.uuid(), weekday: z.enum(WEEKDAYS), current: weeklyCheckInView }),
+      abilities: true,
+    }),
     authenticate(),
     validate({ params: athleteParams, body: checkInDayRequest }),
     async (req, res) => {
@@ -142,18 +161,28 @@ export function weeklyCheckInsRouter(): Router {
     },
   );
 
-  router.get('/team/check-in-questions', authenticate(), async (req, res) => {
-    const { actor } = requireAuth(req);
-    const team = { id: actor.teamId };
-    authorizeTeam(actor, { kind: 'read' }, team);
-    res.json({
-      data: await new WeeklyCheckInService(req.ctx).questions(actor.teamId),
-      abilities: { manage: canOnTeam(actor, { kind: 'manageCheckInQuestions' }, team) },
-    });
-  });
+  router.get(
+    '/team/check-in-questions',
+    responds({ summary: 'The team’s weekly questions', data: z.array(checkInQuestion), abilities: true }),
+    authenticate(),
+    async (req, res) => {
+      const { actor } = requireAuth(req);
+      const team = { id: actor.teamId };
+      authorizeTeam(actor, { kind: 'read' }, team);
+      res.json({
+        data: await new WeeklyCheckInService(req.ctx).questions(actor.teamId),
+        abilities: { manage: canOnTeam(actor, { kind: 'manageCheckInQuestions' }, team) },
+      });
+    },
+  );
 
   router.put(
     '/team/check-in-questions',
+    responds({
+      summary: 'Replace the team’s weekly questions',
+      data: z.array(checkInQuestion),
+      abilities: true,
+    }),
     authenticate(),
     validate({ body: checkInQuestionsRequest }),
     async (req, res) => {

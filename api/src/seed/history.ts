@@ -1042,6 +1042,22 @@ const SCRIPTS: Partial<Record<DemoSituation, readonly Script[]>> = {
     },
   ],
   weigh_in: [
+    // A practice run (seed-cuts.ts DEMO_REHEARSAL): the acute part starts at t = 33 on the model
+    // curve, two days down to a practice weigh-in at t = 31 about 2 kg (3 %) lighter, then most of
+    // it back by the next mornings. The ≥ 2 %/48 h drop raises its safety flag then, as it should.
+    { t: 33, weighIn: { offsetKg: 0, tags: [] } },
+    { t: 32, weighIn: { offsetKg: -0.9, tags: [] } },
+    {
+      t: 31,
+      weighIn: { offsetKg: -2.0, tags: [] },
+      symptom: {
+        time: '19:40',
+        symptoms: ['headache', 'dark_urine'],
+        note: 'Headache after the practice weigh-in, urine very dark until I drank.',
+      },
+    },
+    { t: 30, weighIn: { offsetKg: -0.6, tags: [] } },
+    { t: 29, weighIn: { offsetKg: -0.2, tags: [] } },
     { t: 27, symptom: { time: '15:20', symptoms: ['headache'], note: 'Mild headache after a long day.' } },
     { t: 9, note: 'Weight moving as planned, coach says keep the food the same.' },
     // A drop of more than 2 % of body mass in a day (≥ 2 %/48 h raises the safety flag, ACSM 2007):

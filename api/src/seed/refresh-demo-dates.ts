@@ -42,6 +42,8 @@ const DAY_TABLES: readonly { table: string; timed: boolean; uniqueDate: boolean 
   { table: 'athlete_flags', timed: false, uniqueDate: false },
   { table: 'condition_photos', timed: false, uniqueDate: true },
   { table: 'body_measurements', timed: false, uniqueDate: false },
+  // One note a rehearsal day: unique (cut plan, date), so moved through FAR_DAYS like the other unique dates.
+  { table: 'cut_rehearsal_notes', timed: false, uniqueDate: true },
 ];
 
 /** Every `date` column this moves (`table.column`); the integration test checks none is missing. */

@@ -10,7 +10,7 @@ import bcrypt from 'bcryptjs';
 import { CONSENTS } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { createStorage, type StorageAdapter } from '../adapters/storage.js';
-import { configSchema, type AppMode } from '../config.js';
+import { loadStorageConfig, type AppMode } from '../config.js';
 import { Athlete } from '../entities/athlete.entity.js';
 import { AthleteShare } from '../entities/athlete-share.entity.js';
 import { Consent } from '../entities/consent.entity.js';
@@ -33,6 +33,7 @@ import { refreshDemoDates, type RefreshWarn } from './refresh-demo-dates.js';
 import { planDemoHistory, renderDemoPhotos, writeDemoCheckIns, writeDemoPhotos } from './seed-history.js';
 import { writeDemoMarks } from './seed-marks.js';
 import { writeDemoBodyMeasurements } from './seed-body-composition.js';
+import { writeDemoRehearsals } from './seed-cuts.js';
 import { writeDemoPlans, type DemoPlanIds } from './seed-plans.js';
 import { writeDemoWeekly } from './seed-weekly.js';
 
@@ -52,8 +53,8 @@ export interface SeedDemoOptions {
   /** Defaults to APP_MODE from the environment. */
   appMode?: AppMode | string;
   /**
-   * Where the placeholder photos are stored; defaults to the uploads folder (UPLOADS_DIR, as the
-   * server reads it). null seeds no photos.
+   * Where the placeholder photos are stored; defaults to the photo store the server reads
+   * (PHOTO_STORAGE: the UPLOADS_DIR folder or the S3 bucket). null seeds no photos.
    */
   storage?: StorageAdapter | null;
   /**
@@ -125,10 +126,7 @@ export async function seedDemo(
   }
   const now = options.now ?? new Date();
 
-  const storage =
-    options.storage === undefined
-      ? createStorage({ uploadsDir: configSchema.shape.UPLOADS_DIR.parse(process.env.UPLOADS_DIR) })
-      : options.storage;
+  const storage = options.storage === undefined ? createStorage(loadStorageConfig()) : options.storage;
 
   if (await ownerExists(dataSource.manager)) {
     const movedDays = await dataSource.transaction(async (manager) => {
@@ -167,6 +165,7 @@ export async function seedDemo(
       await writeDemoMarks(manager, plans, ids, now);
       const ownerName = DEMO_STAFF.find((s) => s.email === DEMO_OWNER_EMAIL)?.name ?? 'Coach';
       await writeDemoBodyMeasurements(manager, ids, now, ownerName);
+      await writeDemoRehearsals(manager, ids, now);
       if (storage && photos) {
         await writeDemoPhotos(manager, plans, await photos, athleteIds, storage, written);
       }

@@ -1,4 +1,7 @@
 import {
+  ACUTE_SHARE_DEFAULT_PCT,
+  ACUTE_SHARE_SEVERE_MEANING,
+  ACUTE_SHARE_SEVERE_PCT,
   acuteShare,
   beforeEventOnAthleteClock,
   chronicRate,
@@ -8,12 +11,20 @@ import {
   cutPathKg,
   cutWarnings,
   preAcuteDate,
+  recoveryItemAmounts,
   recoveryTargets,
   recoveryWindowHours,
+  REHEARSAL_REGAIN_MORNINGS,
+  rehearsalFigures,
   STOP_SIGNS_TEXT,
+  addDays,
   type CreateCutPlanRequest,
+  type RehearsalNoteRequest,
+  type RehearsalView,
   type CutFiguresView,
   type CutPlanShape,
+  type CutSettingsView,
+  type RecoveryItemKind,
   type CutView,
   type LimitGapView,
   type RecoveryView,
@@ -22,12 +33,18 @@ import {
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { conflict, guardrailsUnacknowledged, notFound, validationFailed } from '../errors.js';
+import { FluidEntry } from '../entities/fluid-entry.entity.js';
+import { MealEntry } from '../entities/meal-entry.entity.js';
 import { localDateTime } from '../lib/local-time.js';
+import { recoveryClientId } from '../lib/recovery-client-id.js';
 import type { Actor } from '../policies/actor.js';
-import { presentCutPlan } from '../presenters/cut.presenter.js';
+import type { CutPlan } from '../entities/cut-plan.entity.js';
+import { presentCutPlan, presentRehearsal } from '../presenters/cut.presenter.js';
 import { AthleteRepository, type AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { CutPlanRepository, type CutPlanWithAuthor } from '../repositories/cut-plan.repository.js';
+import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import { TeamRepository } from '../repositories/team.repository.js';
+import { TrendRepository } from '../repositories/trend.repository.js';
 import { loadSnapshots } from './athlete-figures.service.js';
 import { notifyOverLimit } from './notify.service.js';
 
@@ -95,16 +112,41 @@ export function cutFigures(shape: CutPlanShape, thresholdPct: number, today: str
   };
 }
 
+/** The team's acute-share threshold with the default, the severe line and their sources. */
+export async function cutSettingsOf(teams: TeamRepository, teamId: string): Promise<CutSettingsView> {
+  return {
+    acuteSharePct: await teams.acuteSharePct(teamId),
+    defaultPct: ACUTE_SHARE_DEFAULT_PCT,
+    source: CUT_SOURCES.acuteShare,
+    severePct: ACUTE_SHARE_SEVERE_PCT,
+    severeMeaning: ACUTE_SHARE_SEVERE_MEANING,
+    severeSource: CUT_SOURCES.acuteShareSevere,
+  };
+}
+
+/** An entry a recovery item logged, found by the item's client id. */
+export type LoggedEntry = { entryId: string; date: string; time: string };
+
+/** How a recovery item is linked to what it logs: its client id, and the entry with that id. */
+export interface RecoveryLinks {
+  clientId(slotIndex: number, kind: RecoveryItemKind): string;
+  logged(clientId: string): LoggedEntry | null;
+}
+
+const NO_LINKS: RecoveryLinks = { clientId: () => '', logged: () => null };
+
 /**
  * On the weigh-in day and until the competition: recovery targets from the kg lost at the scale,
  * counted from the plan's pre-acute weight (else the usual weight) down to the limit, each slot
- * placed on the athlete's clock from the weigh-in's time on the venue clock.
+ * placed on the athlete's clock from the weigh-in's time on the venue clock, each with its fluid
+ * and carbohydrate items (done while an entry with the item's client id exists).
  */
 export function recoveryOf(
   event: WeighInEventView | null,
   plan: Pick<CutPlanShape, 'preAcuteKg'> | null,
   today: string,
   athleteTimeZone: string,
+  links: RecoveryLinks = NO_LINKS,
 ): RecoveryView | null {
   if (!event || event.recoveryWindowHours === null || !event.weighInTime || !event.timeZone) return null;
   if (today < event.date || (event.competitionDate !== null && today > event.competitionDate)) return null;
@@ -123,11 +165,25 @@ export function recoveryOf(
     windowHours: event.recoveryWindowHours,
     fluidL: targets.fluidL,
     carbohydrateG: targets.carbohydrateG,
-    slots: targets.slots.map((s) => ({
-      ...beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone),
-      fluidL: s.fluidL,
-      carbohydrateG: s.carbohydrateG,
-    })),
+    slots: targets.slots.map((s, i) => {
+      const at = beforeEventOnAthleteClock(clock, -s.minutesAfterWeighIn, athleteTimeZone);
+      const amounts = recoveryItemAmounts(s);
+      const item = (kind: RecoveryItemKind) => {
+        const clientId = links.clientId(i, kind);
+        return { clientId, logged: links.logged(clientId) };
+      };
+      return {
+        ...at,
+        fluidL: s.fluidL,
+        carbohydrateG: s.carbohydrateG,
+        fluid: { ...item('fluid'), volumeMl: amounts.volumeMl, sodiumMg: amounts.sodiumMg },
+        carbohydrate: {
+          ...item('carbohydrate'),
+          carbohydrateG: amounts.carbohydrateG,
+          mealName: `Recovery carbohydrate ${at.time}`,
+        },
+      };
+    }),
     source: CUT_SOURCES.recovery,
   };
 }
@@ -143,13 +199,16 @@ export class CutService {
   async getCut(athlete: AthleteWithPeople): Promise<CutView> {
     const now = this.deps.clock();
     const today = localDateTime(now, athlete.user.timeZone).date;
-    const [snapshots, plan, thresholdPct] = await Promise.all([
+    const [snapshots, plan, thresholdPct, rehearsal] = await Promise.all([
       loadSnapshots(this.manager, [athlete], now),
       new CutPlanRepository(this.manager).latest(athlete.id),
       new TeamRepository(this.manager).acuteSharePct(athlete.teamId),
+      new CutPlanRepository(this.manager).latestRehearsal(athlete.id),
     ]);
     const acks = plan ? await new CutPlanRepository(this.manager).acknowledgements(plan.id) : [];
     const event = weighInEventOf(athlete);
+    const recovery = recoveryOf(event, plan, today, athlete.user.timeZone);
+    const links = recovery && event ? await this.recoveryLinks(athlete.id, event.date, recovery) : NO_LINKS;
     return {
       athleteId: athlete.id,
       weighIn: event,
@@ -157,9 +216,79 @@ export class CutService {
       plan: plan ? presentCutPlan(plan, acks) : null,
       figures: plan ? cutFigures(shapeOf(plan), plan.thresholdPct, today) : null,
       thresholdPct,
-      recovery: recoveryOf(event, plan, today, athlete.user.timeZone),
+      recovery: recovery ? recoveryOf(event, plan, today, athlete.user.timeZone, links) : null,
+      rehearsal: rehearsal ? await this.rehearsalRecord(rehearsal, today) : null,
       caution: CUT_CAUTION,
     };
+  }
+
+  /**
+   * The recovery items' client ids (fixed per athlete, weigh-in date and item) and the fluid and
+   * meal entries logged with them: one query per table, whatever the number of slots.
+   */
+  private async recoveryLinks(
+    athleteId: string,
+    weighInDate: string,
+    recovery: RecoveryView,
+  ): Promise<RecoveryLinks> {
+    const clientId = (i: number, kind: RecoveryItemKind) => recoveryClientId(athleteId, weighInDate, i, kind);
+    const ids = (kind: RecoveryItemKind) => recovery.slots.map((_, i) => clientId(i, kind));
+    const [fluids, meals] = await Promise.all([
+      new DayEntryRepository(this.manager, FluidEntry).findByClientIds(athleteId, ids('fluid')),
+      new DayEntryRepository(this.manager, MealEntry).findByClientIds(athleteId, ids('carbohydrate')),
+    ]);
+    const byClientId = new Map<string, LoggedEntry>(
+      [...fluids, ...meals].map((e) => [e.clientId, { entryId: e.id, date: e.localDate, time: e.localTime }]),
+    );
+    return { clientId, logged: (id) => byClientId.get(id) ?? null };
+  }
+
+  /**
+   * A practice run's record: each day's scale weight and loss from the start of its acute part to
+   * the practice weigh-in and the regain mornings after (shared rehearsalFigures over the weigh-ins
+   * the trend reads), the day notes and the symptom reports of those days.
+   */
+  async rehearsalRecord(plan: CutPlan, today: string): Promise<RehearsalView> {
+    const window = {
+      athleteId: plan.athleteId,
+      from: preAcuteDate(plan),
+      to: addDays(plan.weighInDate, REHEARSAL_REGAIN_MORNINGS),
+    };
+    const [history, notes] = await Promise.all([
+      new TrendRepository(this.manager).load([window]),
+      new CutPlanRepository(this.manager).notes(plan.id),
+    ]);
+    const days = history.get(plan.athleteId);
+    const figures = rehearsalFigures({
+      preAcuteDate: window.from,
+      weighInDate: plan.weighInDate,
+      weighIns: days?.weighIns ?? [],
+    });
+    return presentRehearsal(plan, figures, notes, days?.symptoms ?? [], today);
+  }
+
+  /**
+   * Writes (or, empty, removes) what was done on one day of a rehearsal: a day from the start of
+   * its acute part to the last regain morning, not after the athlete's today.
+   */
+  async setRehearsalNote(
+    actor: Actor,
+    athlete: AthleteWithPeople,
+    cutPlanId: string,
+    input: RehearsalNoteRequest,
+  ): Promise<RehearsalView> {
+    const repo = new CutPlanRepository(this.manager);
+    const plan = await repo.findRehearsal(athlete.id, cutPlanId);
+    if (!plan) throw notFound();
+    const from = preAcuteDate(plan);
+    const to = addDays(plan.weighInDate, REHEARSAL_REGAIN_MORNINGS);
+    const today = localDateTime(this.deps.clock(), athlete.user.timeZone).date;
+    if (input.date < from || input.date > to)
+      throw validationFailed({ date: `Choose a day of the rehearsal, ${from} to ${to}` });
+    if (input.date > today) throw validationFailed({ date: 'Write a day’s note on the day or after it' });
+    if (input.note) await repo.setNote(plan, input.date, input.note, actor.userId);
+    else await repo.removeNote(plan.id, input.date);
+    return this.rehearsalRecord(plan, today);
   }
 
   /** Sets the weigh-in's record on the athlete (the event must already be a dated weigh-in). */
@@ -187,7 +316,10 @@ export class CutService {
   async createPlan(actor: Actor, athlete: AthleteWithPeople, input: CreateCutPlanRequest): Promise<CutView> {
     const event = weighInEventOf(athlete);
     if (!event) throw conflict(NOT_A_WEIGH_IN);
-    const shapeInput = { ...input, weighInDate: event.date, limitKg: event.limitKg };
+    const practice = input.practiceWeighInDate;
+    if (practice !== null && practice >= event.date)
+      throw validationFailed({ practiceWeighInDate: `Must be before the weigh-in on ${event.date}` });
+    const shapeInput = { ...input, weighInDate: practice ?? event.date, limitKg: event.limitKg };
     if (input.startDate >= preAcuteDate(shapeInput))
       throw validationFailed({
         startDate: `Start before the last ${input.acuteDays} days before the weigh-in`,
@@ -204,7 +336,7 @@ export class CutService {
       new CutPlanRepository(manager).create(
         {
           athleteId: athlete.id,
-          weighInDate: event.date,
+          weighInDate: shapeInput.weighInDate,
           limitKg: event.limitKg,
           startDate: input.startDate,
           startKg: input.startKg,
@@ -213,6 +345,7 @@ export class CutService {
           path: input.path,
           thresholdPct,
           notes: input.notes,
+          rehearsal: practice !== null,
           createdById: actor.userId,
         },
         warnings.map((w) => ({

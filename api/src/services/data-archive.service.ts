@@ -22,6 +22,7 @@ const ARCHIVE_TABLES = {
   'weekly-check-ins.json': ['weekly_check_ins'],
   'flags.json': ['athlete_flags'],
   'body-composition.json': ['body_measurements'],
+  'making-weight.json': ['cut_plans', 'cut_rehearsal_notes'],
 } as const;
 
 type Row = Record<string, unknown>;
@@ -48,7 +49,7 @@ type ArchiveDeps = {
 
 /**
  * The athlete's data archive: a zip of JSON files (profile, days with every entry, plans, marks
- * with their replies, weekly check-ins, flags, body-composition measurements, photos) and the photo files themselves under
+ * with their replies, weekly check-ins, flags, body-composition measurements, cut plans and rehearsal notes, photos) and the photo files themselves under
  * `photos/`. Built in memory of the rows, streamed out as the zip is written.
  */
 export class DataArchiveService {

@@ -19,6 +19,10 @@ import {
   type SupplementEntryRequest,
   type Symptom,
   type SymptomReportRequest,
+  fluidView,
+  mealView,
+  supplementView,
+  symptomView,
 } from '@driftmark/shared';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
@@ -71,12 +75,15 @@ export interface EntryKind<E extends ClientDayEntry, I extends { clientId: strin
   meta?(entry: E): Record<string, string> | undefined;
   /** The entry as the day view lists it: what a write answers with. */
   present(entry: E): unknown;
+  /** The shape `present` gives (shared), for the API description. */
+  view: z.ZodType;
 }
 
 export const fluidKind: EntryKind<FluidEntry, FluidEntryRequest> = {
   path: 'fluids',
   plural: 'fluid entries',
   present: presentFluid,
+  view: fluidView,
   entity: FluidEntry,
   schema: fluidEntryRequest,
   columns: async (input) => ({
@@ -84,8 +91,15 @@ export const fluidKind: EntryKind<FluidEntry, FluidEntryRequest> = {
     enteredValue: input.volume,
     enteredUnit: input.unit,
     kind: input.kind,
+    sodiumMg: input.sodiumMg ?? null,
   }),
-  asInput: (e) => ({ time: e.localTime, volume: e.enteredValue, unit: e.enteredUnit, kind: e.kind }),
+  asInput: (e) => ({
+    time: e.localTime,
+    volume: e.enteredValue,
+    unit: e.enteredUnit,
+    kind: e.kind,
+    sodiumMg: e.sodiumMg,
+  }),
 };
 
 /**
@@ -121,7 +135,7 @@ export async function mealItemsAsEaten(
   const toLookUp = items.filter((i) => !usesStored(i)).map((i) => i.foodId);
   const looked =
     toLookUp.length > 0
-      ? await resolveFoods(ctx.manager, ctx.athlete.teamId, toLookUp)
+      ? await resolveFoods(ctx.manager, ctx.athlete, toLookUp)
       : new Map<string, ResolvedFood>();
   const problems: Record<string, string> = {};
   const rows: NewMealItem[] = [];
@@ -173,6 +187,7 @@ export const mealKind: EntryKind<MealEntry, MealEntryRequest> = {
   path: 'meals',
   plural: 'meals',
   present: presentMeal,
+  view: mealView,
   entity: MealEntry,
   schema: mealEntryRequest,
   columns: async (input, ctx) => {
@@ -229,6 +244,7 @@ export const supplementKind: EntryKind<SupplementEntry, SupplementEntryRequest> 
   path: 'supplements',
   plural: 'supplement entries',
   present: presentSupplement,
+  view: supplementView,
   entity: SupplementEntry,
   schema: supplementEntryRequest,
   columns: async (input) => ({
@@ -252,6 +268,7 @@ export const symptomKind: EntryKind<SymptomReport, SymptomReportRequest> = {
   path: 'symptoms',
   plural: 'symptom reports',
   present: presentSymptom,
+  view: symptomView,
   entity: SymptomReport,
   schema: symptomReportRequest,
   columns: async (input) => {

@@ -133,10 +133,9 @@ export async function loadDayView(
   ]);
   // A meal of foods lists its items: one more statement for all of the day's.
   await mealKind.load?.(meals, manager);
-  const fluidMl = fluids.length > 0 ? fluids.reduce((sum, f) => sum + f.volumeMl, 0) : null;
   const judged = dayDrift({
     plan: plan.targets,
-    actuals: dayActuals(mealTotals(meals), fluidMl, evening),
+    actuals: dayActuals(mealTotals(meals), fluids, evening),
     fluids: fluids.map((f) => ({ time: f.localTime, volumeMl: f.volumeMl })),
     date,
     today,

@@ -1,19 +1,35 @@
-import type { CreateFoodRequest, FoodPortion, FoodView } from '@driftmark/shared';
+import {
+  labelRequestPer100g,
+  normaliseBarcode,
+  type CreateFoodRequest,
+  type FoodPortion,
+  type FoodView,
+  type LabelFoodRequest,
+  type LabelFoodResult,
+  type LabelNutrients,
+} from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
 import { findEverydayFood, listEverydayFoods } from '../adapters/everyday-foods.js';
+import { FoodProductsUnavailable, lookupProduct } from '../adapters/food-products.js';
 import { findReferenceFood, listReferenceFoods } from '../adapters/reference-foods.js';
+import type { Config } from '../config.js';
+import type { Athlete } from '../entities/athlete.entity.js';
+import type { Food } from '../entities/food.entity.js';
+import { AppError } from '../errors.js';
 import { indexFood, rankFoods, type IndexedFood, type SearchableFood } from '../lib/food-search.js';
-import { MealItemRepository } from '../repositories/meal-item.repository.js';
 import type { Per100g } from '../lib/meal-nutrients.js';
 import type { Actor } from '../policies/actor.js';
 import {
+  labelCheckOf,
   preparationOf,
   presentEverydayFood,
   presentReferenceFood,
   presentTeamFood,
   teamFoodEnergyKcal,
 } from '../presenters/food.presenter.js';
+import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { FoodRepository } from '../repositories/food.repository.js';
+import { MealItemRepository } from '../repositories/meal-item.repository.js';
 
 /** A food resolved for a meal item: what the item keeps of it. */
 export interface ResolvedFood {
@@ -28,24 +44,28 @@ const EVERYDAY_PREFIX = 'dm:';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
- * A food of the team's list by id (`<uuid>` for a team food, `ifct:<code>` for a reference
- * food), or null when the team has no such food.
+ * A food an athlete's meal may use by id (`<uuid>` for a team food or the athlete's own personal
+ * food, `dm:<slug>` for an everyday food, `ifct:<code>` for a reference food), or null when there is
+ * no such food for them.
  */
 export async function resolveFood(
   manager: EntityManager,
-  teamId: string,
+  athlete: Pick<Athlete, 'id' | 'teamId'>,
   foodId: string,
 ): Promise<ResolvedFood | null> {
-  return (await resolveFoods(manager, teamId, [foodId])).get(foodId.toLowerCase()) ?? null;
+  return (await resolveFoods(manager, athlete, [foodId])).get(foodId.toLowerCase()) ?? null;
 }
 
 /**
- * Foods of the team's list by id, keyed by the lower-cased id; ids the team has no food for are
- * left out. Team foods are read in one statement, whatever their number.
+ * Foods an athlete's meal may use by id, keyed by the lower-cased id: team foods and the athlete's
+ * own personal foods (`FoodRepository.findManyForAthleteMeal`), our everyday foods, the reference
+ * table; ids with no such food for them are left out. A null athlete id (staff planning a meal)
+ * takes the team's foods without any personal food. Stored foods are read in one statement,
+ * whatever their number.
  */
 export async function resolveFoods(
   manager: EntityManager,
-  teamId: string,
+  athlete: { id: string | null; teamId: string },
   foodIds: readonly string[],
 ): Promise<Map<string, ResolvedFood>> {
   const found = new Map<string, ResolvedFood>();
@@ -62,7 +82,11 @@ export async function resolveFoods(
     }
   }
   if (teamIds.length > 0) {
-    for (const food of await new FoodRepository(manager).findManyInTeam(teamIds, teamId)) {
+    for (const food of await new FoodRepository(manager).findManyForAthleteMeal(
+      teamIds,
+      athlete.teamId,
+      athlete.id,
+    )) {
       found.set(food.id.toLowerCase(), {
         id: food.id,
         name: food.name,
@@ -82,7 +106,24 @@ export async function resolveFoods(
   return found;
 }
 
-type FoodDeps = { dataSource: DataSource; clock: () => Date };
+type FoodDeps = {
+  dataSource: DataSource;
+  clock: () => Date;
+  config: Pick<Config, 'foodProductsUrl'>;
+};
+
+/** Who a food made from a label belongs to: the team, or one athlete of it. */
+export type FoodOwner = { teamId: string; athleteId: string | null };
+
+/** The answer when the barcode finds nothing to copy: the athlete types the label instead. */
+const barcodeNotFound = (listedWithoutFigures: boolean): AppError =>
+  new AppError(
+    'barcode_not_found',
+    listedWithoutFigures
+      ? 'This product is listed without nutrition figures: enter the label instead.'
+      : 'No product with this barcode was found: enter the label instead.',
+    { barcode: listedWithoutFigures ? 'Listed without nutrition figures' : 'Not found' },
+  );
 
 /** How far back use counts for ranking: 180 days (common practice, no source). */
 const USAGE_WINDOW_DAYS = 180;
@@ -125,7 +166,8 @@ export class FoodService {
   constructor(private readonly deps: FoodDeps) {}
 
   /**
-   * The foods answering `q` (the team's, our everyday foods, the reference table), best first,
+   * The foods answering `q` (the team's, the signed-in athlete's own personal foods, our everyday
+   * foods, the reference table), best first,
    * ranked by how well they match and by how often this athlete and the team log them; at most
    * `limit`. An empty query lists the recent and frequent foods first (`lib/food-search.ts`).
    */
@@ -133,8 +175,11 @@ export class FoodService {
     const manager = this.deps.dataSource.manager;
     const now = this.deps.clock();
     const since = new Date(now.getTime() - USAGE_WINDOW_DAYS * 86_400_000);
+    // An athlete also finds their own personal foods; staff search the team's list.
+    const ownAthlete =
+      actor.role === 'athlete' ? await new AthleteRepository(manager).findByUserId(actor.userId) : null;
     const [teamFoods, usage, fixed] = await Promise.all([
-      new FoodRepository(manager).listForTeam(actor.teamId),
+      new FoodRepository(manager).listForTeam(actor.teamId, ownAthlete?.id ?? null),
       new MealItemRepository(manager).usage(actor.teamId, actor.userId, since),
       indexedFixedFoods(),
     ]);
@@ -143,7 +188,7 @@ export class FoodService {
         id: f.id.toLowerCase(),
         name: f.name,
         preparation: preparationOf(f.name),
-        source: 'team',
+        source: f.athleteId ? 'personal' : 'team',
         view: () => presentTeamFood(f),
       }),
     );
@@ -166,5 +211,68 @@ export class FoodService {
       createdById: actor.userId,
     });
     return presentTeamFood(food);
+  }
+
+  /** A food by id, for the route that authorizes it (team or personal; reference foods have no uuid). */
+  findById(id: string): Promise<Food | null> {
+    return new FoodRepository(this.deps.dataSource.manager).findById(id);
+  }
+
+  /**
+   * A team or personal food from a nutrition label: stored per 100 g (per-serving figures scaled by
+   * the serving's grams), with the printed energy kept and checked against the macros.
+   */
+  async createFromLabel(actor: Actor, owner: FoodOwner, input: LabelFoodRequest): Promise<LabelFoodResult> {
+    const food = await this.save(actor, owner, input.name, labelRequestPer100g(input), null);
+    return { food: presentTeamFood(food), labelCheck: labelCheckOf(food)!, created: true };
+  }
+
+  /**
+   * The athlete's personal food for a packaged product's barcode: the one they already have, or a
+   * new one from the food-products database's label. Only the barcode leaves the server.
+   */
+  async fromBarcode(actor: Actor, athlete: Athlete, typed: string): Promise<LabelFoodResult> {
+    const barcode = normaliseBarcode(typed);
+    const repo = new FoodRepository(this.deps.dataSource.manager);
+    const existing = await repo.findPersonalByBarcode(athlete.id, barcode);
+    if (existing)
+      return { food: presentTeamFood(existing), labelCheck: labelCheckOf(existing)!, created: false };
+    let lookup;
+    try {
+      lookup = await lookupProduct(this.deps.config.foodProductsUrl, barcode);
+    } catch (error) {
+      if (!(error instanceof FoodProductsUnavailable)) throw error;
+      throw new AppError(
+        'food_products_unavailable',
+        'The food-products database is not answering right now: enter the label, or try the barcode again later.',
+      );
+    }
+    if (lookup.kind === 'not_found') throw barcodeNotFound(lookup.listedWithoutFigures);
+    const owner = { teamId: athlete.teamId, athleteId: athlete.id };
+    const food = await this.save(actor, owner, lookup.product.name, lookup.product.per100g, barcode);
+    return { food: presentTeamFood(food), labelCheck: labelCheckOf(food)!, created: true };
+  }
+
+  private save(
+    actor: Actor,
+    owner: FoodOwner,
+    name: string,
+    per100g: LabelNutrients,
+    barcode: string | null,
+  ): Promise<Food> {
+    return new FoodRepository(this.deps.dataSource.manager).create({
+      teamId: owner.teamId,
+      athleteId: owner.athleteId,
+      name,
+      proteinG: per100g.proteinG,
+      carbohydrateG: per100g.carbohydrateG,
+      fatG: per100g.fatG,
+      fibreG: per100g.fibreG ?? null,
+      alcoholG: per100g.alcoholG ?? null,
+      sodiumMg: per100g.sodiumMg ?? null,
+      labelEnergyKcal: per100g.energyKcal,
+      barcode,
+      createdById: actor.userId,
+    });
   }
 }

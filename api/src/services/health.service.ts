@@ -1,10 +1,8 @@
+import type { HealthResponse } from '@driftmark/shared';
 import type { DataSource } from 'typeorm';
 import { HealthRepository } from '../repositories/health.repository.js';
 
-export interface Health {
-  status: 'ok' | 'error';
-  db: 'up' | 'down';
-}
+export type Health = HealthResponse;
 
 export class HealthService {
   constructor(private readonly deps: { dataSource: DataSource }) {}

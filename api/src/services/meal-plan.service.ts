@@ -8,7 +8,7 @@ import {
   type PlannedPer100g,
 } from '@driftmark/shared';
 import type { DataSource, EntityManager } from 'typeorm';
-import { MealEntry } from '../entities/meal-entry.entity.js';
+import type { MealEntry } from '../entities/meal-entry.entity.js';
 import { notFound, validationFailed } from '../errors.js';
 import { versionDay } from '../lib/day-plan.js';
 import { localDateTime } from '../lib/local-time.js';
@@ -16,10 +16,9 @@ import { fitAnswer, fitQuantities, type FitFood } from '../lib/meal-plan-fit.js'
 import type { Actor } from '../policies/actor.js';
 import type { AthleteWithPeople } from '../repositories/athlete.repository.js';
 import { PlanRepository } from '../repositories/plan.repository.js';
-import { DayEntryRepository } from '../repositories/day-entry.repository.js';
 import type { EntryResult } from './check-in.service.js';
 import { logMealFromItems } from './meal-log.service.js';
-import { resolveFood, type ResolvedFood } from './food.service.js';
+import { resolveFoods, type ResolvedFood } from './food.service.js';
 
 type Deps = { dataSource: DataSource; clock: () => Date };
 
@@ -40,12 +39,9 @@ async function foodsById(
   teamId: string,
   ids: Iterable<string>,
 ): Promise<Map<string, ResolvedFood | null>> {
-  const found = new Map<string, ResolvedFood | null>();
-  for (const id of ids) {
-    const key = id.toLowerCase();
-    if (!found.has(key)) found.set(key, await resolveFood(manager, teamId, id));
-  }
-  return found;
+  const keys = [...new Set([...ids].map((id) => id.toLowerCase()))];
+  const resolved = await resolveFoods(manager, { id: null, teamId }, keys);
+  return new Map(keys.map((key) => [key, resolved.get(key) ?? null]));
 }
 
 /**
@@ -125,19 +121,13 @@ export class MealPlanService {
     const foods = input.foods ?? meal.foods.map((f) => ({ foodId: f.foodId, quantityG: f.quantityG }));
     // The athlete's own way of logging a meal of foods (same checks, nutrients as eaten, limits,
     // client-id idempotency); a bad food answers 400 naming `items.<i>.<field>`.
-    const result = await logMealFromItems(this.deps, athlete, date, {
+    return logMealFromItems(this.deps, athlete, date, {
       clientId: input.clientId,
       time,
       name: meal.name,
       items: foods.map((f) => ({ foodId: f.foodId, quantityG: f.quantityG })),
+      plannedMealId: meal.id,
     });
-    if (result.entry.plannedMealId !== meal.id) {
-      await new DayEntryRepository(manager, MealEntry).updateForAthlete(result.entry.id, athlete.id, {
-        plannedMealId: meal.id,
-      });
-      result.entry.plannedMealId = meal.id;
-    }
-    return result;
   }
 
   /** Proposes quantities for the chosen foods (see lib/meal-plan-fit.ts); 400 for a food the team has not. */

@@ -1,7 +1,5 @@
-import { mkdir, readFile, writeFile } from 'node:fs/promises';
-import path from 'node:path';
 import type { DataSource } from 'typeorm';
-import type { LocalFolderStorage } from '../adapters/storage.js';
+import { OWNER_MARK, type SweepableStorage } from '../adapters/storage.js';
 import type { Logger } from '../logger.js';
 import { PhotoRepository } from '../repositories/photo.repository.js';
 
@@ -18,8 +16,8 @@ export interface PhotoSweepReport {
 
 const BATCH = 500;
 
-/** The file in the photo folder naming the database whose rows the files belong to. */
-export const OWNER_MARK = '.driftmark-database';
+/** The file (or object) in the photo store naming the database whose rows the files belong to. */
+export { OWNER_MARK };
 
 /** A database named by host, port and name (no credentials): what the folder's mark holds. */
 export function databaseIdentity(databaseUrl: string): string {
@@ -28,41 +26,36 @@ export function databaseIdentity(databaseUrl: string): string {
 }
 
 /**
- * Whether the folder belongs to this database: a folder without a mark is marked now; a folder
- * marked for another database (a server pointed at the wrong folder) is never swept.
+ * Whether the store belongs to this database: a store without a mark is marked now; a store
+ * marked for another database (a server pointed at the wrong folder or bucket) is never swept.
  */
-async function ownsFolder(root: string, identity: string): Promise<boolean> {
-  const mark = path.join(root, OWNER_MARK);
-  try {
-    return (await readFile(mark, 'utf8')).trim() === identity;
-  } catch (error) {
-    if ((error as NodeJS.ErrnoException).code !== 'ENOENT') throw error;
-    await mkdir(root, { recursive: true });
-    await writeFile(mark, `${identity}\n`, { flag: 'wx' }).catch(() => undefined);
-    return (await readFile(mark, 'utf8')).trim() === identity;
-  }
+async function ownsStorage(storage: SweepableStorage, identity: string): Promise<boolean> {
+  const mark = await storage.readMark();
+  if (mark !== null) return mark.trim() === identity;
+  await storage.writeMark(`${identity}\n`);
+  return (await storage.readMark())?.trim() === identity;
 }
 
 /**
- * Makes the photo folder agree with the rows: every file a row claims is published, every file
+ * Makes the photo store (folder or bucket) agree with the rows: every file a row claims is published, every file
  * no row claims goes. Only files last changed before `before` are touched: at start that is the
  * moment the process started (no upload of this process is running yet); on the periodic run a
  * time well past any upload in progress, so a file another process is still staging is left alone.
  */
 export async function sweepPhotoStorage(deps: {
   dataSource: DataSource;
-  storage: LocalFolderStorage;
-  /** `databaseIdentity(DATABASE_URL)`: the folder is swept only when it is marked for it. */
+  storage: SweepableStorage;
+  /** `databaseIdentity(DATABASE_URL)`: the store is swept only when it is marked for it. */
   database: string;
   before: Date;
   logger: Logger;
 }): Promise<PhotoSweepReport> {
   const { storage, before } = deps;
   const report: PhotoSweepReport = { published: 0, orphans: 0, pending: 0, strays: 0 };
-  if (!(await ownsFolder(storage.root, deps.database))) {
+  if (!(await ownsStorage(storage, deps.database))) {
     deps.logger.warn(
-      { uploadsDir: storage.root, database: deps.database },
-      `the photo folder is marked for another database (${OWNER_MARK}); not swept`,
+      { photoStorage: storage.location, database: deps.database },
+      `the photo store is marked for another database (${OWNER_MARK}); not swept`,
     );
     return report;
   }
@@ -88,7 +81,7 @@ export async function sweepPhotoStorage(deps: {
   for await (const entry of storage.list()) {
     if (entry.modifiedAt >= before) continue;
     if (entry.key === null) {
-      await storage.removeStray(entry.path);
+      await storage.removeStray(entry.name);
       report.strays += 1;
       continue;
     }

@@ -11,6 +11,7 @@ import type { Config } from '../config.js';
 import type { ConditionPhoto } from '../entities/condition-photo.entity.js';
 import { AppError, conflict, forbidden, notFound, validationFailed } from '../errors.js';
 import { futureEntryProblem } from '../lib/local-time.js';
+import { whileStaging } from '../lib/staging-lock.js';
 import type { Logger } from '../logger.js';
 import type { UploadedFile } from '../middleware/upload.js';
 import { isDatabaseUnavailable, zodFields } from '../middleware/errors.js';
@@ -25,7 +26,7 @@ import { findTeamPose } from './pose.service.js';
 
 type PhotoDeps = {
   dataSource: DataSource;
-  config: Pick<Config, 'uploadsDir'>;
+  config: Pick<Config, 'photoStorage' | 'uploadsDir' | 's3'>;
   logger: Logger;
   /** Defaults to the uploads folder; tests pass their own to provoke failures. */
   storage?: StorageAdapter;
@@ -141,42 +142,44 @@ export class PhotoService {
     // 3. Stage every size (pending names), 4. commit the rows, 5. publish the files. A kill before
     // the commit leaves pending files no row claims; after it, rows whose files the start sweep
     // publishes (`sweepPhotoStorage`). A refused commit removes what was staged.
+    // The staging lock (held shared from the first staged file to the commit, on the committing
+    // connection) keeps another instance's start sweep from taking these files for a dead upload's.
     const staged: string[] = [];
     const rows: NewConditionPhoto[] = [];
-    try {
-      for (const photo of fresh.values()) {
-        const thumbKey = newStorageKey(athlete.id, photo.thumb.contentType);
-        await this.storage.stage(thumbKey, photo.thumb.data, photo.thumb.contentType);
-        staged.push(thumbKey);
-        const displayKey = newStorageKey(athlete.id, photo.display.contentType);
-        await this.storage.stage(displayKey, photo.display.data, photo.display.contentType);
-        staged.push(displayKey);
-        rows.push({
-          athleteId: athlete.id,
-          localDate: date,
-          pose,
-          width: photo.display.width,
-          height: photo.display.height,
-          thumbKey,
-          displayKey,
-          contentType: photo.display.contentType,
-          bytes: photo.thumb.data.length + photo.display.data.length,
-          contentHash: photo.contentHash,
-        });
+    await whileStaging(this.deps.dataSource, async (lockHolder) => {
+      try {
+        for (const photo of fresh.values()) {
+          const thumbKey = newStorageKey(athlete.id, photo.thumb.contentType);
+          await this.storage.stage(thumbKey, photo.thumb.data, photo.thumb.contentType);
+          staged.push(thumbKey);
+          const displayKey = newStorageKey(athlete.id, photo.display.contentType);
+          await this.storage.stage(displayKey, photo.display.data, photo.display.contentType);
+          staged.push(displayKey);
+          rows.push({
+            athleteId: athlete.id,
+            localDate: date,
+            pose,
+            width: photo.display.width,
+            height: photo.display.height,
+            thumbKey,
+            displayKey,
+            contentType: photo.display.contentType,
+            bytes: photo.thumb.data.length + photo.display.data.length,
+            contentHash: photo.contentHash,
+          });
+        }
+        const inserted = await lockHolder.transaction((tx) => new PhotoRepository(tx).insertMany(rows));
+        for (const row of inserted) existing.set(row.contentHash, row);
+      } catch (error) {
+        // A lost connection may have lost the COMMIT's answer, not the commit: the sweep decides
+        // from the rows. Any other failure means no row, so the staged files go now.
+        if (!isDatabaseUnavailable(error)) await this.removeKeys(staged);
+        if (isUniqueViolation(error)) {
+          throw conflict('These photos are being uploaded already. Refresh the gallery to see them.');
+        }
+        throw error;
       }
-      const inserted = await this.deps.dataSource.transaction((tx) =>
-        new PhotoRepository(tx).insertMany(rows),
-      );
-      for (const row of inserted) existing.set(row.contentHash, row);
-    } catch (error) {
-      // A lost connection may have lost the COMMIT's answer, not the commit: the sweep decides
-      // from the rows. Any other failure means no row, so the staged files go now.
-      if (!isDatabaseUnavailable(error)) await this.removeKeys(staged);
-      if (isUniqueViolation(error)) {
-        throw conflict('These photos are being uploaded already. Refresh the gallery to see them.');
-      }
-      throw error;
-    }
+    });
     for (const key of staged) await this.storage.publish(key);
 
     return processed.map((p) => presentPhoto(existing.get(p.contentHash)!));

@@ -99,9 +99,8 @@ export function trendDays(h: AthleteHistory, from: string, to: string, today: st
   for (const [i, date] of dates.entries()) {
     const meals = h.meals.get(date) ?? null;
     const dayFluids = fluids.get(date) ?? [];
-    const fluidMl = dayFluids.length > 0 ? dayFluids.reduce((s, f) => s + f.volumeMl, 0) : null;
     const evening = h.evenings.get(date) ?? null;
-    const actuals = dayActuals(meals, fluidMl, evening);
+    const actuals = dayActuals(meals, dayFluids, evening);
     const plan = planFor(date);
     const { drift, breach } = dayDrift({ plan, actuals, fluids: dayFluids, date, today });
     days.push({

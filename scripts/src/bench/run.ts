@@ -16,6 +16,7 @@ import { BENCH_PASSWORD } from './data.js';
 import { healthIdle, healthUnderSignIns, SIGN_INS } from './health.js';
 import { closeAgent, signIn } from './http.js';
 import { bareSharp, makePhoto, uploadThroughRoute } from './photo.js';
+import { openPhotoStorageBench, PHOTO_EDGE, phonePhoto, summarize } from './photo-storage.js';
 import { openReadBench, type ReadFigures, type SqlFigures } from './reads.js';
 import { setUpBench } from './setup.js';
 import { median, medianOf, repeat } from './stats.js';
@@ -161,6 +162,48 @@ async function main(): Promise<void> {
       met: routeMs / median(sharpMs) <= 1.2 && rise <= 150_000_000,
       figures: { uploads, sharpMs, photoBytes: photo.length },
     });
+
+    // 3b. Upload and read latency with the files in a bucket (the S3 fake) against the folder.
+    const storageBench = await openPhotoStorageBench({
+      serverEnv: env.serverEnv,
+      outDir: env.outDir,
+      exclude: [Number(new URL(env.baseUrl).port)],
+    });
+    try {
+      const phone = await phonePhoto(photo);
+      const storage = await storageBench.run({
+        folderBaseUrl: env.baseUrl,
+        email: data.history.athleteEmail,
+        password: BENCH_PASSWORD,
+        athleteId: data.history.athleteId,
+        today,
+        uploads: Math.max(4 * REPS, 8),
+        reads: Math.max(20 * REPS, 40),
+        photo: phone,
+      });
+      const folder = summarize(storage.folder);
+      const s3 = summarize(storage.s3);
+      add({
+        what: `photo upload, ${PHOTO_EDGE} px JPEG (${kB(phone.length)}), files in the S3 fake's bucket`,
+        measured: `${ms(s3.upload)} (median of ${storage.s3.uploadMs.length})`,
+        reference: `files in the folder: ${ms(folder.upload)}`,
+        ratio: x(s3.upload / folder.upload),
+        goal: 'none: the figure for deciding',
+        met: null,
+        figures: { uploadMs: { s3: storage.s3.uploadMs, folder: storage.folder.uploadMs } },
+      });
+      add({
+        what: "photo read (display size, whole body), files in the S3 fake's bucket",
+        measured: `p50 ${ms(s3.read)}, p95 ${ms(s3.readP95)} (${storage.s3.readMs.length} reads)`,
+        reference: `files in the folder: p50 ${ms(folder.read)}, p95 ${ms(folder.readP95)}`,
+        ratio: x(s3.read / folder.read),
+        goal: 'none: the figure for deciding',
+        met: null,
+        figures: { readMs: { s3: storage.s3.readMs, folder: storage.folder.readMs } },
+      });
+    } finally {
+      await storageBench.stop();
+    }
 
     // 4. The trend over 3 years and 6 weeks, and the roster and queue of 150 athletes.
     const rosterCookie = await signIn(env.baseUrl, data.roster.coachEmail, BENCH_PASSWORD);

@@ -26,6 +26,8 @@ export interface BenchEnvironment {
   pgVersion: string;
   baseUrl: string;
   server: Service;
+  /** The server's environment (a second server on other settings starts from it). */
+  serverEnv: NodeJS.ProcessEnv;
   data: BenchData;
   /** Where the run writes its files (results, uploads, the server's log). */
   outDir: string;
@@ -98,6 +100,7 @@ export async function setUpBench(log: (message: string) => void): Promise<BenchE
     pgVersion,
     baseUrl,
     server,
+    serverEnv: env,
     data,
     outDir,
     async stop() {

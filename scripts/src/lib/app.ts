@@ -1,4 +1,4 @@
-/** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP fake, the server. */
+/** Building and running the app's parts: shared/api/web builds, the API CLI, the SMTP and S3 fakes, the server. */
 import path from 'node:path';
 import { isBuildFresh, recordBuild, type BuildCheck } from './fingerprint.js';
 import { fail, log, seconds, warn } from './log.js';
@@ -14,6 +14,7 @@ import {
   type ServiceExit,
 } from './proc.js';
 import { API_RESTART, nextRestart, type RestartPolicy } from './restart-policy.js';
+import { s3FakeEnv } from './s3-fake.js';
 
 export const DEMO_PASSWORD = 'driftmark-demo';
 export const DEMO_ACCOUNTS = [
@@ -88,11 +89,11 @@ export async function buildWorkspace(
 export async function apiCli(
   command: string,
   env: NodeJS.ProcessEnv,
-  options: { source?: boolean } = {},
+  options: { source?: boolean; args?: string[] } = {},
 ): Promise<void> {
   const args = options.source
-    ? ['--import', 'tsx', repoPath('api', 'src', 'cli.ts'), command]
-    : [repoPath('api', 'dist', 'cli.js'), command];
+    ? ['--import', 'tsx', repoPath('api', 'src', 'cli.ts'), command, ...(options.args ?? [])]
+    : [repoPath('api', 'dist', 'cli.js'), command, ...(options.args ?? [])];
   const childEnv = options.source ? { ...env, TSX_TSCONFIG_PATH: repoPath('api', 'tsconfig.json') } : env;
   await timed(
     `api ${command} (${env.APP_MODE ?? 'no APP_MODE'}, ${databaseName(env.DATABASE_URL)})`,
@@ -117,32 +118,22 @@ export interface RunningSmtpFake {
   url: string;
 }
 
-/** Starts scripts/src/smtp-fake.ts on the first free port at or after `preferredPort`. */
-export async function startSmtpFake(options: {
-  preferredPort: number;
-  captureDir: string;
-  logFile?: string;
-  exclude?: number[];
-  /** Delay before each 250 answer (see SmtpFakeOptions.answerDelayMs). */
-  answerDelayMs?: number;
-}): Promise<RunningSmtpFake> {
-  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
-  const service = startService(
-    'smtp-fake',
-    node,
-    ['--import', 'tsx', repoPath('scripts', 'src', 'smtp-fake.ts')],
-    {
-      env: {
-        ...process.env,
-        SMTP_PORT: String(port),
-        SMTP_HOST: '127.0.0.1',
-        MAIL_CAPTURE_DIR: options.captureDir,
-        SMTP_ANSWER_DELAY_MS: String(options.answerDelayMs ?? 0),
-      },
-      ipc: true,
-      logFile: options.logFile,
-    },
-  );
+/**
+ * Starts `scripts/src/<script>.ts` with an IPC channel and waits for its `{ type: 'ready' }` message
+ * (the SMTP and S3 fakes); stops it and throws when none comes within 20 s.
+ */
+async function startReadyService(
+  name: string,
+  script: string,
+  env: NodeJS.ProcessEnv,
+  logFile: string | undefined,
+  what: string,
+): Promise<Service> {
+  const service = startService(name, node, ['--import', 'tsx', repoPath('scripts', 'src', script)], {
+    env,
+    ipc: true,
+    logFile,
+  });
   const ready = await new Promise<boolean>((resolve) => {
     const timer = setTimeout(() => resolve(false), 20_000);
     service.child.on('message', (message: { type?: string }) => {
@@ -158,12 +149,120 @@ export async function startSmtpFake(options: {
   });
   if (!ready) {
     await service.stop('SIGKILL');
-    throw new Error(
-      `The SMTP fake did not start on port ${port}${options.logFile ? ` (see ${options.logFile})` : ''}.`,
-    );
+    throw new Error(`${what} did not start${logFile ? ` (see ${logFile})` : ''}.`);
   }
   service.child.channel?.unref();
+  return service;
+}
+
+/** Starts scripts/src/smtp-fake.ts on the first free port at or after `preferredPort`. */
+export async function startSmtpFake(options: {
+  preferredPort: number;
+  captureDir: string;
+  logFile?: string;
+  exclude?: number[];
+  /** Delay before each 250 answer (see SmtpFakeOptions.answerDelayMs). */
+  answerDelayMs?: number;
+}): Promise<RunningSmtpFake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const env = {
+    ...process.env,
+    SMTP_PORT: String(port),
+    SMTP_HOST: '127.0.0.1',
+    MAIL_CAPTURE_DIR: options.captureDir,
+    SMTP_ANSWER_DELAY_MS: String(options.answerDelayMs ?? 0),
+  };
+  const what = `The SMTP fake on port ${port}`;
+  const service = await startReadyService('smtp-fake', 'smtp-fake.ts', env, options.logFile, what);
   return { service, port, url: `smtp://127.0.0.1:${port}` };
+}
+
+export interface RunningFoodProductsFake {
+  service: Service;
+  port: number;
+  /** The base URL the API's FOOD_PRODUCTS_URL names. */
+  url: string;
+}
+
+/** Starts scripts/src/food-products-fake.ts on the first free port at or after `preferredPort`. */
+export async function startFoodProductsFakeService(options: {
+  preferredPort: number;
+  logFile?: string;
+  exclude?: number[];
+}): Promise<RunningFoodProductsFake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const env = { ...process.env, FOOD_PRODUCTS_PORT: String(port), FOOD_PRODUCTS_HOST: '127.0.0.1' };
+  const what = `The food-products fake on port ${port}`;
+  const service = await startReadyService(
+    'food-products-fake',
+    'food-products-fake.ts',
+    env,
+    options.logFile,
+    what,
+  );
+  return { service, port, url: `http://127.0.0.1:${port}` };
+}
+
+export interface RunningS3Fake {
+  service: Service;
+  port: number;
+  /** `http://127.0.0.1:<port>` */
+  endpoint: string;
+  /** S3_ENDPOINT, S3_REGION, S3_FORCE_PATH_STYLE and the keys pointing at this fake (no bucket). */
+  env: Record<string, string>;
+}
+
+/**
+ * Starts scripts/src/s3-fake.ts (s3rver) on the first free port at or after `preferredPort`, its
+ * buckets under `directory`, with `buckets` created.
+ */
+export async function startS3Fake(options: {
+  preferredPort: number;
+  directory: string;
+  buckets?: string[];
+  logFile?: string;
+  exclude?: number[];
+}): Promise<RunningS3Fake> {
+  const port = await pickFreePort(options.preferredPort, { exclude: options.exclude });
+  const env = {
+    ...process.env,
+    S3_FAKE_PORT: String(port),
+    S3_FAKE_HOST: '127.0.0.1',
+    S3_FAKE_DIR: options.directory,
+    S3_FAKE_BUCKETS: (options.buckets ?? []).join(','),
+  };
+  const what = `The S3 fake on port ${port}`;
+  const service = await startReadyService('s3-fake', 's3-fake.ts', env, options.logFile, what);
+  const endpoint = `http://127.0.0.1:${port}`;
+  return { service, port, endpoint, env: s3FakeEnv(endpoint) };
+}
+
+/** The bucket the scripts make in the local S3 fake. */
+export const LOCAL_BUCKET = 'driftmark-photos';
+
+/**
+ * The photo store of a run on this machine (`npm start`, `npm run photos:migrate`): nothing to add
+ * for the folder (the default) or for a bucket the environment names itself (S3_BUCKET set); when
+ * PHOTO_STORAGE=s3 (or `needBucket`) names none, the S3 fake is started with its buckets under
+ * `<data>/s3-fake` and the returned variables point at its bucket `driftmark-photos`.
+ */
+export async function localPhotoStore(options: {
+  dataRoot: string;
+  needBucket?: boolean;
+  exclude?: number[];
+}): Promise<{ env: Record<string, string>; fake?: RunningS3Fake }> {
+  const wantsBucket = options.needBucket || process.env.PHOTO_STORAGE === 's3';
+  if (!wantsBucket || process.env.S3_BUCKET) return { env: {} };
+  const directory = path.join(options.dataRoot, 's3-fake');
+  const fake = await startS3Fake({
+    preferredPort: 4569,
+    directory,
+    buckets: [LOCAL_BUCKET],
+    exclude: options.exclude,
+    logFile: path.join(options.dataRoot, 's3-fake.log'),
+  });
+  log(`S3 fake on ${fake.endpoint}, bucket ${LOCAL_BUCKET} in ${relative(directory)}`);
+  return { env: { ...fake.env, S3_BUCKET: LOCAL_BUCKET }, fake };
 }
 
 /** Polls GET <baseUrl>/api/health until it answers 200; fails early when the server process exits. */

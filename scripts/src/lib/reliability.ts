@@ -16,6 +16,7 @@
  */
 import { randomBytes, randomUUID } from 'node:crypto';
 import { cpSync, existsSync, mkdirSync, readdirSync, rmSync } from 'node:fs';
+import os from 'node:os';
 import path from 'node:path';
 import { deflateSync } from 'node:zlib';
 import pg from 'pg';
@@ -642,7 +643,7 @@ async function scenarioPhotoKill(h: Harness, counts: ReliabilityCounts): Promise
     result.problems.push(`${orphans.length} file(s) no row claims, e.g. ${orphans.slice(0, 3).join(', ')}`);
   if (missing.length > 0) result.problems.push(`${missing.length} row file(s) missing from storage`);
   const tempLeft = listFiles(h.tempRoot);
-  const deadFolder = killedPid ? path.join(h.tempRoot, String(killedPid)) : null;
+  const deadFolder = killedPid ? path.join(h.tempRoot, `${os.hostname()}-${killedPid}`) : null;
   if (deadFolder && existsSync(deadFolder))
     result.problems.push(`the killed server's temp folder is still there (${deadFolder})`);
   if (tempLeft.length > 0) result.problems.push(`${tempLeft.length} file(s) left in the upload temp folder`);

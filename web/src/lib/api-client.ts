@@ -226,6 +226,8 @@ export async function apiRequest<T>(path: string, options: RequestOptions = {}):
 
 export const api = {
   get: <T>(path: string, signal?: AbortSignal) => apiRequest<T>(path, { signal }),
+  /** GET of an answer without the `{ data }` envelope (the OpenAPI description). */
+  getBare: async <T>(path: string, signal?: AbortSignal) => (await requestRaw(path, { signal })) as T,
   /** GET keeping the `abilities` map beside `data`. */
   getWithAbilities: async <T>(path: string, signal?: AbortSignal) =>
     unwrapWithAbilities<T>(await requestRaw(path, { signal })),

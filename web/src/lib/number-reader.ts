@@ -30,3 +30,36 @@ export function numberReader<F extends string>() {
     },
   };
 }
+
+/** A schema's SI range said in the reader's unit, rounded inward to `digits` so both ends are allowed. */
+export function rangeInUnit(
+  limits: { min: number; max: number },
+  fromSi: (si: number) => number,
+  digits = 1,
+): { min: number; max: number } {
+  const f = 10 ** digits;
+  return {
+    min: Math.ceil(fromSi(limits.min) * f - 1e-9) / f,
+    max: Math.floor(fromSi(limits.max) * f + 1e-9) / f,
+  };
+}
+
+/**
+ * A box typed in the reader's unit but checked by a schema in SI ("Waist must be at least 40 cm"):
+ * the schema's range message said again in the reader's unit ("… at least 15.8 in"), by the issue
+ * type the resolver reports. Other messages pass unchanged.
+ */
+export function rangeMessageInUnit(
+  error: { type?: string; message?: string },
+  box: {
+    subject: string;
+    limits: { min: number; max: number };
+    fromSi: (si: number) => number;
+    unit: string;
+  },
+): string | undefined {
+  const range = rangeInUnit(box.limits, box.fromSi);
+  if (error.type === 'too_small') return `${box.subject} must be at least ${range.min} ${box.unit}`;
+  if (error.type === 'too_big') return `${box.subject} must be at most ${range.max} ${box.unit}`;
+  return error.message;
+}

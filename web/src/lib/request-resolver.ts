@@ -17,6 +17,8 @@ export interface RequestConversion<F extends string> {
 export function createRequestResolver<V extends FieldValues, R>(
   schema: z.ZodType<R>,
   convert: (values: V) => RequestConversion<Extract<keyof V, string>>,
+  /** Rewords a schema message of a top-level field (e.g. an SI range for a box typed in inches). */
+  reword?: (field: string, error: FieldError) => string | undefined,
 ): Resolver<V, unknown, R> {
   const schemaResolver = zodResolver(schema as never) as unknown as Resolver<
     Record<string, unknown>,
@@ -27,6 +29,11 @@ export function createRequestResolver<V extends FieldValues, R>(
     const { request, numberErrors } = convert(values);
     const result = await schemaResolver(request, context, options as never);
     const errors = { ...(result.errors as Record<string, unknown>) } as Record<string, FieldError>;
+    if (reword) {
+      for (const [field, error] of Object.entries(errors)) {
+        if (typeof error?.message === 'string') errors[field] = { ...error, message: reword(field, error) };
+      }
+    }
     for (const [field, message] of Object.entries(numberErrors) as Array<[string, string]>) {
       errors[field] = { type: 'number', message, ref: options.fields?.[field]?.ref };
     }

@@ -9,8 +9,11 @@ import { AddRateLimitCounters1796190000000 } from './1796190000000-AddRateLimitC
 import { OutboxSendingLease1796190000001 } from './1796190000001-OutboxSendingLease.js';
 import { AddWeightCuts1796200000000 } from './1796200000000-AddWeightCuts.js';
 import { AddBodyMeasurements1796190140000 } from './1796190140000-AddBodyMeasurements.js';
-import { AddMealEntryItems1796210000000 } from './1796210000000-AddMealEntryItems.js';
-import { AddPlannedMealToMeals1796220000000 } from './1796220000000-AddPlannedMealToMeals.js';
+import { AddFoodLabels1796210000000 } from './1796210000000-AddFoodLabels.js';
+import { AddCutRehearsals1796220000000 } from './1796220000000-AddCutRehearsals.js';
+import { AddFluidSodium1796230000000 } from './1796230000000-AddFluidSodium.js';
+import { AddMealEntryItems1796240000000 } from './1796240000000-AddMealEntryItems.js';
+import { AddPlannedMealToMeals1796250000000 } from './1796250000000-AddPlannedMealToMeals.js';
 
 /** Every migration in order, imported explicitly (a glob fails under vitest and in dist). */
 export const MIGRATIONS: (new () => MigrationInterface)[] = [
@@ -24,6 +27,9 @@ export const MIGRATIONS: (new () => MigrationInterface)[] = [
   OutboxSendingLease1796190000001,
   AddWeightCuts1796200000000,
   AddBodyMeasurements1796190140000,
-  AddMealEntryItems1796210000000,
-  AddPlannedMealToMeals1796220000000,
+  AddFoodLabels1796210000000,
+  AddCutRehearsals1796220000000,
+  AddFluidSodium1796230000000,
+  AddMealEntryItems1796240000000,
+  AddPlannedMealToMeals1796250000000,
 ];

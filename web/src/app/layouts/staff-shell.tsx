@@ -2,6 +2,8 @@ import { ROLE_LABELS } from '@driftmark/shared';
 import { Link, Outlet } from 'react-router';
 import { SidebarNav, SidebarNavLink, SidebarShell } from '@/components/ui/app-shell';
 import {
+  BowlIcon,
+  CodeIcon,
   CountdownIcon,
   EnvelopeIcon,
   FlagIcon,
@@ -35,8 +37,16 @@ export function StaffShell() {
           <SidebarNavLink to={paths.coachTemplates} icon={<CountdownIcon />}>
             Countdown templates
           </SidebarNavLink>
+          {me.role === 'assistant' ? null : (
+            <SidebarNavLink to={paths.coachFoodNew} icon={<BowlIcon />}>
+              Team foods
+            </SidebarNavLink>
+          )}
           <SidebarNavLink to={paths.settings} icon={<SlidersIcon />}>
             Settings
+          </SidebarNavLink>
+          <SidebarNavLink to={paths.coachApiReference} icon={<CodeIcon />}>
+            API reference
           </SidebarNavLink>
         </SidebarNav>
       }

@@ -8,10 +8,11 @@ import { useAthlete } from '@/features/athletes/api/get-athlete';
 import { CoachCard, EventCountdownCard } from '@/features/athletes/components/athlete-today';
 import { CutTodayCard } from '@/features/cuts/components/cut-today-card';
 import { DayCheckIn } from '@/features/check-ins/components/day-check-in';
-import { useToday } from '@/features/check-ins/components/use-clock';
+import { useClock, useToday } from '@/features/check-ins/components/use-clock';
 import { WeeklyDueBanner } from '@/features/weekly/components/weekly-due-banner';
 import { firstName, formatDate, greetingFor, hourIn } from '@/lib/format';
 import { useCurrentUser } from '../session';
+import { useRecoveryTicks } from './use-recovery-ticks';
 
 export function AthleteHomeRoute() {
   const me = useCurrentUser();
@@ -19,6 +20,8 @@ export function AthleteHomeRoute() {
   const athlete = useAthlete(athleteId);
   const timeZone = athlete.data?.data.timeZone ?? me.timeZone;
   const today = useToday(timeZone);
+  const now = useClock(timeZone);
+  const tickRecovery = useRecoveryTicks(athleteId, today);
 
   if (!me.intakeComplete) return <Navigate to={paths.intake} replace />;
 
@@ -56,7 +59,16 @@ export function AthleteHomeRoute() {
       </header>
       <div className="space-y-4">
         <WeeklyDueBanner athleteId={athleteId} href={paths.athleteWeekly} />
-        {athleteId ? <CutTodayCard athleteId={athleteId} unit={me.units.weight} /> : null}
+        {athleteId ? (
+          <CutTodayCard
+            athleteId={athleteId}
+            unit={me.units.weight}
+            volumeUnit={me.units.volume}
+            now={now}
+            onToggle={tickRecovery}
+            today={today}
+          />
+        ) : null}
         <DayCheckIn
           athleteId={athleteId}
           date={today}

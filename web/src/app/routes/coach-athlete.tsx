@@ -161,7 +161,12 @@ export function CoachAthleteRoute() {
             abilities={athlete.data.abilities}
             className="mb-5"
           />
-          <CutCoachPanel athleteId={athleteId} today={today} unit={me.units.weight} />
+          <CutCoachPanel
+            athleteId={athleteId}
+            today={today}
+            unit={me.units.weight}
+            volumeUnit={me.units.volume}
+          />
           <section aria-labelledby="day-heading" className="mb-8">
             <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
               <h2 id="day-heading" className="text-xl font-bold text-ink tabular-nums">

@@ -5,8 +5,10 @@ import { Card, CardHeader } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { authKeys } from '@/features/auth/api/keys';
+import { cutKeys } from '@/features/cuts/api/keys';
 import { planKeys } from '@/features/plans/api/keys';
 import { MyDataCard } from '@/features/data-rights/components/my-data-card';
+import { AcuteShareForm } from '@/features/settings/components/acute-share-form';
 import { ChangePasswordForm } from '@/features/settings/components/change-password-form';
 import { GuardrailFloorsForm } from '@/features/settings/components/guardrail-floors-form';
 import { NotificationPreferencesForm } from '@/features/settings/components/notification-preferences-form';
@@ -41,6 +43,20 @@ export function SettingsRoute() {
               canEdit={me.abilities.manageTeam}
               // Plan pages carry the floors for their live checks.
               onSaved={() => void queryClient.invalidateQueries({ queryKey: planKeys.all })}
+            />
+          </Card>
+        ) : null}
+        {staff ? (
+          <Card aria-labelledby="cut-settings-heading">
+            <CardHeader id="cut-settings-heading" eyebrow="Team" title="Making weight: acute share" />
+            <p className="mb-4 text-sm text-ink-muted">
+              Every new cut plan is checked against this share of body mass for its last days before the
+              weigh-in.
+            </p>
+            <AcuteShareForm
+              canEdit={me.abilities.manageTeam}
+              // The making-weight panels show the threshold in force.
+              onSaved={() => void queryClient.invalidateQueries({ queryKey: cutKeys.all })}
             />
           </Card>
         ) : null}

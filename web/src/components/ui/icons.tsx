@@ -45,6 +45,14 @@ export function SlidersIcon(props: IconProps) {
   );
 }
 
+export function CodeIcon(props: IconProps) {
+  return (
+    <Icon {...props}>
+      <path d="M9 7l-5 5 5 5M15 7l5 5-5 5" />
+    </Icon>
+  );
+}
+
 export function RosterIcon(props: IconProps) {
   return (
     <Icon {...props}>

@@ -17,6 +17,7 @@ import {
 } from '@driftmark/shared';
 // Relative on purpose: this module is unit-tested without the web app's path alias.
 import { cmToFeetAndInches } from '../../../lib/format';
+import { rangeInUnit } from '../../../lib/number-reader';
 
 type Sex = (typeof SEXES)[number];
 type Goal = (typeof GOALS)[number];
@@ -171,9 +172,6 @@ const FORM_FIELDS = new Set<IntakeFormField>([
   'safetyAcknowledged',
 ]);
 
-const ceil1 = (x: number) => Math.ceil(x * 10 - 1e-9) / 10;
-const floor1 = (x: number) => Math.floor(x * 10 + 1e-9) / 10;
-
 function feetInches(totalInches: number): string {
   const feet = Math.floor(totalInches / 12);
   const inches = Math.round((totalInches - feet * 12) * 10) / 10;
@@ -188,22 +186,16 @@ export function rangeInUnits(
   units: { weightUnit: WeightUnit; volumeUnit: VolumeUnit },
 ): { min: string; max: string } | null {
   if (path === 'heightCm' && heightInFeet(units.weightUnit)) {
-    return {
-      min: feetInches(ceil1(cmToIn(LIMITS.heightCm.min))),
-      max: feetInches(floor1(cmToIn(LIMITS.heightCm.max))),
-    };
+    const r = rangeInUnit(LIMITS.heightCm, cmToIn);
+    return { min: feetInches(r.min), max: feetInches(r.max) };
   }
   if (path === 'usualWaterMl' && units.volumeUnit === 'floz') {
-    return {
-      min: `${ceil1(mlToFlOz(LIMITS.usualWaterMl.min))} fl oz`,
-      max: `${floor1(mlToFlOz(LIMITS.usualWaterMl.max))} fl oz`,
-    };
+    const r = rangeInUnit(LIMITS.usualWaterMl, mlToFlOz);
+    return { min: `${r.min} fl oz`, max: `${r.max} fl oz` };
   }
   if ((path === 'weighInLimitKg' || path === 'currentWeightKg') && units.weightUnit === 'lb') {
-    return {
-      min: `${ceil1(weightFromKg(LIMITS.weightKg.min, 'lb'))} lb`,
-      max: `${floor1(weightFromKg(LIMITS.weightKg.max, 'lb'))} lb`,
-    };
+    const r = rangeInUnit(LIMITS.weightKg, (kg) => weightFromKg(kg, 'lb'));
+    return { min: `${r.min} lb`, max: `${r.max} lb` };
   }
   return null;
 }

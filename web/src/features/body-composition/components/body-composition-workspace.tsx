@@ -1,4 +1,4 @@
-import type { WeightUnit } from '@driftmark/shared';
+import { lengthUnitFor, type WeightUnit } from '@driftmark/shared';
 import { Alert } from '@/components/ui/alert';
 import { Button } from '@/components/ui/button';
 import { Card, CardHeader } from '@/components/ui/card';
@@ -77,6 +77,7 @@ export function BodyCompositionWorkspace({
               sex={athlete.sex}
               today={today}
               heightCm={athlete.heightCm}
+              lengthUnit={lengthUnitFor(unit)}
               measuredBy={measuredBy}
               linkedKeys={linkedKeys}
             />

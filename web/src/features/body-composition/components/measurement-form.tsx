@@ -4,10 +4,12 @@ import {
   createBodyMeasurementRequest,
   DENSITY_EQUATION_LABELS,
   DENSITY_EQUATIONS,
+  LENGTH_UNIT_LABELS,
   LIMITS,
   SKINFOLD_SITE_LABELS,
   skinfoldSites,
   type CreateBodyMeasurementRequest,
+  type LengthUnit,
   type SkinfoldSite,
 } from '@driftmark/shared';
 import { useMemo } from 'react';
@@ -20,6 +22,7 @@ import { useCreateBodyMeasurement } from '../api/create-body-measurement';
 import type { LinkedKeys } from '../api/body-composition-cache';
 import {
   emptyMeasurementForm,
+  measurementMessage,
   toMeasurementRequest,
   type MeasurementFormValues,
 } from '../utils/measurement-form';
@@ -33,6 +36,8 @@ interface MeasurementFormProps {
   /** The athlete's today (their own date), the latest date a measurement may carry. */
   today: string;
   heightCm: number | null;
+  /** Circumferences and height in cm, or inches for those who weigh in pounds; skinfolds stay mm. */
+  lengthUnit: LengthUnit;
   /** Pre-filled "Measured by" (the signed-in user's name). */
   measuredBy: string;
   linkedKeys?: LinkedKeys;
@@ -45,6 +50,7 @@ export function MeasurementForm({
   sex,
   today,
   heightCm,
+  lengthUnit,
   measuredBy,
   linkedKeys,
   onSaved,
@@ -53,11 +59,13 @@ export function MeasurementForm({
     () =>
       createRequestResolver<MeasurementFormValues, CreateBodyMeasurementRequest>(
         createBodyMeasurementRequest as never,
-        toMeasurementRequest,
+        (v) => toMeasurementRequest(v, lengthUnit, heightCm),
+        (field, error) => measurementMessage(field, error, lengthUnit),
       ),
-    [],
+    [lengthUnit, heightCm],
   );
-  const defaults = { ...emptyMeasurementForm(today, heightCm), measuredBy };
+  const lengthSuffix = LENGTH_UNIT_LABELS[lengthUnit];
+  const defaults = { ...emptyMeasurementForm(today, heightCm, lengthUnit), measuredBy };
   const form = useForm<MeasurementFormValues, unknown, CreateBodyMeasurementRequest>({
     resolver,
     defaultValues: defaults,
@@ -105,11 +113,11 @@ export function MeasurementForm({
       </div>
       {method === 'circumference' ? (
         <fieldset className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-          <legend className="mb-2 text-sm font-semibold text-ink">Circumferences (cm)</legend>
+          <legend className="mb-2 text-sm font-semibold text-ink">Circumferences ({lengthSuffix})</legend>
           <TextField
             name="neckCm"
             label="Neck"
-            suffix="cm"
+            suffix={lengthSuffix}
             required
             {...decimalInput}
             inputClassName="tabular-nums"
@@ -117,7 +125,7 @@ export function MeasurementForm({
           <TextField
             name="waistCm"
             label="Waist"
-            suffix="cm"
+            suffix={lengthSuffix}
             required
             {...decimalInput}
             inputClassName="tabular-nums"
@@ -126,7 +134,7 @@ export function MeasurementForm({
             <TextField
               name="hipCm"
               label="Hip"
-              suffix="cm"
+              suffix={lengthSuffix}
               required
               {...decimalInput}
               inputClassName="tabular-nums"
@@ -135,7 +143,7 @@ export function MeasurementForm({
           <TextField
             name="heightCm"
             label="Height"
-            suffix="cm"
+            suffix={lengthSuffix}
             required
             {...decimalInput}
             inputClassName="tabular-nums"

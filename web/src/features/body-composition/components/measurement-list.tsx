@@ -1,8 +1,12 @@
 import {
   BODY_COMPOSITION_METHOD_LABELS,
   SKINFOLD_SITE_LABELS,
+  LENGTH_UNIT_LABELS,
+  lengthFromCm,
+  lengthUnitFor,
   SKINFOLD_SITES,
   type BodyMeasurementView,
+  type LengthUnit,
   type WeightUnit,
 } from '@driftmark/shared';
 import { Button } from '@/components/ui/button';
@@ -12,17 +16,18 @@ import { formatDate, formatNumber, formatWeight, NBSP } from '@/lib/format';
 import type { LinkedKeys } from '../api/body-composition-cache';
 import { useDeleteBodyMeasurement } from '../api/delete-body-measurement';
 
-function figures(m: BodyMeasurementView): string {
+function figures(m: BodyMeasurementView, lengthUnit: LengthUnit): string {
   if (m.method === 'circumference') {
+    const length = (cm: number) => formatNumber(lengthFromCm(cm, lengthUnit), 1);
     return [
-      m.neckCm !== null ? `neck ${formatNumber(m.neckCm, 1)}` : null,
-      m.waistCm !== null ? `waist ${formatNumber(m.waistCm, 1)}` : null,
-      m.hipCm !== null ? `hip ${formatNumber(m.hipCm, 1)}` : null,
-      m.heightCm !== null ? `height ${formatNumber(m.heightCm, 1)}` : null,
+      m.neckCm !== null ? `neck ${length(m.neckCm)}` : null,
+      m.waistCm !== null ? `waist ${length(m.waistCm)}` : null,
+      m.hipCm !== null ? `hip ${length(m.hipCm)}` : null,
+      m.heightCm !== null ? `height ${length(m.heightCm)}` : null,
     ]
       .filter(Boolean)
       .join(', ')
-      .concat(`${NBSP}cm`);
+      .concat(`${NBSP}${LENGTH_UNIT_LABELS[lengthUnit]}`);
   }
   const sites = SKINFOLD_SITES.flatMap((s) => {
     const v = m.skinfoldsMm[s];
@@ -61,7 +66,7 @@ export function MeasurementList({
                 {m.leanMassKg !== null ? ` · lean ${formatWeight(m.leanMassKg, unit)}` : ''}
               </p>
               <p className="text-sm text-ink-muted tabular-nums">
-                {BODY_COMPOSITION_METHOD_LABELS[m.method]}: {figures(m)}
+                {BODY_COMPOSITION_METHOD_LABELS[m.method]}: {figures(m, lengthUnitFor(unit))}
               </p>
               <p className="text-xs text-ink-faint">
                 {m.estimate?.equation ? `${m.estimate.equation} · ` : ''}measured by {m.measuredBy}, entered

@@ -8,8 +8,11 @@ export const FOOD_SEARCH_MIN_CHARS = 2;
 export const FOOD_SEARCH_LIMIT = 12;
 
 /** GET /api/foods?q=&limit=: the team's foods, our everyday foods and the reference table, per 100 g. */
+/** Foods listed with the box empty (recent and frequent): fewer, to keep the phone's form short. */
+export const FOOD_RECENT_LIMIT = 8;
+
 export function searchFoods(q: string, signal?: AbortSignal): Promise<FoodView[]> {
-  const params = new URLSearchParams({ q, limit: String(FOOD_SEARCH_LIMIT) });
+  const params = new URLSearchParams({ q, limit: String(q ? FOOD_SEARCH_LIMIT : FOOD_RECENT_LIMIT) });
   return api.get<FoodView[]>(`/api/foods?${params}`, signal);
 }
 

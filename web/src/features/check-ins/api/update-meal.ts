@@ -4,7 +4,7 @@ import { api } from '@/lib/api-client';
 import type { WithoutClientId } from '../utils/form-values';
 import { entryByIdPath, useDayCache } from './day-cache';
 
-/** A meal is macros or a food: the update leaves out the client id from whichever it is. */
+/** A meal is macros or foods: the update leaves out the client id from whichever it is. */
 export type MealUpdate = WithoutClientId<MealEntryRequest>;
 
 /** PATCH /api/athletes/:athleteId/meals/:entryId: the same fields as a create, less clientId. */

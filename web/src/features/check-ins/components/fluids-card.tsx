@@ -15,6 +15,7 @@ import { DropIcon } from '@/components/ui/icons';
 import { SegmentedField } from '@/components/ui/segmented-field';
 import { TextField } from '@/components/ui/text-field';
 import { isApiError } from '@/lib/api-client';
+import { formatNumber, NBSP } from '@/lib/format';
 import { useCreateFluid } from '../api/create-fluid';
 import { useDeleteFluid } from '../api/delete-fluid';
 import { useUpdateFluid } from '../api/update-fluid';
@@ -80,7 +81,10 @@ export function FluidsCard({ athleteId, day, units, canEdit, now }: DayCardProps
                 <span className="font-semibold tabular-nums">
                   {displayVolume(f.volumeMl, f.entered, units.volume)}
                 </span>{' '}
-                <span className="text-ink-muted">{FLUID_KIND_LABELS[f.kind]}</span>
+                <span className="text-ink-muted">
+                  {FLUID_KIND_LABELS[f.kind]}
+                  {f.sodiumMg !== null ? ` · ${formatNumber(f.sodiumMg)}${NBSP}mg sodium` : null}
+                </span>
               </>
             )}
           </EditableEntries>

@@ -26,13 +26,15 @@ export function per100gLine(food: Pick<FoodView, 'per100g'>): string {
 }
 
 /**
- * The reference table's own energy figure, when the server sent it (it differs from the Atwater
- * figure by more than 5 %): "The food table lists 384 kcal per 100 g; counted here from its macros."
+ * The energy the source prints, when the server sent it (it judged it off the Atwater figure: the
+ * reference table beyond 5 %, a label beyond the label check's tolerance): "The food table lists
+ * 384 kcal per 100 g; counted here from its macros." / "The label prints …".
  */
-export function listedEnergyLine(food: Pick<FoodView, 'per100g'>): string | null {
+export function listedEnergyLine(food: Pick<FoodView, 'per100g' | 'source'>): string | null {
   const listed = food.per100g.listedEnergyKcal;
   if (listed === null) return null;
-  return `The food table lists ${formatNumber(listed, 0)}${NBSP}kcal per 100${NBSP}g; counted here from its protein, carbohydrate and fat (Atwater factors).`;
+  const who = food.source === 'reference' ? 'The food table lists' : 'The label prints';
+  return `${who} ${formatNumber(listed, 0)}${NBSP}kcal per 100${NBSP}g; counted here from its protein, carbohydrate and fat (Atwater factors).`;
 }
 
 interface FoodPickerProps {
@@ -43,15 +45,26 @@ interface FoodPickerProps {
   invalid?: boolean;
 }
 
+/** "In 3 of your meals · 7 of the team's" over the server's window; null when never logged. */
+function usesLine(food: FoodView): string | null {
+  const { mine, team } = food.uses;
+  if (mine === 0 && team === 0) return null;
+  const parts = [mine > 0 ? `in ${mine} of your meals` : null, team > mine ? `${team} of the team’s` : null];
+  const text = parts.filter(Boolean).join(' · ');
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
 /** Where a food comes from, in a word beside its name. */
 function sourceWord(food: FoodView): string | null {
   if (food.source === 'team') return 'Team food';
+  if (food.source === 'personal') return 'My food';
   if (food.source === 'reference') return 'IFCT 2017';
   return null;
 }
 
 /**
- * Search the food list (team foods, our everyday foods, the reference table) and add a food.
+ * Search the food list (team foods, the athlete's own foods, our everyday foods, the reference
+ * table) and add a food.
  * With the box empty it lists the athlete's recent and frequent foods, then the team's.
  */
 export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
@@ -104,7 +117,9 @@ export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
           <>
             {term ? null : (
               <p className="mb-1.5 text-xs font-semibold tracking-wide text-ink-faint uppercase">
-                Recent and frequent
+                {search.data.some((f) => f.uses.mine + f.uses.team > 0)
+                  ? 'Recent and frequent'
+                  : 'Everyday foods'}
               </p>
             )}
             <ul aria-label="Foods found" className={cn('space-y-1.5', search.isFetching && 'opacity-70')}>
@@ -128,6 +143,9 @@ export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
                       {sourceWord(food) ? `${sourceWord(food)} · ` : ''}
                       {per100gLine(food)}
                     </span>
+                    {usesLine(food) ? (
+                      <span className="text-xs text-ink-faint tabular-nums">{usesLine(food)}</span>
+                    ) : null}
                     {food.per100g.listedEnergyKcal !== null ? (
                       <span className="text-xs text-ink-faint tabular-nums">{listedEnergyLine(food)}</span>
                     ) : null}

@@ -8,6 +8,7 @@ import {
 } from '@driftmark/shared';
 import { useId, useMemo, useRef, useState } from 'react';
 import { useFieldArray, useForm, useFormContext, useWatch } from 'react-hook-form';
+import { Link } from 'react-router';
 import { Button } from '@/components/ui/button';
 import { controlClasses, FieldErrorText, useFieldError } from '@/components/ui/field';
 import { cn } from '@/lib/cn';
@@ -15,6 +16,7 @@ import { Form, SubmitButton } from '@/components/ui/form';
 import { BowlIcon } from '@/components/ui/icons';
 import { SegmentedField } from '@/components/ui/segmented-field';
 import { TextField } from '@/components/ui/text-field';
+import { paths } from '@/config/paths';
 import { formatEnergy, formatNumber, NBSP } from '@/lib/format';
 import { useCreateMeal } from '../api/create-meal';
 import { useDeleteMeal } from '../api/delete-meal';
@@ -167,9 +169,12 @@ function foodsFromEntry(entry: DayView['meals'][number]): Record<string, FoodVie
         ? 'reference'
         : item.foodId.startsWith('dm:')
           ? 'everyday'
-          : 'team',
+          : // a stored food: the team's or the athlete's own (the item does not say which)
+            'team',
+      barcode: null,
       preparation: null,
       portions,
+      uses: { mine: 0, team: 0 },
       per100g: {
         energyKcal: per100g.energyKcal,
         listedEnergyKcal: null,
@@ -430,6 +435,9 @@ function FoodsFields({
       ) : (
         <p className="text-sm text-ink-muted">A meal holds at most {MAX_ITEMS} foods.</p>
       )}
+      <p className="text-sm">
+        <Link to={paths.athleteFoodNew}>Not in the list? Scan a barcode or copy a label</Link>
+      </p>
     </div>
   );
 }

@@ -3,7 +3,11 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api, type WithAbilities } from '@/lib/api-client';
 import { cutKeys } from './keys';
 
-export type CutAbilities = { plan: boolean };
+/**
+ * `plan`: build plans and edit the weigh-in; `log`: tick the recovery checklist (the athlete);
+ * `noteRehearsal`: write a practice run's day notes.
+ */
+export type CutAbilities = { plan: boolean; log?: boolean; noteRehearsal: boolean };
 
 /** GET /api/athletes/:athleteId/cut: the weigh-in, the projection against its limit, the cut plan. */
 export function getCut(athleteId: string, signal?: AbortSignal): Promise<WithAbilities<CutView>> {

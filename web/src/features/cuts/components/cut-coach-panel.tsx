@@ -2,10 +2,12 @@ import { useState, type ReactNode } from 'react';
 import { Card, CardHeader } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/spinner';
 import { Alert } from '@/components/ui/alert';
-import type { WeightUnit } from '@driftmark/shared';
+import type { VolumeUnit, WeightUnit } from '@driftmark/shared';
 import { useCut } from '../api/get-cut';
-import { LimitGap, PlanFigures, RecoveryChecklist } from './cut-figures';
+import { LimitGap, PlanFigures } from './cut-figures';
 import { CutPlanBuilder } from './cut-plan-builder';
+import { RecoveryChecklist } from './recovery-checklist';
+import { RehearsalRecord } from './rehearsal-record';
 import { WeighInEventForm } from './weigh-in-event-form';
 
 /** Making weight on the coach's athlete page: shown only when the athlete's event is a weigh-in. */
@@ -13,10 +15,12 @@ export function CutCoachPanel({
   athleteId,
   today,
   unit,
+  volumeUnit,
 }: {
   athleteId: string;
   today: string;
   unit: WeightUnit;
+  volumeUnit: VolumeUnit;
 }) {
   const cut = useCut(athleteId);
   if (cut.isPending) return <Skeleton className="mb-5 h-32" />;
@@ -32,19 +36,41 @@ export function CutCoachPanel({
     <Card className="mb-5 space-y-4" aria-labelledby="cut-heading">
       <CardHeader id="cut-heading" title="Making weight" eyebrow="Weigh-in" />
       <LimitGap cut={view} unit={unit} />
-      <RecoveryChecklist cut={view} />
+      <RecoveryChecklist cut={view} volumeUnit={volumeUnit} />
       {view.plan ? (
         <PlanFigures cut={view} unit={unit} />
       ) : (
         <p className="text-sm text-ink-muted">No cut plan yet.</p>
       )}
+      {view.rehearsal ? (
+        <RehearsalRecord
+          athleteId={athleteId}
+          rehearsal={view.rehearsal}
+          planned={
+            view.figures && view.plan
+              ? { kg: view.figures.acute.kg, pct: view.figures.acute.pct, days: view.plan.acuteDays }
+              : null
+          }
+          plannedLabel={view.plan ? 'The plan in force, last days' : 'No plan in force yet'}
+          unit={unit}
+          canNote={cut.data.abilities.noteRehearsal === true}
+          today={today}
+        />
+      ) : null}
       {cut.data.abilities.plan ? (
         <>
           <Details summary="Weigh-in details" open={false}>
             <WeighInEventForm athleteId={athleteId} weighIn={view.weighIn} unit={unit} />
           </Details>
           <Details summary={view.plan ? 'New cut plan' : 'Build a cut plan'} open={view.plan === null}>
-            <CutPlanBuilder athleteId={athleteId} today={today} unit={unit} />
+            <CutPlanBuilder
+              athleteId={athleteId}
+              today={today}
+              unit={unit}
+              limitKg={view.weighIn.limitKg}
+              rehearsal={view.rehearsal}
+              canNote={cut.data.abilities.noteRehearsal === true}
+            />
           </Details>
         </>
       ) : null}

@@ -1,6 +1,7 @@
 import { kgToLb, type CutView, type WeightUnit } from '@driftmark/shared';
 import { Alert } from '@/components/ui/alert';
 import { formatNumber, formatWeight, NBSP } from '@/lib/format';
+import { CUT_SEVERITY_LABELS } from './cut-warning-item';
 
 /** A limit in both units, whichever the reader uses: "63.0 kg (138.9 lb)". */
 export function bothUnits(kg: number): string {
@@ -84,12 +85,7 @@ export function PlanFigures({ cut, unit }: { cut: CutView; unit: WeightUnit }) {
         </div>
       </dl>
       {f.warnings.map((w) => (
-        <Alert
-          key={w.key}
-          tone="caution"
-          title={w.severity === 'strong' ? 'Strong warning' : 'Warning'}
-          live={false}
-        >
+        <Alert key={w.key} tone="caution" title={CUT_SEVERITY_LABELS[w.severity]} live={false}>
           <p>{w.message}</p>
           <p className="mt-1 text-xs text-ink-muted">Source: {w.source}</p>
         </Alert>
@@ -100,46 +96,5 @@ export function PlanFigures({ cut, unit }: { cut: CutView; unit: WeightUnit }) {
         </Alert>
       ) : null}
     </div>
-  );
-}
-
-/** The timed recovery checklist from the weigh-in to the competition (the server's targets). */
-export function RecoveryChecklist({ cut }: { cut: CutView }) {
-  const r = cut.recovery;
-  if (!r) return null;
-  const litres = (l: number) => `${formatNumber(l, 2)}${NBSP}L`;
-  const grams = (g: { min: number; max: number }) =>
-    `${formatNumber(g.min)}–${formatNumber(g.max)}${NBSP}g carbohydrate`;
-  return (
-    <section aria-labelledby="recovery-heading" className="space-y-2">
-      <h3 id="recovery-heading" className="font-semibold text-ink">
-        After the weigh-in: recovery checklist
-      </h3>
-      <p className="text-sm text-ink-muted">
-        About {formatNumber(r.kgLost, 1, 1)}
-        {NBSP}kg lost at the scale (
-        {r.basis === 'plan' ? 'from the plan’s weight before the last days' : 'from the usual weight'}
-        ), {formatNumber(r.windowHours, 1)}
-        {NBSP}h to the competition: {litres(r.fluidL)} of fluid with sodium and {grams(r.carbohydrateG)} in
-        all. Log what you drink and eat as on any day.
-      </p>
-      <ol
-        aria-label="Recovery checklist"
-        className="divide-y divide-line rounded-md border border-line text-sm"
-      >
-        {r.slots.map((s) => (
-          <li
-            key={`${s.date} ${s.time}`}
-            className="flex flex-wrap justify-between gap-2 px-3 py-2 tabular-nums"
-          >
-            <span className="font-semibold text-ink">{s.time}</span>
-            <span>
-              {litres(s.fluidL)} fluid with sodium · {grams(s.carbohydrateG)}
-            </span>
-          </li>
-        ))}
-      </ol>
-      <p className="text-xs text-ink-muted">Source: {r.source}</p>
-    </section>
   );
 }

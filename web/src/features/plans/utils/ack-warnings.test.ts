@@ -1,7 +1,8 @@
 import { CUT_SOURCES, type CutWarningView, type GuardrailWarning } from '@driftmark/shared';
 import { describe, expect, it } from 'vitest';
 import { ApiError, parseErrorBody } from '../../../lib/api-client';
-import { judgedWarnings, unacknowledgedFromError, type AckWarning } from './ack-warnings';
+import { judgedWarnings } from '../../../lib/judged-warnings';
+import { unacknowledgedFromError, type AckWarning } from './ack-warnings';
 
 // Warnings shaped as the server sends them (messages and sources shortened fixture text).
 const sodium: GuardrailWarning = {
@@ -37,6 +38,7 @@ const acuteShare: CutWarningView = {
   severity: 'strong',
   message: 'The last days must take off 3.5 kg, 5.3 % of body mass.',
   source: CUT_SOURCES.acuteShare,
+  stopSigns: null,
   needsAcknowledgement: true,
 };
 

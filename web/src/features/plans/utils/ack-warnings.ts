@@ -1,5 +1,6 @@
-import { unacknowledgedWarning, type GuardrailWarning, type UnacknowledgedWarning } from '@driftmark/shared';
-import { isApiError, type ApiError } from '../../../lib/api-client';
+import type { GuardrailWarning } from '@driftmark/shared';
+import { isApiError } from '../../../lib/api-client';
+import { judgedWarnings } from '../../../lib/judged-warnings';
 
 /** A warning as the acknowledgement step lists it. */
 export interface AckWarning {
@@ -44,19 +45,13 @@ export function unacknowledgedFromError(
     const w = judged.get(key);
     if (w) {
       const scoped = 'scope' in w ? toAckWarnings([w], where)[0] : undefined;
-      return scoped ?? { key, message: w.message, source: w.source, severity: w.severity, where: null };
+      // A plan's list has two levels; a cut's severe warning (never sent to a plan editor) reads as strong.
+      const severity = w.severity === 'severe' ? 'strong' : w.severity;
+      return scoped ?? { key, message: w.message, source: w.source, severity, where: null };
     }
     return byKey.get(key) ?? { key, message, source: '', severity: 'strong', where: null };
   });
   // Keep the ones already ticked in the list too: the save sends every current key.
   const serverKeys = new Set(fromServer.map((w) => w.key));
   return [...known.filter((w) => !serverKeys.has(w.key)), ...fromServer];
-}
-
-/** The 409's `warnings` that match the shared schema; any other item is left out. */
-export function judgedWarnings(error: ApiError): UnacknowledgedWarning[] {
-  return error.warnings.flatMap((item) => {
-    const parsed = unacknowledgedWarning.safeParse(item);
-    return parsed.success ? [parsed.data] : [];
-  });
 }

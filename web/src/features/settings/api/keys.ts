@@ -14,3 +14,8 @@ export const sessionKeys = {
   /** The signed-in user's devices (GET /api/me/sessions). */
   devices: ['me-sessions'] as const,
 };
+
+export const cutSettingKeys = {
+  /** The team's acute-share threshold (GET /api/team/cut-settings). */
+  threshold: ['team-cut-settings'] as const,
+};

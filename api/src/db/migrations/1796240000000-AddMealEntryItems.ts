@@ -6,8 +6,8 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
  * columns go. `down()` turns meals of exactly one item back into the old shape and refuses when a
  * meal holds more (it would lose foods).
  */
-export class AddMealEntryItems1796210000000 implements MigrationInterface {
-  name = 'AddMealEntryItems1796210000000';
+export class AddMealEntryItems1796240000000 implements MigrationInterface {
+  name = 'AddMealEntryItems1796240000000';
 
   public async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(`
