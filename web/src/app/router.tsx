@@ -20,7 +20,6 @@ import { devInboxLoader } from './dev-inbox-gate';
 import { RequireAthlete, RequireSignedIn, RequireStaff } from './guards';
 import { AthleteShell } from './layouts/athlete-shell';
 import { ShellForRole } from './layouts/shell-for-role';
-import { StaffShell } from './layouts/staff-shell';
 import { NotFoundRoute } from './routes/not-found';
 import { RootRedirect } from './routes/root-redirect';
 import { RouteError } from './routes/route-error';
@@ -176,7 +175,8 @@ export const router = createBrowserRouter([
             element: <RequireStaff />,
             children: [
               {
-                element: <StaffShell />,
+                // Staff screens' shell is its own chunk: sign-in and the athlete's Today never load it.
+                lazy: page(() => import('./layouts/staff-shell'), 'StaffShell'),
                 children: [
                   {
                     index: true,
