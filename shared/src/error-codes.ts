@@ -31,6 +31,8 @@ export const ERROR_CODES = {
   rate_limited: 429,
   internal_error: 500,
   db_unavailable: 503,
+  /** The photo bucket did not answer (unreachable, timed out, or a 5xx from the store). */
+  storage_unavailable: 503,
   /** The food-products database did not answer (or the server has none set): enter the label. */
   food_products_unavailable: 503,
 } as const;

@@ -172,6 +172,33 @@ describe('photos in an S3 bucket', () => {
     }
   });
 
+  it('answers 503 with Retry-After and keeps no row when the bucket cannot be reached', async () => {
+    // The same database, a bucket on a port nothing listens on.
+    const down = await buildTestApp(
+      { photoStorage: 's3', s3: { ...s3, endpoint: 'http://127.0.0.1:1' } },
+      { clock: () => now },
+    );
+    try {
+      const agent = await signedIn(down.app, athlete.user.email, FACTORY_PASSWORD);
+      let req = agent.post(`/api/athletes/${athlete.athlete.id}/photos`).field('date', DAY);
+      req = req.field('pose', 'Front relaxed').attach('files', await jpeg(40, 30), {
+        filename: 'a.jpg',
+        contentType: 'image/jpeg',
+      });
+      const res = await req;
+      expect(res.status).toBe(503);
+      expect(res.body.error.code).toBe('storage_unavailable');
+      expect(res.headers['retry-after']).toBeDefined();
+      const [{ count }] = await t.dataSource.query(
+        'SELECT count(*)::int AS count FROM condition_photos WHERE athlete_id = $1',
+        [athlete.athlete.id],
+      );
+      expect(count).toBe(0);
+    } finally {
+      await down.close();
+    }
+  });
+
   it('sweeps what a kill leaves in the bucket: publishes what a row claims, removes the rest', async () => {
     const athleteId = athlete.athlete.id;
     const database = databaseIdentity(t.config.databaseUrl);

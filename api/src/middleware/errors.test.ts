@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { QueryRunnerAlreadyReleasedError } from 'typeorm';
 import { z } from 'zod';
-import { isDatabaseUnavailable, zodFields } from './errors.js';
+import { isDatabaseUnavailable, isStorageUnavailable, zodFields } from './errors.js';
 
 describe('zodFields', () => {
   it('keys issues by dot-joined path, first message per path', () => {
@@ -77,5 +77,33 @@ describe('isDatabaseUnavailable', () => {
     expect(isDatabaseUnavailable(new Error('boom'))).toBe(false);
     expect(isDatabaseUnavailable(null)).toBe(false);
     expect(isDatabaseUnavailable('ECONNREFUSED')).toBe(false);
+  });
+});
+
+describe('isStorageUnavailable', () => {
+  // What @aws-sdk/client-s3 3.x throws, shapes as observed against a closed port and a failing store.
+  const sdkError = (props: Record<string, unknown>) =>
+    Object.assign(new Error('x'), { $metadata: { attempts: 3 } }, props);
+
+  it('is an SDK error that means the store is unreachable or failing', () => {
+    expect(isStorageUnavailable(sdkError({ code: 'ECONNREFUSED' }))).toBe(true);
+    expect(isStorageUnavailable(sdkError({ name: 'TimeoutError' }))).toBe(true);
+    expect(isStorageUnavailable(sdkError({ name: 'SlowDown', $metadata: { httpStatusCode: 503 } }))).toBe(
+      true,
+    );
+    expect(
+      isStorageUnavailable(sdkError({ name: 'InternalError', $metadata: { httpStatusCode: 500 } })),
+    ).toBe(true);
+  });
+
+  it('is not a missing key, a refusal, or an error from anything but the SDK', () => {
+    expect(isStorageUnavailable(sdkError({ name: 'NoSuchKey', $metadata: { httpStatusCode: 404 } }))).toBe(
+      false,
+    );
+    expect(isStorageUnavailable(sdkError({ name: 'AccessDenied', $metadata: { httpStatusCode: 403 } }))).toBe(
+      false,
+    );
+    expect(isStorageUnavailable(Object.assign(new Error('x'), { code: 'ECONNREFUSED' }))).toBe(false);
+    expect(isStorageUnavailable(null)).toBe(false);
   });
 });

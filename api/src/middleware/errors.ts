@@ -82,6 +82,21 @@ export function isDatabaseUnavailable(err: unknown, depth = 0): boolean {
   return Array.isArray(e.errors) && e.errors.some((inner) => isDatabaseUnavailable(inner, depth + 1));
 }
 
+/**
+ * Whether an error comes from the photo bucket's SDK (AWS SDK v3 errors carry `$metadata`) and means
+ * the store is unreachable or failing (a network code, a timeout, or a 5xx answer), so the request
+ * may succeed later. Checked before the database: the same network codes would otherwise read as the
+ * database. A 4xx from the store (no such key, access denied) is not this.
+ */
+export function isStorageUnavailable(err: unknown): boolean {
+  if (!err || typeof err !== 'object' || !('$metadata' in err)) return false;
+  const e = err as { code?: unknown; name?: unknown; $metadata?: { httpStatusCode?: unknown } };
+  if (typeof e.code === 'string' && UNAVAILABLE_CODES.has(e.code)) return true;
+  if (e.name === 'TimeoutError') return true;
+  const status = e.$metadata?.httpStatusCode;
+  return typeof status === 'number' && status >= 500;
+}
+
 /** body-parser and http-errors style errors carry `type` and `status`. */
 interface HttpishError {
   type?: string;
@@ -95,6 +110,8 @@ function toAppError(err: unknown): AppError | null {
     const { fields, rootMessage } = zodFields(err);
     return new AppError('validation_failed', rootMessage ?? 'Please check the highlighted fields.', fields);
   }
+  if (isStorageUnavailable(err))
+    return new AppError('storage_unavailable', 'Photos are briefly unavailable. Please try again shortly.');
   if (isDatabaseUnavailable(err))
     return new AppError('db_unavailable', 'Driftmark is briefly unavailable. Please try again shortly.');
   if (err && typeof err === 'object') {
@@ -128,8 +145,11 @@ export function sendError(req: Request, res: Response, err: unknown): void {
   const requestId = typeof req.id === 'string' ? req.id : undefined;
   const known = toAppError(err);
   if (!known) req.log.error({ err, requestId }, 'unhandled error');
-  else if (known.code === 'db_unavailable') {
-    req.log.warn({ err, requestId }, 'database unavailable');
+  else if (known.code === 'db_unavailable' || known.code === 'storage_unavailable') {
+    req.log.warn(
+      { err, requestId },
+      known.code === 'db_unavailable' ? 'database unavailable' : 'photo storage unavailable',
+    );
     res.setHeader('Retry-After', String(DB_RETRY_AFTER_SECONDS));
   }
   const appError =
