@@ -44,19 +44,6 @@ const EVERYDAY_PREFIX = 'dm:';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /**
- * A food an athlete's meal may use by id (`<uuid>` for a team food or the athlete's own personal
- * food, `dm:<slug>` for an everyday food, `ifct:<code>` for a reference food), or null when there is
- * no such food for them.
- */
-export async function resolveFood(
-  manager: EntityManager,
-  athlete: Pick<Athlete, 'id' | 'teamId'>,
-  foodId: string,
-): Promise<ResolvedFood | null> {
-  return (await resolveFoods(manager, athlete, [foodId])).get(foodId.toLowerCase()) ?? null;
-}
-
-/**
  * Foods an athlete's meal may use by id, keyed by the lower-cased id: team foods and the athlete's
  * own personal foods (`FoodRepository.findManyForAthleteMeal`), our everyday foods, the reference
  * table; ids with no such food for them are left out. A null athlete id (staff planning a meal)
