@@ -1,15 +1,43 @@
-import { atwaterKcal, labelEnergyCheck, type FoodView, type LabelCheckView } from '@driftmark/shared';
+import {
+  atwaterKcal,
+  labelEnergyCheck,
+  type FoodView,
+  type LabelCheckView,
+  type Per100g,
+} from '@driftmark/shared';
 import type { EverydayFood } from '../adapters/everyday-foods.js';
 import type { ReferenceFood } from '../adapters/reference-foods.js';
 import type { Food } from '../entities/food.entity.js';
 
 const NO_USES = { mine: 0, team: 0 };
 
-/** A team or personal food's energy per 100 g, from its macros with the Atwater general factors. */
-export function teamFoodEnergyKcal(
-  f: Pick<Food, 'proteinG' | 'carbohydrateG' | 'fatG' | 'alcoholG'>,
-): number {
-  return atwaterKcal(f);
+/**
+ * A team or personal food's figures per 100 g, energy from its macros with the Atwater general
+ * factors (what a meal item eats and what search shows).
+ */
+export function teamFoodPer100g(f: Food): Per100g {
+  return {
+    energyKcal: atwaterKcal(f),
+    proteinG: f.proteinG,
+    carbohydrateG: f.carbohydrateG,
+    fatG: f.fatG,
+    fibreG: f.fibreG,
+    alcoholG: f.alcoholG,
+    sodiumMg: f.sodiumMg,
+  };
+}
+
+/** Figures per 100 g as a food view shows them, with the source's own energy when worth showing. */
+function per100gView(p: Per100g, listedEnergyKcal: number | null): FoodView['per100g'] {
+  return {
+    energyKcal: p.energyKcal,
+    listedEnergyKcal,
+    proteinG: p.proteinG,
+    carbohydrateG: p.carbohydrateG,
+    fatG: p.fatG,
+    fibreG: p.fibreG,
+    sodiumMg: p.sodiumMg ?? null,
+  };
 }
 
 /** The label's printed energy against its macros (shared/src/food-label.ts), per 100 g. */
@@ -44,16 +72,8 @@ export function presentTeamFood(f: Food): FoodView {
     preparation: preparationOf(f.name),
     portions: [],
     uses: NO_USES,
-    per100g: {
-      energyKcal: teamFoodEnergyKcal(f),
-      // The printed energy stays in view where the label disagrees with its own macros.
-      listedEnergyKcal: labelCheckOf(f)?.warning ? f.labelEnergyKcal : null,
-      proteinG: f.proteinG,
-      carbohydrateG: f.carbohydrateG,
-      fatG: f.fatG,
-      fibreG: f.fibreG,
-      sodiumMg: f.sodiumMg,
-    },
+    // The printed energy stays in view where the label disagrees with its own macros.
+    per100g: per100gView(teamFoodPer100g(f), labelCheckOf(f)?.warning ? f.labelEnergyKcal : null),
   };
 }
 
@@ -66,15 +86,7 @@ export function presentReferenceFood(f: ReferenceFood): FoodView {
     preparation: preparationOf(f.name),
     portions: [],
     uses: NO_USES,
-    per100g: {
-      energyKcal: f.per100g.energyKcal,
-      listedEnergyKcal: f.listedEnergyKcal,
-      proteinG: f.per100g.proteinG,
-      carbohydrateG: f.per100g.carbohydrateG,
-      fatG: f.per100g.fatG,
-      fibreG: f.per100g.fibreG,
-      sodiumMg: f.per100g.sodiumMg,
-    },
+    per100g: per100gView(f.per100g, f.listedEnergyKcal),
   };
 }
 
@@ -95,14 +107,6 @@ export function presentEverydayFood(f: EverydayFood): FoodView {
     preparation: f.preparation,
     portions: [...f.portions],
     uses: NO_USES,
-    per100g: {
-      energyKcal: f.per100g.energyKcal,
-      listedEnergyKcal: null,
-      proteinG: f.per100g.proteinG,
-      carbohydrateG: f.per100g.carbohydrateG,
-      fatG: f.per100g.fatG,
-      fibreG: f.per100g.fibreG,
-      sodiumMg: f.per100g.sodiumMg,
-    },
+    per100g: per100gView(f.per100g, null),
   };
 }

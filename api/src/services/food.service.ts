@@ -25,7 +25,7 @@ import {
   presentEverydayFood,
   presentReferenceFood,
   presentTeamFood,
-  teamFoodEnergyKcal,
+  teamFoodPer100g,
 } from '../presenters/food.presenter.js';
 import { AthleteRepository } from '../repositories/athlete.repository.js';
 import { FoodRepository } from '../repositories/food.repository.js';
@@ -77,15 +77,7 @@ export async function resolveFoods(
       found.set(food.id.toLowerCase(), {
         id: food.id,
         name: food.name,
-        per100g: {
-          energyKcal: teamFoodEnergyKcal(food),
-          proteinG: food.proteinG,
-          carbohydrateG: food.carbohydrateG,
-          fatG: food.fatG,
-          fibreG: food.fibreG,
-          alcoholG: food.alcoholG,
-          sodiumMg: food.sodiumMg,
-        },
+        per100g: teamFoodPer100g(food),
         portions: [],
       });
     }
