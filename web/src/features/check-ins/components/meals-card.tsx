@@ -1,4 +1,5 @@
 import {
+  LIMITS,
   mealEntryRequest,
   per100gFromEaten,
   type DayView,
@@ -385,8 +386,6 @@ const NO_FOOD: Pick<FoodView, 'per100g' | 'portions'> = {
   },
 };
 
-const MAX_ITEMS = 20;
-
 function FoodsFields({
   foods,
   figures,
@@ -418,7 +417,7 @@ function FoodsFields({
         <p className="text-sm text-ink-muted">No foods yet: search below and add each food of the meal.</p>
       )}
       {listError?.message ? <FieldErrorText id={errorId} error={listError} /> : null}
-      {fields.length < MAX_ITEMS ? (
+      {fields.length < LIMITS.mealItems.max ? (
         <FoodPicker
           invalid={Boolean(listError?.message)}
           errorId={errorId}
@@ -433,7 +432,7 @@ function FoodsFields({
           }}
         />
       ) : (
-        <p className="text-sm text-ink-muted">A meal holds at most {MAX_ITEMS} foods.</p>
+        <p className="text-sm text-ink-muted">A meal holds at most {LIMITS.mealItems.max} foods.</p>
       )}
       <p className="text-sm">
         <Link to={paths.athleteFoodNew}>Not in the list? Scan a barcode or copy a label</Link>
