@@ -1,6 +1,6 @@
 import type { FoodView } from '@driftmark/shared';
 import { keepPreviousData, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
+import { api } from './api-client';
 
 /** The food list (GET /api/foods): labelling or logging a food invalidates `all`. */
 export const foodKeys = {

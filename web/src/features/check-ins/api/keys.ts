@@ -16,4 +16,4 @@ export const checkInKeys = {
     [...checkInKeys.histories(athleteId), range.to, range.pageDays] as const,
 };
 
-export { foodKeys } from '@/lib/food-search';
+export { foodKeys } from '../../../lib/food-search';
