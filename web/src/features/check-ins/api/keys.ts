@@ -16,7 +16,4 @@ export const checkInKeys = {
     [...checkInKeys.histories(athleteId), range.to, range.pageDays] as const,
 };
 
-export const foodKeys = {
-  all: ['foods'] as const,
-  search: (q: string) => [...foodKeys.all, 'search', q] as const,
-};
+export { foodKeys } from '../../../lib/food-search';

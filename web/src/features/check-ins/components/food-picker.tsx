@@ -5,9 +5,11 @@ import { controlClasses } from '@/components/ui/field';
 import { Spinner } from '@/components/ui/spinner';
 import { cn } from '@/lib/cn';
 import { formatNumber, NBSP } from '@/lib/format';
-import { FOOD_SEARCH_MIN_CHARS, useFoodSearch } from '../api/search-foods';
+import { FOOD_SEARCH_MIN_CHARS, useFoodSearch } from '@/lib/food-search';
 
 const DEBOUNCE_MS = 250;
+/** Twelve foods for a typed term; eight recent and frequent ones with the box empty, to keep the phone's form short. */
+const FOOD_LIMITS = { search: 12, recent: 8 };
 
 function useDebounced<T>(value: T, ms: number): T {
   const [current, setCurrent] = useState(value);
@@ -72,7 +74,7 @@ export function FoodPicker({ onChoose, errorId, invalid }: FoodPickerProps) {
   const resultsId = useId();
   const [q, setQ] = useState('');
   const term = useDebounced(q.trim(), DEBOUNCE_MS);
-  const search = useFoodSearch(term);
+  const search = useFoodSearch(term, FOOD_LIMITS);
   const short = q.trim().length > 0 && q.trim().length < FOOD_SEARCH_MIN_CHARS;
 
   return (

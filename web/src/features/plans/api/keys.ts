@@ -15,9 +15,3 @@ export const templateKeys = {
   list: () => [...templateKeys.all, 'list'] as const,
   detail: (templateId: string) => [...templateKeys.all, 'detail', templateId] as const,
 };
-
-/** The food list as the meal-plan editor searches it (GET /api/foods?q=). */
-export const planFoodKeys = {
-  all: ['plan-foods'] as const,
-  search: (q: string) => [...planFoodKeys.all, 'search', q] as const,
-};

@@ -19,9 +19,9 @@ import { BowlIcon, ErrorIcon, PlusIcon, TrashIcon } from '@/components/ui/icons'
 import { isApiError } from '@/lib/api-client';
 import { cn } from '@/lib/cn';
 import { DRIFT_STATE_STYLE } from '@/lib/drift-states';
+import { FOOD_SEARCH_MIN_CHARS, useFoodSearch } from '@/lib/food-search';
 import { formatNumber, NBSP } from '@/lib/format';
 import { useFitMealPlan } from '../api/fit-meal-plan';
-import { usePlanFoodSearch } from '../api/search-plan-foods';
 import {
   gramsText,
   newMealRow,
@@ -367,8 +367,9 @@ function AddFood({ onChoose }: { onChoose: (food: FoodView) => void }) {
     const id = window.setTimeout(() => setTerm(q), 250);
     return () => window.clearTimeout(id);
   }, [q]);
-  const search = usePlanFoodSearch(term);
-  const results = term.trim().length >= 2 ? (search.data ?? []) : [];
+  // Eight results keep the editor's list short; nothing is asked with the box empty.
+  const search = useFoodSearch(term, { search: 8 });
+  const results = term.trim().length >= FOOD_SEARCH_MIN_CHARS ? (search.data ?? []) : [];
   return (
     <div className="relative w-full min-w-0 sm:max-w-xs">
       <label htmlFor={inputId} className="sr-only">
