@@ -163,8 +163,11 @@ describe('making weight', () => {
       athleteId = /\/coach\/athletes\/([0-9a-f-]{36})/.exec(page.url())![1]!;
       const profile = await page.request.get(`/api/athletes/${athleteId}`);
       eventDate = ((await profile.json()) as { data: { eventDate: string } }).data.eventDate;
-      // The server says which date is Aroha's today (Pacific/Auckland on the server's clock).
-      const probe = await page.request.get(`/api/athletes/${athleteId}/trend?from=2026-01-01&to=2026-01-02`);
+      // The server says which date is Aroha's today (Pacific/Auckland on the server's clock); the
+      // probe's range is placed on the runner's clock, so it stays inside the server's date window.
+      const probe = await page.request.get(
+        `/api/athletes/${athleteId}/trend?from=${daysFromToday(-1)}&to=${daysFromToday(0)}`,
+      );
       const today = ((await probe.json()) as { data: { today: string } }).data.today;
       const moved = await page.request.patch(`/api/athletes/${athleteId}/event`, {
         headers,

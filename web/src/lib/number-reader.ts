@@ -9,6 +9,18 @@ export function readBoxNumber(value: unknown): number {
   return parseTypedNumber(String(value ?? '')) ?? Number.NaN;
 }
 
+/**
+ * The saved SI value while its box still shows it as `show` wrote it, so a round trip through the
+ * viewer's unit (0.1 lb, 0.1 in) does not nudge it; undefined once the box says something else.
+ */
+export function savedIfShown(
+  text: string,
+  saved: number | null | undefined,
+  show: (si: number) => string,
+): number | undefined {
+  return saved !== null && saved !== undefined && text.trim() === show(saved) ? saved : undefined;
+}
+
 /** What a number box says when its text is not a number. */
 export const NOT_A_NUMBER = 'Enter a number, e.g. 72.5';
 

@@ -12,7 +12,7 @@ import {
   type SkinfoldSite,
 } from '@driftmark/shared';
 // Relative on purpose: these helpers are unit-tested without the web app's path alias.
-import { rangeMessageInUnit } from '../../../lib/number-reader';
+import { rangeMessageInUnit, savedIfShown } from '../../../lib/number-reader';
 
 /**
  * A measurement as typed: each length as text (read by the shared number rule), so a half-typed
@@ -83,12 +83,11 @@ export function toMeasurementRequest(
 } {
   const read = (text: string) => parseTypedNumber(text);
   const cm = (field: LengthField) => {
-    if (
-      field === 'heightCm' &&
-      profileHeightCm !== null &&
-      v.heightCm.trim() === lengthText(profileHeightCm, unit)
-    )
-      return profileHeightCm;
+    const kept =
+      field === 'heightCm'
+        ? savedIfShown(v.heightCm, profileHeightCm, (c) => lengthText(c, unit))
+        : undefined;
+    if (kept !== undefined) return kept;
     const n = read(v[field]);
     return n === undefined || Number.isNaN(n) ? n : lengthToCm(n, unit);
   };

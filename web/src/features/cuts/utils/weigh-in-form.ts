@@ -7,7 +7,7 @@ import {
   type WEIGH_IN_TIMINGS,
 } from '@driftmark/shared';
 // Relative on purpose: these helpers are unit-tested without the web app's path alias.
-import { numberReader } from '../../../lib/number-reader';
+import { numberReader, savedIfShown } from '../../../lib/number-reader';
 
 /** Weights in a weigh-in form are shown to 0.1 in the coach's unit. */
 const WEIGHT_DIGITS = 1;
@@ -64,9 +64,7 @@ export function toWeighInEventRequest(unit: WeightUnit, saved?: WeighInEventView
     const read = numberReader<Field>();
     const kg = (field: WeightField, n: number | null | undefined) => {
       if (n === null || n === undefined || Number.isNaN(n)) return n;
-      const before = savedKg?.[field] ?? null;
-      if (before !== null && v[field].trim() === weightText(before, unit)) return before;
-      return weightToKg(n, unit);
+      return savedIfShown(v[field], savedKg?.[field], (kg) => weightText(kg, unit)) ?? weightToKg(n, unit);
     };
     return {
       request: {
