@@ -4,40 +4,21 @@
  *   buckets live), S3_FAKE_BUCKETS (comma-separated buckets to create at start).
  * The scripts launch it with an IPC channel and wait for its { type: 'ready', port } message.
  */
+import { runFakeProcess } from './lib/fake-process.js';
 import { startS3Fake } from './lib/s3-fake.js';
 
-const port = Number(process.env.S3_FAKE_PORT ?? 4569);
-const host = process.env.S3_FAKE_HOST ?? '127.0.0.1';
 const directory = process.env.S3_FAKE_DIR;
 const buckets = (process.env.S3_FAKE_BUCKETS ?? '')
   .split(',')
   .map((b) => b.trim())
   .filter(Boolean);
 
-if (!directory) {
-  console.error('[s3-fake] S3_FAKE_DIR is required.');
-  process.exit(2);
-}
-if (!Number.isInteger(port) || port < 0 || port > 65_535) {
-  console.error(`[s3-fake] S3_FAKE_PORT must be a port number (got "${process.env.S3_FAKE_PORT}").`);
-  process.exit(2);
-}
-
-try {
-  const fake = await startS3Fake({ port, host, directory, buckets });
-  console.log(`[s3-fake] Listening on ${fake.endpoint}, buckets under ${directory}`);
-  process.send?.({ type: 'ready', port: fake.port });
-  // Without this the open IPC channel would keep a parent-less fake alive forever.
-  process.on('disconnect', () => void fake.close().then(() => process.exit(0)));
-  let closing = false;
-  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
-    process.on(signal, () => {
-      if (closing) return;
-      closing = true;
-      void fake.close().then(() => process.exit(0));
-    });
-  }
-} catch (error) {
-  console.error(`[s3-fake] Could not listen on ${host}:${port}: ${(error as Error).message}`);
-  process.exit(1);
-}
+await runFakeProcess({
+  name: 's3-fake',
+  portEnv: 'S3_FAKE_PORT',
+  defaultPort: 4569,
+  hostEnv: 'S3_FAKE_HOST',
+  check: () => (directory ? undefined : 'S3_FAKE_DIR is required.'),
+  start: (port, host) => startS3Fake({ port, host, directory: directory!, buckets }),
+  listening: (fake) => `Listening on ${fake.endpoint}, buckets under ${directory}`,
+});

@@ -11,39 +11,44 @@ import type { DataSource, EntityManager } from 'typeorm';
 export const PHOTO_STAGING_LOCK = 0x44_4d_50_53; // "DMPS"
 
 /**
- * Runs `work` with the staging lock held shared, on one connection: `work` gets that connection's
- * manager and must commit its rows through it (`manager.transaction(…)`), so the rows cannot
- * commit after the lock is gone.
+ * Holds the staging lock (`shared` or exclusive) on one connection while `work` runs, and lets go of
+ * it before the connection goes back to the pool.
  */
-export async function whileStaging<T>(
+async function holdingLock<T>(
   dataSource: DataSource,
+  mode: 'shared' | 'exclusive',
   work: (manager: EntityManager) => Promise<T>,
 ): Promise<T> {
+  const suffix = mode === 'shared' ? '_shared' : '';
   const runner = dataSource.createQueryRunner();
   try {
-    await runner.query('SELECT pg_advisory_lock_shared($1)', [PHOTO_STAGING_LOCK]);
+    await runner.query(`SELECT pg_advisory_lock${suffix}($1)`, [PHOTO_STAGING_LOCK]);
     try {
       return await work(runner.manager);
     } finally {
       // A lost connection has let go already; ending the session is what matters.
-      await runner.query('SELECT pg_advisory_unlock_shared($1)', [PHOTO_STAGING_LOCK]).catch(() => undefined);
+      await runner
+        .query(`SELECT pg_advisory_unlock${suffix}($1)`, [PHOTO_STAGING_LOCK])
+        .catch(() => undefined);
     }
   } finally {
     await runner.release();
   }
 }
 
+/**
+ * Runs `work` with the staging lock held shared, on one connection: `work` gets that connection's
+ * manager and must commit its rows through it (`manager.transaction(…)`), so the rows cannot
+ * commit after the lock is gone.
+ */
+export function whileStaging<T>(
+  dataSource: DataSource,
+  work: (manager: EntityManager) => Promise<T>,
+): Promise<T> {
+  return holdingLock(dataSource, 'shared', work);
+}
+
 /** Runs `work` while no upload in any instance is between staging and commit (the start sweep). */
-export async function withStagingPaused<T>(dataSource: DataSource, work: () => Promise<T>): Promise<T> {
-  const runner = dataSource.createQueryRunner();
-  try {
-    await runner.query('SELECT pg_advisory_lock($1)', [PHOTO_STAGING_LOCK]);
-    try {
-      return await work();
-    } finally {
-      await runner.query('SELECT pg_advisory_unlock($1)', [PHOTO_STAGING_LOCK]).catch(() => undefined);
-    }
-  } finally {
-    await runner.release();
-  }
+export function withStagingPaused<T>(dataSource: DataSource, work: () => Promise<T>): Promise<T> {
+  return holdingLock(dataSource, 'exclusive', () => work());
 }
